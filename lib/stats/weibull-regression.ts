@@ -1,0 +1,52 @@
+import { assertFittable, weibullBLife, weibullPlotY, type LifeUnit } from "./weibull-data";
+import { johnsonAdjustedRanks } from "./weibull-ranks";
+
+export interface RegressionFit {
+  beta: number;
+  eta: number;
+  b10: number;
+  /** Squared correlation of ln t and ln(-ln(1-F)) over the plotted failures. */
+  r2: number;
+}
+
+export interface RankRegressionResult {
+  /** Least squares of y = ln(-ln(1-F)) on x = ln t. */
+  yOnX: RegressionFit;
+  /** Least squares of x = ln t on y (the usual choice in life data analysis). */
+  xOnY: RegressionFit;
+}
+
+/** Median-rank regression (Benard ranks, Johnson adjustment for suspensions), both ways. */
+export function weibullRankRegression(units: readonly LifeUnit[]): RankRegressionResult {
+  assertFittable(units);
+  const points = johnsonAdjustedRanks(units);
+  const xs = points.map((p) => Math.log(p.time));
+  const ys = points.map((p) => weibullPlotY(p.medianRank));
+  const m = xs.length;
+  const mx = xs.reduce((s, v) => s + v, 0) / m;
+  const my = ys.reduce((s, v) => s + v, 0) / m;
+  let sxx = 0;
+  let syy = 0;
+  let sxy = 0;
+  for (let i = 0; i < m; i++) {
+    sxx += (xs[i] - mx) ** 2;
+    syy += (ys[i] - my) ** 2;
+    sxy += (xs[i] - mx) * (ys[i] - my);
+  }
+  const r2 = (sxy * sxy) / (sxx * syy);
+
+  const slopeYX = sxy / sxx;
+  const interceptYX = my - slopeYX * mx;
+  const betaYX = slopeYX;
+  const etaYX = Math.exp(-interceptYX / slopeYX);
+
+  const slopeXY = sxy / syy;
+  const interceptXY = mx - slopeXY * my;
+  const betaXY = 1 / slopeXY;
+  const etaXY = Math.exp(interceptXY);
+
+  return {
+    yOnX: { beta: betaYX, eta: etaYX, b10: weibullBLife(betaYX, etaYX), r2 },
+    xOnY: { beta: betaXY, eta: etaXY, b10: weibullBLife(betaXY, etaXY), r2 },
+  };
+}
