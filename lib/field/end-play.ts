@@ -77,12 +77,16 @@ export function evaluateEndPlay(input: EndPlayInput, policy: EndPlayPolicy = DEF
   const allowedSpread = input.method === "dial" ? policy.dialSpreadIn : policy.tapeSpreadIn;
   if (measured.spreadIn > allowedSpread + COMPARE_SLACK_IN) {
     const instrument = input.method === "dial" ? "a dial indicator" : "a tape";
+    const how =
+      input.method === "dial"
+        ? "push the cup toward the wheel and zero, then pull toward the end cap and read"
+        : "measure the cup's travel from pushed toward the wheel to pulled toward the end cap";
     messages.push(
       message(
         "warn",
         "spread-too-large",
-        `The trials differ by ${describe(measured.spreadIn, input.method)}, more than the ${formatInches(allowedSpread)} ` +
-          `${instrument} should repeat to. Re-measure: turn the bearing so the rollers seat, push the cup toward the wheel and zero, then pull toward the end cap and read.`,
+        `The trials differ by ${describe(measured.spreadIn, input.method)}, more than the ${describe(allowedSpread, input.method)} ` +
+          `${instrument} should repeat to. Re-measure: turn the bearing so the rollers seat, then ${how}.`,
       ),
     );
   }
