@@ -1,0 +1,14 @@
+// GET /api/admin/invitations - pending invitations; POST - invite a person by e-mail
+import { NextResponse } from "next/server";
+import { listPendingInvitations } from "@/db/queries/invitations";
+import { inviteUser } from "@/lib/accounts/invite";
+import { parseJson, withRole } from "@/lib/http/handler";
+import { inviteSchema } from "@/lib/validation/account";
+
+export const GET = withRole("admin:users", async () => NextResponse.json({ invitations: await listPendingInvitations() }));
+
+export const POST = withRole("admin:users", async ({ req, user }) => {
+  const input = await parseJson(req, inviteSchema);
+  const invitation = await inviteUser(input, user);
+  return NextResponse.json({ invitation }, { status: 201 });
+});

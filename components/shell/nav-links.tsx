@@ -1,0 +1,44 @@
+"use client";
+import Link from "next/link";
+import { usePathname } from "next/navigation";
+import type { NavItem } from "./nav-items";
+
+function isActive(pathname: string, href: string) {
+  if (href === "/") return pathname === "/";
+  if (href === "/cases") return pathname === "/cases" || (pathname.startsWith("/cases/") && !pathname.startsWith("/cases/new"));
+  return pathname.startsWith(href);
+}
+
+export function NavLinks({ items, layout }: { items: NavItem[]; layout: "side" | "bar" }) {
+  const pathname = usePathname();
+  const main = items.filter((i) => !i.group);
+  const admin = items.filter((i) => i.group === "admin");
+  const link = (i: NavItem) => {
+    const active = isActive(pathname, i.href);
+    return (
+      <Link
+        key={i.href}
+        href={i.href}
+        aria-current={active ? "page" : undefined}
+        className={
+          layout === "side"
+            ? `flex items-center gap-3 rounded-lg px-3 py-2 text-sm font-medium ${active ? "bg-white/10 text-white" : "text-slate-400 hover:bg-white/5 hover:text-white"}`
+            : `flex shrink-0 items-center gap-1.5 rounded-full px-3 py-1.5 text-sm font-medium ${active ? "bg-accent text-accent-ink" : "text-ink-2 hover:bg-surface-2"}`
+        }
+      >
+        <svg viewBox="0 0 24 24" className={layout === "side" ? "h-5 w-5" : "h-4 w-4"} fill="none" stroke="currentColor" strokeWidth="1.8" strokeLinecap="round" strokeLinejoin="round" aria-hidden>
+          <path d={i.icon} />
+        </svg>
+        {i.label}
+      </Link>
+    );
+  };
+  if (layout === "bar") return <nav aria-label="Main" className="flex gap-1 overflow-x-auto px-3 pb-2 [scrollbar-width:none]">{items.map(link)}</nav>;
+  return (
+    <nav aria-label="Main" className="flex flex-col gap-1">
+      {main.map(link)}
+      {admin.length ? <p className="mt-5 px-3 pb-1 text-[11px] font-semibold uppercase tracking-widest text-slate-500">Administration</p> : null}
+      {admin.map(link)}
+    </nav>
+  );
+}

@@ -1,0 +1,45 @@
+// better-auth: e-mail and password, no self sign-up (admins invite), roles through the admin plugin.
+import { betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { nextCookies } from "better-auth/next-js";
+import { admin } from "better-auth/plugins";
+import { db } from "@/db";
+import * as schema from "@/db/schema";
+import { enqueueMail } from "@/lib/mail/outbox";
+import { passwordResetMail } from "@/lib/mail/templates/account";
+import { ac, authRoles } from "./access-control";
+
+const appUrl = process.env.APP_URL ?? process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
+
+export const PASSWORD_MIN = 10;
+
+export const auth = betterAuth({
+  baseURL: appUrl,
+  trustedOrigins: [appUrl, appUrl.replace("127.0.0.1", "localhost")],
+  database: drizzleAdapter(db, {
+    provider: "pg",
+    schema: { user: schema.user, session: schema.session, account: schema.account, verification: schema.verification },
+  }),
+  emailAndPassword: {
+    enabled: true,
+    disableSignUp: true,
+    minPasswordLength: PASSWORD_MIN,
+    maxPasswordLength: 128,
+    resetPasswordTokenExpiresIn: 3600,
+    revokeSessionsOnPasswordReset: true,
+    sendResetPassword: async ({ user, url }) => {
+      await enqueueMail("password-reset", [user.email], passwordResetMail({ name: user.name, url }));
+    },
+  },
+  user: {
+    additionalFields: {
+      siteId: { type: "string", required: false, input: false },
+    },
+  },
+  session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+  // Tests sign in many times from one address; everywhere else the limiter guards sign-in.
+  rateLimit: { enabled: process.env.TEARLINE_TEST !== "1", window: 60, max: 100 },
+  plugins: [admin({ ac, roles: authRoles, defaultRole: "inspector", adminRoles: ["admin"] }), nextCookies()],
+});
+
+export type AuthSession = typeof auth.$Infer.Session;

@@ -1,0 +1,61 @@
+// Wraps a route handler so none can forget the role check, input validation or error shape.
+import "server-only";
+import { NextResponse, type NextRequest } from "next/server";
+import { z, type ZodType } from "zod";
+import { requireApiUser, type CurrentUser } from "@/lib/auth/session";
+import type { Permission } from "@/lib/auth/permissions";
+import { HttpError } from "./errors";
+
+type Ctx<P> = { req: NextRequest; user: CurrentUser; params: P };
+
+export function zodMessage(error: z.ZodError): { message: string; fields: Record<string, string> } {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join(".") || "_";
+    fields[key] ??= issue.message;
+  }
+  const first = error.issues[0];
+  const where = first?.path.length ? `${first.path.join(".")}: ` : "";
+  return { message: `${where}${first?.message ?? "invalid input"}`, fields };
+}
+
+export function errorResponse(err: unknown): NextResponse {
+  if (err instanceof HttpError) {
+    return NextResponse.json({ error: err.message, code: err.code, details: err.details }, { status: err.status });
+  }
+  if (err instanceof z.ZodError) {
+    const { message, fields } = zodMessage(err);
+    return NextResponse.json({ error: message, code: "bad-request", fields }, { status: 400 });
+  }
+  console.error(err);
+  return NextResponse.json({ error: "Something went wrong on the server; nothing was changed.", code: "internal" }, { status: 500 });
+}
+
+export async function parseJson<T>(req: NextRequest, schema: ZodType<T>): Promise<T> {
+  let body: unknown;
+  try {
+    body = await req.json();
+  } catch {
+    throw new HttpError(400, "bad-request", "The request body must be JSON.");
+  }
+  return schema.parse(body);
+}
+
+export function parseQuery<T>(req: NextRequest, schema: ZodType<T>): T {
+  return schema.parse(Object.fromEntries(req.nextUrl.searchParams.entries()));
+}
+
+export function withRole<P = Record<string, string>>(
+  permission: Permission | null,
+  handler: (ctx: Ctx<P>) => Promise<Response>,
+) {
+  return async (req: NextRequest, route: { params: Promise<P> }): Promise<Response> => {
+    try {
+      const user = await requireApiUser(permission ?? undefined);
+      const params = route?.params ? await route.params : ({} as P);
+      return await handler({ req, user, params });
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}

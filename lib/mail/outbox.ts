@@ -1,0 +1,72 @@
+// Mail goes through the outbox: stored first, sent right after, retried with back-off on failure.
+// Sending never blocks or breaks the action that caused it.
+import "server-only";
+import { and, eq, lte, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { mailOutbox, type OutboxMail } from "@/db/schema";
+import { env } from "@/lib/env";
+import { mailTransport } from "./transport";
+import type { RenderedMail } from "./templates/layout";
+
+const MAX_ATTEMPTS = 8;
+// Back-off: 30 s, 1 min, 2 min, 4 min … capped at one hour.
+export function nextDelayMs(attempts: number): number {
+  return Math.min(30_000 * 2 ** Math.max(0, attempts - 1), 3_600_000);
+}
+
+export async function enqueueMail(kind: string, to: string[], mail: RenderedMail): Promise<string | null> {
+  const recipients = [...new Set(to.filter(Boolean))];
+  if (recipients.length === 0) return null;
+  const [row] = await db
+    .insert(mailOutbox)
+    .values({ kind, to: recipients, subject: mail.subject, html: mail.html, text: mail.text })
+    .returning({ id: mailOutbox.id });
+  void deliver(row.id).catch(() => undefined);
+  return row.id;
+}
+
+export async function deliver(id: string): Promise<boolean> {
+  // Claim the row so two workers never send the same mail twice.
+  const [mail] = await db
+    .update(mailOutbox)
+    .set({ attempts: sql`${mailOutbox.attempts} + 1`, nextAttemptAt: sql`now() + interval '5 minutes'` })
+    .where(and(eq(mailOutbox.id, id), sql`${mailOutbox.status} <> 'sent'`, lte(mailOutbox.nextAttemptAt, sql`now()`)))
+    .returning();
+  if (!mail) return false;
+  return send(mail);
+}
+
+async function send(mail: OutboxMail): Promise<boolean> {
+  try {
+    await mailTransport().sendMail({ from: env().MAIL_FROM, to: mail.to, subject: mail.subject, html: mail.html, text: mail.text });
+    await db.update(mailOutbox).set({ status: "sent", sentAt: new Date(), lastError: null }).where(eq(mailOutbox.id, mail.id));
+    return true;
+  } catch (err) {
+    const failed = mail.attempts >= MAX_ATTEMPTS;
+    await db
+      .update(mailOutbox)
+      .set({
+        status: failed ? "failed" : "pending",
+        lastError: err instanceof Error ? err.message : String(err),
+        nextAttemptAt: new Date(Date.now() + nextDelayMs(mail.attempts)),
+      })
+      .where(eq(mailOutbox.id, mail.id));
+    return false;
+  }
+}
+
+/** Sends every pending mail that is due; `force` ignores the back-off (admin "retry now"). */
+export async function deliverDue(force = false): Promise<{ sent: number; failed: number }> {
+  if (force) {
+    await db.update(mailOutbox).set({ nextAttemptAt: sql`now()`, status: "pending" }).where(sql`${mailOutbox.status} <> 'sent'`);
+  }
+  const due = await db
+    .select({ id: mailOutbox.id })
+    .from(mailOutbox)
+    .where(and(eq(mailOutbox.status, "pending"), lte(mailOutbox.nextAttemptAt, sql`now()`)))
+    .limit(50);
+  let sent = 0;
+  let failed = 0;
+  for (const { id } of due) (await deliver(id)) ? sent++ : failed++;
+  return { sent, failed };
+}
