@@ -3,7 +3,12 @@ import path from "node:path";
 
 // Unit tests run alone; API and browser tests need the services that scripts/test.sh starts.
 export default defineConfig({
-  resolve: { alias: { "@": path.resolve(import.meta.dirname) } },
+  resolve: {
+    alias: {
+      "@": path.resolve(import.meta.dirname),
+      "server-only": path.resolve(import.meta.dirname, "tests/support/empty.ts"),
+    },
+  },
   test: {
     include: ["tests/**/*.test.ts"],
     environment: "node",
