@@ -5,7 +5,7 @@ set -euo pipefail
 source "$(dirname "$0")/services/common.sh"
 cd "$ROOT"
 
-DATA_DIR="$ROOT/.test-data"
+DATA_DIR="${TEST_DATA_DIR:-$ROOT/.test-data}"
 APP_PORT="${TEST_APP_PORT:-3100}" PG_PORT="${TEST_PG_PORT:-54339}" S3_PORT="${TEST_S3_PORT:-4579}"
 SMTP_PORT="${TEST_SMTP_PORT:-2535}" MAIL_HTTP_PORT="${TEST_MAIL_HTTP_PORT:-8035}"
 PG_USER=tearline PG_PASSWORD=tearline-test PG_DB=tearline_test PG_FSYNC=off
@@ -36,7 +36,7 @@ node_modules/.bin/tsx scripts/migrate.ts >"$DATA_DIR/logs/migrate.log" 2>&1 || {
 node_modules/.bin/tsx scripts/seed-demo.ts --quiet >"$DATA_DIR/logs/seed.log" 2>&1 || { tail -30 "$DATA_DIR/logs/seed.log"; fail "demo seed failed"; }
 
 say "Building the app for the browser and API tests…"
-export NEXT_DIST_DIR=.next-test
+export NEXT_DIST_DIR="${TEST_DIST_DIR:-.next-test}"
 node_modules/.bin/next build >"$DATA_DIR/logs/build.log" 2>&1 || { tail -60 "$DATA_DIR/logs/build.log"; fail "next build failed"; }
 node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/logs/app.log" 2>&1 &
 PIDS+=($!)
