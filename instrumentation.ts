@@ -1,0 +1,7 @@
+// Runs once when a server process starts: background timers that belong to the whole app.
+export async function register() {
+  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  // Mail that could not be sent is retried every MAIL_RETRY_MS (30 s unless set).
+  const { startMailRetryLoop } = await import("./lib/mail/retry-loop");
+  startMailRetryLoop();
+}
