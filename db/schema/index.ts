@@ -7,3 +7,4 @@ export * from "./findings";
 export * from "./history";
 export * from "./photos";
 export * from "./mail";
+export * from "./fleet";
