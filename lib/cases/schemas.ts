@@ -1,6 +1,6 @@
 // The shapes of a case's sections as the API accepts them. Clear messages: a shop mechanic reads them.
 import { z } from "zod";
-import { COMPONENTS, CONFIDENCES, DISPOSITIONS, LUBRICANT_CONDITIONS, ROWS, ZONES } from "@/lib/classification";
+import { COMPONENTS, CONFIDENCES, DISPOSITIONS, LUBRICANT_CONDITIONS, ZONES } from "@/lib/classification";
 import { VISUAL_FINDINGS } from "@/lib/field";
 
 const codes = <T extends { code: string }>(list: readonly T[]) => list.map((x) => x.code) as [string, ...string[]];
@@ -77,7 +77,7 @@ export const teardownSchema = z.object({
 
 export const findingSchema = z.object({
   component: z.enum(codes(COMPONENTS), { message: "Choose the part the finding is on." }),
-  row: z.enum(codes(ROWS)).nullable().optional(),
+  row: z.enum(["inboard", "outboard"]).nullable().optional(),
   damageCode: z.string().min(1, "Choose a damage code."),
   severity: z.number().int().min(0, "Severity is 0 to 4.").max(4, "Severity is 0 to 4."),
   clockDeg: z.number().int().min(0, "Clock position is 0° to 359°.").max(359, "Clock position is 0° to 359°.").nullable().optional(),

@@ -1,0 +1,123 @@
+// Case operations as the API and pages call them: access, stage rules, computed fields, history.
+import "server-only";
+import { z } from "zod";
+import { addFinding, changeFinding, countFindings, insertCase, updateCase } from "@/db/queries/case-write";
+import { findCaseRow, sitePolicy } from "@/db/queries/case-read";
+import type { Case } from "@/db/schema";
+import type { CurrentUser } from "@/lib/auth/session";
+import { DEFAULT_END_PLAY_POLICY, type EndPlayPolicy } from "@/lib/field";
+import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
+import { canReadCase } from "./access";
+import { serviceMonthsOf, summariseFieldChecks } from "./compute";
+import { fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
+import { canEditSection, checkTransition, editRefusal, type Section, type WorkflowAction } from "./workflow";
+import { afterTransition } from "./notices";
+
+export async function loadReadableCase(key: string, user: CurrentUser): Promise<Case> {
+  const row = await findCaseRow(key);
+  // A case the user may not see answers like one that does not exist.
+  if (!row || !canReadCase(user, row)) throw notFound("That case");
+  return row;
+}
+
+async function policyFor(siteId: string | null | undefined): Promise<EndPlayPolicy> {
+  const s = await sitePolicy(siteId);
+  return s ? { maxIn: s.maxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn } : DEFAULT_END_PLAY_POLICY;
+}
+
+/** Field-report values plus what Tearline computes from them. */
+async function withComputed(input: FieldReportInput, base: Partial<Case>) {
+  const merged = { ...base, ...input };
+  const out: Record<string, unknown> = { ...input };
+  if (input.fieldChecks || input.siteId !== undefined) {
+    const checks = fieldChecksSchema.parse(merged.fieldChecks ?? {});
+    Object.assign(out, summariseFieldChecks(checks, await policyFor(merged.siteId)));
+  }
+  if (input.mountedOn !== undefined || input.removedOn !== undefined) {
+    out.serviceMonths = serviceMonthsOf(merged.mountedOn, merged.removedOn);
+  }
+  return out;
+}
+
+export const createCaseSchema = fieldReportSchema.required({ trigger: true, siteId: true, removedOn: true });
+
+export async function createFieldReport(body: unknown, user: CurrentUser) {
+  const input = createCaseSchema.parse(body);
+  if (user.role === "inspector" && user.siteId && input.siteId !== user.siteId) {
+    throw forbidden("Inspectors file removals for their own shop only.");
+  }
+  const values = await withComputed({ fieldChecks: { visual: [], confirmations: {} }, ...input }, {});
+  return insertCase(values, user);
+}
+
+const sectionSchemas = { field: fieldReportSchema, teardown: teardownSchema, verdict: verdictSchema } as const;
+export const saveSectionSchema = z.object({
+  version: z.number().int().positive("Send the version of the case you edited."),
+  section: z.enum(["field", "teardown", "verdict"], { message: "Section must be field, teardown or verdict." }),
+  data: z.record(z.string(), z.unknown()),
+});
+
+export async function saveSection(key: string, body: unknown, user: CurrentUser) {
+  const { version, section, data } = saveSectionSchema.parse(body);
+  const current = await loadReadableCase(key, user);
+  assertEditable(section, current, user);
+  const parsed = sectionSchemas[section].strict().parse(data) as Record<string, unknown>;
+  const patch = section === "field" ? await withComputed(parsed as FieldReportInput, current) : parsed;
+  return updateCase(current.id, version, patch, user, `${section}-saved`);
+}
+
+function assertEditable(section: Section, c: Case, user: CurrentUser) {
+  if (!canEditSection(section, c.status, user.role)) throw new HttpError(c.status === "signed" || c.status === "signoff" ? 409 : 403, "not-editable", editRefusal(section, c.status));
+}
+
+const findingBody = z.object({ version: z.number().int().positive(), finding: findingSchema });
+const findingPatch = z.object({ version: z.number().int().positive(), finding: findingSchema.partial() });
+
+export async function addCaseFinding(key: string, body: unknown, user: CurrentUser) {
+  const { version, finding } = findingBody.parse(body);
+  const c = await loadReadableCase(key, user);
+  assertEditable("teardown", c, user);
+  return addFinding(c.id, version, finding, user);
+}
+
+export async function editCaseFinding(key: string, findingId: string, body: unknown, user: CurrentUser) {
+  const { version, finding } = findingPatch.parse(body);
+  const c = await loadReadableCase(key, user);
+  assertEditable("teardown", c, user);
+  return changeFinding(c.id, z.string().uuid().parse(findingId), version, finding, user);
+}
+
+export async function removeCaseFinding(key: string, findingId: string, version: number, user: CurrentUser) {
+  const c = await loadReadableCase(key, user);
+  assertEditable("teardown", c, user);
+  return changeFinding(c.id, z.string().uuid().parse(findingId), version, null, user);
+}
+
+export const transitionSchema = z.object({
+  version: z.number().int().positive("Send the version of the case you are looking at."),
+  action: z.enum(["receive", "propose", "sign", "return", "reopen"], { message: "Unknown step." }),
+  reason: z.string().trim().max(2000).optional(),
+  labSiteId: z.string().uuid().optional(),
+});
+
+export async function transitionCase(key: string, body: unknown, user: CurrentUser) {
+  const { version, action, reason, labSiteId } = transitionSchema.parse(body);
+  const c = await loadReadableCase(key, user);
+  const check = checkTransition(action as WorkflowAction, c.status, user.role, reason, {
+    primaryCause: c.primaryCause,
+    confidence: c.confidence,
+    removalConfirmed: c.removalConfirmed,
+    findingCount: action === "propose" ? await countFindings(c.id) : 0,
+  });
+  if (!check.ok) throw check.status === 400 ? badRequest(check.message) : new HttpError(check.status, check.status === 403 ? "forbidden" : "conflict", check.message);
+  const now = new Date();
+  const patch: Partial<Case> = { status: check.to };
+  if (action === "receive") Object.assign(patch, { receivedAt: now, receivedBy: user.id, labSiteId: labSiteId ?? c.labSiteId ?? user.siteId });
+  if (action === "propose") Object.assign(patch, { proposedAt: now, proposedBy: user.id, returnReason: null });
+  if (action === "sign") Object.assign(patch, { signedAt: now, signedBy: user.id });
+  if (action === "return") Object.assign(patch, { returnReason: reason });
+  if (action === "reopen") Object.assign(patch, { signedAt: null, signedBy: null });
+  const row = await updateCase(c.id, version, patch, user, action, reason);
+  afterTransition(action, row, user, reason);
+  return row;
+}
