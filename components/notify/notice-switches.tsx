@@ -1,0 +1,59 @@
+"use client";
+import { useState } from "react";
+
+export type NoticeSwitch = { kind: string; label: string; description: string; on: boolean };
+
+/** One switch per notice; each flip is saved at once and undone if the server refuses it. */
+export function NoticeSwitches({ initial }: { initial: NoticeSwitch[] }) {
+  const [items, setItems] = useState(initial);
+  const [saving, setSaving] = useState<string | null>(null);
+  const [status, setStatus] = useState<{ tone: "ok" | "danger"; text: string } | null>(null);
+
+  async function flip(kind: string, on: boolean) {
+    const before = items;
+    setItems(items.map((i) => (i.kind === kind ? { ...i, on } : i)));
+    setSaving(kind);
+    setStatus(null);
+    const label = items.find((i) => i.kind === kind)?.label ?? kind;
+    try {
+      const res = await fetch("/api/me/notices", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ [kind]: on }) });
+      if (!res.ok) throw new Error(((await res.json().catch(() => ({}))) as { error?: string }).error ?? `HTTP ${res.status}`);
+      setStatus({ tone: "ok", text: `${label}: ${on ? "you will get this e-mail" : "switched off"}.` });
+    } catch (err) {
+      setItems(before);
+      setStatus({ tone: "danger", text: `Not saved: ${err instanceof Error ? err.message : "try again"}.` });
+    } finally {
+      setSaving(null);
+    }
+  }
+
+  return (
+    <div>
+      <ul className="-my-1 divide-y divide-line">
+        {items.map((i) => (
+          <li key={i.kind} className="flex items-start justify-between gap-4 py-3.5">
+            <label htmlFor={`notice-${i.kind}`} className="min-w-0 cursor-pointer">
+              <span className="block font-medium text-ink">{i.label}</span>
+              <span className="mt-0.5 block text-sm leading-snug text-muted">{i.description}</span>
+            </label>
+            <button
+              id={`notice-${i.kind}`}
+              type="button"
+              role="switch"
+              aria-checked={i.on}
+              disabled={saving === i.kind}
+              onClick={() => flip(i.kind, !i.on)}
+              className={`relative mt-0.5 inline-flex h-7 w-12 shrink-0 items-center rounded-full transition focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent disabled:opacity-60 ${i.on ? "bg-accent" : "bg-line-strong"}`}
+            >
+              <span className="sr-only">{i.on ? "On" : "Off"}</span>
+              <span aria-hidden className={`inline-block h-5 w-5 rounded-full bg-white shadow transition ${i.on ? "translate-x-6" : "translate-x-1"}`} />
+            </button>
+          </li>
+        ))}
+      </ul>
+      <p role="status" aria-live="polite" className={`mt-3 min-h-5 text-sm ${status?.tone === "danger" ? "text-danger" : "text-ok"}`}>
+        {status?.text ?? ""}
+      </p>
+    </div>
+  );
+}
