@@ -8,3 +8,4 @@ export * from "./history";
 export * from "./photos";
 export * from "./mail";
 export * from "./fleet";
+export * from "./search";

@@ -1,0 +1,54 @@
+// Search index rows, one per case, kept current by database triggers on cases and findings
+// (db/migrations, search triggers): the narrative as a weighted tsvector, the findings as
+// arrays for facets and similar-case retrieval, and the columns the facets filter on.
+// Nothing in the app writes these tables; they are derived data and can be rebuilt.
+import { customType, date, index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { cases } from "./cases";
+
+const tsvector = customType<{ data: string }>({ dataType: () => "tsvector" });
+
+export const caseSearch = pgTable(
+  "case_search",
+  {
+    caseId: uuid("case_id").primaryKey().references(() => cases.id, { onDelete: "cascade" }),
+    number: text("number").notNull(),
+    status: text("status").notNull(),
+    trigger: text("trigger").notNull(),
+    primaryCause: text("primary_cause"),
+    bearingClass: text("bearing_class").notNull(),
+    siteId: uuid("site_id"),
+    createdBy: text("created_by"),
+    removedOn: date("removed_on"),
+    // Removal date, or the filing date where none was given: "earlier case" and date filters use it.
+    sortOn: date("sort_on").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull(),
+    maxSeverity: integer("max_severity").notNull().default(0),
+    damageCodes: text("damage_codes").array().notNull().default([]),
+    components: text("components").array().notNull().default([]),
+    // "component|damage code" and "component|family" keys for similar-case retrieval.
+    findingKeys: text("finding_keys").array().notNull().default([]),
+    familyKeys: text("family_keys").array().notNull().default([]),
+    // Case number, serial, car mark and number in one string for trigram matching.
+    identifiers: text("identifiers").notNull(),
+    document: tsvector("document").notNull(),
+  },
+  (t) => [
+    index("case_search_document_idx").using("gin", t.document),
+    index("case_search_identifiers_trgm_idx").using("gin", t.identifiers.op("gin_trgm_ops")),
+    index("case_search_codes_idx").using("gin", t.damageCodes),
+    index("case_search_components_idx").using("gin", t.components),
+    index("case_search_finding_keys_idx").using("gin", t.findingKeys),
+    index("case_search_family_keys_idx").using("gin", t.familyKeys),
+    index("case_search_sort_idx").on(t.sortOn, t.createdAt),
+    index("case_search_site_idx").on(t.siteId),
+  ],
+);
+
+// Distinct words seen in case narratives: a typo's nearest known words come from here.
+export const searchWords = pgTable(
+  "search_words",
+  { word: text("word").primaryKey() },
+  (t) => [index("search_words_trgm_idx").using("gin", t.word.op("gin_trgm_ops"))],
+);
+
+export type CaseSearchRow = typeof caseSearch.$inferSelect;
