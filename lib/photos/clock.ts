@@ -1,0 +1,26 @@
+// Clock positions on a ring: 0° = 12 o'clock, clockwise seen from the outboard end (as findings use).
+
+export function normaliseDeg(deg: number): number {
+  return ((Math.round(deg) % 360) + 360) % 360;
+}
+
+/** 3 o'clock → 90°, 12 o'clock → 0°. */
+export function oClockToDeg(hour: number): number {
+  if (!Number.isInteger(hour) || hour < 1 || hour > 12) throw new RangeError(`an o'clock hour is 1–12, not ${hour}`);
+  return (hour % 12) * 30;
+}
+
+/** The nearest whole hour on the clock face: 95° → 3, 350° → 12. */
+export function degToOClock(deg: number): number {
+  const hour = Math.round(normaliseDeg(deg) / 30) % 12;
+  return hour === 0 ? 12 : hour;
+}
+
+/** "3 o'clock (90°)"; off-hour angles say "near": "near 3 o'clock (95°)". */
+export function clockLabel(deg: number | null | undefined): string {
+  if (deg === null || deg === undefined) return "";
+  const d = normaliseDeg(deg);
+  const hour = degToOClock(d);
+  const exact = oClockToDeg(hour) === d;
+  return `${exact ? "" : "near "}${hour} o'clock (${d}°)`;
+}
