@@ -43,7 +43,7 @@ export async function revokeInvitation(id: string) {
 
 export async function listPendingInvitations() {
   return db
-    .select({ id: invitations.id, email: invitations.email, name: invitations.name, role: invitations.role, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt })
+    .select({ id: invitations.id, email: invitations.email, name: invitations.name, role: invitations.role, siteId: invitations.siteId, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt })
     .from(invitations)
     .where(and(isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())))
     .orderBy(desc(invitations.createdAt));

@@ -1,0 +1,18 @@
+// GET /api/admin/sites - every site with its end-play policy and usage; POST - add a site
+import { NextResponse } from "next/server";
+import { findSiteByCode, insertSite, listSites, siteUsageCounts } from "@/db/queries/sites";
+import { conflict } from "@/lib/http/errors";
+import { parseJson, withRole } from "@/lib/http/handler";
+import { siteCreateSchema } from "@/lib/validation/site";
+
+export const GET = withRole("admin:sites", async () => {
+  const [rows, usage] = await Promise.all([listSites(), siteUsageCounts()]);
+  return NextResponse.json({ sites: rows.map((s) => ({ ...s, usage: usage.get(s.id) ?? { cases: 0, users: 0 } })) });
+});
+
+export const POST = withRole("admin:sites", async ({ req }) => {
+  const input = await parseJson(req, siteCreateSchema);
+  if (await findSiteByCode(input.code)) throw conflict(`A site with the code ${input.code} already exists.`, { fields: { code: "This code is taken." } });
+  const site = await insertSite(input);
+  return NextResponse.json({ site }, { status: 201 });
+});
