@@ -1,0 +1,30 @@
+import { describe, expect, it } from "vitest";
+import { CASE_COLUMNS, defaultColumnVisibility, formatClass, formatDay, formatEndPlay, formatMonths, formatPosition } from "@/lib/cases/list-columns";
+
+describe("case list formatting", () => {
+  it("shows end play in inches to four decimals", () => {
+    expect(formatEndPlay(0.0625)).toBe("0.0625"); // 1/16 in = 0.0625 in (arithmetic), the common interchange limit
+    expect(formatEndPlay(0.015)).toBe("0.0150"); // four places: a dial indicator reads to 0.0001 in (common practice)
+    expect(formatEndPlay(null)).toBe("");
+  });
+
+  it("spells dates one way whatever the locale", () => {
+    expect(formatDay("2026-06-15")).toBe("15 Jun 2026"); // ISO 8601 calendar date read as day, month name, year
+    expect(formatDay("2026-12-01T10:00:00Z")).toBe("1 Dec 2026");
+    expect(formatDay(null)).toBe("");
+  });
+
+  it("shows position, class and months plainly", () => {
+    expect(formatPosition(2, "L")).toBe("Axle 2 L");
+    expect(formatPosition(null, null)).toBe("");
+    expect(formatClass({ bearingClass: "other", bearingClassOther: "AP-2" })).toBe("AP-2");
+    expect(formatClass({ bearingClass: "F", bearingClassOther: null })).toBe("F");
+    expect(formatMonths(18.5)).toBe("18.5");
+    expect(formatMonths(24)).toBe("24");
+  });
+
+  it("always shows the case number and offers every other column", () => {
+    expect(CASE_COLUMNS.filter((c) => !c.hideable).map((c) => c.id)).toEqual(["number"]);
+    expect(defaultColumnVisibility().number).toBe(true);
+  });
+});
