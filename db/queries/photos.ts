@@ -1,0 +1,86 @@
+// Photo rows: the locked insert used by ingest, lists for the case page, tag edits and removal.
+// Every change is written to the case history in the same transaction.
+import "server-only";
+import { and, asc, eq, sql } from "drizzle-orm";
+import { db, type Tx } from "@/db";
+import { caseEvents, cases, findings, photos, type Photo } from "@/db/schema";
+import { conflict, notFound } from "@/lib/http/errors";
+import type { NewPhotoRow, PhotoRowStore } from "@/lib/photos/ingest";
+import type { PhotoTags } from "@/lib/photos/tags";
+import { diffFields } from "@/lib/cases/diff";
+
+export const SIGNED_REFUSAL = "This case is signed and read-only, so its photos cannot be added, changed or deleted. An engineer can reopen it with a reason.";
+
+/** Holds the case row against signing while a photo is written, and refuses a signed case. */
+async function lockOpenCase(tx: Tx, caseId: string) {
+  const [c] = await tx.select({ status: cases.status }).from(cases).where(eq(cases.id, caseId)).for("share");
+  if (!c) throw notFound("That case");
+  if (c.status === "signed") throw conflict(SIGNED_REFUSAL);
+}
+
+const photoLabel = (p: Pick<Photo, "fileName" | "sha256">) => `${p.fileName || "photo"} (${p.sha256.slice(0, 12)})`;
+
+export const photoRows: PhotoRowStore<Photo> = {
+  exclusive: (caseId, sha256, fn) =>
+    db.transaction(async (tx) => {
+      // One ingest per (case, file) at a time: a second upload of the same file waits, then finds the row.
+      await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${`photo:${caseId}:${sha256}`}, 0))`);
+      return fn({
+        findByHash: async (c, s) => (await tx.select().from(photos).where(and(eq(photos.caseId, c), eq(photos.sha256, s))))[0] ?? null,
+        insert: async (values: NewPhotoRow) => {
+          await lockOpenCase(tx, values.caseId);
+          const [row] = await tx.insert(photos).values(values).returning();
+          await tx.insert(caseEvents).values({ caseId: values.caseId, userId: values.uploadedBy, action: "photo-added", changes: [{ field: "photo", from: null, to: photoLabel(row) }] });
+          return row;
+        },
+      });
+    }),
+};
+
+export async function listCasePhotos(caseId: string): Promise<Photo[]> {
+  return db.select().from(photos).where(eq(photos.caseId, caseId)).orderBy(asc(photos.takenAt), asc(photos.createdAt));
+}
+
+/** A photo with the case fields that decide who may see and change it. */
+export async function getPhotoWithCase(photoId: string) {
+  const [row] = await db
+    .select({ photo: photos, caseRow: { id: cases.id, number: cases.number, status: cases.status, siteId: cases.siteId, createdBy: cases.createdBy } })
+    .from(photos)
+    .innerJoin(cases, eq(cases.id, photos.caseId))
+    .where(eq(photos.id, photoId));
+  return row ?? null;
+}
+
+export async function findingInCase(findingId: string, caseId: string): Promise<boolean> {
+  const [f] = await db.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
+  return Boolean(f);
+}
+
+export async function updatePhotoTags(photoId: string, tags: PhotoTags, actorId: string): Promise<Photo> {
+  return db.transaction(async (tx) => {
+    const [before] = await tx.select().from(photos).where(eq(photos.id, photoId)).for("update");
+    if (!before) throw notFound("That photo");
+    await lockOpenCase(tx, before.caseId);
+    const [after] = await tx.update(photos).set(tags).where(eq(photos.id, photoId)).returning();
+    const changes = diffFields(before as Record<string, unknown>, tags as Record<string, unknown>).map((c) => ({ ...c, field: `photo ${photoLabel(before)}: ${c.field}` }));
+    if (changes.length) await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-tagged", changes });
+    return after;
+  });
+}
+
+/** Deletes the row (the objects go after it, by the caller); refuses on a signed case. */
+export async function deletePhotoRow(photoId: string, actorId: string): Promise<Photo> {
+  return db.transaction(async (tx) => {
+    const [before] = await tx.select().from(photos).where(eq(photos.id, photoId)).for("update");
+    if (!before) throw notFound("That photo");
+    await lockOpenCase(tx, before.caseId);
+    await tx.delete(photos).where(eq(photos.id, photoId));
+    await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-removed", changes: [{ field: "photo", from: photoLabel(before), to: null }] });
+    return before;
+  });
+}
+
+export async function photoRowExists(caseId: string, sha256: string): Promise<boolean> {
+  const [r] = await db.select({ id: photos.id }).from(photos).where(and(eq(photos.caseId, caseId), eq(photos.sha256, sha256)));
+  return Boolean(r);
+}

@@ -1,0 +1,72 @@
+// Photo operations as routes and pages call them: who may touch which case, then ingest,
+// tag, remove and sweep with the real bucket and database.
+import "server-only";
+import { deletePhotoRow, findingInCase, getPhotoWithCase, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
+import type { Case, Photo } from "@/db/schema";
+import type { CurrentUser } from "@/lib/auth/session";
+import { can } from "@/lib/auth/permissions";
+import { canReadCase } from "@/lib/cases/access";
+import { loadReadableCase } from "@/lib/cases/service";
+import { badRequest, conflict, forbidden, notFound } from "@/lib/http/errors";
+import { ingestPhoto } from "./ingest";
+import { photoLimits } from "./limits";
+import { listStoredObjects, s3PhotoStore } from "./object-store";
+import { DEFAULT_SWEEP_GRACE_MINUTES, sweepOrphanPhotos } from "./sweep";
+import type { PhotoTags } from "./tags";
+
+/** A case the user may see and that is not signed, for adding or changing photos. */
+export async function loadCaseForPhotoChange(caseKey: string, user: CurrentUser): Promise<Case> {
+  const c = await loadReadableCase(caseKey, user);
+  if (c.status === "signed") throw conflict(SIGNED_REFUSAL);
+  return c;
+}
+
+/** A photo whose case the user may see; others answer as if it did not exist. */
+export async function loadReadablePhoto(photoId: string, user: CurrentUser) {
+  const hit = /^[0-9a-f-]{36}$/i.test(photoId) ? await getPhotoWithCase(photoId) : null;
+  if (!hit || !canReadCase(user, hit.caseRow)) throw notFound("That photo");
+  return hit;
+}
+
+async function checkFinding(tags: PhotoTags, caseId: string) {
+  if (tags.findingId && !(await findingInCase(tags.findingId, caseId))) throw badRequest("That finding belongs to another case; choose one of this case's findings.");
+}
+
+export async function uploadPhoto(c: Case, file: { bytes: Buffer; name: string }, tags: PhotoTags, user: CurrentUser) {
+  await checkFinding(tags, c.id);
+  return ingestPhoto(
+    { caseId: c.id, file: file.bytes, fileName: file.name, tags, uploadedBy: user.id, limits: photoLimits() },
+    { store: s3PhotoStore, rows: photoRows },
+  );
+}
+
+export async function retagPhoto(photoId: string, tags: PhotoTags, user: CurrentUser): Promise<Photo> {
+  const { photo, caseRow } = await loadReadablePhoto(photoId, user);
+  if (caseRow.status === "signed") throw conflict(SIGNED_REFUSAL);
+  await checkFinding(tags, photo.caseId);
+  return updatePhotoTags(photo.id, tags, user.id);
+}
+
+export async function removePhoto(photoId: string, user: CurrentUser): Promise<Photo> {
+  const { photo, caseRow } = await loadReadablePhoto(photoId, user);
+  if (caseRow.status === "signed") throw conflict(SIGNED_REFUSAL);
+  // Shop inspectors remove only what they uploaded; the lab may tidy any case's photos.
+  if (!can(user.role, "case:edit-teardown") && photo.uploadedBy !== user.id) {
+    throw forbidden("You can delete only photos you uploaded yourself; ask the lab to remove this one.");
+  }
+  const removed = await deletePhotoRow(photo.id, user.id);
+  // The same file may have been uploaded again meanwhile; then its objects belong to the new row.
+  if (!(await photoRowExists(removed.caseId, removed.sha256))) {
+    await s3PhotoStore.remove([removed.originalKey, removed.screenKey, removed.thumbKey]).catch((err) => {
+      console.error(`photo objects left for the sweeper: ${(err as Error).message}`);
+    });
+  }
+  return removed;
+}
+
+export function sweepPhotoObjects(options: { olderThanMinutes?: number; dryRun?: boolean } = {}) {
+  return sweepOrphanPhotos(
+    { list: listStoredObjects, rowExists: photoRowExists, remove: s3PhotoStore.remove },
+    { olderThanMinutes: options.olderThanMinutes ?? DEFAULT_SWEEP_GRACE_MINUTES, dryRun: options.dryRun },
+  );
+}
