@@ -1,0 +1,62 @@
+import type { Metadata } from "next";
+import { ButtonLink } from "@/components/ui/button";
+import { Card, PageHeader } from "@/components/ui/card";
+import { listPendingInvitations } from "@/db/queries/invitations";
+import { listSiteChoices } from "@/db/queries/sites";
+import { listUsers } from "@/db/queries/users";
+import { requirePageUser } from "@/lib/auth/session";
+import { InviteForm } from "./_components/invite-form";
+import { PendingInvitations } from "./_components/pending-invitations";
+import { PersonRow } from "./_components/person-row";
+
+export const metadata: Metadata = { title: "People" };
+export const dynamic = "force-dynamic";
+
+const COLUMNS = "md:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)_minmax(0,1.3fr)_7.5rem]";
+
+export default async function PeoplePage() {
+  const me = await requirePageUser("admin:users");
+  const [people, invitations, sites] = await Promise.all([listUsers(), listPendingInvitations(), listSiteChoices()]);
+  const active = people.filter((p) => !p.banned).length;
+  const now = Date.now();
+
+  return (
+    <>
+      <PageHeader
+        title="People"
+        subtitle={`${active} active ${active === 1 ? "account" : "accounts"}${people.length > active ? `, ${people.length - active} suspended` : ""}. A role or home site is saved as soon as you change it.`}
+        actions={<ButtonLink href="#invite">Invite someone</ButtonLink>}
+      />
+      <div className="flex flex-col gap-5">
+        <Card title="Everyone with an account">
+          <div className={`-mt-1 hidden gap-4 border-b border-line pb-2 text-xs font-medium uppercase tracking-wide text-muted md:grid ${COLUMNS}`}>
+            <span>Person</span>
+            <span>Role</span>
+            <span>Home site</span>
+            <span className="text-right">Account</span>
+          </div>
+          <ul className="-my-1 divide-y divide-line md:my-0">
+            {people.map((p) => (
+              <PersonRow key={p.id} person={{ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId }} sites={sites} isSelf={p.id === me.id} />
+            ))}
+          </ul>
+        </Card>
+        <div className="grid items-start gap-5 lg:grid-cols-2">
+          <div id="invite" className="scroll-mt-24">
+            <Card title="Invite someone">
+              <p className="-mt-1 mb-4 text-sm text-muted">They get an e-mail with a link to choose a password. Nobody can sign up without one.</p>
+              <InviteForm sites={sites} />
+            </Card>
+          </div>
+          <Card title={`Waiting to join${invitations.length ? ` (${invitations.length})` : ""}`}>
+            <PendingInvitations
+              invitations={invitations.map((i) => ({ ...i, expiresAt: i.expiresAt.toISOString(), createdAt: i.createdAt.toISOString() }))}
+              sites={sites}
+              now={now}
+            />
+          </Card>
+        </div>
+      </div>
+    </>
+  );
+}
