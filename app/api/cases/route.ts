@@ -1,10 +1,22 @@
-// POST /api/cases - file a new removal (field report); GET is the case list (list.ts)
+// POST /api/cases - file a new removal (field report); GET /api/cases - the case list, filtered, sorted and paged
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { listCases } from "@/db/queries/case-list";
+import { parseListParams } from "@/lib/cases/list-params";
 import { parseJson, withRole } from "@/lib/http/handler";
 import { createFieldReport } from "@/lib/cases/service";
 
 export const POST = withRole("case:create", async ({ req, user }) => {
   const created = await createFieldReport(await parseJson(req, z.unknown()), user);
   return NextResponse.json({ case: created }, { status: 201 });
+});
+
+// Inspectors get only their shop's cases and their own, whatever the filters say (listCases scopes).
+export const GET = withRole("case:read", async ({ req, user }) => {
+  const { filters, sort, page, pageSize } = parseListParams(req.nextUrl.searchParams);
+  const { rows, total } = await listCases(filters, sort, page, pageSize, user);
+  return NextResponse.json(
+    { rows, total, page, pageSize, pageCount: Math.max(1, Math.ceil(total / pageSize)), sort: `${sort.field}:${sort.dir}` },
+    { headers: { "cache-control": "private, no-store" } },
+  );
 });

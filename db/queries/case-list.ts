@@ -1,0 +1,196 @@
+// The case list: one filtered, sorted page with its total, and the whole filtered set for export.
+// Every query is held to what the viewer may read (canReadCase, written as SQL).
+import "server-only";
+import { and, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import { db } from "@/db";
+import { cases, codeEntries, sites } from "@/db/schema";
+import { can } from "@/lib/auth/permissions";
+import type { CaseColumnId, CaseListRow } from "@/lib/cases/list-columns";
+import { CSV_HEADER, csvValues, EXPORT_CAP } from "@/lib/cases/list-csv";
+import type { CaseFilters, CaseSort } from "@/lib/cases/list-params";
+import { csvRow } from "@/lib/csv";
+import { badRequest } from "@/lib/http/errors";
+import { scopeForInspector } from "./home";
+
+export type CaseListViewer = { id: string; role: string; siteId: string | null };
+
+const triggerCode = alias(codeEntries, "trigger_code");
+const causeCode = alias(codeEntries, "cause_code");
+
+const rowColumns = {
+  id: cases.id, number: cases.number, status: cases.status, carMark: cases.carMark, carNumber: cases.carNumber,
+  axle: cases.axle, side: cases.side, serial: cases.serial, bearingClass: cases.bearingClass,
+  bearingClassOther: cases.bearingClassOther, trigger: cases.trigger,
+  triggerLabel: sql<string>`coalesce(${triggerCode.label}, ${cases.trigger})`,
+  fieldCall: cases.fieldCall, endPlayMeanIn: cases.endPlayMeanIn, removedOn: cases.removedOn,
+  siteCode: sites.code, siteName: sites.name, primaryCause: cases.primaryCause,
+  causeLabel: sql<string | null>`coalesce(${causeCode.label}, ${cases.primaryCause})`,
+  removalConfirmed: cases.removalConfirmed, serviceMonths: cases.serviceMonths, updatedAt: cases.updatedAt,
+};
+
+/** Inspectors: their shop's cases and the ones they filed. Other roles: everything. */
+export function viewerCaseScope(viewer: CaseListViewer): SQL | undefined {
+  if (can(viewer.role, "case:read-all")) return undefined;
+  if (!can(viewer.role, "case:read")) return sql`false`;
+  return scopeForInspector(viewer.id, viewer.siteId);
+}
+
+const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+function textMatch(q: string): SQL[] {
+  const hay = sql`concat_ws(' ', ${cases.number}, ${cases.serial}, ${cases.carMark}, ${cases.carNumber}, ${cases.carMark} || ${cases.carNumber})`;
+  return q.split(/\s+/).filter(Boolean).slice(0, 8).map((term) => sql`${hay} ilike ${`%${likeEscape(term)}%`}`);
+}
+
+export function caseListWhere(f: CaseFilters, viewer: CaseListViewer): SQL | undefined {
+  return and(
+    viewerCaseScope(viewer),
+    f.status?.length ? inArray(cases.status, f.status) : undefined,
+    f.trigger?.length ? inArray(cases.trigger, f.trigger) : undefined,
+    f.cause?.length ? inArray(cases.primaryCause, f.cause) : undefined,
+    f.class?.length ? inArray(cases.bearingClass, f.class) : undefined,
+    f.site?.length ? inArray(sites.code, f.site) : undefined,
+    f.from ? gte(cases.removedOn, f.from) : undefined,
+    f.to ? lte(cases.removedOn, f.to) : undefined,
+    ...(f.q ? textMatch(f.q) : []),
+  );
+}
+
+// Whitelisted sort expressions; the URL only ever picks a key of this map.
+const SORT_EXPRESSIONS: Record<CaseColumnId, SQL[]> = {
+  number: [sql`${cases.number}`],
+  status: [sql`array_position(array['field','bench','signoff','signed']::text[], ${cases.status})`],
+  car: [sql`nullif(${cases.carMark}, '')`, sql`length(${cases.carNumber})`, sql`${cases.carNumber}`],
+  position: [sql`${cases.axle}`, sql`${cases.side}`],
+  serial: [sql`nullif(${cases.serial}, '')`],
+  class: [sql`nullif(${cases.bearingClass}, '')`, sql`${cases.bearingClassOther}`],
+  trigger: [sql`coalesce(${triggerCode.label}, ${cases.trigger})`],
+  fieldCall: [sql`${cases.fieldCall}`],
+  endPlay: [sql`${cases.endPlayMeanIn}`],
+  removedOn: [sql`${cases.removedOn}`],
+  site: [sql`${sites.name}`],
+  cause: [sql`coalesce(${causeCode.label}, ${cases.primaryCause})`],
+  outcome: [sql`${cases.removalConfirmed}`],
+  serviceMonths: [sql`${cases.serviceMonths}`],
+  updatedAt: [sql`${cases.updatedAt}`],
+};
+
+export function caseListOrder(sort: CaseSort): SQL[] {
+  const dir = sort.dir === "asc" ? sql.raw("asc") : sql.raw("desc");
+  // Empty values last either way; the case number breaks ties so pages never overlap.
+  return [...SORT_EXPRESSIONS[sort.field].map((e) => sql`${e} ${dir} nulls last`), sql`${cases.number} desc`];
+}
+
+const onSite = eq(sites.id, cases.siteId);
+const onTrigger = and(eq(triggerCode.list, "trigger"), eq(triggerCode.code, cases.trigger));
+const onCause = and(eq(causeCode.list, "cause"), eq(causeCode.code, cases.primaryCause));
+const totalOver = sql<number>`count(*) over()`.mapWith(Number);
+
+type RawRow = Omit<CaseListRow, "updatedAt"> & { updatedAt: Date };
+const toRow = ({ updatedAt, ...r }: RawRow): CaseListRow => ({ ...r, updatedAt: updatedAt.toISOString() });
+
+/** Site, trigger and cause codes in a filter must exist: a typo gets a 400, not an empty list. */
+export async function assertKnownCodes(f: CaseFilters): Promise<void> {
+  const missing = (asked: string[] | undefined, found: { code: string }[]) => (asked ?? []).filter((c) => !found.some((x) => x.code === c));
+  const listCodes = (list: "trigger" | "cause", asked?: string[]) =>
+    asked?.length ? db.select({ code: codeEntries.code }).from(codeEntries).where(and(eq(codeEntries.list, list), inArray(codeEntries.code, asked))) : [];
+  const [foundSites, foundTriggers, foundCauses] = await Promise.all([
+    f.site?.length ? db.select({ code: sites.code }).from(sites).where(inArray(sites.code, f.site)) : [],
+    listCodes("trigger", f.trigger),
+    listCodes("cause", f.cause),
+  ]);
+  const problems = [
+    ...missing(f.site, foundSites).map((c) => `site "${c}"`),
+    ...missing(f.trigger, foundTriggers).map((c) => `trigger "${c}"`),
+    ...missing(f.cause, foundCauses).map((c) => `cause "${c}"`),
+  ];
+  if (problems.length) throw badRequest(`Unknown ${problems.join(", ")}.`, { unknown: problems });
+}
+
+export async function listCases(
+  filters: CaseFilters, sort: CaseSort, page: number, pageSize: number, viewer: CaseListViewer,
+): Promise<{ rows: CaseListRow[]; total: number }> {
+  await assertKnownCodes(filters);
+  const where = caseListWhere(filters, viewer);
+  const found = await db
+    .select({ ...rowColumns, total: totalOver })
+    .from(cases)
+    .leftJoin(sites, onSite)
+    .leftJoin(triggerCode, onTrigger)
+    .leftJoin(causeCode, onCause)
+    .where(where)
+    .orderBy(...caseListOrder(sort))
+    .limit(pageSize)
+    .offset((page - 1) * pageSize);
+  let total = found[0]?.total ?? 0;
+  // Past the last page the window count has no row to ride on: count on its own.
+  if (!found.length && page > 1) {
+    const [c] = await db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(cases).leftJoin(sites, onSite).where(where);
+    total = c.n;
+  }
+  return { rows: found.map(({ total: _total, ...r }) => toRow(r)), total };
+}
+
+export type CaseExport = { total: number; capped: boolean; cap: number; batches: () => AsyncGenerator<CaseListRow[]> };
+
+/**
+ * Every matching case, in list order, up to `cap`. The ids and the total are fixed first; rows are
+ * then read in batches so a large export never sits whole in memory.
+ */
+export async function exportCases(
+  filters: CaseFilters, sort: CaseSort, viewer: CaseListViewer, opts: { cap?: number; batchSize?: number } = {},
+): Promise<CaseExport> {
+  const cap = opts.cap ?? EXPORT_CAP;
+  const batchSize = opts.batchSize ?? 1000;
+  await assertKnownCodes(filters);
+  const picked = await db
+    .select({ id: cases.id, total: totalOver })
+    .from(cases)
+    .leftJoin(sites, onSite)
+    .leftJoin(triggerCode, onTrigger)
+    .leftJoin(causeCode, onCause)
+    .where(caseListWhere(filters, viewer))
+    .orderBy(...caseListOrder(sort))
+    .limit(cap);
+  const total = picked[0]?.total ?? 0;
+  const ids = picked.map((p) => p.id);
+  async function* batches() {
+    for (let i = 0; i < ids.length; i += batchSize) {
+      const slice = ids.slice(i, i + batchSize);
+      const got = await db
+        .select(rowColumns)
+        .from(cases)
+        .leftJoin(sites, onSite)
+        .leftJoin(triggerCode, onTrigger)
+        .leftJoin(causeCode, onCause)
+        .where(inArray(cases.id, slice));
+      const byId = new Map(got.map((r) => [r.id, toRow(r)]));
+      yield slice.map((id) => byId.get(id)).filter((r): r is CaseListRow => r !== undefined);
+    }
+  }
+  return { total, capped: total > ids.length, cap, batches };
+}
+
+/** The export as CSV bytes: a UTF-8 byte-order mark (so spreadsheets read accents), the header, the rows. */
+export async function streamCasesCsv(
+  filters: CaseFilters, sort: CaseSort, viewer: CaseListViewer, opts: { cap?: number } = {},
+): Promise<Omit<CaseExport, "batches"> & { stream: ReadableStream<Uint8Array> }> {
+  const { batches, ...info } = await exportCases(filters, sort, viewer, opts);
+  const encoder = new TextEncoder();
+  const rows = batches();
+  const stream = new ReadableStream<Uint8Array>({
+    start(controller) {
+      controller.enqueue(encoder.encode(`\uFEFF${csvRow(CSV_HEADER)}`));
+    },
+    async pull(controller) {
+      const next = await rows.next();
+      if (next.done) controller.close();
+      else controller.enqueue(encoder.encode(next.value.map((r) => csvRow(csvValues(r))).join("")));
+    },
+    async cancel() {
+      await rows.return(undefined);
+    },
+  });
+  return { ...info, stream };
+}
