@@ -1,5 +1,5 @@
 // Showing and reading a site's end-play limits in either unit; the stored value is always inches.
-import { inToMm, mmToIn, parseLength, roundTo } from "@/lib/field/units";
+import { inToMm, mmToIn, nearestSixtyFourth, parseLength, roundTo } from "@/lib/field/units";
 
 export type PolicyUnit = "in" | "mm";
 
@@ -34,4 +34,11 @@ export function readLimit(text: string, unit: PolicyUnit): ReadLimit {
 /** "0.0625 in · 1.5875 mm" */
 export function bothUnits(inches: number): string {
   return `${formatIn(inches)} in · ${formatMmFromIn(inches)} mm`;
+}
+
+/** "1/16" when a limit sits on a 64th of an inch (to the stored 5 places), else null. */
+export function tapeFraction(inches: number): string | null {
+  const sixtyFourths = inches * 64;
+  if (Math.round(sixtyFourths) === 0 || Math.abs(inches - Math.round(sixtyFourths) / 64) > 0.000005 + 1e-12) return null;
+  return nearestSixtyFourth(inches).replace(/ in$/, "");
 }

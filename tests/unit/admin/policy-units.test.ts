@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { bothUnits, formatIn, formatMmFromIn, limitText, readLimit } from "@/lib/admin/policy-units";
+import { bothUnits, formatIn, formatMmFromIn, limitText, readLimit, tapeFraction } from "@/lib/admin/policy-units";
 import { sitePolicySchema } from "@/lib/validation/site";
 import checks from "../../fixtures/field-check-values.json";
 
@@ -28,6 +28,14 @@ describe("end-play limits in either unit", () => {
     // 1/64 in = 0.015625 in (arithmetic)
     expect(readLimit("1/64", "in")).toEqual({ ok: true, inches: 0.015625 });
     expect(readLimit("1,5875", "mm")).toEqual({ ok: true, inches: 0.0625 });
+  });
+
+  it("names the 64th of an inch a stored limit sits on", () => {
+    // 0.0625 in = 4/64 = 1/16; 0.01563 in is 1/64 (0.015625) kept to 5 places; 0.002 in is no 64th (arithmetic)
+    expect(tapeFraction(0.0625)).toBe("1/16");
+    expect(tapeFraction(0.01563)).toBe("1/64");
+    expect(tapeFraction(0.002)).toBeNull();
+    expect(tapeFraction(0.25)).toBe("1/4");
   });
 
   it("refuses text that is not a length", () => {

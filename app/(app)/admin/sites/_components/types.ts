@@ -1,0 +1,18 @@
+// The site as the Sites page hands it to its client pieces.
+import type { SiteKind } from "@/db/schema/sites";
+
+export type SiteView = {
+  id: string;
+  code: string;
+  name: string;
+  kind: SiteKind;
+  railway: string;
+  location: string;
+  active: boolean;
+  endPlayMaxIn: number;
+  dialSpreadIn: number;
+  tapeSpreadIn: number;
+  usage: { cases: number; users: number };
+};
+
+export type PolicyKey = "endPlayMaxIn" | "dialSpreadIn" | "tapeSpreadIn";
