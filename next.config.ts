@@ -5,6 +5,8 @@ const config: NextConfig = {
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
   serverExternalPackages: ["sharp", "pdfkit", "pg", "archiver", "nodemailer"],
   poweredByHeader: false,
+  // Type checking runs once in the test suite (tests/unit/typecheck.test.ts), not in every build.
+  typescript: { ignoreBuildErrors: true },
   typedRoutes: false,
   experimental: { serverActions: { bodySizeLimit: "30mb" } },
 };
