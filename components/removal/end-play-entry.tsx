@@ -82,7 +82,7 @@ export function EndPlayEntry({ value, onChange, policy = DEFAULT_END_PLAY_POLICY
           </div>
         </div>
       ) : null}
-      <FieldMessages messages={result.messages} />
+      {filled.length ? <FieldMessages messages={result.messages} /> : <p className="text-sm text-muted">Enter at least one reading to see the end play and the call.</p>}
     </fieldset>
   );
 }
