@@ -1,0 +1,21 @@
+// The life section's data: a quick fit for every cause and the full analysis for the chosen one.
+import "server-only";
+import { analyseCause, lifeCauses, summariseCause, unitsFor, type LifeMeasure } from "@/lib/tallies/life";
+import type { TallyFilters } from "@/lib/tallies/filters";
+import type { LifeData } from "@/lib/tallies/life-data";
+import { fleetCounts, latestFleetBatch, lifeCounts } from "./life-counts";
+import { viewerSiteLimit, type TallyViewer } from "./scope";
+
+export async function loadLife(filters: TallyFilters, viewer: TallyViewer, measure: LifeMeasure, cause?: string): Promise<LifeData> {
+  const [{ rows, withoutLife }, batch] = await Promise.all([lifeCounts(filters, viewer, measure), latestFleetBatch()]);
+  // Fleet survivors belong to the whole fleet: adding them to one site's removals would bias the fit.
+  const siteBound = Boolean(filters.site) || viewerSiteLimit(viewer).limited;
+  const fleet = batch && !siteBound ? await fleetCounts(batch.batchId, measure, filters.class) : [];
+  const used = fleet.reduce((s, f) => s + f.count, 0);
+  const why = !batch ? "No fleet list uploaded yet." : siteBound ? "Fleet list not used while one site is in view: it covers the whole fleet." : null;
+
+  const causes = lifeCauses(rows).map((c) => summariseCause(c.cause, unitsFor(c.cause, rows, fleet)));
+  const chosen = cause && causes.some((c) => c.cause === cause) ? cause : causes.find((c) => c.fit)?.cause;
+  const selected = chosen ? analyseCause(chosen, unitsFor(chosen, rows, fleet)) : null;
+  return { measure, causes, selected, withoutLife, fleet: { batch, used, why } };
+}

@@ -1,0 +1,57 @@
+// Everything the tallies page shows for one set of filters: a handful of GROUP BY queries run
+// side by side, then shaped by the pure functions in lib/tallies.
+import "server-only";
+import { causeLabel } from "@/lib/tallies/labels";
+import { confirmationTable } from "@/lib/tallies/shape-confirmation";
+import { causeSiteTally } from "@/lib/tallies/shape-cause-site";
+import { monthlyTally } from "@/lib/tallies/shape-monthly";
+import { causePareto, triggerVerdictRows, verdictTotals } from "@/lib/tallies/shape-verdicts";
+import { triggerLabel } from "@/lib/tallies/labels";
+import type { TallyFilters } from "@/lib/tallies/filters";
+import type { TalliesData } from "@/lib/tallies/types";
+import { recurringClusters } from "./clusters";
+import { damageSectors } from "./damage-sectors";
+import { monthlyCounts } from "./monthly-counts";
+import { viewerSiteLimit, type TallyViewer } from "./scope";
+import { allSites } from "./sites";
+import { verdictCube } from "./verdict-cube";
+
+export async function loadTallies(filters: TallyFilters, viewer: TallyViewer): Promise<TalliesData> {
+  const [cube, months, clusters, damage, sites] = await Promise.all([
+    verdictCube(filters, viewer),
+    monthlyCounts(filters, viewer),
+    recurringClusters(filters, viewer),
+    damageSectors(filters, viewer),
+    allSites(),
+  ]);
+  const siteById = new Map(sites.map((s) => [s.id, s]));
+  const siteLabel = (id: string) => siteById.get(id)?.name ?? "Unknown site";
+  const limit = viewerSiteLimit(viewer);
+  const limitedTo = limit.limited && limit.siteId ? siteById.get(limit.siteId) : undefined;
+  const removals = months.reduce((s, m) => s + m.count, 0);
+
+  return {
+    filters,
+    siteLimit: limit.limited ? { code: limitedTo?.code ?? "", name: limitedTo?.name ?? "No home site" } : null,
+    generatedAt: new Date().toISOString(),
+    totals: verdictTotals(cube, removals),
+    pareto: causePareto(cube),
+    triggerVerdict: triggerVerdictRows(cube),
+    byTrigger: confirmationTable(cube, (c) => c.trigger, triggerLabel),
+    byShop: confirmationTable(cube, (c) => c.siteId, siteLabel),
+    monthly: monthlyTally(months, filters.from, filters.to),
+    causeSite: causeSiteTally(cube, siteLabel),
+    clusters: {
+      keyKind: filters.cluster,
+      windowDays: filters.window,
+      minSize: clusters.minSize,
+      total: clusters.rows[0]?.total ?? 0,
+      items: clusters.rows.map(({ total: _total, ...r }) => ({
+        ...r,
+        keyLabel: filters.cluster === "site" ? siteLabel(r.key) : filters.cluster === "lot" ? `Lot ${r.key}` : r.key,
+        causeLabel: causeLabel(r.cause),
+      })),
+    },
+    damage,
+  };
+}

@@ -1,0 +1,39 @@
+// The WHERE clause every tally shares: the viewer's reach first, then the chosen filters.
+// Inspectors count only their own site's removals, whatever filters they send.
+import "server-only";
+import { and, eq, gte, lt, sql, type SQL } from "drizzle-orm";
+import { cases, sites } from "@/db/schema";
+import { can } from "@/lib/auth/permissions";
+import { periodBounds, type TallyFilters } from "@/lib/tallies/filters";
+
+export type TallyViewer = { role: string; siteId: string | null };
+
+/** The site an inspector is held to, or null when the viewer reads every site. */
+export function viewerSiteLimit(viewer: TallyViewer): { limited: boolean; siteId: string | null } {
+  if (can(viewer.role, "tallies:read-all")) return { limited: false, siteId: null };
+  return { limited: true, siteId: viewer.siteId };
+}
+
+export function viewerScope(viewer: TallyViewer): SQL | undefined {
+  const limit = viewerSiteLimit(viewer);
+  if (!limit.limited) return undefined;
+  if (!can(viewer.role, "tallies:read")) return sql`false`;
+  // An inspector without a home site sees nothing rather than everything.
+  return limit.siteId ? eq(cases.siteId, limit.siteId) : sql`false`;
+}
+
+export type ScopeOptions = { signedOnly?: boolean; ignorePeriod?: boolean };
+
+export function tallyWhere(filters: TallyFilters, viewer: TallyViewer, opts: ScopeOptions = {}): SQL {
+  const parts: (SQL | undefined)[] = [viewerScope(viewer)];
+  if (opts.signedOnly) parts.push(eq(cases.status, "signed"));
+  if (!opts.ignorePeriod) {
+    const { start, endExclusive } = periodBounds(filters);
+    if (start) parts.push(gte(cases.removedOn, start));
+    if (endExclusive) parts.push(lt(cases.removedOn, endExclusive));
+  }
+  if (filters.site) parts.push(sql`${cases.siteId} = (select ${sites.id} from ${sites} where ${sites.code} = ${filters.site})`);
+  if (filters.class) parts.push(eq(cases.bearingClass, filters.class));
+  if (filters.trigger) parts.push(eq(cases.trigger, filters.trigger));
+  return and(...parts) ?? sql`true`;
+}

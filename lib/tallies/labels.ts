@@ -1,0 +1,20 @@
+// Words for codes on charts; codes an admin added later fall back to the code itself.
+import { ROOT_CAUSES, TRIGGERS } from "@/lib/classification";
+
+export const causeLabel = (code: string | null): string =>
+  code === null ? "No cause recorded" : (ROOT_CAUSES.find((c) => c.code === code)?.label ?? code);
+
+export const triggerLabel = (code: string): string => TRIGGERS.find((t) => t.code === code)?.label ?? code;
+
+/** "42%" style share; one decimal below 10%. */
+export function percent(share: number | null | undefined): string {
+  if (share === null || share === undefined || !Number.isFinite(share)) return "–";
+  const p = share * 100;
+  return `${p < 10 && p > 0 ? p.toFixed(1) : Math.round(p)}%`;
+}
+
+export function monthLabel(ym: string): string {
+  const [y, m] = ym.split("-").map(Number);
+  const names = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
+  return `${names[m - 1]} ${y}`;
+}

@@ -1,0 +1,139 @@
+// Life analysis per root cause: removals for that cause are failures; removals for any other
+// cause, and fleet units still in service, are suspensions (right-censored at their service life).
+import {
+  assertFittable,
+  fisherBounds,
+  fitWeibull,
+  johnsonAdjustedRanks,
+  prepareLikelihoodData,
+  readShape,
+  weibullMleFromData,
+  weibullPlotY,
+  weibullRankRegression,
+  WeibullInputError,
+  type LifeUnit,
+  type ShapeReading,
+} from "@/lib/stats";
+import { causeLabel } from "./labels";
+
+export type LifeMeasure = "months" | "miles";
+/** Signed removals counted by cause and service life (as the database groups them). */
+export type LifeCountRow = { cause: string | null; time: number; count: number };
+/** Fleet units still in service counted by service life. */
+export type FleetCountRow = { time: number; count: number };
+
+type Bounds = [number, number];
+
+export type LifeSummary = {
+  cause: string;
+  label: string;
+  failures: number;
+  suspensions: number;
+  fit: null | { beta: number; eta: number; b10: number; betaBounds: Bounds; etaBounds: Bounds; b10Bounds: Bounds; shapeReading: ShapeReading };
+  /** Why no fit was made, in words. */
+  note: string | null;
+};
+
+export type LifeDetail = LifeSummary & {
+  rankRegression: { beta: number; eta: number; b10: number; r2: number } | null;
+  mle: { beta: number; eta: number; b10: number; fisher: { beta: Bounds; eta: Bounds; b10: Bounds } } | null;
+  /** Likelihood-ratio bounds; null when the data set is too large to profile in a page request. */
+  likelihoodRatio: { beta: Bounds; eta: Bounds; b10: Bounds } | null;
+  shapeExplanation: string;
+  plotPoints: { time: number; medianRank: number; y: number }[];
+  fittedLine: { time: number; y: number }[];
+  /** Plotted failures were thinned to this many evenly spaced ranks (null: all shown). */
+  thinnedFrom: number | null;
+};
+
+/** Causes that fail a bearing; "no defect found" removals are always suspensions. */
+export const NOT_A_FAILURE = new Set(["no-defect"]);
+
+export function unitsFor(cause: string, rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[]): LifeUnit[] {
+  const units: LifeUnit[] = [];
+  for (const r of rows) {
+    if (!(r.time > 0)) continue;
+    const failed = r.cause === cause;
+    for (let i = 0; i < r.count; i++) units.push({ time: r.time, failed });
+  }
+  for (const f of fleet) {
+    if (!(f.time > 0)) continue;
+    for (let i = 0; i < f.count; i++) units.push({ time: f.time, failed: false });
+  }
+  return units;
+}
+
+export function lifeCauses(rows: readonly LifeCountRow[]): { cause: string; failures: number }[] {
+  const totals = new Map<string, number>();
+  for (const r of rows) if (r.cause && !NOT_A_FAILURE.has(r.cause) && r.time > 0) totals.set(r.cause, (totals.get(r.cause) ?? 0) + r.count);
+  return [...totals].map(([cause, failures]) => ({ cause, failures })).sort((a, b) => b.failures - a.failures || a.cause.localeCompare(b.cause));
+}
+
+const noteFor = (err: unknown) => (err instanceof WeibullInputError ? err.message : "The fit did not converge on these data.");
+
+/** MLE with Fisher bounds: quick enough for every cause on one screen. */
+export function summariseCause(cause: string, units: readonly LifeUnit[], confidence = 0.95): LifeSummary {
+  const failures = units.filter((u) => u.failed).length;
+  const base = { cause, label: causeLabel(cause), failures, suspensions: units.length - failures };
+  try {
+    assertFittable(units);
+    const data = prepareLikelihoodData(units);
+    const fit = weibullMleFromData(data);
+    const fisher = fisherBounds(data, fit, confidence);
+    return {
+      ...base,
+      fit: { beta: fit.beta, eta: fit.eta, b10: fit.b10, betaBounds: fisher.beta, etaBounds: fisher.eta, b10Bounds: fisher.b10, shapeReading: readShape(fit.beta, fisher.beta).reading },
+      note: null,
+    };
+  } catch (err) {
+    return { ...base, fit: null, note: noteFor(err) };
+  }
+}
+
+function thin<T>(points: readonly T[], max: number): T[] {
+  if (points.length <= max) return [...points];
+  const out: T[] = [];
+  for (let i = 0; i < max; i++) out.push(points[Math.round((i * (points.length - 1)) / (max - 1))]);
+  return out;
+}
+
+function line(beta: number, eta: number, tMin: number, tMax: number, steps = 24) {
+  const out: { time: number; y: number }[] = [];
+  for (let i = 0; i <= steps; i++) {
+    const time = Math.exp(Math.log(tMin) + ((Math.log(tMax) - Math.log(tMin)) * i) / steps);
+    out.push({ time, y: beta * (Math.log(time) - Math.log(eta)) });
+  }
+  return out;
+}
+
+/**
+ * Everything the life section shows for one cause. Likelihood-ratio bounds profile the
+ * likelihood hundreds of times, so above `lrLimit` units only the Fisher bounds are given.
+ */
+export function analyseCause(cause: string, units: readonly LifeUnit[], opts: { confidence?: number; lrLimit?: number; maxPlotPoints?: number } = {}): LifeDetail {
+  const confidence = opts.confidence ?? 0.95;
+  const summary = summariseCause(cause, units, confidence);
+  const empty = { rankRegression: null, mle: null, likelihoodRatio: null, shapeExplanation: "", plotPoints: [], fittedLine: [], thinnedFrom: null };
+  if (!summary.fit) return { ...summary, ...empty };
+  const small = units.length <= (opts.lrLimit ?? 4000);
+  const full = small ? fitWeibull(units, { confidence }) : null;
+  const rr = full?.rankRegression.xOnY ?? weibullRankRegression(units).xOnY;
+  const beta = full?.mle.beta ?? summary.fit.beta;
+  const eta = full?.mle.eta ?? summary.fit.eta;
+  const ranked = full?.plotPoints ?? johnsonAdjustedRanks(units).map((p) => ({ ...p, y: weibullPlotY(p.medianRank) }));
+  const tMin = ranked.reduce((m, p) => Math.min(m, p.time), eta / 10);
+  const tMax = units.reduce((m, u) => Math.max(m, u.time), eta * 1.5);
+  const maxPoints = opts.maxPlotPoints ?? 300;
+  const shape = full ? { explanation: full.shapeExplanation, reading: full.shapeReading } : readShape(beta, summary.fit.betaBounds);
+  return {
+    ...summary,
+    fit: { ...summary.fit, shapeReading: shape.reading },
+    rankRegression: { beta: rr.beta, eta: rr.eta, b10: rr.b10, r2: rr.r2 },
+    mle: { beta, eta, b10: summary.fit.b10, fisher: { beta: summary.fit.betaBounds, eta: summary.fit.etaBounds, b10: summary.fit.b10Bounds } },
+    likelihoodRatio: full ? { beta: full.mle.likelihoodRatio.beta, eta: full.mle.likelihoodRatio.eta, b10: full.mle.likelihoodRatio.b10 } : null,
+    shapeExplanation: shape.explanation,
+    plotPoints: thin(ranked, maxPoints).map((p) => ({ time: p.time, medianRank: p.medianRank, y: p.y })),
+    fittedLine: line(beta, eta, tMin, tMax),
+    thinnedFrom: ranked.length > maxPoints ? ranked.length : null,
+  };
+}

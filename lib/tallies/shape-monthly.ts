@@ -1,0 +1,71 @@
+// Months on one axis (gaps filled with zero) and a c-chart for all removals and for each cause.
+import { cChart } from "@/lib/stats";
+import { monthRange } from "./filters";
+import { causeLabel } from "./labels";
+import type { ControlSeries, MonthCell, MonthlyTally } from "./types";
+
+export const ALL_REMOVALS = "all-removals";
+export const ALL_SIGNED = "all-signed";
+
+function series(id: string, label: string, months: string[], countOf: (m: string) => number): ControlSeries {
+  const counts = months.map(countOf);
+  const chart = cChart(counts.map((count) => ({ count })));
+  return {
+    id,
+    label,
+    counts,
+    centre: chart.centre,
+    upperLimit: chart.upperLimit,
+    lowerLimit: chart.lowerLimit,
+    beyond: chart.points.map((p) => p.beyond),
+  };
+}
+
+/**
+ * `first`/`last` bound the axis (the filter's period); without them it runs from the first to the
+ * last month with a removal. Causes are ordered by their total, largest first.
+ */
+export function monthlyTally(cells: readonly MonthCell[], first?: string, last?: string): MonthlyTally {
+  const seen = cells.filter((c) => c.count > 0).map((c) => c.month).sort();
+  const start = first ?? seen[0];
+  const end = last ?? seen[seen.length - 1];
+  if (!start || !end) return { months: [], series: [] };
+  const months = monthRange(start, end);
+
+  const all = new Map<string, number>();
+  const signed = new Map<string, number>();
+  const byCause = new Map<string, Map<string, number>>();
+  for (const c of cells) {
+    all.set(c.month, (all.get(c.month) ?? 0) + c.count);
+    if (!c.signed) continue;
+    signed.set(c.month, (signed.get(c.month) ?? 0) + c.count);
+    const key = c.cause ?? "";
+    const m = byCause.get(key) ?? new Map<string, number>();
+    m.set(c.month, (m.get(c.month) ?? 0) + c.count);
+    byCause.set(key, m);
+  }
+  const causeTotals = [...byCause].map(([code, m]) => ({ code, m, total: months.reduce((s, mo) => s + (m.get(mo) ?? 0), 0) }));
+  causeTotals.sort((a, b) => b.total - a.total || a.code.localeCompare(b.code));
+
+  return {
+    months,
+    series: [
+      series(ALL_REMOVALS, "All removals (every stage)", months, (m) => all.get(m) ?? 0),
+      series(ALL_SIGNED, "All signed verdicts", months, (m) => signed.get(m) ?? 0),
+      ...causeTotals
+        .filter((c) => c.total > 0)
+        .map((c) => series(c.code, causeLabel(c.code || null), months, (m) => c.m.get(m) ?? 0)),
+    ],
+  };
+}
+
+/** Months beyond the limits, in words, newest first: "Water ingress: 14 in Mar 2026, above the upper limit 9.8". */
+export function outOfControl(t: MonthlyTally): { series: string; month: string; count: number; side: "above" | "below"; limit: number }[] {
+  const out: { series: string; month: string; count: number; side: "above" | "below"; limit: number }[] = [];
+  for (const s of t.series) {
+    s.beyond.forEach((b, i) => {
+      if (b) out.push({ series: s.label, month: t.months[i], count: s.counts[i], side: b, limit: b === "above" ? s.upperLimit : s.lowerLimit });
+    });
+  }
+  return out.sort((a, b) => b.month.localeCompare(a.month) || a.series.localeCompare(b.series));
+}
