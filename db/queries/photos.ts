@@ -20,13 +20,18 @@ async function lockOpenCase(tx: Tx, caseId: string) {
 
 const photoLabel = (p: Pick<Photo, "fileName" | "sha256">) => `${p.fileName || "photo"} (${p.sha256.slice(0, 12)})`;
 
+async function findByHash(tx: Tx | typeof db, caseId: string, sha256: string): Promise<Photo | null> {
+  return (await tx.select().from(photos).where(and(eq(photos.caseId, caseId), eq(photos.sha256, sha256))))[0] ?? null;
+}
+
 export const photoRows: PhotoRowStore<Photo> = {
+  findByHash: (caseId, sha256) => findByHash(db, caseId, sha256),
   exclusive: (caseId, sha256, fn) =>
     db.transaction(async (tx) => {
       // One ingest per (case, file) at a time: a second upload of the same file waits, then finds the row.
       await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${`photo:${caseId}:${sha256}`}, 0))`);
       return fn({
-        findByHash: async (c, s) => (await tx.select().from(photos).where(and(eq(photos.caseId, c), eq(photos.sha256, s))))[0] ?? null,
+        findByHash: (c, s) => findByHash(tx, c, s),
         insert: async (values: NewPhotoRow) => {
           await lockOpenCase(tx, values.caseId);
           const [row] = await tx.insert(photos).values(values).returning();

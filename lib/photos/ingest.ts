@@ -3,7 +3,7 @@
 // nor (barring a crash, which the sweeper handles) objects without a row.
 import type { PhotoLimits } from "./limits";
 import { photoKeys, type PhotoKeys } from "./keys";
-import { processPhoto, type ProcessedPhoto } from "./process";
+import { processPhoto, sha256Hex, type ProcessedPhoto } from "./process";
 import type { PhotoTags } from "./tags";
 
 export interface PhotoObjectStore {
@@ -37,6 +37,8 @@ export interface PhotoRowsInLock<Row> {
 }
 
 export interface PhotoRowStore<Row> {
+  /** A look without the lock, to skip all work for a file the case already has. */
+  findByHash(caseId: string, sha256: string): Promise<Row | null>;
   /** Runs fn while no other ingest of the same file into the same case can run. */
   exclusive<T>(caseId: string, sha256: string, fn: (rows: PhotoRowsInLock<Row>) => Promise<T>): Promise<T>;
 }
@@ -79,6 +81,11 @@ export async function ingestPhoto<Row>(
   input: IngestInput,
   deps: { store: PhotoObjectStore; rows: PhotoRowStore<Row> },
 ): Promise<IngestResult<Row>> {
+  // Identical bytes already in the case were checked when they came the first time.
+  if (input.file.length > 0 && input.file.length <= input.limits.maxBytes) {
+    const known = await deps.rows.findByHash(input.caseId, sha256Hex(input.file));
+    if (known) return { photo: known, duplicate: true };
+  }
   const processed = await processPhoto(input.file, input.fileName, input.limits);
   const keys = photoKeys(input.caseId, processed.sha256);
 

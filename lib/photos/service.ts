@@ -1,5 +1,5 @@
 // Photo operations as routes and pages call them: who may touch which case, then ingest,
-// tag, remove and sweep with the real bucket and database.
+// tag and remove with the real bucket and database.
 import "server-only";
 import { deletePhotoRow, findingInCase, getPhotoWithCase, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
 import type { Case, Photo } from "@/db/schema";
@@ -10,8 +10,7 @@ import { loadReadableCase } from "@/lib/cases/service";
 import { badRequest, conflict, forbidden, notFound } from "@/lib/http/errors";
 import { ingestPhoto } from "./ingest";
 import { photoLimits } from "./limits";
-import { listStoredObjects, s3PhotoStore } from "./object-store";
-import { DEFAULT_SWEEP_GRACE_MINUTES, sweepOrphanPhotos } from "./sweep";
+import { s3PhotoStore } from "./object-store";
 import type { PhotoTags } from "./tags";
 
 /** A case the user may see and that is not signed, for adding or changing photos. */
@@ -62,11 +61,4 @@ export async function removePhoto(photoId: string, user: CurrentUser): Promise<P
     });
   }
   return removed;
-}
-
-export function sweepPhotoObjects(options: { olderThanMinutes?: number; dryRun?: boolean } = {}) {
-  return sweepOrphanPhotos(
-    { list: listStoredObjects, rowExists: photoRowExists, remove: s3PhotoStore.remove },
-    { olderThanMinutes: options.olderThanMinutes ?? DEFAULT_SWEEP_GRACE_MINUTES, dryRun: options.dryRun },
-  );
 }

@@ -27,7 +27,7 @@ export async function twoToneJpeg(opts: { width?: number; height?: number; orien
 
 /** A photo-like JPEG: noise so it compresses like a real photograph (12 MP ≈ 6–9 MB). */
 export async function noisyJpeg(width = 4000, height = 3000, quality = 88): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, noise: { type: "gaussian", mean: 120, sigma: 45 } } })
+  return sharp({ create: { width, height, channels: 3, background: "#000", noise: { type: "gaussian", mean: 120, sigma: 45 } } })
     .jpeg({ quality })
     .toBuffer();
 }

@@ -26,9 +26,12 @@ class MemoryRows implements PhotoRowStore<NewPhotoRow & { id: number }> {
   rows: (NewPhotoRow & { id: number })[] = [];
   failInsert = false;
   events: string[] = [];
+  async findByHash(caseId: string, sha: string) {
+    return this.rows.find((r) => r.caseId === caseId && r.sha256 === sha) ?? null;
+  }
   async exclusive<T>(_c: string, _s: string, fn: Parameters<PhotoRowStore<NewPhotoRow & { id: number }>["exclusive"]>[2]) {
     return fn({
-      findByHash: async (caseId, sha) => this.rows.find((r) => r.caseId === caseId && r.sha256 === sha) ?? null,
+      findByHash: async (caseId, sha) => this.findByHash(caseId, sha),
       insert: async (values) => {
         this.events.push("insert");
         if (this.failInsert) throw new Error("insert failed");
