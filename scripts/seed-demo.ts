@@ -3,6 +3,7 @@
 import { sql } from "drizzle-orm";
 import { db, pool } from "../db";
 import { resetAll, seedCodeLists, seedSitesAndPeople } from "./seed/base";
+import { seedDemoCases } from "./seed/demo-cases";
 
 const args = new Set(process.argv.slice(2));
 const log = (m: string) => !args.has("--quiet") && console.log(m);
@@ -11,9 +12,12 @@ const [{ count }] = (await db.execute(sql`select count(*)::int as count from sit
 if (count > 0 && !args.has("--reset")) {
   log("demo data already loaded (run with --reset to start over)");
 } else {
+  const started = Date.now();
   if (args.has("--reset")) await resetAll(db);
   await seedCodeLists(db);
   await seedSitesAndPeople(db);
   log("demo sites, people and code lists loaded");
+  const loaded = await seedDemoCases(db);
+  log(`demo casebook loaded: ${loaded.cases} cases, ${loaded.findings} findings, ${loaded.events} history entries, ${loaded.links} links (${Date.now() - started} ms)`);
 }
 await pool.end();
