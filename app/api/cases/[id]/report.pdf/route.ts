@@ -1,0 +1,20 @@
+// GET /api/cases/:id/report.pdf - the case report as a PDF (signed revision, or a draft marked as such)
+import { withRole } from "@/lib/http/handler";
+import { caseReportPdf, readableCaseReport, reportFileName } from "@/lib/report/report-service";
+
+export const GET = withRole<{ id: string }>("case:read", async ({ params, user, req }) => {
+  const loaded = await readableCaseReport({ id: params.id }, user);
+  const { report, pdf } = await caseReportPdf(loaded);
+  const download = req.nextUrl.searchParams.get("download") === "1";
+  return new Response(new Uint8Array(pdf), {
+    status: 200,
+    headers: {
+      "Content-Type": "application/pdf",
+      "Content-Length": String(pdf.length),
+      "Content-Disposition": `${download ? "attachment" : "inline"}; filename="${reportFileName(report, "pdf")}"`,
+      // A report changes with its case; never serve a stale one from a cache.
+      "Cache-Control": "private, no-store",
+      "X-Content-Type-Options": "nosniff",
+    },
+  });
+});

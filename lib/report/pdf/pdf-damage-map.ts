@@ -1,0 +1,78 @@
+// The damage map drawn in vectors: inboard and outboard rows, cup band outside, cone band inside.
+import type { CaseReport } from "../types";
+import { bandPath, clockPoint, RINGS, SEVERITY_COLOURS, severityColour } from "../damage-map";
+import type { PdfWriter } from "./pdf-writer";
+import { pdfText } from "./pdf-text";
+import { ACCENT, FONT, INK, INK_2, LINE_STRONG, MUTED, SIZE } from "./pdf-style";
+
+const R = 66;
+const SEVERITY_WORDS = ["0 none", "1 cosmetic", "2 minor", "3 part condemned", "4 bearing condemned"];
+
+function ringDiagram(w: PdfWriter, r: CaseReport, row: "inboard" | "outboard", cx: number, cy: number) {
+  const { doc } = w;
+  for (const ring of ["cup", "cone"] as const) {
+    const [a, b] = RINGS[ring];
+    doc.path(bandPath(cx, cy, a * R, b * R, 0, 360)).fillColor("#f1f5f9").fill("even-odd");
+    doc.circle(cx, cy, a * R).circle(cx, cy, b * R).lineWidth(0.6).strokeColor(LINE_STRONG).stroke();
+  }
+  for (const arc of r.damageArcs.filter((x) => x.row === row)) {
+    const [a, b] = RINGS[arc.ring];
+    doc.path(bandPath(cx, cy, a * R, b * R, arc.startDeg, arc.endDeg)).fillColor(severityColour(arc.severity)).fillOpacity(0.92).fill();
+    doc.fillOpacity(1);
+  }
+  // Hour ticks; 12, 3, 6 and 9 labelled.
+  for (let h = 0; h < 12; h++) {
+    const [x0, y0] = clockPoint(cx, cy, R * 0.98, h * 30);
+    const [x1, y1] = clockPoint(cx, cy, R * (h % 3 === 0 ? 1.07 : 1.03), h * 30);
+    doc.moveTo(x0, y0).lineTo(x1, y1).lineWidth(0.6).strokeColor(MUTED).stroke();
+    if (h % 3 === 0) {
+      const [lx, ly] = clockPoint(cx, cy, R * 1.17, h * 30);
+      const label = String(h === 0 ? 12 : h);
+      doc.font(FONT.bold).fontSize(SIZE.label).fillColor(INK_2).text(label, lx - 8, ly - 3.5, { width: 16, align: "center", lineBreak: false });
+    }
+  }
+  // The load zone sits at the top of the cup.
+  doc.font(FONT.regular).fontSize(6).fillColor(ACCENT).text("load zone", cx + 7, cy - R * 1.2 - 1, { lineBreak: false });
+  // Ring names at 6 o'clock, where the unloaded rollers run and damage is least often drawn.
+  doc.font(FONT.bold).fontSize(6).fillColor(INK_2).text("CUP", cx - 20, cy + R * 0.85 - 2.5, { width: 40, align: "center", lineBreak: false });
+  doc.text("CONE", cx - 20, cy + R * 0.53 - 2.5, { width: 40, align: "center", lineBreak: false });
+  doc.font(FONT.regular).fontSize(6.5).fillColor(MUTED).text(row === "inboard" ? "INBOARD" : "OUTBOARD", cx - 30, cy - 3, { width: 60, align: "center", lineBreak: false, characterSpacing: 0.6 });
+  doc.font(FONT.bold).fontSize(SIZE.h3).fillColor(INK).text(row === "inboard" ? "Inboard row" : "Outboard row", cx - 60, cy + R * 1.28, { width: 120, align: "center", lineBreak: false });
+}
+
+export function drawDamageMap(w: PdfWriter, r: CaseReport) {
+  const { doc } = w;
+  const height = 2 * R * 1.25 + 26;
+  w.ensure(height + 10);
+  const top = doc.y + 4;
+  const cy = top + R * 1.25;
+  ringDiagram(w, r, "inboard", w.left + 90, cy);
+  ringDiagram(w, r, "outboard", w.left + 270, cy);
+
+  // Legend and reading notes on the right.
+  const lx = w.left + 378;
+  let ly = top + 6;
+  doc.font(FONT.bold).fontSize(SIZE.label).fillColor(MUTED).text("SEVERITY", lx, ly, { characterSpacing: 0.4, lineBreak: false });
+  ly += 12;
+  SEVERITY_COLOURS.forEach((colour, i) => {
+    doc.rect(lx, ly, 14, 7).fill(colour);
+    doc.font(FONT.regular).fontSize(SIZE.small).fillColor(INK_2).text(SEVERITY_WORDS[i], lx + 20, ly - 0.5, { lineBreak: false });
+    ly += 12;
+  });
+  ly += 6;
+  const reading = [
+    "Seen from the outboard end; 12 o'clock at the top, clockwise.",
+    "Each arc is centred on the recorded clock position; a finding without an extent shows as a short mark.",
+    r.offMap ? `${r.offMap} ${r.offMap === 1 ? "finding is" : "findings are"} not on a raceway or has no clock position, so not drawn.` : "Every finding with a clock position is drawn.",
+  ];
+  for (const line of reading) {
+    doc.font(FONT.regular).fontSize(SIZE.small).fillColor(MUTED).text(pdfText(line), lx, ly, { width: w.left + w.width - lx, lineGap: 1 });
+    ly = doc.y + 4;
+  }
+  if (r.damageArcs.length === 0) {
+    doc.font(FONT.italic).fontSize(SIZE.body).fillColor(MUTED).text("No raceway damage recorded.", w.left + 120, top + height - 4, { lineBreak: false });
+  }
+  doc.x = w.left;
+  doc.y = Math.max(top + height, ly) + 6;
+  doc.fillColor(INK);
+}
