@@ -4,4 +4,7 @@ export async function register() {
   // Mail that could not be sent is retried every MAIL_RETRY_MS (30 s unless set).
   const { startMailRetryLoop } = await import("./lib/mail/retry-loop");
   startMailRetryLoop();
+  // The weekly digest to managers: checked once an hour, sent when due.
+  const { startDigestSchedule } = await import("./lib/digest/schedule");
+  startDigestSchedule();
 }

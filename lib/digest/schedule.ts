@@ -1,0 +1,39 @@
+// Checks once an hour whether the weekly digest is due and sends it. Started once per server
+// process from instrumentation.ts; an advisory lock keeps two processes from both sending.
+import "server-only";
+import { sql } from "drizzle-orm";
+import { db } from "@/db";
+import { digestDue } from "./schedule-time";
+import { lastDigestSentAt, sendDigest } from "./send";
+
+const RUNNING = Symbol.for("tearline.digestSchedule");
+type Holder = { [RUNNING]?: NodeJS.Timeout };
+const HOUR_MS = 3_600_000;
+
+export async function sendDigestIfDue(now = new Date()): Promise<boolean> {
+  return db.transaction(async (tx) => {
+    const { rows } = await tx.execute<{ locked: boolean }>(sql`select pg_try_advisory_xact_lock(hashtext('tearline.weekly-digest')) as locked`);
+    if (!rows[0]?.locked) return false;
+    if (!digestDue(now, await lastDigestSentAt())) return false;
+    await sendDigest(now);
+    return true;
+  });
+}
+
+export function startDigestSchedule(intervalMs = HOUR_MS): boolean {
+  const holder = globalThis as Holder;
+  if (holder[RUNNING]) return false;
+  let busy = false;
+  const timer = setInterval(() => {
+    if (busy) return;
+    busy = true;
+    sendDigestIfDue()
+      .catch((err: unknown) => console.error("weekly digest failed:", err instanceof Error ? err.message : err))
+      .finally(() => {
+        busy = false;
+      });
+  }, intervalMs);
+  timer.unref?.();
+  holder[RUNNING] = timer;
+  return true;
+}

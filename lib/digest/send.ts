@@ -1,0 +1,45 @@
+// Sends the weekly digest to every manager who has not turned it off; used by the weekly timer
+// and by an admin's "send now".
+import "server-only";
+import { and, desc, eq, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { mailOutbox, user } from "@/db/schema";
+import { loadTallies } from "@/db/queries/tallies/load-tallies";
+import { weekCounts } from "@/db/queries/tallies/week-counts";
+import { env } from "@/lib/env";
+import { enqueueMail } from "@/lib/mail/outbox";
+import { addMonths, filtersToQuery, DEFAULT_FILTERS } from "@/lib/tallies/filters";
+import { buildDigest } from "./build";
+
+export const DIGEST_KIND = "digest";
+
+export async function digestRecipients(): Promise<string[]> {
+  const rows = await db
+    .select({ email: user.email })
+    .from(user)
+    .where(and(eq(user.role, "manager"), sql`coalesce(${user.banned}, false) = false`, sql`(${user.noticePrefs} ->> 'digest') is distinct from 'false'`));
+  return rows.map((r) => r.email);
+}
+
+export async function lastDigestSentAt(): Promise<Date | null> {
+  const [row] = await db.select({ at: mailOutbox.createdAt }).from(mailOutbox).where(eq(mailOutbox.kind, DIGEST_KIND)).orderBy(desc(mailOutbox.createdAt)).limit(1);
+  return row?.at ?? null;
+}
+
+const ymd = (d: Date) => d.toISOString().slice(0, 10);
+
+export async function sendDigest(now = new Date()): Promise<{ recipients: number; subject: string }> {
+  const thisMonth = ymd(now).slice(0, 7);
+  const filters = { ...DEFAULT_FILTERS, from: addMonths(thisMonth, -11), to: thisMonth };
+  const since = new Date(now.getTime() - 7 * 86_400_000);
+  // The digest speaks for the whole fleet, as a manager sees it.
+  const [tallies, week, recipients] = await Promise.all([loadTallies(filters, { role: "manager", siteId: null }), weekCounts(since), digestRecipients()]);
+  const mail = buildDigest({
+    tallies,
+    week: { ...week, from: ymd(since), to: ymd(now) },
+    tallyUrl: `${env().APP_URL}/tallies?${filtersToQuery(filters)}`,
+  });
+  // One message per manager, so no one sees the others' addresses.
+  for (const to of recipients) await enqueueMail(DIGEST_KIND, [to], mail);
+  return { recipients: recipients.length, subject: mail.subject };
+}
