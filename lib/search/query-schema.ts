@@ -44,18 +44,24 @@ export type SearchParams = z.output<typeof searchParamsSchema>;
 
 type RawParams = Record<string, string | string[] | undefined>;
 
+/** An empty field of a form ("from=") means the same as no field. */
+function withoutEmpty(raw: RawParams): RawParams {
+  return Object.fromEntries(Object.entries(raw).filter(([, v]) => v !== undefined && v !== "" && !(Array.isArray(v) && v.every((x) => x === ""))));
+}
+
 /** Strict: for the API, where a bad parameter is the caller's mistake (400). */
 export function parseSearchParams(raw: RawParams): SearchParams {
-  return searchParamsSchema.parse(raw);
+  return searchParamsSchema.parse(withoutEmpty(raw));
 }
 
 /** Lenient: for the page, where a hand-edited link should still show something. */
 export function readSearchParams(raw: RawParams): { params: SearchParams; dropped: string[] } {
   const dropped: string[] = [];
   const clean: RawParams = {};
+  const given = withoutEmpty(raw);
   for (const [key, schema] of Object.entries(fields)) {
-    if (raw[key] === undefined) continue;
-    if (schema.safeParse(raw[key]).success) clean[key] = raw[key];
+    if (given[key] === undefined) continue;
+    if (schema.safeParse(given[key]).success) clean[key] = given[key];
     else dropped.push(key);
   }
   return { params: searchParamsSchema.parse(clean), dropped };

@@ -42,3 +42,13 @@ describe("search parameters in the URL", () => {
     expect(hasCriteria(parseSearchParams({}))).toBe(false);
   });
 });
+
+describe("empty form fields", () => {
+  it("reads an empty date or text field as not given", () => {
+    const p = parseSearchParams(recordOf(new URLSearchParams("q=&from=&to=2026-02-01&trigger=")));
+    expect(p.from).toBeUndefined();
+    expect(p.to).toBe("2026-02-01");
+    expect(p.trigger).toEqual([]);
+    expect(readSearchParams({ from: "" }).dropped).toEqual([]);
+  });
+});
