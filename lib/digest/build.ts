@@ -7,7 +7,7 @@ import type { TalliesData } from "@/lib/tallies/types";
 
 export type DigestInput = {
   tallies: TalliesData;
-  week: { removals: number; signed: number; from: string; to: string };
+  week: { removals: number; signed: number; awaitingSignoff: number; from: string; to: string };
   tallyUrl: string;
 };
 
@@ -18,7 +18,7 @@ export function buildDigest({ tallies: t, week, tallyUrl }: DigestInput): Render
   const period = t.filters.from && t.filters.to ? `${monthLabel(t.filters.from)} to ${monthLabel(t.filters.to)}` : "all time";
   const overall = t.byTrigger.overall;
   const blocks: Parameters<typeof renderMail>[2] = [
-    { kind: "p", text: `This week (${week.from} to ${week.to}): ${plural(week.removals, "removal")} logged and ${plural(week.signed, "verdict")} signed.` },
+    { kind: "p", text: `This week (${week.from} to ${week.to}): ${plural(week.removals, "removal")} logged and ${plural(week.signed, "verdict")} signed. ${week.awaitingSignoff === 0 ? "No verdicts wait for sign-off." : `${plural(week.awaitingSignoff, "verdict")} ${week.awaitingSignoff === 1 ? "waits" : "wait"} for sign-off.`}` },
     { kind: "p", text: `${period}, signed verdicts only:` },
     {
       kind: "facts",

@@ -1,24 +1,24 @@
-// Sends the weekly digest to every manager who has not turned it off; used by the weekly timer
-// and by an admin's "send now".
+// Sends the weekly digest to managers (and anyone else whose role offers the switch) who have not
+// turned it off; used by the weekly timer and by an admin's "send now".
 import "server-only";
-import { and, desc, eq, sql } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { mailOutbox, user } from "@/db/schema";
+import { mailOutbox } from "@/db/schema";
+import { peopleWithRoles } from "@/db/queries/notices";
 import { loadTallies } from "@/db/queries/tallies/load-tallies";
 import { weekCounts } from "@/db/queries/tallies/week-counts";
 import { env } from "@/lib/env";
 import { enqueueMail } from "@/lib/mail/outbox";
+import { noticeKindInfo, pickRecipients } from "@/lib/notify/notice-kinds";
 import { addMonths, filtersToQuery, DEFAULT_FILTERS } from "@/lib/tallies/filters";
 import { buildDigest } from "./build";
 
 export const DIGEST_KIND = "digest";
 
+/** Everyone whose role offers the weekly digest switch (managers first of all) and who left it on. */
 export async function digestRecipients(): Promise<string[]> {
-  const rows = await db
-    .select({ email: user.email })
-    .from(user)
-    .where(and(eq(user.role, "manager"), sql`coalesce(${user.banned}, false) = false`, sql`(${user.noticePrefs} ->> 'digest') is distinct from 'false'`));
-  return rows.map((r) => r.email);
+  const roles = [...noticeKindInfo("digest").roles];
+  return pickRecipients(await peopleWithRoles(roles), "digest");
 }
 
 export async function lastDigestSentAt(): Promise<Date | null> {

@@ -34,11 +34,11 @@ function tallies(): TalliesData {
 }
 
 describe("weekly digest", () => {
-  const mail = buildDigest({ tallies: tallies(), week: { removals: 7, signed: 1, from: "2026-03-23", to: "2026-03-30" }, tallyUrl: "http://127.0.0.1:3000/tallies?from=2025-04&to=2026-03" });
+  const mail = buildDigest({ tallies: tallies(), week: { removals: 7, signed: 1, awaitingSignoff: 2, from: "2026-03-23", to: "2026-03-30" }, tallyUrl: "http://127.0.0.1:3000/tallies?from=2025-04&to=2026-03" });
 
   it("leads with the week's counts and links to the tallies", () => {
     expect(mail.subject).toBe("Tearline weekly digest: 7 removals, 1 verdict signed");
-    expect(mail.text).toContain("This week (2026-03-23 to 2026-03-30): 7 removals logged and 1 verdict signed.");
+    expect(mail.text).toContain("This week (2026-03-23 to 2026-03-30): 7 removals logged and 1 verdict signed. 2 verdicts wait for sign-off.");
     expect(mail.text).toContain("Open the tallies: http://127.0.0.1:3000/tallies?from=2025-04&to=2026-03");
   });
 
