@@ -69,7 +69,7 @@ const SORT_EXPRESSIONS: Record<CaseColumnId, SQL[]> = {
   fieldCall: [sql`${cases.fieldCall}`],
   endPlay: [sql`${cases.endPlayMeanIn}`],
   removedOn: [sql`${cases.removedOn}`],
-  site: [sql`${sites.name}`],
+  site: [sql`${sites.code}`],
   cause: [sql`coalesce(${causeCode.label}, ${cases.primaryCause})`],
   outcome: [sql`${cases.removalConfirmed}`],
   serviceMonths: [sql`${cases.serviceMonths}`],

@@ -37,7 +37,7 @@ export const CASE_COLUMNS = [
   { id: "status", label: "Stage", shown: true, hideable: true, firstDir: "asc" },
   { id: "car", label: "Car", shown: true, hideable: true, firstDir: "asc" },
   { id: "position", label: "Position", shown: false, hideable: true, firstDir: "asc" },
-  { id: "serial", label: "Serial", shown: true, hideable: true, firstDir: "asc" },
+  { id: "serial", label: "Serial", shown: false, hideable: true, firstDir: "asc" },
   { id: "class", label: "Class", shown: false, hideable: true, firstDir: "asc" },
   { id: "trigger", label: "Trigger", shown: true, hideable: true, firstDir: "asc" },
   { id: "fieldCall", label: "Field call", shown: true, hideable: true, firstDir: "asc" },
@@ -92,4 +92,19 @@ export function formatDay(iso: string | null): string {
   const [y, m, d] = iso.slice(0, 10).split("-").map(Number);
   if (!y || !m || !d) return iso;
   return `${d} ${MONTHS[m - 1]} ${y}`;
+}
+
+/** How long ago, in the short words a list uses: "just now", "12 min ago", "5 h ago", "3 d ago", "6 wk ago", "4 mo ago", "2 yr ago". */
+export function formatAgo(iso: string, now: number): string {
+  const minutes = Math.floor((now - Date.parse(iso)) / 60_000);
+  if (Number.isNaN(minutes)) return "";
+  if (minutes < 1) return "just now";
+  if (minutes < 60) return `${minutes} min ago`;
+  const hours = Math.floor(minutes / 60);
+  if (hours < 24) return `${hours} h ago`;
+  const days = Math.floor(hours / 24);
+  if (days < 14) return `${days} d ago`;
+  if (days < 61) return `${Math.floor(days / 7)} wk ago`;
+  if (days < 365) return `${Math.floor(days / 30.4375)} mo ago`;
+  return `${Math.floor(days / 365.25)} yr ago`;
 }

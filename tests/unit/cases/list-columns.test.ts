@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { CASE_COLUMNS, defaultColumnVisibility, formatClass, formatDay, formatEndPlay, formatMonths, formatPosition } from "@/lib/cases/list-columns";
+import { CASE_COLUMNS, defaultColumnVisibility, formatAgo, formatClass, formatDay, formatEndPlay, formatMonths, formatPosition } from "@/lib/cases/list-columns";
 
 describe("case list formatting", () => {
   it("shows end play in inches to four decimals", () => {
@@ -26,5 +26,20 @@ describe("case list formatting", () => {
   it("always shows the case number and offers every other column", () => {
     expect(CASE_COLUMNS.filter((c) => !c.hideable).map((c) => c.id)).toEqual(["number"]);
     expect(defaultColumnVisibility().number).toBe(true);
+  });
+});
+
+describe("time since the last change", () => {
+  const now = Date.parse("2026-06-15T12:00:00Z");
+  it.each([
+    ["2026-06-15T11:59:40Z", "just now"], // under a minute
+    ["2026-06-15T11:48:00Z", "12 min ago"], // 12 × 60 s
+    ["2026-06-15T07:00:00Z", "5 h ago"], // 5 × 3600 s
+    ["2026-06-12T12:00:00Z", "3 d ago"], // 3 × 86 400 s
+    ["2026-05-01T09:00:00Z", "6 wk ago"], // 45 days ÷ 7 = 6.4 weeks
+    ["2026-01-10T12:00:00Z", "5 mo ago"], // 156 days ÷ 30.4375 (mean Gregorian month) = 5.1
+    ["2023-06-01T12:00:00Z", "3 yr ago"], // 1110 days ÷ 365.25 = 3.04
+  ])("%s reads %s", (iso, expected) => {
+    expect(formatAgo(iso, now)).toBe(expected);
   });
 });

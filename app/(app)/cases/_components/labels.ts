@@ -1,0 +1,4 @@
+// Display choices the list needs on the client beyond what lib/cases/list-columns formats.
+import { BEARING_CLASSES } from "@/lib/cases/schemas";
+
+export const BEARING_CLASS_OPTIONS = BEARING_CLASSES.map((c) => ({ code: c, label: c === "other" ? "Other class" : `Class ${c}` }));
