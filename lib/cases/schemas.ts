@@ -71,7 +71,7 @@ export type FieldReportInput = z.infer<typeof fieldReportSchema>;
 
 export const teardownSchema = z.object({
   lubricant: z.object({ conditions: z.array(z.enum(codes(LUBRICANT_CONDITIONS))).max(10).optional(), notes: text(2000, "Lubricant notes").optional() }),
-  dispositions: z.record(z.enum(codes(COMPONENTS)), z.enum(codes(DISPOSITIONS))),
+  dispositions: z.partialRecord(z.enum(codes(COMPONENTS)), z.enum(codes(DISPOSITIONS))),
   teardownNotes: text(8000, "Teardown notes"),
 }).partial();
 
