@@ -5,13 +5,14 @@ import { and, eq, lte, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { mailOutbox, type OutboxMail } from "@/db/schema";
 import { env } from "@/lib/env";
+import { mailRetryIntervalMs } from "./retry-interval";
 import { mailTransport } from "./transport";
 import type { RenderedMail } from "./templates/layout";
 
 const MAX_ATTEMPTS = 8;
-// Back-off: 30 s, 1 min, 2 min, 4 min … capped at one hour.
-export function nextDelayMs(attempts: number): number {
-  return Math.min(30_000 * 2 ** Math.max(0, attempts - 1), 3_600_000);
+// Back-off: one retry interval (MAIL_RETRY_MS, 30 s by default), doubling after each failure, capped at one hour.
+export function nextDelayMs(attempts: number, baseMs = mailRetryIntervalMs()): number {
+  return Math.min(baseMs * 2 ** Math.max(0, attempts - 1), 3_600_000);
 }
 
 export async function enqueueMail(kind: string, to: string[], mail: RenderedMail): Promise<string | null> {

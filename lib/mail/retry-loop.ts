@@ -1,15 +1,11 @@
 // Retries mail the outbox could not send yet. Started once per server process from instrumentation.ts.
 import "server-only";
 import { deliverDue } from "./outbox";
+import { mailRetryIntervalMs } from "./retry-interval";
 
 const RUNNING = Symbol.for("tearline.mailRetryLoop");
 type Holder = { [RUNNING]?: NodeJS.Timeout };
 
-export function mailRetryIntervalMs(raw = process.env.MAIL_RETRY_MS): number {
-  const ms = Number(raw);
-  // Anything unreadable or silly falls back to 30 s; below half a second would hammer the database.
-  return Number.isFinite(ms) && ms >= 500 ? ms : 30_000;
-}
 
 /** Starts the timer unless this process already has one; returns whether it started now. */
 export function startMailRetryLoop(intervalMs = mailRetryIntervalMs()): boolean {
