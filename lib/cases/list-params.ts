@@ -25,6 +25,7 @@ export const DEFAULT_PAGE_SIZE = 25;
 export const DEFAULT_LIST_PARAMS: ListParams = { filters: {}, sort: DEFAULT_SORT, page: 1, pageSize: DEFAULT_PAGE_SIZE };
 export const FILTER_KEYS = ["status", "trigger", "cause", "class", "site", "from", "to", "q"] as const;
 const LIST_KEYS = ["status", "trigger", "cause", "class", "site"] as const;
+const isListKey = (k: string) => (LIST_KEYS as readonly string[]).includes(k);
 
 const blank = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
 
@@ -112,10 +113,10 @@ export const listParamsSchema = z
 
 type QueryInput = URLSearchParams | Record<string, string | string[] | undefined>;
 
-/** Flattens a query; a key given twice is read as one comma list, so ?status=a&status=b works too. */
+/** Flattens a query. A list key given twice is one comma list (?status=a&status=b); for any other key the last wins. */
 export function flattenQuery(input: QueryInput): Record<string, string> {
   const out: Record<string, string> = {};
-  const add = (k: string, v: string) => (out[k] = k in out ? `${out[k]},${v}` : v);
+  const add = (k: string, v: string) => (out[k] = k in out && isListKey(k) ? `${out[k]},${v}` : v);
   if (input instanceof URLSearchParams) input.forEach((v, k) => add(k, v));
   else for (const [k, v] of Object.entries(input)) for (const one of [v ?? []].flat()) add(k, one);
   return out;

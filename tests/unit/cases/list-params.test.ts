@@ -37,6 +37,10 @@ describe("reading the case list query", () => {
     expect(parseListParams({ status: ["field", "signed"] }).filters.status).toEqual(["field", "signed"]);
   });
 
+  it("takes the last value of a key that is not a list", () => {
+    expect(parse("q=first&q=second%20one&page=2&page=3")).toMatchObject({ filters: { q: "second one" }, page: 3 });
+  });
+
   it("reads page, page size, sort, dates and text", () => {
     const p = parse("page=3&pageSize=50&sort=removedOn:asc&from=2026-01-01&to=2026-06-30&q=%20SRRL%2012%20");
     expect(p).toEqual({ filters: { from: "2026-01-01", to: "2026-06-30", q: "SRRL 12" }, sort: { field: "removedOn", dir: "asc" }, page: 3, pageSize: 50 });
