@@ -1,20 +1,49 @@
-// Photos, similar failures, related cases and the report links: the parts that load on their own.
+// Photos, the damage map, similar failures, related cases and the report links.
 import Link from "next/link";
 import { Card } from "@/components/ui/card";
+import { buttonClass } from "@/components/ui/button";
+import { DamageMap } from "@/components/damage-map/damage-map";
+import { CasePhotos } from "@/components/photos/case-photos";
+import { RelatedCases } from "@/components/similar/related-cases";
+import { SimilarCases } from "@/components/similar/similar-cases";
+import { componentLabel, damageLabel } from "@/components/case/labels";
 import type { CaseDetail } from "@/db/queries/case-read";
+import { can } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
+import { photoLimits } from "@/lib/photos/limits";
 
-export function CaseExtras({ c }: { c: CaseDetail; user: CurrentUser }) {
+export function CaseExtras({ c, user }: { c: CaseDetail; user: CurrentUser }) {
+  const signed = c.status === "signed";
+  const findingOptions = c.findings.map((f) => ({ id: f.id, label: `${damageLabel(f.damageCode)} — ${componentLabel(f.component).toLowerCase()}` }));
+  const mapped = c.findings.filter((f) => f.clockDeg !== null);
   return (
     <>
+      {mapped.length ? (
+        <Card title="Damage map">
+          <DamageMap title={`Where the damage sits on ${c.number}`} findings={c.findings} caption="Seen from the outboard end; 12 o'clock at the top, where the load zone of the cup is." />
+        </Card>
+      ) : null}
       <section id="photos" className="scroll-mt-24">
         <Card title="Photos" action={<Link href={`/cases/${c.number}/photos`} className="text-sm text-accent hover:underline">All photos</Link>}>
-          <p className="text-sm text-muted">Photos load here.</p>
+          <CasePhotos caseId={c.id} canUpload={can(user.role, "photo:upload") && !signed} canDelete={can(user.role, "photo:delete") && !signed} readOnly={signed} findings={findingOptions} maxBytes={photoLimits().maxBytes} />
         </Card>
       </section>
-      <section id="similar" className="scroll-mt-24">
+      <section id="similar" className="scroll-mt-24 flex flex-col gap-5">
         <Card title="Similar earlier failures">
-          <p className="text-sm text-muted">Similar cases load here.</p>
+          <SimilarCases caseId={c.id} canLink={can(user.role, "case:link")} />
+        </Card>
+        <Card title="Related cases">
+          <RelatedCases caseId={c.id} canLink={can(user.role, "case:link")} />
+        </Card>
+      </section>
+      <section className="no-print">
+        <Card title="Report and evidence">
+          <div className="flex flex-wrap gap-2">
+            <Link href={`/cases/${c.number}/report`} className={buttonClass({ variant: "secondary" })}>Printable report</Link>
+            <a href={`/api/cases/${c.id}/report.pdf`} className={buttonClass({ variant: "secondary" })}>Download PDF</a>
+            <a href={`/api/cases/${c.id}/evidence.zip`} className={buttonClass({ variant: "secondary" })}>Evidence ZIP (report, original photos, SHA-256 list)</a>
+          </div>
+          {!signed ? <p className="mt-2 text-xs text-muted">Until the verdict is signed, the report carries a DRAFT mark.</p> : null}
         </Card>
       </section>
     </>
