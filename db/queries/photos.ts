@@ -8,6 +8,7 @@ import { conflict, notFound } from "@/lib/http/errors";
 import type { NewPhotoRow, PhotoRowStore } from "@/lib/photos/ingest";
 import type { PhotoTags } from "@/lib/photos/tags";
 import { diffFields } from "@/lib/cases/diff";
+import { findingLabel } from "@/lib/photos/grouping";
 
 export const SIGNED_REFUSAL = "This case is signed and read-only, so its photos cannot be added, changed or deleted. An engineer can reopen it with a reason.";
 
@@ -83,6 +84,12 @@ export async function deletePhotoRow(photoId: string, actorId: string): Promise<
     await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-removed", changes: [{ field: "photo", from: photoLabel(before), to: null }] });
     return before;
   });
+}
+
+/** The case's findings as the photo tag picker names them. */
+export async function findingOptions(caseId: string): Promise<{ id: string; label: string }[]> {
+  const rows = await db.select().from(findings).where(eq(findings.caseId, caseId)).orderBy(asc(findings.createdAt));
+  return rows.map((f) => ({ id: f.id, label: findingLabel(f) }));
 }
 
 export async function photoRowExists(caseId: string, sha256: string): Promise<boolean> {

@@ -4,12 +4,12 @@ import "server-only";
 import { deletePhotoRow, findingInCase, getPhotoWithCase, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
 import type { Case, Photo } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
-import { can } from "@/lib/auth/permissions";
 import { canReadCase } from "@/lib/cases/access";
 import { loadReadableCase } from "@/lib/cases/service";
 import { badRequest, conflict, forbidden, notFound } from "@/lib/http/errors";
 import { ingestPhoto } from "./ingest";
 import { photoLimits } from "./limits";
+import { mayDeletePhoto } from "./rules";
 import { s3PhotoStore } from "./object-store";
 import type { PhotoTags } from "./tags";
 
@@ -20,10 +20,16 @@ export async function loadCaseForPhotoChange(caseKey: string, user: CurrentUser)
   return c;
 }
 
-/** A photo whose case the user may see; others answer as if it did not exist. */
-export async function loadReadablePhoto(photoId: string, user: CurrentUser) {
+/** A photo with its case, or null when it does not exist or the user may not see its case. */
+export async function findReadablePhoto(photoId: string, user: CurrentUser) {
   const hit = /^[0-9a-f-]{36}$/i.test(photoId) ? await getPhotoWithCase(photoId) : null;
-  if (!hit || !canReadCase(user, hit.caseRow)) throw notFound("That photo");
+  return hit && canReadCase(user, hit.caseRow) ? hit : null;
+}
+
+/** As findReadablePhoto, for routes: others answer as if it did not exist. */
+export async function loadReadablePhoto(photoId: string, user: CurrentUser) {
+  const hit = await findReadablePhoto(photoId, user);
+  if (!hit) throw notFound("That photo");
   return hit;
 }
 
@@ -49,8 +55,7 @@ export async function retagPhoto(photoId: string, tags: PhotoTags, user: Current
 export async function removePhoto(photoId: string, user: CurrentUser): Promise<Photo> {
   const { photo, caseRow } = await loadReadablePhoto(photoId, user);
   if (caseRow.status === "signed") throw conflict(SIGNED_REFUSAL);
-  // Shop inspectors remove only what they uploaded; the lab may tidy any case's photos.
-  if (!can(user.role, "case:edit-teardown") && photo.uploadedBy !== user.id) {
+  if (!mayDeletePhoto(user, photo, caseRow.status)) {
     throw forbidden("You can delete only photos you uploaded yourself; ask the lab to remove this one.");
   }
   const removed = await deletePhotoRow(photo.id, user.id);

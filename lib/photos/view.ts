@@ -20,9 +20,11 @@ export type PhotoView = {
   createdAt: string;
   uploadedBy: string | null;
   urls: Record<PhotoVariant, string>;
+  /** Whether the person asking may delete it (set by the list route). */
+  canDelete?: boolean;
 };
 
-type PhotoRowLike = Omit<PhotoView, "urls" | "takenAt" | "createdAt"> & { takenAt: Date | null; createdAt: Date };
+type PhotoRowLike = Omit<PhotoView, "urls" | "takenAt" | "createdAt" | "canDelete"> & { takenAt: Date | null; createdAt: Date };
 
 export const photoUrl = (id: string, variant: PhotoVariant) => `/api/photos/${id}/${variant}`;
 

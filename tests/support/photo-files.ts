@@ -99,3 +99,31 @@ export async function pixelAt(image: Buffer, x: number, y: number): Promise<[num
   const i = (y * info.width + x) * info.channels;
   return [data[i], data[i + 1], data[i + 2]];
 }
+
+/** A photo-like picture of a ring raceway with a dark pit on it, for screenshots (drawn, then JPEG). */
+export async function racewayJpeg(seed: number, opts: { width?: number; height?: number; takenAt?: string } = {}): Promise<Buffer> {
+  const w = opts.width ?? 1600;
+  const h = opts.height ?? 1200;
+  const hue = 200 + (seed * 17) % 40;
+  const pitX = 0.3 + ((seed * 37) % 40) / 100;
+  const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}">
+    <defs>
+      <linearGradient id="bg" x1="0" y1="0" x2="1" y2="1"><stop offset="0" stop-color="hsl(${hue},8%,18%)"/><stop offset="1" stop-color="hsl(${hue},10%,8%)"/></linearGradient>
+      <linearGradient id="steel" x1="0" y1="0" x2="0" y2="1"><stop offset="0" stop-color="#d9dde2"/><stop offset="0.45" stop-color="#8e959d"/><stop offset="0.55" stop-color="#b8bec5"/><stop offset="1" stop-color="#5d646c"/></linearGradient>
+      <radialGradient id="pit"><stop offset="0" stop-color="#1d1a17"/><stop offset="0.7" stop-color="#4a3f35"/><stop offset="1" stop-color="#7b7168" stop-opacity="0"/></radialGradient>
+    </defs>
+    <rect width="100%" height="100%" fill="url(#bg)"/>
+    <ellipse cx="${w / 2}" cy="${h * 0.55}" rx="${w * 0.44}" ry="${h * 0.3}" fill="url(#steel)"/>
+    <ellipse cx="${w / 2}" cy="${h * 0.55}" rx="${w * 0.3}" ry="${h * 0.18}" fill="url(#bg)"/>
+    <ellipse cx="${w * pitX}" cy="${h * 0.32}" rx="${w * 0.05}" ry="${h * 0.035}" fill="url(#pit)"/>
+    <ellipse cx="${w * (pitX + 0.04)}" cy="${h * 0.34}" rx="${w * 0.025}" ry="${h * 0.02}" fill="url(#pit)"/>
+  </svg>`;
+  const base = await sharp(Buffer.from(svg)).jpeg({ quality: 85 }).toBuffer();
+  // Fine grain, like a real sensor, so files are photo-sized.
+  const grain = await sharp({ create: { width: w, height: h, channels: 3, background: "#000", noise: { type: "gaussian", mean: 128, sigma: 10 } } }).png().toBuffer();
+  return sharp(base)
+    .composite([{ input: grain, blend: "overlay" }])
+    .jpeg({ quality: 88 })
+    .withExif({ IFD0: { Make: "TestCam" }, IFD2: { DateTimeOriginal: opts.takenAt ?? `2026:05:${String(10 + (seed % 18)).padStart(2, "0")} 10:${String(seed % 60).padStart(2, "0")}:00` } })
+    .toBuffer();
+}

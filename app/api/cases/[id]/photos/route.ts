@@ -6,6 +6,7 @@ import { HttpError, badRequest } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";
 import { FORM_OVERHEAD_BYTES, photoLimits } from "@/lib/photos/limits";
 import { PhotoRefusal, refuse } from "@/lib/photos/refusal";
+import { mayDeletePhoto } from "@/lib/photos/rules";
 import { loadCaseForPhotoChange, uploadPhoto } from "@/lib/photos/service";
 import { photoTagsSchema, tagsFromForm } from "@/lib/photos/tags";
 import { toPhotoView } from "@/lib/photos/view";
@@ -13,7 +14,8 @@ import { toPhotoView } from "@/lib/photos/view";
 export const GET = withRole<{ id: string }>("case:read", async ({ params, user }) => {
   const c = await loadReadableCase(params.id, user);
   const rows = await listCasePhotos(c.id);
-  return NextResponse.json({ caseId: c.id, caseNumber: c.number, photos: rows.map(toPhotoView) });
+  const photos = rows.map((p) => ({ ...toPhotoView(p), canDelete: mayDeletePhoto(user, p, c.status) }));
+  return NextResponse.json({ caseId: c.id, caseNumber: c.number, readOnly: c.status === "signed", photos });
 });
 
 async function readForm(req: Request): Promise<FormData> {
@@ -44,7 +46,7 @@ export const POST = withRole<{ id: string }>("photo:upload", async ({ req, param
     const message = duplicate
       ? `This photo is already in ${c.number}${photo.fileName ? ` as “${photo.fileName}”` : ""}; it was not stored twice.`
       : `Photo added to ${c.number}.`;
-    return NextResponse.json({ photo: toPhotoView(photo), duplicate, message }, { status: duplicate ? 200 : 201 });
+    return NextResponse.json({ photo: { ...toPhotoView(photo), canDelete: mayDeletePhoto(user, photo, c.status) }, duplicate, message }, { status: duplicate ? 200 : 201 });
   } catch (err) {
     if (err instanceof PhotoRefusal) throw new HttpError(err.status, err.code, err.message);
     throw err;

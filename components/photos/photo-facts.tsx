@@ -1,0 +1,49 @@
+// What a photo is and shows, in words: used beside the lightbox and under each compared photo.
+import { clockLabel } from "@/lib/photos/clock";
+import { componentLabel } from "@/lib/photos/grouping";
+import { formatBytes } from "@/lib/photos/limits";
+import type { PhotoView } from "@/lib/photos/view";
+import type { FindingOption } from "./tag-values";
+
+// EXIF time is the camera's wall clock stored as UTC; showing it in UTC shows what the camera showed.
+const cameraTime = new Intl.DateTimeFormat("en-GB", { timeZone: "UTC", day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
+const uploadDay = new Intl.DateTimeFormat("en-GB", { timeZone: "UTC", day: "numeric", month: "short", year: "numeric" });
+
+export function photoTitle(p: PhotoView): string {
+  const part = p.component ? componentLabel(p.component) : "Photo";
+  const row = p.row && !part.toLowerCase().includes(p.row) ? `, ${p.row} row` : "";
+  return `${part}${row}`;
+}
+
+export function PhotoTagLine({ photo, findings }: { photo: PhotoView; findings: FindingOption[] }) {
+  const finding = photo.findingId ? findings.find((f) => f.id === photo.findingId) : undefined;
+  return (
+    <div className="flex flex-col gap-1">
+      <p className="font-semibold text-ink">{photoTitle(photo)}</p>
+      {photo.clockDeg !== null ? <p className="text-sm text-ink-2">At {clockLabel(photo.clockDeg)}</p> : null}
+      {finding ? <p className="text-sm text-ink-2"><span className="text-muted">Finding: </span>{finding.label}</p> : photo.findingId ? <p className="text-sm text-muted">Linked to a finding</p> : null}
+      {photo.caption ? <p className="text-sm leading-relaxed text-ink">{photo.caption}</p> : null}
+    </div>
+  );
+}
+
+export function PhotoFactList({ photo }: { photo: PhotoView }) {
+  const rows: [string, string][] = [
+    ["Taken", photo.takenAt ? `${cameraTime.format(new Date(photo.takenAt))} (camera clock)` : "Not recorded by the camera"],
+    ["Uploaded", uploadDay.format(new Date(photo.createdAt))],
+    ["Original", `${photo.width} × ${photo.height} px · ${formatBytes(photo.bytes)} · ${photo.contentType.replace("image/", "").toUpperCase()}`],
+    ["File", photo.fileName || "—"],
+  ];
+  return (
+    <dl className="grid grid-cols-[5.5rem_1fr] gap-x-3 gap-y-1.5 text-sm">
+      {rows.map(([k, v]) => (
+        <div key={k} className="contents">
+          <dt className="text-muted">{k}</dt>
+          <dd className="min-w-0 break-words text-ink-2">{v}</dd>
+        </div>
+      ))}
+      <dt className="text-muted">SHA-256</dt>
+      <dd className="min-w-0 truncate font-mono text-xs leading-5 text-ink-2" title={photo.sha256}>{photo.sha256}</dd>
+    </dl>
+  );
+}

@@ -1,0 +1,122 @@
+// In Chromium: an analyst drops several photos on a case, watches them upload, opens the lightbox,
+// steps through with the keyboard, and puts one beside a photo of another case; then the phone view.
+import { mkdirSync } from "node:fs";
+import { afterAll, beforeAll, expect, test } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { launch, PHONE, DESK, signedInPage } from "../support/browser";
+import { as } from "../support/api";
+import { createCase } from "../support/factories";
+import { racewayJpeg, textAsJpeg } from "../support/photo-files";
+import { upload } from "../api/photos/helpers";
+
+let browser: Browser;
+let caseNumber = "";
+let caseId = "";
+let otherPhotoId = "";
+
+beforeAll(async () => {
+  mkdirSync("/tmp/shots", { recursive: true });
+  browser = await launch();
+  const c = await createCase({ status: "bench", findings: [{ component: "cup", row: "inboard", damageCode: "fatigue.subsurface", severity: 3, clockDeg: 90 }] });
+  caseNumber = c.number;
+  caseId = c.id;
+  // A similar case with a photo already on it, for the side-by-side view.
+  const other = await createCase({ status: "signed", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 3 }] });
+  const res = await upload(await as("analyst"), other.id, await racewayJpeg(40, { width: 1200, height: 900 }), "similar-spall.jpg", { component: "cup", row: "outboard", clockDeg: "60", caption: "Spall near the outboard rib" });
+  otherPhotoId = res.body.photo!.id;
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function thumbsLoaded(page: Page) {
+  return page.$$eval('[data-testid="photo-tile"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).complete && (i as HTMLImageElement).naturalWidth > 0));
+}
+
+test("drop several photos, see each one's progress and result, then open the lightbox", async () => {
+  const page = await signedInPage(browser, "analyst", DESK);
+  await page.goto(`/cases/${caseNumber}/photos`);
+  await expect.poll(() => page.textContent("h1")).toContain(`All photos of ${caseNumber}`);
+
+  // Tags chosen before the drop go with every file of the batch.
+  await page.click("text=Tags for the next photos");
+  await page.selectOption('select[id$="-part"]', "cup");
+  await page.selectOption('select[id$="-row"]', "inboard");
+  const files = await Promise.all([1, 2, 3].map(async (i) => ({ name: `cup-raceway-${i}.jpg`, mimeType: "image/jpeg", buffer: await racewayJpeg(i, { width: 1200, height: 900 }) })));
+  files.push({ name: "notes.jpg", mimeType: "image/jpeg", buffer: textAsJpeg() });
+  await page.setInputFiles('[data-testid="photo-drop-input"]', files);
+
+  await expect.poll(() => page.locator('[data-testid="upload-item"][data-status="done"]').count(), { timeout: 30_000 }).toBe(3);
+  const failed = page.locator('[data-testid="upload-item"][data-status="failed"]');
+  await expect.poll(() => failed.count()).toBe(1);
+  expect(await failed.textContent()).toMatch(/not a photo: its content is plain text/);
+  await expect.poll(() => page.locator('[data-testid="photo-tile"]').count()).toBe(3);
+  await expect.poll(() => thumbsLoaded(page)).toBe(true);
+  expect(await page.locator('section[aria-label="Cup"]').count()).toBe(1);
+  await page.screenshot({ path: "/tmp/shots/photos-desk.png", fullPage: true });
+
+  // Retrying the refused file asks the server again and gets the same clear answer.
+  await page.click('[aria-label="Retry notes.jpg"]');
+  await expect.poll(() => failed.count()).toBe(1);
+
+  await page.locator('[data-testid="photo-tile"]').first().click();
+  const box = page.locator('[data-testid="lightbox"]');
+  await box.waitFor();
+  const first = await page.getAttribute('[data-testid="lightbox-image"]', "src");
+  await expect.poll(() => page.$eval('[data-testid="lightbox-image"]', (i) => (i as HTMLImageElement).naturalWidth)).toBe(1200);
+  expect(await box.getAttribute("aria-label")).toMatch(/^Photo 1 of 3: Cup, inboard row/);
+  await page.screenshot({ path: "/tmp/shots/photos-lightbox-desk.png" });
+
+  await page.keyboard.press("ArrowRight");
+  await expect.poll(() => page.getAttribute('[data-testid="lightbox-image"]', "src")).not.toBe(first);
+  expect(await box.getAttribute("aria-label")).toMatch(/^Photo 2 of 3/);
+
+  // Click zooms at the point; a second click returns to fit.
+  const img = page.locator('[data-testid="lightbox-image"]');
+  await page.mouse.click(500, 400);
+  await expect.poll(() => img.evaluate((el) => (el as HTMLElement).style.transform)).toContain("scale(2.5)");
+  await page.mouse.click(500, 400);
+  await expect.poll(() => img.evaluate((el) => (el as HTMLElement).style.transform)).toContain("scale(1)");
+
+  // Tag editing in the lightbox: a caption and the finding.
+  await page.click("text=Edit tags");
+  await page.fill('textarea[id$="-caption"]', "Spall in the load zone, inboard raceway");
+  await page.selectOption('[data-testid="lightbox"] select[id$="-finding"]', { index: 1 });
+  await page.click("text=Save tags");
+  await expect.poll(() => box.textContent()).toContain("Spall in the load zone, inboard raceway");
+
+  await page.keyboard.press("Escape");
+  await expect.poll(() => box.count()).toBe(0);
+  await page.context().close();
+});
+
+test("compare a photo of this case with a similar case's photo", async () => {
+  const page = await signedInPage(browser, "engineer", DESK);
+  const res = await (await as("engineer")).json<{ photos: { id: string }[] }>("GET", `/api/cases/${caseId}/photos`);
+  const mine = res.body.photos[0].id;
+  await page.goto(`/photos/compare?a=${mine}`);
+  await page.waitForSelector('section[aria-label="Choose photo B"]');
+  await page.fill('input[name="case"]', (await page.evaluate(() => "")) || "");
+  await page.goto(`/photos/compare?a=${mine}&b=${otherPhotoId}`);
+  await page.waitForSelector('[data-testid="compare-B"]');
+  expect(await page.textContent('[data-testid="compare-B"]')).toContain("Spall near the outboard rib");
+  await expect.poll(() => page.$$eval('[data-testid^="compare-"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).naturalWidth > 0))).toBe(true);
+  await page.screenshot({ path: "/tmp/shots/photos-compare-desk.png", fullPage: true });
+  await page.context().close();
+});
+
+test("on a phone: the camera button, the grid and the lightbox fit 390 px", async () => {
+  const page = await signedInPage(browser, "analyst", PHONE);
+  await page.goto(`/cases/${caseNumber}/photos`);
+  await page.waitForSelector('[data-testid="photo-tile"]');
+  expect(await page.isVisible("text=Take photo")).toBe(true);
+  expect(await page.getAttribute('[data-testid="photo-camera-input"]', "capture")).toBe("environment");
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  await expect.poll(() => thumbsLoaded(page)).toBe(true);
+  await page.screenshot({ path: "/tmp/shots/photos-phone.png", fullPage: true });
+  await page.locator('[data-testid="photo-tile"]').nth(1).click();
+  await page.locator('[data-testid="lightbox"]').waitFor();
+  await expect.poll(() => page.$eval('[data-testid="lightbox-image"]', (i) => (i as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
+  await page.screenshot({ path: "/tmp/shots/photos-lightbox-phone.png" });
+  await page.context().close();
+});
