@@ -41,7 +41,7 @@ for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
       await page.screenshot({ path: `${SHOTS}/admin${p.path.replace(/[/?=]/g, "_")}-${label}.png`, fullPage: true });
     }
     await page.context().close();
-  });
+  }, 120_000);
 }
 
 test("the reference finds a code from a misspelt shop word, on a phone", async () => {
@@ -51,7 +51,7 @@ test("the reference finds a code from a misspelt shop word, on a phone", async (
   await poll(() => page.locator("[data-testid^=ref-damage-]").first().getAttribute("data-testid")).toBe("ref-damage-fatigue.subsurface");
   await page.screenshot({ path: `${SHOTS}/reference-search-phone.png`, fullPage: true });
   await page.context().close();
-});
+}, 60_000);
 
 test("changing a site's limit in millimetres shows inches as you type, and refuses more than 1/4 in", async () => {
   const code = `B${randomBytes(3).toString("hex").toUpperCase()}`;
@@ -71,4 +71,4 @@ test("changing a site's limit in millimetres shows inches as you type, and refus
   await poll(() => card.textContent()).toContain("at most 0.25 in");
   await page.screenshot({ path: `${SHOTS}/site-limit-refused-phone.png`, fullPage: true });
   await page.context().close();
-});
+}, 60_000);

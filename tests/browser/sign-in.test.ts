@@ -40,7 +40,7 @@ test("sign-in on a phone: wrong password refused with a message, right password 
   await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent(), { timeout: 15_000 }).toContain(person.name.split(" ")[0]);
   await page.screenshot({ path: `${SHOTS}/sign-in-home-phone.png`, fullPage: true });
   await ctx.close();
-});
+}, 60_000);
 
 test("empty fields get a message under each field", async () => {
   const ctx = await browser.newContext({ viewport: PHONE, baseURL: APP_URL });
