@@ -16,6 +16,9 @@ export interface FacetValue {
 
 type FacetRow = { facet: string; value: string | null; n: number };
 
+// Short enough for the sidebar; the full wording of the 0–4 scale is on the case page.
+const SEVERITY_SHORT: Record<number, string> = { 4: "4 · bearing condemned", 3: "3+ · part condemned", 2: "2+ · minor or worse", 1: "1+ · any damage" };
+
 const FACETS: FacetKey[] = ["status", "trigger", "cause", "code", "component", "class", "site", "severity"];
 
 function byCount(values: FacetValue[]): FacetValue[] {
@@ -58,7 +61,7 @@ export function labelFacets(rows: readonly FacetRow[], p: SearchParams, lookups:
     class: byCount(list("class", (v) => `Class ${v}`)),
     site: byCount([...siteCounts].map(([value, count]) => ({ value, label: siteName(value), count, selected: p.site.includes(value) }))),
     severity: SEVERITIES.filter((s) => s.code > 0)
-      .map((s) => ({ value: String(s.code), label: `${s.code}+ ${s.label}`, count: atLeast(s.code), selected: p.severity === s.code }))
+      .map((s) => ({ value: String(s.code), label: SEVERITY_SHORT[s.code] ?? `${s.code} or worse`, count: atLeast(s.code), selected: p.severity === s.code }))
       .reverse(),
   } satisfies Record<FacetKey, FacetValue[]>;
   return Object.fromEntries(FACETS.map((f) => [f, out[f]])) as Record<FacetKey, FacetValue[]>;

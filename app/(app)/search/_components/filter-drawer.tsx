@@ -25,7 +25,7 @@ export function FilterDrawer({ active, total, children }: { active: number; tota
         type="button"
         onClick={() => setOpen(true)}
         data-testid="open-filters"
-        className="inline-flex h-11 items-center gap-2 rounded-lg border border-line-strong bg-surface px-4 text-sm font-medium text-ink-2 lg:hidden"
+        className="inline-flex h-11 w-fit items-center gap-2 rounded-lg border border-line-strong bg-surface px-4 text-sm font-medium text-ink-2 lg:hidden"
       >
         <svg viewBox="0 0 24 24" className="h-4 w-4" fill="none" stroke="currentColor" strokeWidth="1.8" strokeLinecap="round" aria-hidden><path d="M4 6h16M7 12h10M10 18h4" /></svg>
         Filters
