@@ -71,7 +71,7 @@ describe("built demo cases", () => {
         // More than 1/16 in = 0.0625 in removes (common practice for North American freight interchange).
         const ep = evaluateEndPlay(checks.endPlay!, policy);
         expect(ep.call).toBe("over-limit");
-        expect(ep.count > 0 && ep.meanIn).toBeGreaterThan(0.0625);
+        expect(ep.call === "over-limit" && ep.meanIn).toBeGreaterThan(0.0625);
       }
       if (spec.trigger === "end-play-tight") expect(evaluateEndPlay(checks.endPlay!, policy).call).toBe("tight-remove");
       if (spec.trigger === "wayside-hot") expect(c.values.triggerDetail?.readingBasis).toBe("above-ambient");
