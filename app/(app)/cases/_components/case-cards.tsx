@@ -20,7 +20,7 @@ export function CaseCards({ rows, busy }: { rows: CaseListRow[]; busy: boolean }
             </p>
             <p className="mt-0.5 truncate text-sm text-ink-2">{r.triggerLabel}{r.serial ? <span className="font-mono text-[13px] text-muted"> · {r.serial}</span> : null}</p>
             <div className="mt-2 flex flex-wrap items-center gap-x-2 gap-y-1.5 text-xs text-muted">
-              <CallBadge call={r.fieldCall} />
+              {r.fieldCall ? <CallBadge call={r.fieldCall} /> : null}
               {r.causeLabel ? <span className="rounded-md bg-surface-2 px-2 py-0.5 font-medium text-ink-2 ring-1 ring-inset ring-line">{r.causeLabel}</span> : null}
               <span className="tabular">{[r.siteName, formatDay(r.removedOn)].filter(Boolean).join(" · ")}</span>
             </div>
