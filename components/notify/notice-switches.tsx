@@ -51,7 +51,7 @@ export function NoticeSwitches({ initial }: { initial: NoticeSwitch[] }) {
           </li>
         ))}
       </ul>
-      <p role="status" aria-live="polite" className={`mt-3 min-h-5 text-sm ${status?.tone === "danger" ? "text-danger" : "text-ok"}`}>
+      <p role="status" aria-live="polite" className={status ? `mt-3 text-sm ${status.tone === "danger" ? "text-danger" : "text-ok"}` : "sr-only"}>
         {status?.text ?? ""}
       </p>
     </div>

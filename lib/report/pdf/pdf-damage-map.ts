@@ -63,7 +63,7 @@ export function drawDamageMap(w: PdfWriter, r: CaseReport) {
   const reading = [
     "Seen from the outboard end; 12 o'clock at the top, clockwise.",
     "Each arc is centred on the recorded clock position; a finding without an extent shows as a short mark.",
-    r.offMap ? `${r.offMap} ${r.offMap === 1 ? "finding is" : "findings are"} not on a raceway or has no clock position, so not drawn.` : "Every finding with a clock position is drawn.",
+    r.offMap ? `${r.offMap} ${r.offMap === 1 ? "finding is" : "findings are"} off the map: not on a cup or cone raceway, or without a clock position.` : "Every finding with a clock position is drawn.",
   ];
   for (const line of reading) {
     doc.font(FONT.regular).fontSize(SIZE.small).fillColor(MUTED).text(pdfText(line), lx, ly, { width: w.left + w.width - lx, lineGap: 1 });

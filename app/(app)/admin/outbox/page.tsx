@@ -29,27 +29,23 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
         actions={<RetryButton unsent={counts.pending + counts.failed} />}
       />
       <div className="flex flex-col gap-5">
-        <Card
-          title="Mail"
-          action={
-            <nav aria-label="Filter by status" className="flex flex-wrap gap-1 text-sm">
-              {(["all", ...OUTBOX_STATUSES] as const).map((s) => {
-                const active = (status ?? "all") === s;
-                const n = s === "all" ? total : counts[s];
-                return (
-                  <Link
-                    key={s}
-                    href={s === "all" ? "/admin/outbox" : `/admin/outbox?status=${s}`}
-                    aria-current={active ? "page" : undefined}
-                    className={`rounded-md px-2.5 py-1 ${active ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}
-                  >
-                    {FILTER_LABELS[s]} <span className="tabular opacity-70">{n}</span>
-                  </Link>
-                );
-              })}
-            </nav>
-          }
-        >
+        <Card title="Mail">
+          <nav aria-label="Filter by status" className="-mt-1 mb-3 flex gap-1 overflow-x-auto text-sm [scrollbar-width:none]">
+            {(["all", ...OUTBOX_STATUSES] as const).map((s) => {
+              const active = (status ?? "all") === s;
+              const n = s === "all" ? total : counts[s];
+              return (
+                <Link
+                  key={s}
+                  href={s === "all" ? "/admin/outbox" : `/admin/outbox?status=${s}`}
+                  aria-current={active ? "page" : undefined}
+                  className={`shrink-0 rounded-md px-2.5 py-1.5 ${active ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}
+                >
+                  {FILTER_LABELS[s]} <span className="tabular opacity-70">{n}</span>
+                </Link>
+              );
+            })}
+          </nav>
           {rows.length ? <OutboxTable rows={rows} now={now} /> : <EmptyState title={status ? `No mail is ${FILTER_LABELS[status].toLowerCase()}.` : "No mail has been sent yet."} />}
           {rows.length === 100 ? <p className="mt-3 text-xs text-muted">Showing the newest 100.</p> : null}
         </Card>

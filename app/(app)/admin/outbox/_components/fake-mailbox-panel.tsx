@@ -1,11 +1,12 @@
+import { Badge } from "@/components/ui/badge";
 import { Card, EmptyState } from "@/components/ui/card";
 import type { FakeMessage } from "@/lib/mail/fake-mailbox";
 import { when } from "./when";
 
 /** What the local mail fake accepted, newest first, each opening to the message as it would look. */
-export function FakeMailboxPanel({ result, now }: { result: { messages: FakeMessage[] } | { error: string }; now: number }) {
+export function FakeMailboxPanel({ result, now }: { result: { messages: FakeMessage[]; refusing: boolean } | { error: string }; now: number }) {
   return (
-    <Card title="Received by the mail fake (development)">
+    <Card title="Received by the mail fake (development)" action={"refusing" in result && result.refusing ? <Badge tone="warn">Refusing mail (test mode)</Badge> : null}>
       <p className="mb-3 text-sm text-muted">
         In development and tests, mail goes to a local stand-in for an SMTP server instead of real inboxes. These are the latest messages it accepted.
       </p>

@@ -29,7 +29,7 @@ export function RetryButton({ unsent }: { unsent: number }) {
 
   return (
     <div className="flex flex-col items-stretch gap-1 sm:items-end">
-      <Button onClick={retry} disabled={busy || pending} size="md">
+      <Button onClick={retry} disabled={busy || pending} size="md" className="whitespace-nowrap">
         {busy ? "Sending…" : unsent > 0 ? `Retry now (${unsent})` : "Retry now"}
       </Button>
       <p role="status" aria-live="polite" className="min-h-4 text-xs text-muted">{note ?? ""}</p>
