@@ -7,12 +7,10 @@ import { listUsers } from "@/db/queries/users";
 import { requirePageUser } from "@/lib/auth/session";
 import { InviteForm } from "./_components/invite-form";
 import { PendingInvitations } from "./_components/pending-invitations";
-import { PersonRow } from "./_components/person-row";
+import { PeopleList } from "./_components/people-list";
 
 export const metadata: Metadata = { title: "People" };
 export const dynamic = "force-dynamic";
-
-const COLUMNS = "md:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)_minmax(0,1.3fr)_7.5rem]";
 
 export default async function PeoplePage() {
   const me = await requirePageUser("admin:users");
@@ -29,17 +27,11 @@ export default async function PeoplePage() {
       />
       <div className="flex flex-col gap-5">
         <Card title="Everyone with an account">
-          <div className={`-mt-1 hidden gap-4 border-b border-line pb-2 text-xs font-medium uppercase tracking-wide text-muted md:grid ${COLUMNS}`}>
-            <span>Person</span>
-            <span>Role</span>
-            <span>Home site</span>
-            <span className="text-right">Account</span>
-          </div>
-          <ul className="-my-1 divide-y divide-line md:my-0">
-            {people.map((p) => (
-              <PersonRow key={p.id} person={{ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId }} sites={sites} isSelf={p.id === me.id} />
-            ))}
-          </ul>
+          <PeopleList
+            people={people.map((p) => ({ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId }))}
+            sites={sites}
+            meId={me.id}
+          />
         </Card>
         <div className="grid items-start gap-5 lg:grid-cols-2">
           <div id="invite" className="scroll-mt-24">

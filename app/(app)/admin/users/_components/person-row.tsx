@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 import { ROLE_LABELS, isRole } from "@/lib/auth/permissions";
 import { RoleSelect } from "./role-select";
 import { SiteSelect } from "./site-select";
-import type { Person, SiteChoice } from "./types";
+import { PEOPLE_COLUMNS, type Person, type SiteChoice } from "./types";
 
 /** One person: role and home site save as soon as they change; suspending asks once more. */
 export function PersonRow({ person, sites, isSelf }: { person: Person; sites: SiteChoice[]; isSelf: boolean }) {
@@ -45,7 +45,7 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
   }
 
   return (
-    <li className={`grid grid-cols-2 items-center gap-x-3 gap-y-2 py-4 md:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)_minmax(0,1.3fr)_7.5rem] md:gap-4 ${suspended ? "opacity-75" : ""}`} data-testid={`person-${person.email}`}>
+    <li className={`grid grid-cols-2 items-center gap-x-3 gap-y-2 py-4 ${PEOPLE_COLUMNS} md:gap-4 ${suspended ? "opacity-75" : ""}`} data-testid={`person-${person.email}`}>
       <div className="min-w-0 self-start">
         <p className="flex flex-wrap items-center gap-2 font-medium text-ink">
           {person.name}

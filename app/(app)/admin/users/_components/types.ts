@@ -9,3 +9,6 @@ export type PendingInvitation = { id: string; email: string; name: string; role:
 export function siteOptions(sites: SiteChoice[], current: string | null) {
   return sites.filter((s) => s.active || s.id === current);
 }
+
+/** The people table's columns on wider screens (header and rows share them). */
+export const PEOPLE_COLUMNS = "md:grid-cols-[minmax(0,1.3fr)_minmax(0,1fr)_minmax(0,1.3fr)_7.5rem]";
