@@ -37,10 +37,12 @@ export function AddCodeForm({ list, onDone }: { list: CodeListName; onDone: () =
       const next: Record<string, string> = {};
       for (const issue of local.error.issues) next[String(issue.path[0])] ??= issue.message;
       setErrors(next);
+      setNote({ tone: "danger", text: "Check the marked fields." });
       return;
     }
     setBusy(true);
     setErrors({});
+    setNote(null);
     const res = await sendJson("POST", "/api/admin/codes", input);
     setBusy(false);
     if (!res.ok) {
