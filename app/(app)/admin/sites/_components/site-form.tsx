@@ -68,10 +68,10 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label={site ? `Edit ${site.code}` : "Add a site"}>
       <div className="grid gap-4 sm:grid-cols-[8rem_1fr]">
         <Field label="Code" htmlFor={f("code")} error={errors.code}>
-          <Input id={f("code")} name="code" defaultValue={site?.code} aria-invalid={!!errors.code} className="uppercase" placeholder="MJC" />
+          <Input id={f("code")} name="code" defaultValue={site?.code} aria-invalid={!!errors.code} className="uppercase" placeholder="e.g. RSC" />
         </Field>
         <Field label="Name" htmlFor={f("name")} error={errors.name}>
-          <Input id={f("name")} name="name" defaultValue={site?.name} aria-invalid={!!errors.name} placeholder="Marrow Junction car shop" />
+          <Input id={f("name")} name="name" defaultValue={site?.name} aria-invalid={!!errors.name} placeholder="e.g. Riverside car shop" />
         </Field>
       </div>
       <div className="grid gap-4 sm:grid-cols-3">
@@ -83,7 +83,7 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
           </Select>
         </Field>
         <Field label="Railway" htmlFor={f("railway")} error={errors.railway}>
-          <Input id={f("railway")} name="railway" defaultValue={site?.railway} aria-invalid={!!errors.railway} />
+          <Input id={f("railway")} name="railway" defaultValue={site?.railway} aria-invalid={!!errors.railway} placeholder="Who runs it" />
         </Field>
         <Field label="Location" htmlFor={f("location")} error={errors.location}>
           <Input id={f("location")} name="location" defaultValue={site?.location} aria-invalid={!!errors.location} placeholder="Town or yard" />
