@@ -1,7 +1,7 @@
 // The weekly digest for managers: the week's counts, then the last twelve months' headline
 // figures from the tallies, and a link to see them all.
 import { renderMail, type RenderedMail } from "@/lib/mail/templates/layout";
-import { monthLabel, percent } from "@/lib/tallies/labels";
+import { monthLabel, percent, percentRange } from "@/lib/tallies/labels";
 import { outOfControl } from "@/lib/tallies/shape-monthly";
 import type { TalliesData } from "@/lib/tallies/types";
 
@@ -12,7 +12,7 @@ export type DigestInput = {
 };
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n.toLocaleString("en-US")} ${n === 1 ? one : many}`;
-const interval = (lower: number, upper: number) => `${percent(lower)}–${percent(upper)}`;
+const interval = percentRange;
 
 export function buildDigest({ tallies: t, week, tallyUrl }: DigestInput): RenderedMail {
   const period = t.filters.from && t.filters.to ? `${monthLabel(t.filters.from)} to ${monthLabel(t.filters.to)}` : "all time";
@@ -44,7 +44,8 @@ export function buildDigest({ tallies: t, week, tallyUrl }: DigestInput): Render
   for (const s of lowShops) {
     blocks.push({ kind: "p", text: `Removals from ${s.label} are confirmed less often than across all shops: ${percent(s.rate.p)} (95%: ${interval(s.rate.lower, s.rate.upper)}) against ${percent(overall.p)}. Worth a look at how its calls are made.` });
   }
-  const lastMonth = t.monthly.months[t.monthly.months.length - 1];
+  const complete = t.monthly.months.filter((m) => m !== t.monthly.partialMonth);
+  const lastMonth = complete[complete.length - 1];
   const alarms = outOfControl(t.monthly).filter((a) => a.month === lastMonth && a.side === "above");
   if (alarms.length) {
     blocks.push({ kind: "p", text: `Above the control limit in ${monthLabel(lastMonth)}: ${alarms.map((a) => `${a.series} (${a.count}, limit ${a.limit.toFixed(1)})`).join("; ")}.` });

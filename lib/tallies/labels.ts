@@ -18,3 +18,10 @@ export function monthLabel(ym: string): string {
   const names = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
   return `${names[m - 1]} ${y}`;
 }
+
+/** "58–66%"; with a narrow interval one decimal, so "95.0–95.3%" does not read "95–95%". */
+export function percentRange(lower: number, upper: number): string {
+  const narrow = upper - lower < 0.02;
+  const f = (x: number) => (narrow ? (x * 100).toFixed(1) : String(Math.round(x * 100)));
+  return `${f(lower)}–${f(upper)}%`;
+}

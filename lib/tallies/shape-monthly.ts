@@ -7,30 +7,27 @@ import type { ControlSeries, MonthCell, MonthlyTally } from "./types";
 export const ALL_REMOVALS = "all-removals";
 export const ALL_SIGNED = "all-signed";
 
-function series(id: string, label: string, months: string[], countOf: (m: string) => number): ControlSeries {
+function series(id: string, label: string, months: string[], countOf: (m: string) => number, partial: number): ControlSeries {
   const counts = months.map(countOf);
-  const chart = cChart(counts.map((count) => ({ count })));
-  return {
-    id,
-    label,
-    counts,
-    centre: chart.centre,
-    upperLimit: chart.upperLimit,
-    lowerLimit: chart.lowerLimit,
-    beyond: chart.points.map((p) => p.beyond),
-  };
+  // A month still in progress is drawn but neither sets the limits nor is judged against them.
+  const chart = cChart(counts.map((count, index) => ({ count, index })).filter((p) => p.index !== partial));
+  const beyond: ControlSeries["beyond"] = counts.map(() => null);
+  for (const p of chart.points) beyond[p.item.index] = p.beyond;
+  return { id, label, counts, centre: chart.centre, upperLimit: chart.upperLimit, lowerLimit: chart.lowerLimit, beyond };
 }
 
 /**
  * `first`/`last` bound the axis (the filter's period); without them it runs from the first to the
- * last month with a removal. Causes are ordered by their total, largest first.
+ * last month with a removal. `inProgress` names the current month, which is not yet complete.
+ * Causes are ordered by their total, largest first.
  */
-export function monthlyTally(cells: readonly MonthCell[], first?: string, last?: string): MonthlyTally {
+export function monthlyTally(cells: readonly MonthCell[], first?: string, last?: string, inProgress?: string): MonthlyTally {
   const seen = cells.filter((c) => c.count > 0).map((c) => c.month).sort();
   const start = first ?? seen[0];
   const end = last ?? seen[seen.length - 1];
-  if (!start || !end) return { months: [], series: [] };
+  if (!start || !end) return { months: [], series: [], partialMonth: null };
   const months = monthRange(start, end);
+  const partial = inProgress ? months.indexOf(inProgress) : -1;
 
   const all = new Map<string, number>();
   const signed = new Map<string, number>();
@@ -49,12 +46,13 @@ export function monthlyTally(cells: readonly MonthCell[], first?: string, last?:
 
   return {
     months,
+    partialMonth: partial >= 0 ? months[partial] : null,
     series: [
-      series(ALL_REMOVALS, "All removals (every stage)", months, (m) => all.get(m) ?? 0),
-      series(ALL_SIGNED, "All signed verdicts", months, (m) => signed.get(m) ?? 0),
+      series(ALL_REMOVALS, "All removals (every stage)", months, (m) => all.get(m) ?? 0, partial),
+      series(ALL_SIGNED, "All signed verdicts", months, (m) => signed.get(m) ?? 0, partial),
       ...causeTotals
         .filter((c) => c.total > 0)
-        .map((c) => series(c.code, causeLabel(c.code || null), months, (m) => c.m.get(m) ?? 0)),
+        .map((c) => series(c.code, causeLabel(c.code || null), months, (m) => c.m.get(m) ?? 0, partial)),
     ],
   };
 }

@@ -39,7 +39,7 @@ export async function loadTallies(filters: TallyFilters, viewer: TallyViewer): P
     triggerVerdict: triggerVerdictRows(cube),
     byTrigger: confirmationTable(cube, (c) => c.trigger, triggerLabel),
     byShop: confirmationTable(cube, (c) => c.siteId, siteLabel),
-    monthly: monthlyTally(months, filters.from, filters.to),
+    monthly: monthlyTally(months, filters.from, filters.to, new Date().toISOString().slice(0, 7)),
     causeSite: causeSiteTally(cube, siteLabel),
     clusters: {
       keyKind: filters.cluster,

@@ -42,6 +42,16 @@ describe("monthly counts with c-chart limits", () => {
     expect(bounded.months).toEqual(["2024-11", "2024-12", "2025-01", "2025-02"]);
   });
 
+  it("draws the month in progress but leaves it out of the limits (NIST/SEMATECH 6.3.3 formula on complete months)", () => {
+    const live = monthlyTally(cells, undefined, undefined, "2025-10");
+    const seal = live.series.find((s) => s.id === "seal")!;
+    expect(live.partialMonth).toBe("2025-10");
+    expect(seal.counts[9]).toBe(16);
+    expectRel(seal.centre, 32 / 9, 1e-12); // nine complete months: 8 x 4 + one empty month
+    expect(seal.beyond[9]).toBeNull();
+    expect(monthlyTally(cells, undefined, undefined, "2030-01").partialMonth).toBeNull();
+  });
+
   it("lists months beyond the limits, newest first", () => {
     const alarms = outOfControl(t);
     expect(alarms.every((a, i) => i === 0 || alarms[i - 1].month >= a.month)).toBe(true);

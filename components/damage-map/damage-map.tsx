@@ -1,0 +1,155 @@
+// Where damage sits on the raceways, drawn as seen from the outboard end: one disc per row, the
+// cup raceway as the outer band and the cone raceway as the inner band, 12 o'clock at the top,
+// the load zone marked on the cup. Give `findings` for one case (each finding its own arc), or
+// `sectors` for many cases summed (shaded by how many findings touch each clock sector).
+import { damageCodeInfo } from "@/lib/classification";
+import { annularSector, clockPoint, clockWords } from "@/lib/damage-map/geometry";
+import { RING_LABELS, ringsOf, type RingId, type SectorCell } from "@/lib/damage-map/rings";
+
+export type DamageMapFinding = {
+  component: string;
+  row?: string | null;
+  clockDeg?: number | null;
+  arcDeg?: number | null;
+  severity: number;
+  damageCode?: string | null;
+};
+
+export type DamageMapProps = {
+  title: string;
+  findings?: readonly DamageMapFinding[];
+  sectors?: readonly SectorCell[];
+  sectorDeg?: number;
+  /** Extra words under the drawing. */
+  caption?: string;
+  className?: string;
+};
+
+export const SEVERITY_COLOURS = ["#94a3b8", "#d6b370", "#e29a2d", "#d9601f", "#b91c1c"] as const;
+const SEVERITY_WORDS = ["none", "cosmetic", "minor", "part condemned", "bearing condemned"];
+const HEAT = ["#fde68a", "#fbbf24", "#f59e0b", "#ea580c", "#b91c1c"] as const;
+/** Damage without an extent is drawn as a short mark, not a claim of its size. */
+const SPOT_DEG = 8;
+const LOAD_ZONE_HALF = 60;
+
+const R = 78;
+const DISCS = [
+  { row: "inboard", cx: 104, cup: "cup-inboard", cone: "cone-inboard" },
+  { row: "outboard", cx: 296, cup: "cup-outboard", cone: "cone-outboard" },
+] as const;
+// Rounded so the server's and the browser's trigonometry draw identical markup.
+const at = (cx: number, r: number, deg: number) => clockPoint(cx, CY, r, deg).map((v) => Math.round(v * 100) / 100);
+const BANDS = { cup: [0.74, 0.96], cone: [0.42, 0.64] } as const;
+const CY = 112;
+
+function bandOf(ring: RingId): readonly [number, number] {
+  return ring.startsWith("cup") ? BANDS.cup : BANDS.cone;
+}
+function discOf(ring: RingId) {
+  return DISCS.find((d) => d.cup === ring || d.cone === ring)!;
+}
+
+export const heatColour = (findings: number, max: number) => HEAT[Math.min(HEAT.length - 1, Math.floor((findings / Math.max(1, max)) * HEAT.length - 1e-9))];
+
+function Disc({ cx, row }: { cx: number; row: string }) {
+  const zone = annularSector(cx, CY, R * 0.985, R * 1.06, -LOAD_ZONE_HALF, LOAD_ZONE_HALF);
+  return (
+    <g>
+      <path d={zone} fill="#f59e0b" fillOpacity={0.35} />
+      {(["cup", "cone"] as const).map((b) => (
+        <g key={b}>
+          <circle cx={cx} cy={CY} r={((BANDS[b][0] + BANDS[b][1]) / 2) * R} fill="none" stroke="var(--surface-2, #f1f5f9)" strokeWidth={(BANDS[b][1] - BANDS[b][0]) * R} />
+          <circle cx={cx} cy={CY} r={BANDS[b][1] * R} fill="none" stroke="var(--line-strong, #cbd5e1)" strokeWidth={0.8} />
+          <circle cx={cx} cy={CY} r={BANDS[b][0] * R} fill="none" stroke="var(--line-strong, #cbd5e1)" strokeWidth={0.8} />
+        </g>
+      ))}
+      {Array.from({ length: 12 }, (_, h) => {
+        const [x0, y0] = at(cx, R * 0.97, h * 30);
+        const [x1, y1] = at(cx, R * (h % 3 === 0 ? 1.09 : 1.04), h * 30);
+        const [lx, ly] = at(cx, R * 1.19, h * 30);
+        return (
+          <g key={h}>
+            <line x1={x0} y1={y0} x2={x1} y2={y1} stroke="var(--muted, #64748b)" strokeWidth={0.8} />
+            {h % 3 === 0 ? <text x={lx} y={ly + 4} textAnchor="middle" fontSize={11} fontWeight={700} fill="var(--ink-2, #334155)">{h === 0 ? 12 : h}</text> : null}
+          </g>
+        );
+      })}
+      <text x={cx} y={CY + R * 0.85 + 3.5} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)">CUP</text>
+      <text x={cx} y={CY + R * 0.53 + 3.5} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)">CONE</text>
+      <text x={cx} y={CY + 4} textAnchor="middle" fontSize={10} fontWeight={600} fill="var(--ink-2, #334155)">{row === "inboard" ? "Inboard" : "Outboard"}</text>
+      <text x={cx} y={CY + 16} textAnchor="middle" fontSize={8} fill="var(--muted, #64748b)">row</text>
+    </g>
+  );
+}
+
+function describe(f: DamageMapFinding): string {
+  const code = f.damageCode ? (damageCodeInfo(f.damageCode)?.label ?? f.damageCode) : "Finding";
+  const at = f.clockDeg === null || f.clockDeg === undefined ? "" : ` at ${clockWords(f.clockDeg)}`;
+  const arc = f.arcDeg ? `, ${f.arcDeg}° arc` : ", extent not recorded";
+  return `${code}${at}${arc} · severity ${f.severity} (${SEVERITY_WORDS[f.severity] ?? "?"})`;
+}
+
+export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, className = "" }: DamageMapProps) {
+  const summed = sectors !== undefined;
+  const max = summed ? Math.max(0, ...sectors.map((s) => s.findings)) : 0;
+  const offMap = findings ? findings.filter((f) => ringsOf(f.component, f.row).length === 0 || f.clockDeg === null || f.clockDeg === undefined).length : 0;
+  const placed = findings ? findings.length - offMap : 0;
+  const label = summed
+    ? `${title}: ${sectors.reduce((s, c) => s + c.findings, 0)} finding-sectors on the cup and cone raceways`
+    : `${title}: ${placed} findings placed on the cup and cone raceways${offMap ? `, ${offMap} elsewhere` : ""}`;
+  return (
+    <figure className={`min-w-0 ${className}`}>
+      <svg viewBox="0 0 400 262" className="h-auto w-full max-w-[34rem]" role="img" aria-label={label} data-export data-damage-map>
+        <title>{title}</title>
+        {DISCS.map((d) => <Disc key={d.row} cx={d.cx} row={d.row} />)}
+        {summed
+          ? sectors.map((s) => {
+              const d = discOf(s.ring);
+              const [a, b] = bandOf(s.ring);
+              return (
+                <path key={`${s.ring}-${s.sector}`} d={annularSector(d.cx, CY, a * R, b * R, s.sector * sectorDeg, (s.sector + 1) * sectorDeg)} fill={heatColour(s.findings, max)}>
+                  <title>{`${RING_LABELS[s.ring]}, ${clockWords(s.sector * sectorDeg)} to ${clockWords((s.sector + 1) * sectorDeg)}: ${s.findings} finding${s.findings === 1 ? "" : "s"}, worst severity ${s.maxSeverity}`}</title>
+                </path>
+              );
+            })
+          : (findings ?? []).flatMap((f, i) =>
+              f.clockDeg === null || f.clockDeg === undefined
+                ? []
+                : ringsOf(f.component, f.row).map((ring) => {
+                    const d = discOf(ring);
+                    const [a, b] = bandOf(ring);
+                    const extent = Math.min(360, f.arcDeg && f.arcDeg > 0 ? f.arcDeg : SPOT_DEG);
+                    const start = f.clockDeg! - extent / 2;
+                    return (
+                      <path key={`${i}-${ring}`} d={annularSector(d.cx, CY, a * R + 1, b * R - 1, start, start + extent)} fill={SEVERITY_COLOURS[Math.max(0, Math.min(4, f.severity))]} fillOpacity={0.9} stroke="#ffffff" strokeWidth={0.6}>
+                        <title>{describe(f)}</title>
+                      </path>
+                    );
+                  }),
+            )}
+        {DISCS.map((d) => (
+          <text key={d.row} x={Math.round(d.cx + R * 0.5)} y={Math.round(CY - R * 1.1)} fontSize={8} fill="#b45309">load zone</text>
+        ))}
+        <g transform="translate(20 236)">
+          {summed
+            ? [
+                <text key="l" x={0} y={9} fontSize={9} fill="var(--muted, #64748b)">Fewer</text>,
+                ...HEAT.map((c, i) => <rect key={c} x={34 + i * 22} y={1} width={20} height={10} rx={2} fill={c} />),
+                <text key="r" x={34 + HEAT.length * 22 + 4} y={9} fontSize={9} fill="var(--muted, #64748b)">{`more findings (most: ${max})`}</text>,
+              ]
+            : SEVERITY_COLOURS.map((c, i) => (
+                <g key={c} transform={`translate(${i * 74} 0)`}>
+                  <rect x={0} y={1} width={12} height={10} rx={2} fill={c} />
+                  <text x={16} y={9.5} fontSize={9} fill="var(--muted, #64748b)">{`${i} ${SEVERITY_WORDS[i]}`}</text>
+                </g>
+              ))}
+        </g>
+      </svg>
+      <figcaption className="mt-2 max-w-[34rem] text-xs leading-relaxed text-muted">
+        Seen from the outboard end, 12 o&apos;clock at the top, clockwise. {summed ? `Each ${sectorDeg}° sector is shaded by how many findings touch it.` : "Each arc is centred on its clock position."}
+        {!summed && offMap ? ` ${offMap} finding${offMap === 1 ? " is" : "s are"} not on a raceway or has no clock position.` : ""}
+        {caption ? ` ${caption}` : ""}
+      </figcaption>
+    </figure>
+  );
+}
