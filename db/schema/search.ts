@@ -1,7 +1,8 @@
 // Search index rows, one per case, kept current by database triggers on cases and findings
-// (db/migrations, search triggers): the narrative as a weighted tsvector, the findings as
-// arrays for facets and similar-case retrieval, and the columns the facets filter on.
-// Nothing in the app writes these tables; they are derived data and can be rebuilt.
+// (db/migrations, search triggers): the columns the facets filter on and the findings as
+// arrays for facets and similar-case retrieval in a narrow table that scans fast, and the
+// narrative as a weighted tsvector in a table of its own. Nothing in the app writes these
+// tables; they are derived data and can be rebuilt.
 import { customType, date, index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { cases } from "./cases";
 
@@ -30,10 +31,8 @@ export const caseSearch = pgTable(
     familyKeys: text("family_keys").array().notNull().default([]),
     // Case number, serial, car mark and number in one string for trigram matching.
     identifiers: text("identifiers").notNull(),
-    document: tsvector("document").notNull(),
   },
   (t) => [
-    index("case_search_document_idx").using("gin", t.document),
     index("case_search_identifiers_trgm_idx").using("gin", t.identifiers.op("gin_trgm_ops")),
     index("case_search_codes_idx").using("gin", t.damageCodes),
     index("case_search_components_idx").using("gin", t.components),
@@ -41,7 +40,21 @@ export const caseSearch = pgTable(
     index("case_search_family_keys_idx").using("gin", t.familyKeys),
     index("case_search_sort_idx").on(t.sortOn, t.createdAt),
     index("case_search_site_idx").on(t.siteId),
+    // Similar-case retrieval: same trigger and class, or same cause, by index.
+    index("case_search_trigger_class_idx").on(t.trigger, t.bearingClass),
+    index("case_search_cause_idx").on(t.primaryCause),
   ],
+);
+
+// The narrative of each case: identifiers (weight A), teardown, findings and verdict (B),
+// field notes and corrective action (C).
+export const caseSearchText = pgTable(
+  "case_search_text",
+  {
+    caseId: uuid("case_id").primaryKey().references(() => cases.id, { onDelete: "cascade" }),
+    document: tsvector("document").notNull(),
+  },
+  (t) => [index("case_search_text_document_idx").using("gin", t.document)],
 );
 
 // Distinct words seen in case narratives: a typo's nearest known words come from here.
