@@ -37,7 +37,7 @@ async function safely(kind: NoticeKind, c: NoticeCase, work: () => Promise<strin
   try {
     return await work();
   } catch (err) {
-    console.error(`notice ${kind} for ${c.number} failed:`, err);
+    console.error(`notice ${kind} for ${c?.number ?? "a case"} failed:`, err);
     return null;
   }
 }

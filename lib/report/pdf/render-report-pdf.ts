@@ -42,7 +42,11 @@ function thumbnails(w: PdfWriter, photos: ReportPhoto[], images: PhotoImages) {
 }
 
 function componentBlock(w: PdfWriter, c: ComponentSection, images: PhotoImages) {
-  w.subheading(`${c.label}${c.disposition ? `  ·  disposition: ${c.disposition}` : ""}`, c.findings.length ? 50 : 100);
+  // Keep a part's heading, findings and first row of photos on one page when they fit on one.
+  const tableHeight = c.findings.length ? 15 + c.findings.length * 34 : 14;
+  const photoRow = c.photos.length ? (w.width / 4) * 0.75 + 34 : 0;
+  const together = 18 + tableHeight + photoRow;
+  w.subheading(`${c.label}${c.disposition ? `  ·  disposition: ${c.disposition}` : ""}`, together < 320 ? together : 60);
   if (c.findings.length) {
     w.table(
       [
