@@ -1,0 +1,79 @@
+"use client";
+// Upload the list of bearings still in service; they enter every life analysis as suspensions.
+import { useRouter } from "next/navigation";
+import { useRef, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { downloadBlob } from "@/components/charts/export-image";
+import { FLEET_COLUMNS, FLEET_TEMPLATE } from "@/lib/tallies/fleet-csv";
+import type { FleetBatch } from "@/lib/tallies/life-data";
+
+type RowError = { row: number; column: string | null; message: string };
+type Outcome = { tone: "ok" | "danger"; text: string; rows?: RowError[]; more?: number } | null;
+
+export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
+  const router = useRouter();
+  const input = useRef<HTMLInputElement>(null);
+  const [file, setFile] = useState<File | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [outcome, setOutcome] = useState<Outcome>(null);
+
+  async function upload() {
+    if (!file) return;
+    setBusy(true);
+    setOutcome(null);
+    try {
+      const form = new FormData();
+      form.set("file", file);
+      const res = await fetch("/api/fleet", { method: "POST", body: form });
+      const body = (await res.json().catch(() => ({}))) as { units?: number; error?: string; rows?: RowError[]; errorCount?: number };
+      if (!res.ok) {
+        setOutcome({ tone: "danger", text: body.error ?? `Upload refused (HTTP ${res.status}).`, rows: body.rows, more: body.errorCount && body.rows ? body.errorCount - body.rows.length : 0 });
+        return;
+      }
+      setOutcome({ tone: "ok", text: `${(body.units ?? 0).toLocaleString("en-US")} units in service stored. Life analyses now use this list.` });
+      setFile(null);
+      if (input.current) input.current.value = "";
+      router.refresh();
+    } catch {
+      setOutcome({ tone: "danger", text: "The upload did not reach the server; nothing was stored. Try again." });
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  return (
+    <div className="space-y-3" data-fleet-upload>
+      <p className="text-sm text-ink-2">
+        {batch ? (
+          <>In use: <span className="font-medium text-ink">{batch.units.toLocaleString("en-US")} units</span>, uploaded {new Date(batch.uploadedAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}{batch.uploadedBy ? ` by ${batch.uploadedBy}` : ""}.</>
+        ) : (
+          "No fleet list yet: analyses count only removed bearings."
+        )}
+      </p>
+      <p className="text-xs text-muted">
+        CSV with a header row: {FLEET_COLUMNS.join(", ")}. Dates as YYYY-MM-DD; months are worked out from mounted_on and as_of when left empty. A new upload replaces the list in use; a file with any bad row stores nothing.
+      </p>
+      <div className="flex flex-wrap items-center gap-2">
+        <label className="inline-flex h-10 cursor-pointer items-center rounded-lg border border-dashed border-line-strong bg-surface-2 px-3 text-sm text-ink-2 hover:border-accent">
+          <input ref={input} type="file" accept=".csv,text/csv" className="sr-only" aria-label="Fleet list CSV" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
+          {file ? file.name : "Choose a CSV file…"}
+        </label>
+        <Button onClick={upload} disabled={!file || busy}>{busy ? "Checking…" : "Upload fleet list"}</Button>
+        <button type="button" className="h-10 px-2 text-sm text-accent hover:underline" onClick={() => downloadBlob(new Blob([FLEET_TEMPLATE], { type: "text/csv" }), "tearline-fleet-template.csv")}>
+          Template
+        </button>
+      </div>
+      {outcome ? (
+        <div role={outcome.tone === "danger" ? "alert" : "status"} className={`rounded-lg px-3 py-2 text-sm ${outcome.tone === "ok" ? "bg-ok-soft text-ok" : "bg-danger-soft text-danger"}`}>
+          <p className="font-medium">{outcome.text}</p>
+          {outcome.rows?.length ? (
+            <ul className="mt-1.5 max-h-48 list-disc space-y-0.5 overflow-y-auto pl-5 text-ink">
+              {outcome.rows.map((r, i) => <li key={i}>Row {r.row}{r.column ? `, ${r.column}` : ""}: {r.message}</li>)}
+              {outcome.more ? <li className="text-muted">and {outcome.more} more</li> : null}
+            </ul>
+          ) : null}
+        </div>
+      ) : null}
+    </div>
+  );
+}
