@@ -1,6 +1,6 @@
 // Sites and their end-play policy; a site that cases, people or invitations point at is never deleted.
 import "server-only";
-import { asc, count, eq, or } from "drizzle-orm";
+import { asc, count, eq, isNull, ne, or } from "drizzle-orm";
 import { db } from "@/db";
 import { cases, invitations, sites, user } from "@/db/schema";
 
@@ -46,15 +46,17 @@ export async function siteUsage(id: string) {
   return { cases: c.n, users: u.n, invitations: i.n };
 }
 
-/** Per-site counts of cases and people, for the admin list. */
+/** Per-site counts of cases (removed or torn down there) and people, for the admin list. */
 export async function siteUsageCounts() {
-  const [caseRows, userRows] = await Promise.all([
+  const [removed, tornDown, userRows] = await Promise.all([
     db.select({ siteId: cases.siteId, n: count() }).from(cases).groupBy(cases.siteId),
+    db.select({ siteId: cases.labSiteId, n: count() }).from(cases).where(or(isNull(cases.siteId), ne(cases.labSiteId, cases.siteId))).groupBy(cases.labSiteId),
     db.select({ siteId: user.siteId, n: count() }).from(user).groupBy(user.siteId),
   ]);
   const out = new Map<string, { cases: number; users: number }>();
-  for (const r of caseRows) if (r.siteId) out.set(r.siteId, { cases: r.n, users: 0 });
-  for (const r of userRows) if (r.siteId) out.set(r.siteId, { cases: out.get(r.siteId)?.cases ?? 0, users: r.n });
+  const entry = (id: string) => out.get(id) ?? out.set(id, { cases: 0, users: 0 }).get(id)!;
+  for (const r of [...removed, ...tornDown]) if (r.siteId) entry(r.siteId).cases += r.n;
+  for (const r of userRows) if (r.siteId) entry(r.siteId).users += r.n;
   return out;
 }
 
