@@ -35,7 +35,7 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
               <span className="font-semibold text-ink">Tearline</span>
             </Link>
             <div className="flex items-center gap-3 text-xs text-muted">
-              <span className="max-w-[9rem] truncate">{ROLE_LABELS[user.role]}</span>
+              <Link href="/profile" className="max-w-[9rem] truncate hover:text-ink" title="Your notices">{ROLE_LABELS[user.role]}</Link>
               <SignOutButton className="rounded-md border border-line px-2 py-1 text-ink-2" />
             </div>
           </div>
