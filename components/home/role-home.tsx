@@ -78,7 +78,7 @@ export async function RoleHome({ user }: { user: CurrentUser }) {
         }
       />
       <StageTiles counts={counts} />
-      <div className="mt-6 grid gap-5 lg:grid-cols-2">
+      <div className="mt-6 grid gap-5 lg:grid-cols-2 [&>*]:min-w-0">
         {panels.map((p) => (
           <Card key={p.title} title={p.title} action={<Link href={p.href} className="text-sm text-accent hover:underline">All</Link>}>
             <CaseList rows={p.rows} empty={p.empty} />

@@ -50,7 +50,7 @@ describe("migrations on an empty database", () => {
   it("create every table the schema declares, the core ones included", async () => {
     const { rows } = await fresh.query<{ table_name: string }>(`select table_name from information_schema.tables where table_schema = 'public'`);
     const present = new Set(rows.map((r) => r.table_name));
-    const declared = Object.values(schema)
+    const declared = (Object.values(schema) as unknown[])
       .filter((v): v is PgTable => is(v, PgTableClass))
       .map((table) => getTableConfig(table).name);
     expect(declared).toEqual(expect.arrayContaining(CORE_TABLES));
@@ -60,7 +60,7 @@ describe("migrations on an empty database", () => {
   it("create each declared column", async () => {
     const { rows } = await fresh.query<{ table_name: string; column_name: string }>(`select table_name, column_name from information_schema.columns where table_schema = 'public'`);
     const present = new Set(rows.map((r) => `${r.table_name}.${r.column_name}`));
-    const missing = Object.values(schema)
+    const missing = (Object.values(schema) as unknown[])
       .filter((v): v is PgTable => is(v, PgTableClass))
       .flatMap((table) => {
         const config = getTableConfig(table);
