@@ -23,6 +23,7 @@ function samplePath(route: string): string {
 
 /** What the table says should happen to one caller; null when the status is acceptable. */
 function problem(access: Access, who: Caller["who"], status: number): string | null {
+  if (access === "disabled") return status === 404 ? null : `disabled endpoint gave ${status}, expected 404`;
   if (access === "public") return status >= 500 || status === 401 || status === 403 ? `public route gave ${status}` : null;
   if (who === "anonymous") return status === 401 ? null : `anonymous got ${status}, expected 401`;
   if (!access.includes(who)) return status === 403 ? null : `${who} got ${status}, expected 403`;

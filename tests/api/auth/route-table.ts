@@ -2,7 +2,8 @@
 // role-guards.test.ts checks every row against the running app and fails when a route file has no row.
 import type { DemoRole } from "../../support/api";
 
-export type Access = "public" | readonly DemoRole[];
+// "disabled": the auth library's endpoint is switched off (404 for everyone); Tearline's own routes do that job.
+export type Access = "public" | "disabled" | readonly DemoRole[];
 export type Probe = { path?: string; body?: unknown; access?: Access; note?: string };
 export type RouteRow = { access: Access; probes?: Probe[] };
 
@@ -39,13 +40,13 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
     access: "public",
     probes: [
       { path: "/api/auth/sign-in/email", body: {} },
-      { path: "/api/auth/admin/set-role", body: { userId: "nobody", role: "admin" }, access: ADMIN },
+      { path: "/api/auth/admin/set-role", body: { userId: "nobody", role: "admin" }, access: "disabled" },
       { path: "/api/auth/admin/ban-user", body: { userId: "nobody" }, access: ADMIN },
-      { path: "/api/auth/admin/remove-user", body: { userId: "nobody" }, access: ADMIN },
-      { path: "/api/auth/admin/impersonate-user", body: { userId: "nobody" }, access: ADMIN },
-      { path: "/api/auth/admin/set-user-password", body: { userId: "nobody", newPassword: "x" }, access: ADMIN },
+      { path: "/api/auth/admin/remove-user", body: { userId: "nobody" }, access: "disabled" },
+      { path: "/api/auth/admin/impersonate-user", body: { userId: "nobody" }, access: "disabled" },
+      { path: "/api/auth/admin/set-user-password", body: { userId: "nobody", newPassword: "x" }, access: "disabled" },
       // An unknown role makes the admin's call fail after the role check, so no account is created.
-      { path: "/api/auth/admin/create-user", body: { email: "guard-probe@sable-river.example", password: "long-enough-password", name: "Guard Probe", role: "no-such-role" }, access: ADMIN },
+      { path: "/api/auth/admin/create-user", body: { email: "guard-probe@sable-river.example", password: "long-enough-password", name: "Guard Probe", role: "no-such-role" }, access: "disabled" },
     ],
   },
   "POST /api/invitations/accept": { access: "public" },
