@@ -5,7 +5,7 @@ import { mailRetryIntervalMs } from "@/lib/mail/retry-interval";
 describe("mail retry timing", () => {
   it("reads MAIL_RETRY_MS and falls back to 30 s for missing or silly values", () => {
     expect(mailRetryIntervalMs("2000")).toBe(2000);
-    expect(mailRetryIntervalMs(undefined)).toBe(30_000);
+    expect(mailRetryIntervalMs("")).toBe(30_000);
     expect(mailRetryIntervalMs("fast")).toBe(30_000);
     expect(mailRetryIntervalMs("10")).toBe(30_000);
   });
