@@ -38,6 +38,11 @@ export function PhotoLightbox({ photos, index, findings, canTag, canDelete, onIn
   const [problem, setProblem] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const dialog = useRef<HTMLDivElement>(null);
+  const strip = useRef<HTMLOListElement>(null);
+
+  useEffect(() => {
+    strip.current?.querySelector('[aria-current="true"]')?.scrollIntoView({ block: "nearest", inline: "nearest" });
+  }, [index]);
 
   useEffect(() => {
     reset();
@@ -129,7 +134,19 @@ export function PhotoLightbox({ photos, index, findings, canTag, canDelete, onIn
             </>
           ) : null}
         </div>
-        <p className="hidden px-4 py-2 text-center text-xs text-white/50 sm:block">Click to zoom · scroll or pinch to zoom further · drag to move · ← → to step · Esc to close</p>
+        {count > 1 ? (
+          <ol ref={strip} className="mx-auto hidden w-max max-w-full shrink-0 gap-1.5 overflow-x-auto px-4 pt-2 sm:flex [scrollbar-width:none]" aria-label="All photos">
+            {photos.map((p, i) => (
+              <li key={p.id}>
+                <button type="button" onClick={() => onIndex(i)} aria-label={`Photo ${i + 1}`} aria-current={i === index} className={`block h-12 w-12 overflow-hidden rounded-md ring-2 transition ${i === index ? "opacity-100 ring-accent" : "opacity-55 ring-transparent hover:opacity-90"}`}>
+                  {/* eslint-disable-next-line @next/next/no-img-element */}
+                  <img src={p.urls.thumb} alt="" loading="lazy" className="h-full w-full object-cover" />
+                </button>
+              </li>
+            ))}
+          </ol>
+        ) : null}
+        <p className="hidden px-4 py-2 text-center text-xs text-white/45 sm:block">Click to zoom · scroll or pinch to zoom further · drag to move · ← → to step · Esc to close</p>
       </div>
 
       <aside className={`flex max-h-[48dvh] shrink-0 flex-col overflow-y-auto border-t border-white/10 bg-surface text-ink lg:max-h-none lg:w-[360px] lg:border-l lg:border-t-0 ${details || editing ? "" : "max-lg:max-h-[30dvh]"}`}>

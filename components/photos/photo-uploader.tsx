@@ -57,18 +57,18 @@ export function PhotoUploader({ caseId, findings, maxBytes, onStored }: Props) {
     <div className="flex flex-col gap-3">
       <div
         {...getRootProps()}
-        className={`relative flex flex-col items-center gap-3 rounded-xl border-2 border-dashed px-4 py-6 text-center transition sm:py-8 ${isDragActive ? "border-accent bg-accent-soft" : "border-line-strong bg-surface-2"}`}
+        className={`relative flex flex-col items-center gap-4 rounded-xl border-2 border-dashed px-4 py-6 text-center transition sm:flex-row sm:px-5 sm:py-5 sm:text-left ${isDragActive ? "border-accent bg-accent-soft" : "border-line-strong bg-surface-2"}`}
         data-testid="photo-dropzone"
       >
         <input {...getInputProps()} data-testid="photo-drop-input" aria-label="Choose photos" />
-        <div className="grid h-11 w-11 place-items-center rounded-full bg-surface text-accent ring-1 ring-line">
+        <div className="grid h-11 w-11 shrink-0 place-items-center rounded-full bg-surface text-accent ring-1 ring-line">
           <UploadIcon />
         </div>
-        <div>
-          <p className="font-medium text-ink">{isDragActive ? "Drop to upload" : <><span className="hidden sm:inline">Drop photos here</span><span className="sm:hidden">Add photos</span></>}</p>
+        <div className="min-w-0 flex-1">
+          <p className="font-medium text-ink">{isDragActive ? "Drop to upload" : <><span className="hidden sm:inline">Drop photos here, as many as you like</span><span className="sm:hidden">Add photos</span></>}</p>
           <p className="mt-0.5 text-sm text-muted">JPEG, PNG, WebP or HEIC, up to {formatBytes(maxBytes)} each. Originals are kept unchanged as evidence.</p>
         </div>
-        <div className="flex w-full flex-col gap-2 sm:w-auto sm:flex-row">
+        <div className="flex w-full shrink-0 flex-col gap-2 sm:w-auto sm:flex-row">
           <label className={buttonClass({ variant: "primary", size: "lg" }, "cursor-pointer sm:hidden")}>
             <CameraIcon /> Take photo
             <input type="file" accept="image/*" capture="environment" multiple className="sr-only" data-testid="photo-camera-input" onChange={(e) => { addFiles(Array.from(e.target.files ?? [])); e.target.value = ""; }} />

@@ -29,6 +29,7 @@ export function UploadItem({ item, findings, onRetry, onRemove, onTags }: Props)
   const [draft, setDraft] = useState(item.tags);
   const [error, setError] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
+  const [previewFailed, setPreviewFailed] = useState(false);
   const pct = Math.round(item.progress * 100);
   const tone = item.status === "failed" ? "text-danger" : item.status === "done" ? "text-ok" : "text-muted";
 
@@ -36,7 +37,7 @@ export function UploadItem({ item, findings, onRetry, onRemove, onTags }: Props)
     <li className="rounded-lg border border-line bg-surface p-2.5" data-testid="upload-item" data-status={item.status}>
       <div className="flex items-center gap-3">
         <div className="grid h-12 w-12 shrink-0 place-items-center overflow-hidden rounded-md bg-surface-2 text-muted">
-          {item.preview ? <img src={item.preview} alt="" className="h-full w-full object-cover" /> : <PhotoIcon />}
+          {item.preview && !previewFailed ? <img src={item.preview} alt="" className="h-full w-full object-cover" onError={() => setPreviewFailed(true)} /> : <PhotoIcon />}
         </div>
         <div className="min-w-0 flex-1">
           <div className="flex items-baseline justify-between gap-2">
