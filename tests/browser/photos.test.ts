@@ -4,7 +4,9 @@ import { mkdirSync } from "node:fs";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { launch, PHONE, DESK, signedInPage } from "../support/browser";
+import { eq } from "drizzle-orm";
 import { as } from "../support/api";
+import { db, t } from "../support/db";
 import { createCase } from "../support/factories";
 import { racewayJpeg, textAsJpeg } from "../support/photo-files";
 import { upload } from "../api/photos/helpers";
@@ -13,6 +15,7 @@ let browser: Browser;
 let caseNumber = "";
 let caseId = "";
 let otherPhotoId = "";
+let otherNumber = "";
 
 beforeAll(async () => {
   mkdirSync("/tmp/shots", { recursive: true });
@@ -21,9 +24,11 @@ beforeAll(async () => {
   caseNumber = c.number;
   caseId = c.id;
   // A similar case with a photo already on it, for the side-by-side view.
-  const other = await createCase({ status: "signed", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 3 }] });
+  const other = await createCase({ status: "bench", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 3 }] });
   const res = await upload(await as("analyst"), other.id, await racewayJpeg(40, { width: 1200, height: 900 }), "similar-spall.jpg", { component: "cup", row: "outboard", clockDeg: "60", caption: "Spall near the outboard rib" });
   otherPhotoId = res.body.photo!.id;
+  otherNumber = other.number;
+  await db.update(t.cases).set({ status: "signed", signedAt: new Date() }).where(eq(t.cases.id, other.id));
 });
 afterAll(async () => {
   await browser?.close();
@@ -96,8 +101,13 @@ test("compare a photo of this case with a similar case's photo", async () => {
   const mine = res.body.photos[0].id;
   await page.goto(`/photos/compare?a=${mine}`);
   await page.waitForSelector('section[aria-label="Choose photo B"]');
-  await page.fill('input[name="case"]', (await page.evaluate(() => "")) || "");
-  await page.goto(`/photos/compare?a=${mine}&b=${otherPhotoId}`);
+  // Photo B from another case, found by its number.
+  await page.fill('input[name="case"]', otherNumber);
+  await page.click("text=Show photos");
+  await page.waitForSelector('[data-testid="pick-photo"]');
+  await page.screenshot({ path: "/tmp/shots/photos-compare-pick-desk.png", fullPage: true });
+  await page.locator(`a[href$="b=${otherPhotoId}"]`).click();
+  await page.waitForURL(/b=/);
   await page.waitForSelector('[data-testid="compare-B"]');
   expect(await page.textContent('[data-testid="compare-B"]')).toContain("Spall near the outboard rib");
   await expect.poll(() => page.$$eval('[data-testid^="compare-"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).naturalWidth > 0))).toBe(true);

@@ -12,10 +12,11 @@ export async function twoToneJpeg(opts: { width?: number; height?: number; orien
   const height = opts.height ?? 200;
   const half = Math.floor(width / 2);
   const left = await sharp({ create: { width: half, height, channels: 3, background: { r: 220, g: 20, b: 20 } } }).png().toBuffer();
-  // A seed tints one corner pixel so each call can make a file with its own digest.
-  const dot = await sharp({ create: { width: 1, height: 1, channels: 3, background: { r: (opts.seed ?? 0) % 256, g: 200, b: 90 } } }).png().toBuffer();
+  // A seed colours a corner block so each seed makes a file with its own digest.
+  const seed = opts.seed ?? 0;
+  const dot = await sharp({ create: { width: 8, height: 8, channels: 3, background: { r: (seed * 53) % 256, g: (seed * 101) % 256, b: (seed * 29) % 256 } } }).png().toBuffer();
   let img = sharp({ create: { width, height, channels: 3, background: { r: 20, g: 40, b: 220 } } })
-    .composite([{ input: left, left: 0, top: 0 }, { input: dot, left: width - 1, top: height - 1 }])
+    .composite([{ input: left, left: 0, top: 0 }, { input: dot, left: width - 8, top: height - 8 }])
     .jpeg({ quality: 92 });
   const exif: Record<string, Record<string, string>> = { IFD0: { Make: "TestCam", Model: "Bench 1" } };
   if (opts.takenAt) exif.IFD2 = { DateTimeOriginal: opts.takenAt };
