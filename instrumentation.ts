@@ -7,4 +7,7 @@ export async function register() {
   // The weekly digest to managers: checked once an hour, sent when due.
   const { startDigestSchedule } = await import("./lib/digest/schedule");
   startDigestSchedule();
+  // Photo objects left without a row by a crash mid-upload: swept once an hour.
+  const { startPhotoSweepSchedule } = await import("./lib/photos/sweep-schedule");
+  startPhotoSweepSchedule();
 }

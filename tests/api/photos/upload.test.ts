@@ -7,7 +7,7 @@ import { as, type ApiClient } from "../../support/api";
 import { readObject } from "../../support/bucket";
 import { db, t } from "../../support/db";
 import { createCase } from "../../support/factories";
-import { pixelAt, smallPng, smallWebp, twoToneJpeg } from "../../support/photo-files";
+import { noisyJpeg, pixelAt, smallPng, smallWebp, twoToneJpeg } from "../../support/photo-files";
 import { footprint, upload } from "./helpers";
 
 let analyst: ApiClient;
@@ -72,6 +72,17 @@ describe("uploading a phone photo", () => {
     // The same file in another case is that case's evidence too.
     const other = await createCase({ status: "bench" });
     expect((await upload(analyst, other.id, file, "a.jpg")).status).toBe(201);
+  });
+
+  it("takes a full-size 12-megapixel phone JPEG through HTTP", async () => {
+    const c = await createCase({ status: "bench" });
+    const file = await noisyJpeg(4000, 3000, 80);
+    expect(file.length).toBeGreaterThan(4 * 1024 * 1024);
+    const res = await upload(analyst, c.id, file, "IMG_12MP.jpg");
+    expect(res.status).toBe(201);
+    expect([res.body.photo!.width, res.body.photo!.height]).toEqual([4000, 3000]);
+    const [row] = await db.select().from(t.photos).where(eq(t.photos.id, res.body.photo!.id));
+    expect((await readObject(row.originalKey)).equals(file)).toBe(true);
   });
 
   it("accepts PNG and WebP, judged by content even under a wrong name", async () => {
