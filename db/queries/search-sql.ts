@@ -27,58 +27,77 @@ function identifierPatterns(text: string): string[] {
   return [text, ...(split ? [`${split[1]} ${split[2]}`] : [])].map((p) => `%${likeEscape(p)}%`);
 }
 
-export function clauseSql(c: PreparedClause): SQL {
-  const parts: SQL[] = [];
-  if (c.kind === "identifier") {
-    for (const p of identifierPatterns(c.text)) parts.push(sql`s.identifiers ILIKE ${p}`);
-    parts.push(sql`${c.text} <% s.identifiers`);
-  }
-  if (c.tsquery) parts.push(sql`s.document @@ ${c.tsquery}::tsquery`);
-  if (c.codes.length) parts.push(sql`s.damage_codes && ${param(c.codes)}::text[]`);
-  if (c.components.length) parts.push(sql`s.components && ${param(c.components)}::text[]`);
-  return sql`(${sql.join(parts, sql` OR `)})`;
+/** A verbatim lexeme in tsquery syntax: codes and parts are stored as "dc:…" and "pc:…". */
+const lexeme = (text: string) => `'${text.replace(/\\/g, "\\\\").replace(/'/g, "''")}'`;
+
+/** One clause as a tsquery: its words, or a finding coded as what they name, or a part they name. */
+function clauseTsquery(c: PreparedClause): string {
+  const parts = [
+    ...(c.tsquery ? [`( ${c.tsquery} )`] : []),
+    ...c.codes.map((code) => lexeme(`dc:${code}`)),
+    ...c.components.map((part) => lexeme(`pc:${part}`)),
+  ];
+  return parts.length ? `( ${parts.join(" | ")} )` : "";
+}
+
+/** Every word clause at once, answered by the narrative index. */
+export function documentQuery(clauses: readonly PreparedClause[]): string {
+  return clauses.filter((c) => c.kind !== "identifier").map(clauseTsquery).filter(Boolean).join(" & ");
+}
+
+/** A serial, car or case number in part; or the same token in the narrative ("1/16"). */
+export function identifierSql(c: PreparedClause): SQL {
+  const patterns = identifierPatterns(c.text);
+  return sql`s.case_id IN (
+    SELECT i.case_id FROM case_search i WHERE i.identifiers ILIKE ANY(${param(patterns)}::text[])
+    ${c.tsquery ? sql`UNION SELECT d.case_id FROM case_search_text d WHERE d.document @@ ${c.tsquery}::tsquery` : sql``})`;
 }
 
 /** Text relevance, plus a lift for coded findings the query names and for serial or car hits. */
-export function rankSql(clauses: readonly PreparedClause[]): SQL {
-  const tsqueries = clauses.map((c) => c.tsquery).filter(Boolean);
+export function rankSql(clauses: readonly PreparedClause[], withText: boolean): SQL {
+  const tsqueries = clauses.filter((c) => c.kind !== "identifier").map((c) => c.tsquery).filter(Boolean);
   const codes = [...new Set(clauses.flatMap((c) => c.codes))];
   const components = [...new Set(clauses.flatMap((c) => c.components))];
   const pairs = components.flatMap((p) => codes.map((code) => `${p}|${code}`));
   const terms: SQL[] = [sql`0`];
-  if (tsqueries.length) terms.push(sql`ts_rank(s.document, ${tsqueries.map((q) => `( ${q} )`).join(" | ")}::tsquery, 1)`);
+  if (withText && tsqueries.length) terms.push(sql`ts_rank(s.document, ${tsqueries.map((q) => `( ${q} )`).join(" | ")}::tsquery, 1)`);
   if (codes.length) terms.push(sql`0.25 * (s.damage_codes && ${param(codes)}::text[])::int`);
   if (pairs.length) terms.push(sql`0.25 * (s.finding_keys && ${param(pairs)}::text[])::int`);
   for (const c of clauses.filter((x) => x.kind === "identifier")) {
-    terms.push(sql`CASE WHEN s.identifiers ILIKE ${identifierPatterns(c.text)[0]} THEN 1 ELSE word_similarity(${c.text}, s.identifiers) END`);
+    terms.push(sql`(s.identifiers ILIKE ${identifierPatterns(c.text)[0]})::int`);
   }
   return sql.join(terms, sql` + `);
 }
 
 export type FacetKey = MultiFacet | "severity";
 
-/** Each facet's filter on the matched set m; siteIds are the ids of the site codes asked for. */
-export function facetFilters(p: SearchParams, siteIds: string[]): Partial<Record<FacetKey, SQL>> {
+/** The column each facet counts by, on case_search rows under the given alias. */
+export function facetColumn(f: FacetKey, alias: string): SQL {
+  const column = { trigger: "trigger", cause: "primary_cause", class: "bearing_class", site: "site_id::text", status: "status", severity: "max_severity::text", code: "damage_codes", component: "components" }[f];
+  return sql.raw(`${alias}.${column}`);
+}
+
+export const ARRAY_FACETS: FacetKey[] = ["code", "component"];
+export const SCALAR_FACETS: FacetKey[] = ["trigger", "cause", "class", "site", "status", "severity"];
+
+/** Each facet's filter on case_search rows under the alias; siteIds are the ids of the site codes asked for. */
+export function facetFilters(p: SearchParams, siteIds: string[], alias = "s"): Partial<Record<FacetKey, SQL>> {
+  const a = sql.raw(alias);
   const out: Partial<Record<FacetKey, SQL>> = {};
-  if (p.trigger.length) out.trigger = sql`m.trigger = ANY(${param(p.trigger)}::text[])`;
-  if (p.cause.length) out.cause = sql`m.primary_cause = ANY(${param(p.cause)}::text[])`;
-  if (p.code.length) out.code = sql`m.damage_codes && ${param(p.code)}::text[]`;
-  if (p.component.length) out.component = sql`m.components && ${param(p.component)}::text[]`;
-  if (p.class.length) out.class = sql`m.bearing_class = ANY(${param(p.class)}::text[])`;
-  if (p.site.length) out.site = sql`m.site_id = ANY(${param(siteIds)}::uuid[])`;
-  if (p.status.length) out.status = sql`m.status = ANY(${param(p.status)}::text[])`;
-  if (p.severity !== undefined) out.severity = sql`m.max_severity >= ${p.severity}`;
+  if (p.trigger.length) out.trigger = sql`${a}.trigger = ANY(${param(p.trigger)}::text[])`;
+  if (p.cause.length) out.cause = sql`${a}.primary_cause = ANY(${param(p.cause)}::text[])`;
+  if (p.code.length) out.code = sql`${a}.damage_codes && ${param(p.code)}::text[]`;
+  if (p.component.length) out.component = sql`${a}.components && ${param(p.component)}::text[]`;
+  if (p.class.length) out.class = sql`${a}.bearing_class = ANY(${param(p.class)}::text[])`;
+  if (p.site.length) out.site = sql`${a}.site_id = ANY(${param(siteIds)}::uuid[])`;
+  if (p.status.length) out.status = sql`${a}.status = ANY(${param(p.status)}::text[])`;
+  if (p.severity !== undefined) out.severity = sql`${a}.max_severity >= ${p.severity}`;
   return out;
 }
 
-export function whereAll(filters: Partial<Record<FacetKey, SQL>>, except?: FacetKey): SQL {
-  const parts = Object.entries(filters).filter(([k]) => k !== except).map(([, v]) => v as SQL);
-  return parts.length ? sql.join(parts, sql` AND `) : sql`true`;
-}
-
-export function orderSql(sort: SearchParams["sort"], hasText: boolean): SQL {
-  if (sort === "oldest") return sql`m.sort_on ASC, m.created_at ASC`;
-  if (sort === "severity") return sql`m.max_severity DESC, m.sort_on DESC, m.created_at DESC`;
-  if (sort === "relevance" && hasText) return sql`m.rank DESC, m.sort_on DESC, m.created_at DESC`;
-  return sql`m.sort_on DESC, m.created_at DESC`;
+export function orderSql(sort: SearchParams["sort"], ranked: boolean): SQL {
+  if (sort === "oldest") return sql`s.sort_on ASC, s.created_at ASC`;
+  if (sort === "severity") return sql`s.max_severity DESC, s.sort_on DESC, s.created_at DESC`;
+  if (ranked) return sql`rank DESC, s.sort_on DESC, s.created_at DESC`;
+  return sql`s.sort_on DESC, s.created_at DESC`;
 }

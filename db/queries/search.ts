@@ -1,6 +1,6 @@
 // Case search: free text over the narrative, serials and car numbers, shop words through the
-// stored code lists, typo correction, facets with counts, one page of hits. One statement
-// finds the matching set once and derives the page and every facet count from it.
+// stored code lists, typo correction, facets with counts, one page of hits. The result set
+// is found once for the page, the total and most facet counts; chosen facets count apart.
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
@@ -9,7 +9,7 @@ import { PAGE_SIZE, type SearchParams } from "@/lib/search/query-schema";
 import { loadHits, type SearchHit } from "./search-hits";
 import { loadSearchLookups } from "./search-lookups";
 import { prepareClauses, usableClauses, type PreparedClause } from "./search-terms";
-import { clauseSql, facetFilters, orderSql, rankSql, scopeSql, whereAll, type FacetKey, type SearchViewer } from "./search-sql";
+import { ARRAY_FACETS, SCALAR_FACETS, documentQuery, facetColumn, identifierSql, facetFilters, orderSql, rankSql, scopeSql, type FacetKey, type SearchViewer } from "./search-sql";
 import { labelFacets, type FacetValue } from "./search-facets";
 
 export type { SearchViewer } from "./search-sql";
@@ -25,59 +25,71 @@ export interface SearchResult {
   readonly understood: { text: string; kind: string; codes: { code: string; label: string }[]; corrections: string[] }[];
 }
 
-const SCALAR: Partial<Record<FacetKey, string>> = {
-  trigger: "m.trigger", cause: "m.primary_cause", class: "m.bearing_class",
-  site: "m.site_id::text", status: "m.status", severity: "m.max_severity::text",
-};
-const ARRAYS: Partial<Record<FacetKey, string>> = { code: "m.damage_codes", component: "m.components" };
+type FacetRow = { facet: string; value: string | null; n: number };
+type Filters = Partial<Record<FacetKey, SQL>>;
+const and = (parts: SQL[]) => (parts.length ? sql.join(parts, sql` AND `) : sql`true`);
 
-function facetSql(filters: Partial<Record<FacetKey, SQL>>): SQL {
-  const passive = Object.keys(SCALAR).filter((f) => !filters[f as FacetKey]) as FacetKey[];
-  const col = (f: FacetKey) => sql.raw(SCALAR[f]!);
+/** Counts within the result set m: facets nobody has chosen from, plus the total. */
+function passiveFacetsSql(filters: Filters): SQL {
+  const passive = SCALAR_FACETS.filter((f) => !filters[f]);
+  const col = (f: FacetKey) => facetColumn(f, "m");
   const which = passive.map((f) => sql`WHEN GROUPING(${col(f)}) = 0 THEN ${f}`);
   const branches: SQL[] = [sql`
     SELECT ${passive.length ? sql`CASE ${sql.join(which, sql` `)} ELSE 'total' END` : sql`'total'`} AS facet,
       ${passive.length ? sql`COALESCE(${sql.join(passive.map(col), sql`, `)})` : sql`NULL::text`} AS value, count(*)::int AS n
-    FROM m WHERE ${whereAll(filters)}
-    GROUP BY GROUPING SETS (${sql.join([...passive.map((f) => sql`(${col(f)})`), sql`()`], sql`, `)})`];
-  for (const f of Object.keys(SCALAR) as FacetKey[]) {
-    if (filters[f]) branches.push(sql`SELECT ${f}, ${col(f)}, count(*)::int FROM m WHERE ${whereAll(filters, f)} GROUP BY 2`);
-  }
-  for (const [f, column] of Object.entries(ARRAYS) as [FacetKey, string][]) {
-    branches.push(sql`SELECT ${f}, v, count(*)::int FROM m, unnest(${sql.raw(column)}) AS v WHERE ${whereAll(filters, f)} GROUP BY 2`);
+    FROM m GROUP BY GROUPING SETS (${sql.join([...passive.map((f) => sql`(${col(f)})`), sql`()`], sql`, `)})`];
+  for (const f of ARRAY_FACETS.filter((f) => !filters[f])) {
+    branches.push(sql`SELECT ${f}, v, count(*)::int FROM (SELECT unnest(${facetColumn(f, "m")}) AS v FROM m) x GROUP BY 2`);
   }
   return sql.join(branches, sql` UNION ALL `);
 }
 
-type Row = { facets: { facet: string; value: string | null; n: number }[]; page: { id: string; rank: number }[] };
+/** A chosen facet counts over everything else asked, so more of its values can be added. */
+function activeFacetSql(f: FacetKey, from: SQL, base: SQL[], filters: Filters): SQL {
+  const others = Object.entries(filters).filter(([k]) => k !== f).map(([, v]) => v as SQL);
+  const where = and([...base, ...others]);
+  return ARRAY_FACETS.includes(f)
+    ? sql`SELECT ${f} AS facet, v AS value, count(*)::int AS n FROM (SELECT unnest(${facetColumn(f, "s")}) AS v FROM ${from} WHERE ${where}) x GROUP BY 2`
+    : sql`SELECT ${f} AS facet, ${facetColumn(f, "s")} AS value, count(*)::int AS n FROM ${from} WHERE ${where} GROUP BY 2`;
+}
 
 export async function searchCases(params: SearchParams, viewer: SearchViewer): Promise<SearchResult> {
   const lookups = await loadSearchLookups();
   const prepared: PreparedClause[] = usableClauses(await prepareClauses(parseSearchText(params.q, lookups.damageEntries)));
   const hasText = prepared.length > 0;
+  const docQuery = documentQuery(prepared);
   const siteIds = lookups.sites.filter((s) => params.site.includes(s.code)).map((s) => s.id);
-  const filters = facetFilters(params, siteIds);
+  const filters = facetFilters(params, siteIds, "s");
   const base = [
     scopeSql(viewer),
-    ...prepared.map(clauseSql),
+    docQuery ? sql`s.document @@ ${docQuery}::tsquery` : null,
+    ...prepared.filter((c) => c.kind === "identifier").map(identifierSql),
     params.from ? sql`s.sort_on >= ${params.from}::date` : null,
     params.to ? sql`s.sort_on <= ${params.to}::date` : null,
   ].filter((x): x is SQL => x !== null);
+  // Word searches read the row that carries the narrative; the rest the narrow one.
+  const from = docQuery ? sql`case_search_text s` : sql`case_search s`;
 
-  const { rows } = await db.execute<Row>(sql`
+  const where = and([...base, ...(Object.values(filters) as SQL[])]);
+  const ranked = hasText && params.sort === "relevance";
+
+  // Three kinds of statement at once, each on its own connection: the result set with the
+  // total and the unchosen facets; the page (ranked, or straight off the date index); and
+  // each chosen facet counted over everything else asked.
+  const counts = db.execute<{ facets: FacetRow[] }>(sql`
     WITH m AS MATERIALIZED (
-      SELECT s.case_id, s.status, s.trigger, s.primary_cause, s.bearing_class, s.site_id, s.damage_codes, s.components,
-        s.max_severity, s.sort_on, s.created_at, ${hasText ? rankSql(prepared) : sql`0`}::real AS rank
-      FROM case_search s WHERE ${base.length ? sql.join(base, sql` AND `) : sql`true`}
+      SELECT s.status, s.trigger, s.primary_cause, s.bearing_class, s.site_id, s.damage_codes, s.components, s.max_severity
+      FROM ${from} WHERE ${where}
     ),
-    facets AS (${facetSql(filters)}),
-    page AS (
-      SELECT m.case_id AS id, m.rank FROM m WHERE ${whereAll(filters)}
-      ORDER BY ${orderSql(params.sort, hasText)} LIMIT ${PAGE_SIZE} OFFSET ${(params.page - 1) * PAGE_SIZE}
-    )
-    SELECT (SELECT coalesce(json_agg(facets), '[]') FROM facets) AS facets,
-      (SELECT coalesce(json_agg(page), '[]') FROM page) AS page`);
-  const { facets: facetRows, page } = rows[0];
+    facets AS (${passiveFacetsSql(filters)})
+    SELECT coalesce(json_agg(facets), '[]') AS facets FROM facets`);
+  const pageRows = db.execute<{ id: string; rank: number }>(sql`
+    SELECT s.case_id AS id, ${ranked ? rankSql(prepared, docQuery !== "") : sql`0`}::real AS rank
+    FROM ${from} WHERE ${where}
+    ORDER BY ${orderSql(params.sort, ranked)} LIMIT ${PAGE_SIZE} OFFSET ${(params.page - 1) * PAGE_SIZE}`);
+  const active = (Object.keys(filters) as FacetKey[]).map((f) => db.execute<FacetRow>(activeFacetSql(f, from, base, filters)));
+  const [{ rows: countRows }, { rows: page }, ...activeRows] = await Promise.all([counts, pageRows, ...active]);
+  const facetRows = [...countRows[0].facets, ...activeRows.flatMap((r) => r.rows)];
 
   return {
     total: facetRows.find((r) => r.facet === "total")?.n ?? 0,

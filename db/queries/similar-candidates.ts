@@ -9,7 +9,7 @@ import type { SimilarityCase } from "@/lib/similarity";
 import { SIMILARITY_WEIGHTS as W } from "@/lib/similarity";
 import { scopeSql, type SearchViewer } from "./search-sql";
 
-export const CANDIDATE_LIMIT = 300;
+export const CANDIDATE_LIMIT = 150;
 
 export type TargetKeys = {
   readonly caseId: string;
