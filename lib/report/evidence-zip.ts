@@ -5,7 +5,9 @@ import { createHash } from "node:crypto";
 import { PassThrough, Readable } from "node:stream";
 import * as archiverModule from "archiver";
 import type { PhotoObjectKeys } from "@/db/queries/report";
-import { getObject } from "@/lib/storage/s3";
+import { HeadObjectCommand } from "@aws-sdk/client-s3";
+import { HttpError } from "@/lib/http/errors";
+import { bucket, getObject, s3 } from "@/lib/storage/s3";
 import { formatDateTime } from "./format";
 import { evidencePhotoPath, evidenceReadme, sha256Sums } from "./evidence-manifest";
 import type { CaseReport } from "./types";
@@ -16,6 +18,15 @@ type Factory = (format: "zip", options: archiverModule.ZipOptions) => ZipArchive
 const archiver: Factory = ((archiverModule as unknown as { default?: Factory }).default ?? (archiverModule as unknown as Factory));
 
 const sha256 = (b: Buffer) => createHash("sha256").update(b).digest("hex");
+
+/** Refuses up front when an original is missing, rather than starting a download that cannot finish. */
+export async function assertOriginalsStored(report: CaseReport, objects: PhotoObjectKeys[]): Promise<void> {
+  for (const photo of report.photos) {
+    const key = objects.find((o) => o.id === photo.id)?.originalKey;
+    const found = key ? await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key })).then(() => true, () => false) : false;
+    if (!found) throw new HttpError(500, "evidence-incomplete", `The original of photo ${photo.number} (${photo.fileName || photo.caption}) is missing from storage, so the evidence bundle would be incomplete. Tell your administrator.`);
+  }
+}
 
 export function evidenceZipStream(report: CaseReport, pdf: Buffer, objects: PhotoObjectKeys[], madeBy: string): ReadableStream<Uint8Array> {
   const zip = archiver("zip", { zlib: { level: 6 } });

@@ -6,7 +6,9 @@ import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ApiClient, as } from "../../support/api";
 import { pdfPages } from "../../support/pdf-text";
-import { reportCases, sha256 } from "./report-fixture";
+import { deleteObject } from "@/lib/storage/s3";
+import { createCase } from "../../support/factories";
+import { addPhoto, reportCases, sha256 } from "./report-fixture";
 
 let cases: Awaited<ReturnType<typeof reportCases>>;
 const dir = mkdtempSync(path.join(tmpdir(), "tearline-evidence-"));
@@ -58,5 +60,15 @@ describe("GET /api/cases/:id/evidence.zip", () => {
     const draft = await (await as("manager")).get(`/api/cases/${cases.draft.id}/evidence.zip`);
     expect(draft.status).toBe(200);
     expect(Buffer.from(await draft.arrayBuffer()).subarray(0, 2).toString()).toBe("PK");
+  });
+
+  it("refuses with a clear message, before any download starts, when an original is missing from storage", async () => {
+    const c = await createCase({ status: "bench" });
+    const photo = await addPhoto(c.id, { component: "cup", fileName: "lost.jpg", rgb: [10, 10, 10] });
+    await deleteObject(`cases/${c.id}/${photo.digest}/original`);
+    const res = await (await as("engineer")).json<{ error: string; code: string }>("GET", `/api/cases/${c.id}/evidence.zip`);
+    expect(res.status).toBe(500);
+    expect(res.body.code).toBe("evidence-incomplete");
+    expect(res.body.error).toContain("photo 1 (lost.jpg)");
   });
 });

@@ -1,11 +1,12 @@
 // GET /api/cases/:id/evidence.zip - report, original photos and their SHA-256 list, for handing evidence over
 import { withRole } from "@/lib/http/handler";
-import { evidenceZipStream } from "@/lib/report/evidence-zip";
+import { assertOriginalsStored, evidenceZipStream } from "@/lib/report/evidence-zip";
 import { caseReportPdf, readableCaseReport, reportFileName } from "@/lib/report/report-service";
 
 export const GET = withRole<{ id: string }>("case:export", async ({ params, user }) => {
   const loaded = await readableCaseReport({ id: params.id }, user);
   const { report, pdf } = await caseReportPdf(loaded);
+  await assertOriginalsStored(report, loaded.objects);
   const name = reportFileName(report, "zip").replace(/-(draft-)?report\.zip$/, (_m, d: string | undefined) => `-${d ?? ""}evidence.zip`);
   return new Response(evidenceZipStream(report, pdf, loaded.objects, `${user.name} <${user.email}>`), {
     status: 200,
