@@ -82,7 +82,8 @@ export type ClusterItem = {
 
 export type ClusterTally = { keyKind: ClusterKey; windowDays: number; minSize: number; total: number; items: ClusterItem[] };
 
-export type DamageTally = { sectorDeg: number; sectors: SectorCell[]; placed: number; unplaced: number; cases: number };
+/** Findings on the cup and cone raceways with a clock position, summed into clock sectors. */
+export type DamageTally = { sectorDeg: number; sectors: SectorCell[]; placed: number };
 
 export type Totals = { removals: number; signed: number; confirmed: number; noDefect: number; outcomeNotRecorded: number };
 

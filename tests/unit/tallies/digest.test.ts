@@ -29,7 +29,7 @@ function tallies(): TalliesData {
     monthly: monthlyTally([{ month: "2026-03", signed: true, cause: "seal", count: 3 }], "2025-04", "2026-03", "2026-03"),
     causeSite: causeSiteTally(cells, (id) => names[id]),
     clusters: { keyKind: "site", windowDays: 30, minSize: 3, total: 0, items: [] },
-    damage: { sectorDeg: 10, sectors: [], placed: 0, unplaced: 0, cases: 0 },
+    damage: { sectorDeg: 10, sectors: [], placed: 0 },
   };
 }
 

@@ -70,7 +70,7 @@ export function ClustersList({ tally }: { tally: ClusterTally }) {
                   <Link href={`/cases/${n}`} className="inline-flex h-7 items-center rounded-md bg-surface-2 px-2 text-xs font-medium text-ink-2 ring-1 ring-line tabular hover:text-accent hover:ring-accent">{n}</Link>
                 </li>
               ))}
-              {c.size > 12 ? <li className="inline-flex h-7 items-center px-1 text-xs text-muted">and {c.size - 12} more</li> : null}
+              {c.size > 12 ? <li className="inline-flex h-7 items-center px-1 text-xs text-muted">newest 12 of {c.size}</li> : null}
             </ul>
           </li>
         ))}

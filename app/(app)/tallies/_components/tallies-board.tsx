@@ -127,8 +127,8 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
           <ClustersList tally={data.clusters} />
         </ChartCard>
 
-        <ChartCard title="Where damage sits" subtitle={`Findings on the raceways of ${data.damage.cases.toLocaleString("en-US")} cases · ${SIGNED}`} imageSubtitle={`Findings summed over ${data.damage.cases} cases`} table={damageTable(data)} empty={data.damage.placed ? null : "No findings with a clock position on the cup or cones match these filters."}>
-          <DamageMap title="Damage over the filtered cases" sectors={data.damage.sectors} sectorDeg={data.damage.sectorDeg} caption={data.damage.unplaced ? `${data.damage.unplaced.toLocaleString("en-US")} findings elsewhere (rollers, seals, or no clock position) are not drawn.` : undefined} />
+        <ChartCard title="Where damage sits" subtitle={`${data.damage.placed.toLocaleString("en-US")} findings on the raceways of ${data.totals.signed.toLocaleString("en-US")} cases · ${SIGNED}`} imageSubtitle={`${data.damage.placed} findings summed over ${data.totals.signed} cases`} table={damageTable(data)} empty={data.damage.placed ? null : "No findings with a clock position on the cup or cones match these filters."}>
+          <DamageMap title="Damage over the filtered cases" sectors={data.damage.sectors} sectorDeg={data.damage.sectorDeg} caption="Findings on rollers, cages, seals and other parts, or without a clock position, are not drawn." />
         </ChartCard>
       </div>
     </>
