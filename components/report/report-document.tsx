@@ -152,7 +152,11 @@ export function ReportDocument({ r }: { r: CaseReport }) {
         </ReportSection>
 
         <ReportSection n={next()} title="Damage map">
-          <ReportDamageMap arcs={r.damageArcs} offMap={r.offMap} />
+          {r.components.some((c) => c.findings.length > 0) ? (
+            <ReportDamageMap arcs={r.damageArcs} offMap={r.offMap} />
+          ) : (
+            <p className="text-[12.5px] text-muted">No teardown findings yet; the map fills in as findings with a clock position are recorded.</p>
+          )}
         </ReportSection>
 
         <ReportSection n={next()} title="Verdict">

@@ -149,8 +149,10 @@ export function renderReportPdf(r: CaseReport, images: PhotoImages = new Map()):
   if (r.components.length === 0) w.muted("No teardown findings yet.");
   for (const c of r.components) componentBlock(w, c, images);
 
-  w.section("Damage map", 200);
-  drawDamageMap(w, r);
+  const anyFindings = r.components.some((c) => c.findings.length > 0);
+  w.section("Damage map", anyFindings ? 200 : 30);
+  if (anyFindings) drawDamageMap(w, r);
+  else w.muted("No teardown findings yet; the map fills in as findings with a clock position are recorded.");
 
   w.section("Verdict", 120);
   w.facts(r.verdict.rows, 2);
@@ -164,11 +166,11 @@ export function renderReportPdf(r: CaseReport, images: PhotoImages = new Map()):
     w.paragraph(r.verdict.notes);
   }
 
-  w.section("Related cases");
+  w.section("Related cases", r.related.length ? 60 : 24);
   if (r.related.length) w.table([{ title: "Case", width: 90 }, { title: "Stage", width: 100 }, { title: "Root cause", width: 130 }, { title: "Removed", width: 70 }, { title: "Link note", width: w.width - 390 }], r.related.map((x) => [x.number, x.status, x.cause, x.removedOn, x.note || "—"]));
   else w.muted("No related cases are linked.");
 
-  w.section("Photo register");
+  w.section("Photo register", r.photos.length ? 60 : 24);
   if (r.photos.length) {
     w.muted("Originals are kept byte for byte; the SHA-256 of each lets anyone check a copy. The evidence ZIP holds the files and the same list.");
     w.gap(3);
