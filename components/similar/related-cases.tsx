@@ -11,9 +11,9 @@ import type { CaseLinkItem } from "@/db/queries/case-links";
 function Unlink({ caseId, link, onDone }: { caseId: string; link: CaseLinkItem; onDone: () => void }) {
   const [confirm, setConfirm] = useState(false);
   const [error, setError] = useState<string | null>(null);
-  if (!confirm) return <button type="button" onClick={() => setConfirm(true)} className="h-9 rounded-lg px-2.5 text-xs font-medium text-muted hover:bg-surface-2 hover:text-danger" data-testid="unlink">Unlink</button>;
+  if (!confirm) return <button type="button" onClick={() => setConfirm(true)} className="h-9 self-start rounded-lg border border-line px-2.5 text-xs font-medium text-muted hover:bg-surface-2 hover:text-danger" data-testid="unlink">Unlink</button>;
   return (
-    <span className="flex items-center gap-1">
+    <span className="flex flex-wrap items-center gap-1 self-start">
       <button type="button" className="h-9 rounded-lg bg-danger px-2.5 text-xs font-semibold text-white" data-testid="confirm-unlink"
         onClick={() => unlinkCase(caseId, link.id).then(onDone, (e: Error) => setError(e.message))}>Unlink {link.number}</button>
       <button type="button" onClick={() => setConfirm(false)} className="h-9 rounded-lg px-2 text-xs text-muted hover:bg-surface-2">Keep</button>
@@ -45,7 +45,7 @@ function AddLink({ caseId, onDone }: { caseId: string; onDone: () => void }) {
   return (
     <form className="mt-4 flex flex-col gap-2 border-t border-line pt-4 sm:flex-row" onSubmit={(e) => { e.preventDefault(); if (number.trim()) void submit(); }}>
       <input value={number} onChange={(e) => setNumber(e.target.value)} placeholder="Case number, e.g. TL-26-00042" aria-label="Case number to link" className={`${input} sm:w-56`} />
-      <input value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} placeholder="Note (optional)" aria-label="Note on the link" className={`${input} flex-1`} />
+      <input value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} placeholder="Note (optional)" aria-label="Note on the link" className={`${input} w-full sm:flex-1`} />
       <button type="submit" disabled={busy || !number.trim()} className="h-10 rounded-lg border border-line-strong bg-surface px-4 text-sm font-medium text-ink-2 hover:bg-surface-2 disabled:opacity-50">Link case</button>
       {error ? <p role="alert" className="text-sm text-danger sm:basis-full">{error}</p> : null}
     </form>

@@ -40,7 +40,7 @@ function LinkControl({ caseId, item, onLinked }: { caseId: string; item: Similar
   return (
     <form className="flex w-full flex-col gap-1.5 sm:flex-row sm:items-center" onSubmit={(e) => { e.preventDefault(); void submit(); }}>
       <input value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} autoFocus placeholder="Why are they related? (optional)" aria-label="Note on the link"
-        className="h-9 min-w-0 flex-1 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent" />
+        className="h-9 w-full min-w-0 sm:flex-1 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent" />
       <div className="flex gap-1.5">
         <button type="submit" disabled={busy} className="h-9 rounded-lg bg-accent px-3 text-xs font-semibold text-accent-ink disabled:opacity-50">{busy ? "Linking…" : "Link"}</button>
         <button type="button" onClick={() => setOpen(false)} className="h-9 rounded-lg px-3 text-xs text-muted hover:bg-surface-2">Cancel</button>

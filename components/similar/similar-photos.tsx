@@ -21,7 +21,7 @@ export function SimilarPhotos({ item, thisNumber }: { item: SimilarCaseItem; thi
     return (
       <div className="w-full sm:w-56" data-testid="photo-pair">
         <div className="grid grid-cols-2 gap-1.5">
-          <Thumb id={pair.a} caption={`${pair.componentLabel} · ${thisNumber}`} />
+          <Thumb id={pair.a} caption={`${pair.componentLabel} · this case (${thisNumber})`} />
           <Thumb id={pair.b} caption={`${pair.componentLabel} · ${item.number}`} />
         </div>
         <Link href={`/photos/compare?a=${encodeURIComponent(pair.a)}&b=${encodeURIComponent(pair.b)}`} className="mt-1 inline-block text-xs font-medium text-accent hover:underline" data-testid="compare-photos">
