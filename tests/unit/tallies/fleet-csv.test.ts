@@ -29,6 +29,7 @@ describe("fleet list upload", () => {
       "A4,G,2026-03-01,2026-01-31,,",
       "A5,G,,2026-01-31,,",
       "A6,G,,2026-01-31,,12.5",
+      "A7,G,,31/01/2026,3,",
     ].join("\n");
     const r = parseFleetCsv(csv);
     expect(r.ok).toBe(false);
@@ -40,8 +41,9 @@ describe("fleet list upload", () => {
       { row: 6, column: "mounted_on", message: "mounted_on is after as_of" },
       { row: 7, column: "service_months", message: "give service_months, service_miles or mounted_on" },
       { row: 8, column: "service_miles", message: "service_miles must be a whole number" },
+      { row: 9, column: "as_of", message: "write the date as YYYY-MM-DD" },
     ]);
-    expect(r.errorCount).toBe(6);
+    expect(r.errorCount).toBe(7);
   });
 
   it("counts a quoted field with a line break as one row", () => {

@@ -29,7 +29,7 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
   return (
     <>
       <HeadlineTiles data={data} />
-      <div className="grid items-start gap-5 lg:grid-cols-2">
+      <div className="grid grid-cols-1 items-start gap-5 lg:grid-cols-2">
         <ChartCard title="Root causes" subtitle={`${SIGNED} · ${scopeWords}`} imageSubtitle={`${SIGNED} · ${scopeWords}`} table={paretoTable(data)} empty={noVerdicts} footer={paretoHeadline(data.pareto) || undefined}>
           <ParetoChart rows={data.pareto} />
         </ChartCard>

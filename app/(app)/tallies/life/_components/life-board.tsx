@@ -30,7 +30,7 @@ export function LifeBoard({ data, canUpload, scopeWords }: { data: LifeData; can
   const suspensionsFromFleet = data.fleet.used;
 
   return (
-    <div className="grid items-start gap-5 xl:grid-cols-[minmax(0,1.15fr)_minmax(0,1fr)]">
+    <div className="grid grid-cols-1 items-start gap-5 xl:grid-cols-[minmax(0,1.15fr)_minmax(0,1fr)]">
       <div className="space-y-5">
         <ChartCard
           title={s ? `${s.label}: Weibull probability plot` : "Weibull probability plot"}
