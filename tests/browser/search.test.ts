@@ -62,6 +62,19 @@ test("on a phone the hits fit the screen and the filters open as a drawer", asyn
   await page.context().close();
 });
 
+test("the damage finder picks a code out of a long list by a shop word", async () => {
+  const wide = markerWord();
+  const codes = ["fatigue.surface", "corrosion.moisture", "corrosion.fretting", "electrical.arc", "deformation.debris", "cage.broken", "seal.leaking"];
+  for (const code of codes) await caseWith(wide, { notes: "Bench check.", findings: [{ component: "cup", damageCode: code, severity: 2 }] });
+  const page = await signedInPage(browser, "engineer", DESK);
+  await page.goto(`/search?q=${wide}`);
+  await page.waitForSelector('[data-testid="damage-finder"]');
+  await page.fill('[data-testid="damage-finder"]', "rust");
+  // "rust" is a shop word for water etch (common practice); fretting rust also names fretting.
+  await expect.poll(async () => (await page.locator('[data-testid="facet-panel"] section:has([data-testid="damage-finder"]) [data-testid="facet-value"]').allTextContents()).join("|")).toMatch(/^Water etch1/);
+  await page.context().close();
+});
+
 test("a search with nothing to find suggests what to try", async () => {
   const page = await signedInPage(browser, "inspector", PHONE);
   await page.goto(`/search?q=brinelling+${marker}`);

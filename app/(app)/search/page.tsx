@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
+import { listCodeEntries } from "@/db/queries/code-entries";
 import { searchCases } from "@/db/queries/search";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
@@ -26,7 +27,8 @@ export async function generateMetadata({ searchParams }: { searchParams: Promise
 export default async function SearchPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser("case:read");
   const { params, dropped } = readSearchParams(await searchParams);
-  const result = await searchCases(params, user);
+  const [result, damage] = await Promise.all([searchCases(params, user), listCodeEntries("damage", { includeRetired: true })]);
+  const damageEntries = damage.map((d) => ({ code: d.code, label: d.label, synonyms: d.synonyms, retired: d.retiredAt !== null }));
   const criteria = hasCriteria(params);
   const scope = can(user.role, "case:read-all") ? "all sites" : "your shop's cases and the ones you filed";
 
@@ -39,7 +41,7 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
       ) : null}
       <div className="mt-5 grid gap-5 lg:grid-cols-[260px_minmax(0,1fr)] lg:items-start">
         <FilterDrawer active={activeFilterCount(params)} total={result.total}>
-          <FacetPanel params={params} facets={result.facets} />
+          <FacetPanel params={params} facets={result.facets} damageEntries={damageEntries} />
         </FilterDrawer>
         <div className="min-w-0">
           {!criteria ? <SearchIntro /> : null}
