@@ -59,13 +59,8 @@ export function ReportDocument({ r }: { r: CaseReport }) {
   let n = 0;
   const next = () => ++n;
   return (
-    <article className="tl-report relative mx-auto max-w-[8.5in] overflow-hidden rounded-lg bg-surface text-ink shadow-[0_1px_3px_rgba(15,23,42,.12),0_8px_30px_rgba(15,23,42,.08)]" data-revision={r.revision.kind}>
-      {!signed ? (
-        <div className="tl-watermark" aria-hidden>
-          <span>DRAFT — NOT SIGNED</span>
-        </div>
-      ) : null}
-      <header className="tl-band bg-[#0f172a] px-6 pb-5 pt-6 text-white sm:px-10">
+    <article className="tl-report relative mx-auto max-w-[8.5in] overflow-x-clip rounded-lg bg-surface text-ink shadow-[0_1px_3px_rgba(15,23,42,.12),0_8px_30px_rgba(15,23,42,.08)]" data-revision={r.revision.kind}>
+      <header className="tl-band rounded-t-lg bg-[#0f172a] px-6 pb-5 pt-6 text-white sm:px-10">
         <div className="flex flex-wrap items-start justify-between gap-4">
           <div>
             <p className="text-[10.5px] font-bold uppercase tracking-[0.25em] text-amber-400">Tearline case report</p>
@@ -87,6 +82,11 @@ export function ReportDocument({ r }: { r: CaseReport }) {
         </div>
       </header>
       <div className="h-[3px] bg-amber-400" />
+      {!signed ? (
+        <div className="tl-watermark" aria-hidden>
+          <span>DRAFT — NOT SIGNED</span>
+        </div>
+      ) : null}
 
       <div className="relative px-6 py-6 sm:px-10 sm:py-8">
         <Facts rows={r.headline} />
