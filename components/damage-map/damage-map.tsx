@@ -34,8 +34,8 @@ const LOAD_ZONE_HALF = 60;
 
 const R = 78;
 const DISCS = [
-  { row: "inboard", cx: 104, cup: "cup-inboard", cone: "cone-inboard" },
-  { row: "outboard", cx: 296, cup: "cup-outboard", cone: "cone-outboard" },
+  { row: "inboard", cx: 106, cup: "cup-inboard", cone: "cone-inboard" },
+  { row: "outboard", cx: 324, cup: "cup-outboard", cone: "cone-outboard" },
 ] as const;
 // Rounded so the server's and the browser's trigonometry draw identical markup.
 const at = (cx: number, r: number, deg: number) => clockPoint(cx, CY, r, deg).map((v) => Math.round(v * 100) / 100);
@@ -99,7 +99,7 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
     : `${title}: ${placed} findings placed on the cup and cone raceways${offMap ? `, ${offMap} elsewhere` : ""}`;
   return (
     <figure className={`min-w-0 ${className}`}>
-      <svg viewBox="0 0 400 262" className="h-auto w-full max-w-[34rem]" role="img" aria-label={label} data-export data-damage-map>
+      <svg viewBox="0 0 430 262" className="h-auto w-full max-w-[36rem]" role="img" aria-label={label} data-export data-damage-map>
         <title>{title}</title>
         {DISCS.map((d) => <Disc key={d.row} cx={d.cx} row={d.row} />)}
         {summed
@@ -130,7 +130,7 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
         {DISCS.map((d) => (
           <text key={d.row} x={Math.round(d.cx + R * 0.5)} y={Math.round(CY - R * 1.1)} fontSize={8} fill="#b45309">load zone</text>
         ))}
-        <g transform="translate(20 236)">
+        <g transform="translate(24 236)">
           {summed
             ? [
                 <text key="l" x={0} y={9} fontSize={9} fill="var(--muted, #64748b)">Fewer</text>,
@@ -138,7 +138,7 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
                 <text key="r" x={34 + HEAT.length * 22 + 4} y={9} fontSize={9} fill="var(--muted, #64748b)">{`more findings (most: ${max})`}</text>,
               ]
             : SEVERITY_COLOURS.map((c, i) => (
-                <g key={c} transform={`translate(${i * 74} 0)`}>
+                <g key={c} transform={`translate(${i * 80} 0)`}>
                   <rect x={0} y={1} width={12} height={10} rx={2} fill={c} />
                   <text x={16} y={9.5} fontSize={9} fill="var(--muted, #64748b)">{`${i} ${SEVERITY_WORDS[i]}`}</text>
                 </g>

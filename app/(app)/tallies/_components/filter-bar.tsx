@@ -31,6 +31,9 @@ function presetOf(f: TallyFilters, current: string): string {
 
 const label = "mb-1 block text-xs font-medium text-muted";
 
+/** A value from a shared link that the list does not hold (an admin-added code, a free "other" class) still shows. */
+const withCurrent = (options: Option[], value: string | undefined) => (value && !options.some((o) => o.value === value) ? [...options, { value, label: value }] : options);
+
 export function FilterBar({ filters, sites, classes, triggers, siteLimit, currentMonth }: Props) {
   const router = useRouter();
   const pathname = usePathname();
@@ -81,7 +84,7 @@ export function FilterBar({ filters, sites, classes, triggers, siteLimit, curren
           ) : (
             <Select id="f-site" value={filters.site ?? ""} onChange={(e) => go({ site: e.target.value || undefined })}>
               <option value="">All sites</option>
-              {sites.map((s) => <option key={s.value} value={s.value}>{s.label}</option>)}
+              {withCurrent(sites, filters.site).map((s) => <option key={s.value} value={s.value}>{s.label}</option>)}
             </Select>
           )}
         </div>
@@ -89,14 +92,14 @@ export function FilterBar({ filters, sites, classes, triggers, siteLimit, curren
           <label className={label} htmlFor="f-class">Bearing class</label>
           <Select id="f-class" value={filters.class ?? ""} onChange={(e) => go({ class: e.target.value || undefined })}>
             <option value="">All classes</option>
-            {classes.map((c) => <option key={c.value} value={c.value}>{c.label}</option>)}
+            {withCurrent(classes, filters.class).map((c) => <option key={c.value} value={c.value}>{c.label}</option>)}
           </Select>
         </div>
         <div className="col-span-2 md:col-span-1">
           <label className={label} htmlFor="f-trigger">Trigger</label>
           <Select id="f-trigger" value={filters.trigger ?? ""} onChange={(e) => go({ trigger: e.target.value || undefined })}>
             <option value="">All triggers</option>
-            {triggers.map((t) => <option key={t.value} value={t.value}>{t.label}</option>)}
+            {withCurrent(triggers, filters.trigger).map((t) => <option key={t.value} value={t.value}>{t.label}</option>)}
           </Select>
         </div>
         <div className="col-span-2 flex items-end justify-between gap-3 md:col-span-4 xl:col-span-1 xl:justify-end">

@@ -18,7 +18,10 @@ export function HeadlineTiles({ data }: { data: TalliesData }) {
   const t = data.totals;
   const o = data.byTrigger.overall;
   const recorded = t.confirmed + t.noDefect;
-  const alarms = outOfControl(data.monthly).filter((a) => a.side === "above");
+  // Signals worth a look: months of the last year above a c-chart upper limit, in any series.
+  const complete = data.monthly.months.filter((m) => m !== data.monthly.partialMonth);
+  const lastYear = new Set(complete.slice(-12));
+  const alarms = outOfControl(data.monthly).filter((a) => a.side === "above" && lastYear.has(a.month));
   const n = (x: number) => x.toLocaleString("en-US");
   return (
     <div className="mb-5 grid grid-cols-2 gap-3 lg:grid-cols-5" data-headline>
@@ -26,7 +29,7 @@ export function HeadlineTiles({ data }: { data: TalliesData }) {
       <Tile label="Signed verdicts" value={n(t.signed)} note={t.removals ? `${percent(t.signed / t.removals)} of removals` : undefined} />
       <Tile label="Confirmed at teardown" value={percent(o.p)} note={o.p === null ? "no outcomes yet" : `95% interval ${percentRange(o.lower, o.upper)} · ${n(recorded)} teardowns`} tone="ok" />
       <Tile label="No defect found" value={recorded ? percent(t.noDefect / recorded) : "–"} note={`${n(t.noDefect)} removals not confirmed`} tone={t.noDefect ? "danger" : "ink"} />
-      <Tile label="Months above limit" value={n(alarms.length)} note="any series, c-chart" tone={alarms.length ? "danger" : "ink"} />
+      <Tile label="Above control limit" value={n(alarms.length)} note="months × series, latest 12 months" tone={alarms.length ? "danger" : "ink"} />
     </div>
   );
 }
