@@ -40,8 +40,10 @@ export function CaseExtras({ c, user }: { c: CaseDetail; user: CurrentUser }) {
         <Card title="Report and evidence">
           <div className="flex flex-wrap gap-2">
             <Link href={`/cases/${c.number}/report`} className={buttonClass({ variant: "secondary" })}>Printable report</Link>
-            <a href={`/api/cases/${c.id}/report.pdf`} className={buttonClass({ variant: "secondary" })}>Download PDF</a>
-            <a href={`/api/cases/${c.id}/evidence.zip`} className={buttonClass({ variant: "secondary" })}>Evidence ZIP (report, original photos, SHA-256 list)</a>
+            <a href={`/api/cases/${c.id}/report.pdf?download=1`} className={buttonClass({ variant: "secondary" })}>Download PDF</a>
+            {can(user.role, "case:export") ? (
+              <a href={`/api/cases/${c.id}/evidence.zip`} className={buttonClass({ variant: "secondary" })}>Evidence ZIP (report, original photos, SHA-256 list)</a>
+            ) : null}
           </div>
           {!signed ? <p className="mt-2 text-xs text-muted">Until the verdict is signed, the report carries a DRAFT mark.</p> : null}
         </Card>
