@@ -74,13 +74,26 @@ function Disc({ cx, row }: { cx: number; row: string }) {
           </g>
         );
       })}
-      <text x={cx} y={CY + R * 0.85 + 3.5} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)">CUP</text>
-      <text x={cx} y={CY + R * 0.53 + 3.5} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)">CONE</text>
       <text x={cx} y={CY + 4} textAnchor="middle" fontSize={10} fontWeight={600} fill="var(--ink-2, #334155)">{row === "inboard" ? "Inboard" : "Outboard"}</text>
       <text x={cx} y={CY + 16} textAnchor="middle" fontSize={8} fill="var(--muted, #64748b)">row</text>
     </g>
   );
 }
+
+/** Ring names drawn over the damage, with a halo so they stay legible. */
+function RingNames({ cx }: { cx: number }) {
+  const halo = { stroke: "var(--surface, #ffffff)", strokeWidth: 2.5, paintOrder: "stroke" as const, strokeLinejoin: "round" as const };
+  return (
+    <g>
+      <text x={cx} y={CY + R * 0.85 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>CUP</text>
+      <text x={cx} y={CY + R * 0.53 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>CONE</text>
+    </g>
+  );
+}
+
+const LEGEND_WORDS = SEVERITY_WORDS.map((w, i) => `${i} ${w}`);
+// Each key as wide as its words (about 4.9 px a character at 9 px), so long words never overlap.
+const LEGEND_X = LEGEND_WORDS.reduce<number[]>((xs, w, i) => [...xs, i === 0 ? 0 : xs[i - 1] + 24 + LEGEND_WORDS[i - 1].length * 4.9], []);
 
 function describe(f: DamageMapFinding): string {
   const code = f.damageCode ? (damageCodeInfo(f.damageCode)?.label ?? f.damageCode) : "Finding";
@@ -127,10 +140,11 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
                     );
                   }),
             )}
+        {DISCS.map((d) => <RingNames key={d.row} cx={d.cx} />)}
         {DISCS.map((d) => (
           <text key={d.row} x={Math.round(d.cx + R * 0.5)} y={Math.round(CY - R * 1.1)} fontSize={8} fill="#b45309">load zone</text>
         ))}
-        <g transform="translate(24 236)">
+        <g transform="translate(12 236)">
           {summed
             ? [
                 <text key="l" x={0} y={9} fontSize={9} fill="var(--muted, #64748b)">Fewer</text>,
@@ -138,9 +152,9 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
                 <text key="r" x={34 + HEAT.length * 22 + 4} y={9} fontSize={9} fill="var(--muted, #64748b)">{`more findings (most: ${max})`}</text>,
               ]
             : SEVERITY_COLOURS.map((c, i) => (
-                <g key={c} transform={`translate(${i * 80} 0)`}>
+                <g key={c} transform={`translate(${Math.round(LEGEND_X[i])} 0)`}>
                   <rect x={0} y={1} width={12} height={10} rx={2} fill={c} />
-                  <text x={16} y={9.5} fontSize={9} fill="var(--muted, #64748b)">{`${i} ${SEVERITY_WORDS[i]}`}</text>
+                  <text x={16} y={9.5} fontSize={9} fill="var(--muted, #64748b)">{LEGEND_WORDS[i]}</text>
                 </g>
               ))}
         </g>
