@@ -2,6 +2,9 @@
 // which fleet list (units still in service) went in as suspensions.
 import type { LifeDetail, LifeMeasure, LifeSummary } from "./life";
 
+/** Above this many units the likelihood-ratio bounds (hundreds of profile fits) would slow the page. */
+export const LR_LIMIT = 2500;
+
 export type FleetBatch = { batchId: string; uploadedAt: string; uploadedBy: string | null; units: number };
 
 export type LifeData = {

@@ -15,6 +15,7 @@ import {
   type ShapeReading,
 } from "@/lib/stats";
 import { causeLabel } from "./labels";
+import { LR_LIMIT } from "./life-data";
 
 export type LifeMeasure = "months" | "miles";
 /** Signed removals counted by cause and service life (as the database groups them). */
@@ -115,7 +116,7 @@ export function analyseCause(cause: string, units: readonly LifeUnit[], opts: { 
   const summary = summariseCause(cause, units, confidence);
   const empty = { rankRegression: null, mle: null, likelihoodRatio: null, shapeExplanation: "", plotPoints: [], fittedLine: [], thinnedFrom: null };
   if (!summary.fit) return { ...summary, ...empty };
-  const small = units.length <= (opts.lrLimit ?? 4000);
+  const small = units.length <= (opts.lrLimit ?? LR_LIMIT);
   const full = small ? fitWeibull(units, { confidence }) : null;
   const rr = full?.rankRegression.xOnY ?? weibullRankRegression(units).xOnY;
   const beta = full?.mle.beta ?? summary.fit.beta;

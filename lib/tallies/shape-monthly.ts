@@ -1,5 +1,5 @@
 // Months on one axis (gaps filled with zero) and a c-chart for all removals and for each cause.
-import { cChart } from "@/lib/stats";
+import { cChart } from "@/lib/stats/c-chart";
 import { monthRange } from "./filters";
 import { causeLabel } from "./labels";
 import type { ControlSeries, MonthCell, MonthlyTally } from "./types";

@@ -1,5 +1,6 @@
 // The chosen cause's parameters with both kinds of 95% bounds and the rank-regression check.
 import type { LifeDetail } from "@/lib/tallies/life";
+import { LR_LIMIT } from "@/lib/tallies/life-data";
 
 const num = (v: number | undefined | null) => (v === undefined || v === null || !Number.isFinite(v) ? "–" : v >= 1000 ? Math.round(v).toLocaleString("en-US") : v >= 100 ? v.toFixed(0) : v >= 10 ? v.toFixed(1) : v.toFixed(2));
 const range = (b?: [number, number] | null) => (b ? `${num(b[0])} – ${num(b[1])}` : "–");
@@ -40,7 +41,7 @@ export function ParameterTable({ detail, unit }: { detail: LifeDetail; unit: str
       </table>
       <p className="border-t border-line px-3 py-2 text-xs text-muted">
         {rr ? `Rank regression (median ranks, Johnson's adjustment for suspensions, x on y): r² = ${rr.r2.toFixed(3)}. ` : ""}
-        {lr ? "" : "Likelihood-ratio bounds are worked out for up to 4,000 units; narrow the filters to see them."}
+        {lr ? "" : `Likelihood-ratio bounds are worked out for up to ${LR_LIMIT.toLocaleString("en-US")} units; narrow the filters to see them.`}
       </p>
     </div>
   );
