@@ -2,7 +2,7 @@
 // cup raceway as the outer band and the cone raceway as the inner band, 12 o'clock at the top,
 // the load zone marked on the cup. Give `findings` for one case (each finding its own arc), or
 // `sectors` for many cases summed (shaded by how many findings touch each clock sector).
-import { damageCodeInfo } from "@/lib/classification";
+import { damageCodeInfo } from "@/lib/classification/damage-codes";
 import { annularSector, clockPoint, clockWords } from "@/lib/damage-map/geometry";
 import { RING_LABELS, ringsOf, type RingId, type SectorCell } from "@/lib/damage-map/rings";
 

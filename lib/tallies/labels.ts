@@ -1,5 +1,6 @@
 // Words for codes on charts; codes an admin added later fall back to the code itself.
-import { ROOT_CAUSES, TRIGGERS } from "@/lib/classification";
+import { ROOT_CAUSES } from "@/lib/classification/root-causes";
+import { TRIGGERS } from "@/lib/classification/triggers";
 
 export const causeLabel = (code: string | null): string =>
   code === null ? "No cause recorded" : (ROOT_CAUSES.find((c) => c.code === code)?.label ?? code);
