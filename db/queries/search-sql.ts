@@ -95,9 +95,10 @@ export function facetFilters(p: SearchParams, siteIds: string[], alias = "s"): P
   return out;
 }
 
-export function orderSql(sort: SearchParams["sort"], ranked: boolean): SQL {
-  if (sort === "oldest") return sql`s.sort_on ASC, s.created_at ASC`;
-  if (sort === "severity") return sql`s.max_severity DESC, s.sort_on DESC, s.created_at DESC`;
-  if (ranked) return sql`rank DESC, s.sort_on DESC, s.created_at DESC`;
-  return sql`s.sort_on DESC, s.created_at DESC`;
+export function orderSql(sort: SearchParams["sort"], ranked: boolean, alias = "s"): SQL {
+  const a = sql.raw(alias);
+  if (sort === "oldest") return sql`${a}.sort_on ASC, ${a}.created_at ASC`;
+  if (sort === "severity") return sql`${a}.max_severity DESC, ${a}.sort_on DESC, ${a}.created_at DESC`;
+  if (ranked) return sql`rank DESC, ${a}.sort_on DESC, ${a}.created_at DESC`;
+  return sql`${a}.sort_on DESC, ${a}.created_at DESC`;
 }

@@ -1,16 +1,18 @@
 // Case search: free text over the narrative, serials and car numbers, shop words through the
-// stored code lists, typo correction, facets with counts, one page of hits. The result set
-// is found once for the page, the total and most facet counts; chosen facets count apart.
+// stored code lists, typo correction, facets with counts, one page of hits. Facet counts of
+// a search are reused until the casebook changes, so paging and re-sorting only read a page.
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { parseSearchText } from "@/lib/search/parse-query";
-import { PAGE_SIZE, type SearchParams } from "@/lib/search/query-schema";
+import { MULTI_FACETS, PAGE_SIZE, type SearchParams } from "@/lib/search/query-schema";
+import { cachedFacets, keepFacets, searchRevision, type FacetRow } from "./search-facet-cache";
+import { M_COLUMNS, activeFacetSql, and, passiveFacetsSql } from "./search-facet-sql";
+import { labelFacets, type FacetValue } from "./search-facets";
 import { loadHits, type SearchHit } from "./search-hits";
 import { loadSearchLookups } from "./search-lookups";
-import { prepareClauses, usableClauses, type PreparedClause } from "./search-terms";
-import { ARRAY_FACETS, SCALAR_FACETS, documentQuery, facetColumn, identifierSql, facetFilters, orderSql, rankSql, scopeSql, type FacetKey, type SearchViewer } from "./search-sql";
-import { labelFacets, type FacetValue } from "./search-facets";
+import { documentQuery, facetFilters, identifierSql, orderSql, rankSql, scopeSql, type FacetKey, type SearchViewer } from "./search-sql";
+import { prepareClauses, usableClauses } from "./search-terms";
 
 export type { SearchViewer } from "./search-sql";
 export type { SearchHit } from "./search-hits";
@@ -25,71 +27,60 @@ export interface SearchResult {
   readonly understood: { text: string; kind: string; codes: { code: string; label: string }[]; corrections: string[] }[];
 }
 
-type FacetRow = { facet: string; value: string | null; n: number };
-type Filters = Partial<Record<FacetKey, SQL>>;
-const and = (parts: SQL[]) => (parts.length ? sql.join(parts, sql` AND `) : sql`true`);
-
-/** Counts within the result set m: facets nobody has chosen from, plus the total. */
-function passiveFacetsSql(filters: Filters): SQL {
-  const passive = SCALAR_FACETS.filter((f) => !filters[f]);
-  const col = (f: FacetKey) => facetColumn(f, "m");
-  const which = passive.map((f) => sql`WHEN GROUPING(${col(f)}) = 0 THEN ${f}`);
-  const branches: SQL[] = [sql`
-    SELECT ${passive.length ? sql`CASE ${sql.join(which, sql` `)} ELSE 'total' END` : sql`'total'`} AS facet,
-      ${passive.length ? sql`COALESCE(${sql.join(passive.map(col), sql`, `)})` : sql`NULL::text`} AS value, count(*)::int AS n
-    FROM m GROUP BY GROUPING SETS (${sql.join([...passive.map((f) => sql`(${col(f)})`), sql`()`], sql`, `)})`];
-  for (const f of ARRAY_FACETS.filter((f) => !filters[f])) {
-    branches.push(sql`SELECT ${f}, v, count(*)::int FROM (SELECT unnest(${facetColumn(f, "m")}) AS v FROM m) x GROUP BY 2`);
-  }
-  return sql.join(branches, sql` UNION ALL `);
-}
-
-/** A chosen facet counts over everything else asked, so more of its values can be added. */
-function activeFacetSql(f: FacetKey, from: SQL, base: SQL[], filters: Filters): SQL {
-  const others = Object.entries(filters).filter(([k]) => k !== f).map(([, v]) => v as SQL);
-  const where = and([...base, ...others]);
-  return ARRAY_FACETS.includes(f)
-    ? sql`SELECT ${f} AS facet, v AS value, count(*)::int AS n FROM (SELECT unnest(${facetColumn(f, "s")}) AS v FROM ${from} WHERE ${where}) x GROUP BY 2`
-    : sql`SELECT ${f} AS facet, ${facetColumn(f, "s")} AS value, count(*)::int AS n FROM ${from} WHERE ${where} GROUP BY 2`;
-}
+type PageRow = { id: string; rank: number };
 
 export async function searchCases(params: SearchParams, viewer: SearchViewer): Promise<SearchResult> {
-  const lookups = await loadSearchLookups();
-  const prepared: PreparedClause[] = usableClauses(await prepareClauses(parseSearchText(params.q, lookups.damageEntries)));
-  const hasText = prepared.length > 0;
+  const [lookups, revision] = await Promise.all([loadSearchLookups(), searchRevision()]);
+  const prepared = usableClauses(await prepareClauses(parseSearchText(params.q, lookups.damageEntries)));
   const docQuery = documentQuery(prepared);
+  const identifiers = prepared.filter((c) => c.kind === "identifier");
   const siteIds = lookups.sites.filter((s) => params.site.includes(s.code)).map((s) => s.id);
   const filters = facetFilters(params, siteIds, "s");
   const base = [
     scopeSql(viewer),
     docQuery ? sql`s.document @@ ${docQuery}::tsquery` : null,
-    ...prepared.filter((c) => c.kind === "identifier").map(identifierSql),
+    ...identifiers.map(identifierSql),
     params.from ? sql`s.sort_on >= ${params.from}::date` : null,
     params.to ? sql`s.sort_on <= ${params.to}::date` : null,
   ].filter((x): x is SQL => x !== null);
   // Word searches read the row that carries the narrative; the rest the narrow one.
   const from = docQuery ? sql`case_search_text s` : sql`case_search s`;
-
   const where = and([...base, ...(Object.values(filters) as SQL[])]);
-  const ranked = hasText && params.sort === "relevance";
+  const ranked = prepared.length > 0 && params.sort === "relevance";
+  const rank = ranked ? rankSql(prepared, docQuery !== "") : sql`0`;
+  const limit = sql`LIMIT ${PAGE_SIZE} OFFSET ${(params.page - 1) * PAGE_SIZE}`;
 
-  // Three kinds of statement at once, each on its own connection: the result set with the
-  // total and the unchosen facets; the page (ranked, or straight off the date index); and
-  // each chosen facet counted over everything else asked.
-  const counts = db.execute<{ facets: FacetRow[] }>(sql`
-    WITH m AS MATERIALIZED (
-      SELECT s.status, s.trigger, s.primary_cause, s.bearing_class, s.site_id, s.damage_codes, s.components, s.max_severity
-      FROM ${from} WHERE ${where}
-    ),
-    facets AS (${passiveFacetsSql(filters)})
-    SELECT coalesce(json_agg(facets), '[]') AS facets FROM facets`);
-  const pageRows = db.execute<{ id: string; rank: number }>(sql`
-    SELECT s.case_id AS id, ${ranked ? rankSql(prepared, docQuery !== "") : sql`0`}::real AS rank
-    FROM ${from} WHERE ${where}
-    ORDER BY ${orderSql(params.sort, ranked)} LIMIT ${PAGE_SIZE} OFFSET ${(params.page - 1) * PAGE_SIZE}`);
-  const active = (Object.keys(filters) as FacetKey[]).map((f) => db.execute<FacetRow>(activeFacetSql(f, from, base, filters)));
-  const [{ rows: countRows }, { rows: page }, ...activeRows] = await Promise.all([counts, pageRows, ...active]);
-  const facetRows = [...countRows[0].facets, ...activeRows.flatMap((r) => r.rows)];
+  const key = JSON.stringify([viewer.role, viewer.id, viewer.siteId, docQuery, identifiers.map((c) => c.text), params.from, params.to, params.severity, MULTI_FACETS.map((f) => params[f])]);
+  const cached = cachedFacets(key, revision);
+  const pageOnly = () => db.execute<PageRow>(sql`SELECT s.case_id AS id, ${rank}::real AS rank FROM ${from} WHERE ${where} ORDER BY ${orderSql(params.sort, ranked)} ${limit}`).then((r) => r.rows);
+
+  let page: PageRow[];
+  let facetRows: FacetRow[];
+  if (cached) {
+    [page, facetRows] = [await pageOnly(), cached];
+  } else {
+    // With words, one pass over the matching rows gives the ranked page and the unchosen facets;
+    // without, the page comes straight off the date index while they are counted. Each chosen
+    // facet is counted at the same time on its own connection.
+    const passive = docQuery
+      ? db.execute<{ facets: FacetRow[]; page: PageRow[] }>(sql`
+          WITH m AS MATERIALIZED (SELECT ${M_COLUMNS}, ${rank}::real AS rank FROM ${from} WHERE ${where}),
+          facets AS (${passiveFacetsSql(filters)}),
+          page AS (SELECT m.case_id AS id, m.rank FROM m ORDER BY ${orderSql(params.sort, ranked, "m")} ${limit})
+          SELECT (SELECT coalesce(json_agg(facets), '[]') FROM facets) AS facets, (SELECT coalesce(json_agg(page), '[]') FROM page) AS page`)
+          .then((r) => r.rows[0])
+      : Promise.all([
+          db.execute<{ facets: FacetRow[] }>(sql`
+            WITH m AS MATERIALIZED (SELECT ${M_COLUMNS} FROM ${from} WHERE ${where}), facets AS (${passiveFacetsSql(filters)})
+            SELECT coalesce(json_agg(facets), '[]') AS facets FROM facets`),
+          pageOnly(),
+        ]).then(([c, p]) => ({ facets: c.rows[0].facets, page: p }));
+    const active = (Object.keys(filters) as FacetKey[]).map((f) => db.execute<FacetRow>(activeFacetSql(f, from, base, filters)).then((r) => r.rows));
+    const [first, ...chosen] = await Promise.all([passive, ...active]);
+    page = first.page;
+    facetRows = [...first.facets, ...chosen.flat()];
+    keepFacets(key, revision, facetRows);
+  }
 
   return {
     total: facetRows.find((r) => r.facet === "total")?.n ?? 0,

@@ -1,0 +1,36 @@
+// Facet counting in SQL. Unchosen facets are counted inside the result set m in one pass
+// (grouping sets for single values, unnest for codes and parts); a chosen facet is counted
+// over everything else asked, so more of its values can still be added.
+import "server-only";
+import { sql, type SQL } from "drizzle-orm";
+import { ARRAY_FACETS, SCALAR_FACETS, facetColumn, type FacetKey } from "./search-sql";
+
+export type Filters = Partial<Record<FacetKey, SQL>>;
+export const and = (parts: SQL[]) => (parts.length ? sql.join(parts, sql` AND `) : sql`true`);
+
+/** Counts within the result set m: facets nobody has chosen from, plus the total. */
+export function passiveFacetsSql(filters: Filters): SQL {
+  const passive = SCALAR_FACETS.filter((f) => !filters[f]);
+  const col = (f: FacetKey) => facetColumn(f, "m");
+  const which = passive.map((f) => sql`WHEN GROUPING(${col(f)}) = 0 THEN ${f}`);
+  const branches: SQL[] = [sql`
+    SELECT ${passive.length ? sql`CASE ${sql.join(which, sql` `)} ELSE 'total' END` : sql`'total'`} AS facet,
+      ${passive.length ? sql`COALESCE(${sql.join(passive.map(col), sql`, `)})` : sql`NULL::text`} AS value, count(*)::int AS n
+    FROM m GROUP BY GROUPING SETS (${sql.join([...passive.map((f) => sql`(${col(f)})`), sql`()`], sql`, `)})`];
+  for (const f of ARRAY_FACETS.filter((f) => !filters[f])) {
+    branches.push(sql`SELECT ${f}, v, count(*)::int FROM (SELECT unnest(${facetColumn(f, "m")}) AS v FROM m) x GROUP BY 2`);
+  }
+  return sql.join(branches, sql` UNION ALL `);
+}
+
+/** A chosen facet counted over everything else asked. */
+export function activeFacetSql(f: FacetKey, from: SQL, base: SQL[], filters: Filters): SQL {
+  const others = Object.entries(filters).filter(([k]) => k !== f).map(([, v]) => v as SQL);
+  const where = and([...base, ...others]);
+  return ARRAY_FACETS.includes(f)
+    ? sql`SELECT ${f} AS facet, v AS value, count(*)::int AS n FROM (SELECT unnest(${facetColumn(f, "s")}) AS v FROM ${from} WHERE ${where}) x GROUP BY 2`
+    : sql`SELECT ${f} AS facet, ${facetColumn(f, "s")} AS value, count(*)::int AS n FROM ${from} WHERE ${where} GROUP BY 2`;
+}
+
+/** Columns m needs for counting (and, with words, for the ranked page). */
+export const M_COLUMNS = sql.raw("s.case_id, s.status, s.trigger, s.primary_cause, s.bearing_class, s.site_id, s.damage_codes, s.components, s.max_severity, s.sort_on, s.created_at");
