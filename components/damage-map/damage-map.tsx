@@ -27,7 +27,7 @@ export type DamageMapProps = {
 
 export const SEVERITY_COLOURS = ["#94a3b8", "#d6b370", "#e29a2d", "#d9601f", "#b91c1c"] as const;
 const SEVERITY_WORDS = ["none", "cosmetic", "minor", "part condemned", "bearing condemned"];
-const HEAT = ["#fde68a", "#fbbf24", "#f59e0b", "#ea580c", "#b91c1c"] as const;
+const HEAT = ["#fef3c7", "#fcd34d", "#f59e0b", "#ea580c", "#b91c1c"] as const;
 /** Damage without an extent is drawn as a short mark, not a claim of its size. */
 const SPOT_DEG = 8;
 const LOAD_ZONE_HALF = 60;
