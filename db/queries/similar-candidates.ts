@@ -42,19 +42,13 @@ function setScore(column: string, keys: string[], weight: number): SQL {
   return sql`(${w(weight / 2)} * (${c} && ${k})::int + ${w(weight / 4)} * (${c} @> ${k})::int + ${w(weight / 4)} * (${c} <@ ${k} AND cardinality(${c}) > 0)::int)`;
 }
 
-export async function candidateIds(t: TargetKeys, viewer: SearchViewer, limit = CANDIDATE_LIMIT): Promise<string[]> {
+/** Earlier cases the caller may read that share what `shares` asks, best cheap score first. */
+async function scoredCandidates(t: TargetKeys, viewer: SearchViewer, shares: SQL[], limit: number, skip: string[] = []): Promise<string[]> {
   const cause = t.primaryCause && t.primaryCause !== "undetermined" ? t.primaryCause : null;
-  const shares: SQL[] = [];
-  if (t.findingKeys.length) shares.push(sql`s.finding_keys && ${sql.param(t.findingKeys)}::text[]`);
-  if (t.codes.length) shares.push(sql`s.damage_codes && ${sql.param(t.codes)}::text[]`);
-  if (t.familyKeys.length) shares.push(sql`s.family_keys && ${sql.param(t.familyKeys)}::text[]`);
-  if (cause) shares.push(sql`s.primary_cause = ${cause}`);
-  shares.push(sql`(s.trigger = ${t.trigger} AND s.bearing_class = ${t.bearingClass})`);
   const scope = scopeSql(viewer);
-
   const { rows } = await db.execute<{ id: string }>(sql`
     SELECT s.case_id AS id FROM case_search s
-    WHERE s.case_id <> ${t.caseId}::uuid
+    WHERE s.case_id <> ALL(${sql.param([t.caseId, ...skip])}::uuid[])
       AND (s.sort_on < ${t.sortOn}::date OR (s.sort_on = ${t.sortOn}::date AND s.created_at < ${t.createdAt}::timestamptz))
       AND (${sql.join(shares, sql` OR `)})
       ${scope ? sql`AND ${scope}` : sql``}
@@ -65,6 +59,24 @@ export async function candidateIds(t: TargetKeys, viewer: SearchViewer, limit = 
       s.sort_on DESC, s.created_at DESC
     LIMIT ${limit}`);
   return rows.map((r) => r.id);
+}
+
+/**
+ * First the cases sharing a finding on the same part, the root cause, or trigger and class
+ * together; only when those are too few, the wider net of a shared code or damage family
+ * (a family such as "grease condition" is in most cases and would swamp the first net).
+ */
+export async function candidateIds(t: TargetKeys, viewer: SearchViewer, limit = CANDIDATE_LIMIT): Promise<string[]> {
+  const cause = t.primaryCause && t.primaryCause !== "undetermined" ? t.primaryCause : null;
+  const strong: SQL[] = [sql`(s.trigger = ${t.trigger} AND s.bearing_class = ${t.bearingClass})`];
+  if (t.findingKeys.length) strong.push(sql`s.finding_keys && ${sql.param(t.findingKeys)}::text[]`);
+  if (cause) strong.push(sql`s.primary_cause = ${cause}`);
+  const first = await scoredCandidates(t, viewer, strong, limit);
+  const wide: SQL[] = [];
+  if (t.codes.length) wide.push(sql`s.damage_codes && ${sql.param(t.codes)}::text[]`);
+  if (t.familyKeys.length) wide.push(sql`s.family_keys && ${sql.param(t.familyKeys)}::text[]`);
+  if (first.length >= limit || wide.length === 0) return first;
+  return [...first, ...(await scoredCandidates(t, viewer, wide, limit - first.length, first))];
 }
 
 type CaseText = { id: string; bearingClass: string; trigger: string; primaryCause: string | null; text: string };
