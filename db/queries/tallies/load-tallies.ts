@@ -11,15 +11,13 @@ import type { TallyFilters } from "@/lib/tallies/filters";
 import type { TalliesData } from "@/lib/tallies/types";
 import { recurringClusters } from "./clusters";
 import { damageSectors } from "./damage-sectors";
-import { monthlyCounts } from "./monthly-counts";
 import { viewerSiteLimit, type TallyViewer } from "./scope";
 import { allSites } from "./sites";
-import { verdictCube } from "./verdict-cube";
+import { tallyCounts } from "./counts";
 
 export async function loadTallies(filters: TallyFilters, viewer: TallyViewer): Promise<TalliesData> {
-  const [cube, months, clusters, damage, sites] = await Promise.all([
-    verdictCube(filters, viewer),
-    monthlyCounts(filters, viewer),
+  const [{ cube, months }, clusters, damage, sites] = await Promise.all([
+    tallyCounts(filters, viewer),
     recurringClusters(filters, viewer),
     damageSectors(filters, viewer),
     allSites(),
