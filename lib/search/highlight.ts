@@ -112,3 +112,20 @@ export function snippet(text: string, terms: CompiledTerms, maxChars = 200): Sni
     hits: shown,
   };
 }
+
+/** Marks every case-insensitive occurrence of the needles (serials, car and case numbers). */
+export function highlightSubstrings(text: string, needles: readonly string[]): Segment[] {
+  const lower = text.toLowerCase();
+  const ranges: [number, number][] = [];
+  for (const n of needles.map((x) => x.toLowerCase()).filter((x) => x.length >= 2)) {
+    for (let at = lower.indexOf(n); at >= 0; at = lower.indexOf(n, at + n.length)) ranges.push([at, at + n.length]);
+  }
+  ranges.sort((a, b) => a[0] - b[0]);
+  const merged: [number, number][] = [];
+  for (const r of ranges) {
+    const last = merged[merged.length - 1];
+    if (last && r[0] <= last[1]) last[1] = Math.max(last[1], r[1]);
+    else merged.push([...r]);
+  }
+  return segmentsOf(text, merged);
+}

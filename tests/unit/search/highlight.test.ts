@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { compileTerms, highlight, snippet } from "@/lib/search/highlight";
+import { compileTerms, highlight, highlightSubstrings, snippet } from "@/lib/search/highlight";
 
 const marked = (segments: { text: string; hit: boolean }[]) => segments.filter((s) => s.hit).map((s) => s.text);
 
@@ -42,5 +42,13 @@ describe("snippet", () => {
   it("returns the whole short text, or null without a match", () => {
     expect(snippet("Milky grease.", compileTerms(["milky"]))!.segments.map((s) => s.text).join("")).toBe("Milky grease.");
     expect(snippet(long, compileTerms(["fluting"]))).toBeNull();
+  });
+});
+
+describe("highlightSubstrings", () => {
+  it("marks serial and car number fragments, merging overlaps", () => {
+    const segments = highlightSubstrings("SRRX 204518", ["2045", "4518", "srrx"]);
+    expect(marked(segments)).toEqual(["SRRX", "204518"]);
+    expect(segments.map((s) => s.text).join("")).toBe("SRRX 204518");
   });
 });
