@@ -29,9 +29,12 @@ async function ensureCases() {
   console.log(`search bench: ${have} cases, generating ${WANT - have} more (npm run seed:large)…`);
   const run = spawnSync("node_modules/.bin/tsx", ["scripts/seed-large.ts", "--cases", String(WANT - have)], { stdio: "inherit", env: process.env });
   if (run.status !== 0) throw new Error("seed:large failed");
-  await db.execute(sql`analyze case_search`);
-  await db.execute(sql`analyze search_words`);
   return count(sql`select count(*) as n from cases`);
+}
+
+/** What autovacuum does within a minute of a bulk load: clear the replaced search rows, refresh statistics. */
+async function settle() {
+  for (const table of ["case_search", "case_search_text", "search_words"]) await db.execute(sql.raw(`vacuum (analyze) ${table}`));
 }
 
 async function viewers(): Promise<{ engineer: SearchViewer; inspector: SearchViewer }> {
@@ -58,6 +61,7 @@ function report(name: string, times: { label: string; ms: number }[]) {
 
 try {
   const total = await ensureCases();
+  await settle();
   const who = await viewers();
   const queries = await benchQueries(db);
   console.log(`search bench: ${total.toLocaleString("en-US")} cases, ${queries.length} searches, ${SIMILAR_RUNS} similar-case lookups`);
@@ -82,6 +86,9 @@ try {
   }
 
   const ok = [report("search", searchTimes), report("similar cases", similarTimes)].every(Boolean);
+  // The page's first view again: its counts now come from the cache until the casebook changes.
+  const [again] = await timed(() => searchCases(parseSearchParams({}), who.engineer));
+  console.log(`  search page first view, counted once already: ${again.toFixed(1)} ms`);
   if (!ok) process.exitCode = 1;
 } catch (err) {
   console.error(err);
