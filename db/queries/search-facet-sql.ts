@@ -8,8 +8,8 @@ import { ARRAY_FACETS, SCALAR_FACETS, facetColumn, type FacetKey } from "./searc
 export type Filters = Partial<Record<FacetKey, SQL>>;
 export const and = (parts: SQL[]) => (parts.length ? sql.join(parts, sql` AND `) : sql`true`);
 
-/** Counts within the result set m: facets nobody has chosen from, plus the total. */
-export function passiveFacetsSql(filters: Filters): SQL {
+/** Counts within the result set m of the single-valued facets nobody has chosen from, plus the total. */
+export function passiveScalarFacetsSql(filters: Filters): SQL {
   const passive = SCALAR_FACETS.filter((f) => !filters[f]);
   const col = (f: FacetKey) => facetColumn(f, "m");
   const which = passive.map((f) => sql`WHEN GROUPING(${col(f)}) = 0 THEN ${f}`);
@@ -17,10 +17,15 @@ export function passiveFacetsSql(filters: Filters): SQL {
     SELECT ${passive.length ? sql`CASE ${sql.join(which, sql` `)} ELSE 'total' END` : sql`'total'`} AS facet,
       ${passive.length ? sql`COALESCE(${sql.join(passive.map(col), sql`, `)})` : sql`NULL::text`} AS value, count(*)::int AS n
     FROM m GROUP BY GROUPING SETS (${sql.join([...passive.map((f) => sql`(${col(f)})`), sql`()`], sql`, `)})`];
-  for (const f of ARRAY_FACETS.filter((f) => !filters[f])) {
-    branches.push(sql`SELECT ${f}, v, count(*)::int FROM (SELECT unnest(${facetColumn(f, "m")}) AS v FROM m) x GROUP BY 2`);
-  }
-  return sql.join(branches, sql` UNION ALL `);
+  return branches[0];
+}
+
+/** Counts within the result set m of the codes and parts, when nobody has chosen from them; null when both are chosen. */
+export function passiveArrayFacetsSql(filters: Filters): SQL | null {
+  const branches = ARRAY_FACETS.filter((f) => !filters[f]).map(
+    (f) => sql`SELECT ${f} AS facet, v AS value, count(*)::int AS n FROM (SELECT unnest(${facetColumn(f, "m")}) AS v FROM m) x GROUP BY 2`,
+  );
+  return branches.length ? sql.join(branches, sql` UNION ALL `) : null;
 }
 
 /** A chosen facet counted over everything else asked. */
@@ -32,5 +37,5 @@ export function activeFacetSql(f: FacetKey, from: SQL, base: SQL[], filters: Fil
     : sql`SELECT ${f} AS facet, ${facetColumn(f, "s")} AS value, count(*)::int AS n FROM ${from} WHERE ${where} GROUP BY 2`;
 }
 
-/** Columns m needs for counting (and, with words, for the ranked page). */
-export const M_COLUMNS = sql.raw("s.case_id, s.status, s.trigger, s.primary_cause, s.bearing_class, s.site_id, s.damage_codes, s.components, s.max_severity, s.sort_on, s.created_at");
+/** Columns m needs for the single-valued counts and, with words, for the ranked page. */
+export const M_COLUMNS = sql.raw("s.case_id, s.status, s.trigger, s.primary_cause, s.bearing_class, s.site_id, s.max_severity, s.sort_on, s.created_at");

@@ -7,7 +7,7 @@ import { db } from "@/db";
 import { parseSearchText } from "@/lib/search/parse-query";
 import { MULTI_FACETS, PAGE_SIZE, type SearchParams } from "@/lib/search/query-schema";
 import { cachedFacets, keepFacets, searchRevision, type FacetRow } from "./search-facet-cache";
-import { M_COLUMNS, activeFacetSql, and, passiveFacetsSql } from "./search-facet-sql";
+import { M_COLUMNS, activeFacetSql, and, passiveArrayFacetsSql, passiveScalarFacetsSql } from "./search-facet-sql";
 import { labelFacets, type FacetValue } from "./search-facets";
 import { loadHits, type SearchHit } from "./search-hits";
 import { loadSearchLookups } from "./search-lookups";
@@ -59,26 +59,30 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
   if (cached) {
     [page, facetRows] = [await pageOnly(), cached];
   } else {
-    // With words, one pass over the matching rows gives the ranked page and the unchosen facets;
-    // without, the page comes straight off the date index while they are counted. Each chosen
-    // facet is counted at the same time on its own connection.
-    const passive = docQuery
+    // With words, one pass over the matching rows gives the ranked page and the single-valued
+    // counts; without, the page comes straight off the date index. Codes and parts are counted
+    // by a statement of their own, and each chosen facet too, all at once on their own connections.
+    const scalars = docQuery
       ? db.execute<{ facets: FacetRow[]; page: PageRow[] }>(sql`
           WITH m AS MATERIALIZED (SELECT ${M_COLUMNS}, ${rank}::real AS rank FROM ${from} WHERE ${where}),
-          facets AS (${passiveFacetsSql(filters)}),
+          facets AS (${passiveScalarFacetsSql(filters)}),
           page AS (SELECT m.case_id AS id, m.rank FROM m ORDER BY ${orderSql(params.sort, ranked, "m")} ${limit})
           SELECT (SELECT coalesce(json_agg(facets), '[]') FROM facets) AS facets, (SELECT coalesce(json_agg(page), '[]') FROM page) AS page`)
           .then((r) => r.rows[0])
       : Promise.all([
           db.execute<{ facets: FacetRow[] }>(sql`
-            WITH m AS MATERIALIZED (SELECT ${M_COLUMNS} FROM ${from} WHERE ${where}), facets AS (${passiveFacetsSql(filters)})
+            WITH m AS MATERIALIZED (SELECT ${M_COLUMNS} FROM ${from} WHERE ${where}), facets AS (${passiveScalarFacetsSql(filters)})
             SELECT coalesce(json_agg(facets), '[]') AS facets FROM facets`),
           pageOnly(),
         ]).then(([c, p]) => ({ facets: c.rows[0].facets, page: p }));
+    const arrays = passiveArrayFacetsSql(filters);
+    const arrayCounts = arrays
+      ? db.execute<FacetRow>(sql`WITH m AS MATERIALIZED (SELECT s.damage_codes, s.components FROM ${from} WHERE ${where}) ${arrays}`).then((r) => r.rows)
+      : Promise.resolve([]);
     const active = (Object.keys(filters) as FacetKey[]).map((f) => db.execute<FacetRow>(activeFacetSql(f, from, base, filters)).then((r) => r.rows));
-    const [first, ...chosen] = await Promise.all([passive, ...active]);
+    const [first, ...counted] = await Promise.all([scalars, arrayCounts, ...active]);
     page = first.page;
-    facetRows = [...first.facets, ...chosen.flat()];
+    facetRows = [...first.facets, ...counted.flat()];
     keepFacets(key, revision, facetRows);
   }
 
