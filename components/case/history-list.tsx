@@ -21,6 +21,8 @@ const ACTION_WORDS: Record<string, string> = {
   returned: "returned the verdict to the bench",
   reopen: "reopened the case",
   reopened: "reopened the case",
+  linked: "linked a related case",
+  unlinked: "unlinked a related case",
 };
 
 function show(v: unknown): string {
