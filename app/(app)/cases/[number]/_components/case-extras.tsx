@@ -20,7 +20,7 @@ export function CaseExtras({ c, user }: { c: CaseDetail; user: CurrentUser }) {
     <>
       {mapped.length ? (
         <Card title="Damage map">
-          <DamageMap title={`Where the damage sits on ${c.number}`} findings={c.findings} caption="Seen from the outboard end; 12 o'clock at the top, where the load zone of the cup is." />
+          <DamageMap title={`Where the damage sits on ${c.number}`} findings={c.findings} />
         </Card>
       ) : null}
       <section id="photos" className="scroll-mt-24">
