@@ -28,13 +28,27 @@ export function passiveArrayFacetsSql(filters: Filters): SQL | null {
   return branches.length ? sql.join(branches, sql` UNION ALL `) : null;
 }
 
-/** A chosen facet counted over everything else asked. */
-export function activeFacetSql(f: FacetKey, from: SQL, base: SQL[], filters: Filters): SQL {
-  const others = Object.entries(filters).filter(([k]) => k !== f).map(([, v]) => v as SQL);
-  const where = and([...base, ...others]);
-  return ARRAY_FACETS.includes(f)
-    ? sql`SELECT ${f} AS facet, v AS value, count(*)::int AS n FROM (SELECT unnest(${facetColumn(f, "s")}) AS v FROM ${from} WHERE ${where}) x GROUP BY 2`
-    : sql`SELECT ${f} AS facet, ${facetColumn(f, "s")} AS value, count(*)::int AS n FROM ${from} WHERE ${where} GROUP BY 2`;
+const othersThan = (f: FacetKey, filters: Filters) => and(Object.entries(filters).filter(([k]) => k !== f).map(([, v]) => v as SQL));
+
+/** Chosen facets, each counted over everything else asked: the single-valued ones in one pass, codes and parts apart. */
+export function activeFacetsSql(from: SQL, base: SQL[], filters: Filters): SQL[] {
+  const chosen = Object.keys(filters) as FacetKey[];
+  const arrays = chosen.filter((f) => ARRAY_FACETS.includes(f)).map(
+    (f) => sql`SELECT ${f} AS facet, v AS value, count(*)::int AS n FROM (SELECT unnest(${facetColumn(f, "s")}) AS v FROM ${from} WHERE ${and([...base, othersThan(f, filters)])}) x GROUP BY 2`,
+  );
+  const scalars = chosen.filter((f) => SCALAR_FACETS.includes(f));
+  if (scalars.length === 0) return arrays;
+  // A row counts for facet f when it passes every filter but f's; one scan serves them all.
+  const col = (f: FacetKey) => facetColumn(f, "s");
+  const when = (pick: (f: FacetKey) => SQL) => sql`CASE ${sql.join(scalars.map((f) => sql`WHEN GROUPING(${col(f)}) = 0 THEN ${pick(f)}`), sql` `)} END`;
+  const counted = sql`
+    SELECT * FROM (
+      SELECT ${when((f) => sql`${f}`)} AS facet, COALESCE(${sql.join(scalars.map(col), sql`, `)}) AS value,
+        ${when((f) => sql`count(*) FILTER (WHERE ${othersThan(f, filters)})::int`)} AS n
+      FROM ${from} WHERE ${and([...base, sql`(${sql.join(scalars.map((f) => sql`(${othersThan(f, filters)})`), sql` OR `)})`])}
+      GROUP BY GROUPING SETS (${sql.join(scalars.map((f) => sql`(${col(f)})`), sql`, `)})
+    ) c WHERE c.n > 0`;
+  return [counted, ...arrays];
 }
 
 /** Columns m needs for the single-valued counts and, with words, for the ranked page. */

@@ -7,7 +7,7 @@ import { db } from "@/db";
 import { parseSearchText } from "@/lib/search/parse-query";
 import { MULTI_FACETS, PAGE_SIZE, type SearchParams } from "@/lib/search/query-schema";
 import { cachedFacets, keepFacets, searchRevision, type FacetRow } from "./search-facet-cache";
-import { M_COLUMNS, activeFacetSql, and, passiveArrayFacetsSql, passiveScalarFacetsSql } from "./search-facet-sql";
+import { M_COLUMNS, activeFacetsSql, and, passiveArrayFacetsSql, passiveScalarFacetsSql } from "./search-facet-sql";
 import { labelFacets, type FacetValue } from "./search-facets";
 import { loadHits, type SearchHit } from "./search-hits";
 import { loadSearchLookups } from "./search-lookups";
@@ -79,7 +79,7 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
     const arrayCounts = arrays
       ? db.execute<FacetRow>(sql`WITH m AS MATERIALIZED (SELECT s.damage_codes, s.components FROM ${from} WHERE ${where}) ${arrays}`).then((r) => r.rows)
       : Promise.resolve([]);
-    const active = (Object.keys(filters) as FacetKey[]).map((f) => db.execute<FacetRow>(activeFacetSql(f, from, base, filters)).then((r) => r.rows));
+    const active = activeFacetsSql(from, base, filters).map((q) => db.execute<FacetRow>(q).then((r) => r.rows));
     const [first, ...counted] = await Promise.all([scalars, arrayCounts, ...active]);
     page = first.page;
     facetRows = [...first.facets, ...counted.flat()];
