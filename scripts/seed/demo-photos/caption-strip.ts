@@ -5,7 +5,7 @@ import { n } from "./svg-kit";
 
 export const STRIP_HEIGHT = 38;
 const SCALE = 3;
-const NOTICE = "INVENTED IMAGE · NOT EVIDENCE";
+const NOTICE = "NOT EVIDENCE";
 
 /** The words of the strip: "TEARLINE DEMO · TL-25-00033 · CUP, OUTBOARD". */
 export function captionText(caseNumber: string, partWords: string): string {

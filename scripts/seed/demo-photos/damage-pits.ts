@@ -26,11 +26,11 @@ export function spall(rng: Rng, s: Surface, severity: number): string {
       return `<path d="${polygon(t)}" fill="${rng.pick(["#232527", "#2c2f31", "#35383b"])}"/><path d="${polygon(t.map(([x, y]) => [x + 1.5, y + 2] as [number, number]))}" fill="none" stroke="#8f9498" stroke-width="0.9" stroke-opacity="0.6" stroke-dasharray="${n(rng.real(6, 14))} ${n(rng.real(8, 20))}"/>`;
     });
     out += `<clipPath id="${id}"><path d="${polygon(outline)}"/></clipPath>
-<radialGradient id="${id}f" cx="0.55" cy="0.45"><stop offset="0" stop-color="#1a1c1e"/><stop offset="0.7" stop-color="#26292b"/><stop offset="1" stop-color="#0c0d0e"/></radialGradient>
+<radialGradient id="${id}f" cx="0.55" cy="0.45"><stop offset="0" stop-color="#3a3d40"/><stop offset="0.45" stop-color="#222527"/><stop offset="1" stop-color="#0b0c0d"/></radialGradient>
 <path d="${polygon(shrink(outline, 1.25))}" fill="#55595d" opacity="0.3" filter="url(#blur6)"/>
 <path d="${polygon(outline)}" fill="#8e9397"/>
 <g clip-path="url(#${id})"><path d="${polygon(floor)}" fill="url(#${id}f)"/>${terraces.join("")}
-${specks(rng, box, 900, [0.8, 3.5], ["#3f4346", "#0a0b0c", "#6a6f73"], 0.75)}</g>
+${specks(rng, box, 1400, [0.8, 4], ["#4a4e52", "#0a0b0c", "#767b7f"], 0.8)}</g>
 <path d="${polygon(outline)}" fill="none" stroke="#070707" stroke-width="1.4"/>
 <path d="${polygon(outline.map(([x, y]) => [x + 1.2, y + 1.2] as [number, number]))}" fill="none" stroke="#eef1f3" stroke-width="1" stroke-opacity="0.7" stroke-dasharray="${n(rng.real(10, 30))} ${n(rng.real(10, 40))}"/>
 `;

@@ -76,9 +76,9 @@ export function frosting(rng: Rng, s: Surface, severity: number): string {
     const outline = polygon(ragged(rng, x, y, rx, ry, 20, 0.35));
     patches += `<path d="${outline}"/>`;
     pits += `<clipPath id="${id}"><path d="${outline}"/></clipPath>
-<g clip-path="url(#${id})">${specks(rng, { x: x - rx, y: y - ry, w: rx * 2, h: ry * 2 }, Math.round((rx * ry) / 25), [0.8, 2], ["#5f6468", "#d8dcdf"], 0.6)}</g>`;
+<g clip-path="url(#${id})">${specks(rng, { x: x - rx, y: y - ry, w: rx * 2, h: ry * 2 }, Math.round((rx * ry) / 18), [0.8, 2.2], ["#3f4448", "#e4e7ea"], 0.7)}</g>`;
   }
-  return `<g fill="#a7acb0" opacity="0.5" filter="url(#blur3)">${patches}</g>${pits}`;
+  return `<g fill="#7f8589" opacity="0.55" filter="url(#blur3)">${patches}</g>${pits}`;
 }
 
 /** Fluting: evenly spaced grey bands across the raceway over a dulled stretch, like a washboard. */

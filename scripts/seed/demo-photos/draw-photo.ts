@@ -50,7 +50,7 @@ export async function drawDemoPhoto(spec: DemoPhotoSpec): Promise<Buffer> {
       Make: "Tearline",
       Model: "Demo photo generator",
       Software: "tearline seed-demo",
-      ImageDescription: `TEARLINE DEMO - invented image, not evidence (${spec.caseNumber})`,
+      ImageDescription: `TEARLINE DEMO ${spec.caseNumber} - invented image, not evidence`,
     },
   };
   if (spec.takenAt) exif.IFD2 = { DateTimeOriginal: exifTime(spec.takenAt) };
