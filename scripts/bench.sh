@@ -32,7 +32,7 @@ ensure_node_modules
 export_env
 start_services
 node_modules/.bin/tsx scripts/migrate.ts >"$DATA_DIR/logs/migrate.log" 2>&1 || { cat "$DATA_DIR/logs/migrate.log"; fail "migrations failed"; }
-node_modules/.bin/tsx scripts/seed-demo.ts --quiet >"$DATA_DIR/logs/seed.log" 2>&1 || { tail -30 "$DATA_DIR/logs/seed.log"; fail "demo seed failed"; }
+node_modules/.bin/tsx --conditions=react-server scripts/seed-demo.ts --quiet >"$DATA_DIR/logs/seed.log" 2>&1 || { tail -30 "$DATA_DIR/logs/seed.log"; fail "demo seed failed"; }
 
 failed=0
 for f in "${benches[@]}"; do

@@ -20,7 +20,7 @@ start_services
 say "Database on 127.0.0.1:$PG_PORT, object store on :$S3_PORT, mail fake on :$SMTP_PORT (read at $MAIL_FAKE_URL/messages)"
 
 node_modules/.bin/tsx scripts/migrate.ts
-node_modules/.bin/tsx scripts/seed-demo.ts ${TEARLINE_RESEED:+--reset}
+node_modules/.bin/tsx --conditions=react-server scripts/seed-demo.ts ${TEARLINE_RESEED:+--reset}
 
 say "Building the production app…"
 export NEXT_DIST_DIR=.next

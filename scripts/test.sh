@@ -33,7 +33,7 @@ export CHROMIUM_PATH="${CHROMIUM_PATH:-$(command -v chromium)}"
 start_services
 
 node_modules/.bin/tsx scripts/migrate.ts >"$DATA_DIR/logs/migrate.log" 2>&1 || { cat "$DATA_DIR/logs/migrate.log"; fail "migrations failed"; }
-node_modules/.bin/tsx scripts/seed-demo.ts --quiet >"$DATA_DIR/logs/seed.log" 2>&1 || { tail -30 "$DATA_DIR/logs/seed.log"; fail "demo seed failed"; }
+node_modules/.bin/tsx --conditions=react-server scripts/seed-demo.ts --quiet >"$DATA_DIR/logs/seed.log" 2>&1 || { tail -30 "$DATA_DIR/logs/seed.log"; fail "demo seed failed"; }
 
 say "Building the app for the browser and API tests…"
 export NEXT_DIST_DIR="${TEST_DIST_DIR:-.next-test}"
