@@ -114,8 +114,10 @@ export function nicks(rng: Rng, s: Surface): string {
 export function cracks(rng: Rng, s: Surface, kind: "forced" | "fatigue" | "thermal"): string {
   const line = (x: number, y: number, len: number, a: number, steps: number) => {
     const pts: [number, number][] = [[x, y]];
+    const heading = a;
     for (let i = 0; i < steps; i++) {
-      a += rng.real(-0.5, 0.5);
+      // Wanders, but keeps to its heading: cracks run across the raceway.
+      a += rng.real(-0.45, 0.45) + (heading - a) * 0.35;
       const [px, py] = pts[pts.length - 1];
       pts.push([px + Math.cos(a) * (len / steps), py + Math.sin(a) * (len / steps)]);
     }
