@@ -20,6 +20,7 @@ done
 [ ${#benches[@]} -gt 0 ] || fail "no bench in scripts/bench/ matches: $*"
 
 cleanup() {
+  trap "" INT TERM
   stop_all
   rm -rf "$DATA_DIR"
 }

@@ -10,7 +10,8 @@ SMTP_PORT="${SMTP_PORT:-2525}" MAIL_HTTP_PORT="${MAIL_HTTP_PORT:-8025}"
 PG_USER=tearline PG_PASSWORD="${PG_PASSWORD:-tearline-local}" PG_DB=tearline
 mkdir -p "$DATA_DIR/logs"
 
-trap 'say "Stopping…"; stop_all; say "Stopped."' EXIT
+# A second signal (npm passes Ctrl-C on as TERM) must not cut the clean-up short.
+trap 'trap "" INT TERM; say "Stopping…"; stop_all; say "Stopped."' EXIT
 trap 'exit 130' INT TERM
 
 require_free_port "$APP_PORT" "Tearline web app" APP_PORT

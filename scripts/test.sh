@@ -11,6 +11,7 @@ SMTP_PORT="${TEST_SMTP_PORT:-2535}" MAIL_HTTP_PORT="${TEST_MAIL_HTTP_PORT:-8035}
 PG_USER=tearline PG_PASSWORD=tearline-test PG_DB=tearline_test PG_FSYNC=off
 
 cleanup() {
+  trap "" INT TERM
   stop_all
   rm -rf "$DATA_DIR"
 }
