@@ -3,11 +3,10 @@
 import "server-only";
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
+import { startBackgroundTimer } from "@/lib/background-timer";
 import { digestDue } from "./schedule-time";
 import { lastDigestSentAt, sendDigest } from "./send";
 
-const RUNNING = Symbol.for("tearline.digestSchedule");
-type Holder = { [RUNNING]?: NodeJS.Timeout };
 const HOUR_MS = 3_600_000;
 
 export async function sendDigestIfDue(now = new Date()): Promise<boolean> {
@@ -21,19 +20,5 @@ export async function sendDigestIfDue(now = new Date()): Promise<boolean> {
 }
 
 export function startDigestSchedule(intervalMs = HOUR_MS): boolean {
-  const holder = globalThis as Holder;
-  if (holder[RUNNING]) return false;
-  let busy = false;
-  const timer = setInterval(() => {
-    if (busy) return;
-    busy = true;
-    sendDigestIfDue()
-      .catch((err: unknown) => console.error("weekly digest failed:", err instanceof Error ? err.message : err))
-      .finally(() => {
-        busy = false;
-      });
-  }, intervalMs);
-  timer.unref?.();
-  holder[RUNNING] = timer;
-  return true;
+  return startBackgroundTimer("weekly digest", intervalMs, () => sendDigestIfDue());
 }
