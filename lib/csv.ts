@@ -42,10 +42,12 @@ export function toCsv(header: readonly string[], rows: readonly (readonly CsvVal
 }
 
 /**
- * Reads CSV text back into records (RFC 4180 grammar, CRLF or LF line ends). Used by tests and
- * imports; a trailing line end does not make an empty record.
+ * Reads CSV text back into records (RFC 4180 grammar; CRLF, LF or a lone CR end a record; a leading
+ * byte-order mark is dropped). A trailing line end does not make an empty record. Unless `lenient`,
+ * text that ends inside a quoted field is refused; uploads read it leniently and judge the rows.
  */
-export function parseCsv(text: string): string[][] {
+export function parseCsv(input: string, { lenient = false }: { lenient?: boolean } = {}): string[][] {
+  const text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   const records: string[][] = [];
   let field = "";
   let record: string[] = [];
@@ -78,11 +80,11 @@ export function parseCsv(text: string): string[][] {
     else if (ch === "\r" && text[i + 1] === "\n") {
       endRecord();
       i++;
-    } else if (ch === "\n") endRecord();
+    } else if (ch === "\n" || ch === "\r") endRecord();
     else field += ch;
     i++;
   }
-  if (quoted) throw new Error("CSV ends inside a quoted field.");
+  if (quoted && !lenient) throw new Error("CSV ends inside a quoted field.");
   if (field !== "" || record.length > 0) endRecord();
   return records;
 }
