@@ -1,14 +1,4 @@
-// A code as the Code lists page hands it to its client pieces.
-import type { CodeListName } from "@/db/schema/code-lists";
+// A code as the Code lists page hands it to its client pieces: the entry plus how many cases use it.
+import type { CodeEntryView } from "@/lib/classification/code-entry-view";
 
-export type CodeView = {
-  list: CodeListName;
-  code: string;
-  label: string;
-  description: string;
-  family: string | null;
-  isoMode: string | null;
-  synonyms: string[];
-  retired: boolean;
-  cases: number;
-};
+export type CodeView = CodeEntryView & { cases: number };
