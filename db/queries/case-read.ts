@@ -1,6 +1,6 @@
 // Reading one case with everything the case page shows, and resolving a case by id or number.
 import "server-only";
-import { asc, desc, eq, or } from "drizzle-orm";
+import { asc, desc, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { caseEvents, cases, findings, sites, user } from "@/db/schema";
@@ -68,6 +68,6 @@ export async function listCaseHistory(caseId: string) {
 
 export async function sitePolicy(siteId: string | null | undefined) {
   if (!siteId) return null;
-  const [s] = await db.select({ maxIn: sites.endPlayMaxIn, dialSpreadIn: sites.dialSpreadIn, tapeSpreadIn: sites.tapeSpreadIn, kind: sites.kind }).from(sites).where(or(eq(sites.id, siteId)));
+  const [s] = await db.select({ maxIn: sites.endPlayMaxIn, dialSpreadIn: sites.dialSpreadIn, tapeSpreadIn: sites.tapeSpreadIn, kind: sites.kind }).from(sites).where(eq(sites.id, siteId));
   return s ?? null;
 }
