@@ -8,11 +8,12 @@ cd "$ROOT"
 DATA_DIR="${TEST_DATA_DIR:-$ROOT/.test-data}"
 APP_PORT="${TEST_APP_PORT:-3100}" PG_PORT="${TEST_PG_PORT:-54339}" S3_PORT="${TEST_S3_PORT:-4579}"
 SMTP_PORT="${TEST_SMTP_PORT:-2535}" MAIL_HTTP_PORT="${TEST_MAIL_HTTP_PORT:-8035}"
-PG_USER=tearline PG_PASSWORD=tearline-test PG_DB=tearline_test PG_FSYNC=off
+PG_USER=tearline PG_PASSWORD=tearline-test PG_DB=tearline_test PG_FSYNC=off PG_PURPOSE=test
 
 cleanup() {
   trap "" INT TERM
   stop_all
+  remove_postgres
   rm -rf "$DATA_DIR"
 }
 trap cleanup EXIT
@@ -20,7 +21,7 @@ trap 'exit 130' INT TERM
 
 # Every run starts from nothing: fresh cluster, empty bucket, empty mailbox.
 if [ -d "$DATA_DIR" ]; then
-  [ -f "$DATA_DIR/pg/postmaster.pid" ] && pg_run "$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/pg_ctl" -D "$DATA_DIR/pg" -m immediate stop >/dev/null 2>&1 || true
+  remove_postgres
   rm -rf "$DATA_DIR"
 fi
 mkdir -p "$DATA_DIR/logs"

@@ -26,7 +26,12 @@ wait_port() { # port name seconds
   fail "$2 did not start listening on 127.0.0.1:$1 within ${3:-30}s; see $DATA_DIR/logs/$2.log"
 }
 
-as_root() { if [ "$(id -u)" -eq 0 ]; then "$@"; else sudo "$@"; fi; }
+as_root() {
+  if [ "$(id -u)" -eq 0 ]; then "$@"
+  elif command -v sudo >/dev/null 2>&1; then sudo "$@"
+  else fail "The first install needs root: run this command once as root, or install sudo and allow this user to use it."
+  fi
+}
 
 ensure_apt() { # binary package...
   command -v "$1" >/dev/null 2>&1 && return 0
@@ -61,25 +66,68 @@ pg_run() {
   if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
 }
 
+# The cluster lives in $DATA_DIR/pg, unless we are root and the postgres user cannot pass a folder
+# above it (a clone in a 0700 home or mktemp -d folder). Then it lives in a folder of its own under
+# /var/tmp, named after the checkout and purpose, and $DATA_DIR/pg-elsewhere names that folder.
+pg_elsewhere_dir() {
+  local name hash
+  name="$(basename "$ROOT" | tr -c 'A-Za-z0-9._-' '_')"
+  hash="$(printf '%s' "$DATA_DIR" | sha256sum | cut -c1-8)"
+  printf '/var/tmp/tearline-%s-%s-%s' "$name" "$hash" "${PG_PURPOSE:-$(basename "$DATA_DIR" | tr -dc 'A-Za-z0-9_-')}"
+}
+
+pg_locate() { # sets PG_DIR, PG_LOG and PG_ELSEWHERE for the cluster this $DATA_DIR uses
+  PG_ELSEWHERE=""
+  [ -f "$DATA_DIR/pg-elsewhere" ] && PG_ELSEWHERE="$(cat "$DATA_DIR/pg-elsewhere")"
+  if [ -n "$PG_ELSEWHERE" ]; then
+    PG_DIR="$PG_ELSEWHERE/pg" PG_LOG="$PG_ELSEWHERE/postgres.log"
+  else
+    PG_DIR="$DATA_DIR/pg" PG_LOG="$DATA_DIR/logs/postgres.log"
+  fi
+}
+
+postgres_reaches_data_dir() {
+  [ "$(id -u)" -ne 0 ] || runuser -u postgres -- test -x "$DATA_DIR" 2>/dev/null
+}
+
+# A folder under /var/tmp without a pointer in $DATA_DIR is left from a deleted $DATA_DIR: start it afresh.
+pg_make_elsewhere() {
+  local ext; ext="$(pg_elsewhere_dir)"
+  if [ -e "$ext" ]; then
+    [ -f "$ext/pg/postmaster.pid" ] && pg_run "$PG_BIN/pg_ctl" -D "$ext/pg" -m immediate stop >/dev/null 2>&1
+    rm -rf "$ext"
+  fi
+  mkdir -m 700 "$ext" || fail "could not create $ext for the PostgreSQL cluster"
+  chown postgres: "$ext"
+  printf '%s\n' "$ext" >"$DATA_DIR/pg-elsewhere"
+  say "The postgres user cannot enter a folder above $DATA_DIR, so the cluster lives in $ext (removed with $DATA_DIR's pointer file pg-elsewhere)"
+  pg_locate
+}
+
 start_postgres() {
-  local dir="$DATA_DIR/pg"
   require_free_port "$PG_PORT" postgres PG_PORT
-  if [ ! -f "$dir/PG_VERSION" ]; then
-    say "Creating a private PostgreSQL cluster in $dir"
-    mkdir -p "$dir"
-    local pw="$DATA_DIR/pg.pw"
+  pg_locate
+  if [ ! -f "$PG_DIR/PG_VERSION" ]; then
+    rm -f "$DATA_DIR/pg-elsewhere"; pg_locate
+    postgres_reaches_data_dir || pg_make_elsewhere
+    say "Creating a private PostgreSQL cluster in $PG_DIR"
+    mkdir -p "$PG_DIR"
+    local pw; pw="$(dirname "$PG_DIR")/pg.pw"
     printf '%s' "$PG_PASSWORD" >"$pw"
-    if [ "$(id -u)" -eq 0 ]; then chown -R postgres: "$dir" "$pw"; chmod 700 "$dir"; fi
-    pg_run "$PG_BIN/initdb" -D "$dir" -U "$PG_USER" --pwfile="$pw" --auth-host=scram-sha-256 \
+    if [ "$(id -u)" -eq 0 ]; then chown -R postgres: "$PG_DIR" "$pw"; chmod 700 "$PG_DIR"; fi
+    pg_run "$PG_BIN/initdb" -D "$PG_DIR" -U "$PG_USER" --pwfile="$pw" --auth-host=scram-sha-256 \
       --auth-local=scram-sha-256 -E UTF8 --locale=C.UTF-8 >"$DATA_DIR/logs/initdb.log" 2>&1 \
       || fail "initdb failed; see $DATA_DIR/logs/initdb.log"
     rm -f "$pw"
   fi
-  [ "$(id -u)" -eq 0 ] && chown postgres: "$DATA_DIR/logs" 2>/dev/null
-  touch "$DATA_DIR/logs/postgres.log"; [ "$(id -u)" -eq 0 ] && chown postgres: "$DATA_DIR/logs/postgres.log"
-  pg_run "$PG_BIN/pg_ctl" -D "$dir" -l "$DATA_DIR/logs/postgres.log" -w -t 30 \
+  touch "$PG_LOG"
+  if [ "$(id -u)" -eq 0 ]; then
+    chown postgres: "$PG_LOG"
+    [ -z "$PG_ELSEWHERE" ] && chown postgres: "$DATA_DIR/logs" 2>/dev/null
+  fi
+  pg_run "$PG_BIN/pg_ctl" -D "$PG_DIR" -l "$PG_LOG" -w -t 30 \
     -o "-c listen_addresses=127.0.0.1 -p $PG_PORT -c unix_socket_directories='' -c fsync=${PG_FSYNC:-on} -c max_connections=100" start >/dev/null \
-    || fail "PostgreSQL did not start; see $DATA_DIR/logs/postgres.log"
+    || fail "PostgreSQL did not start; see $PG_LOG"
   PG_STARTED=1
   PGPASSWORD="$PG_PASSWORD" "$PG_BIN/psql" -h 127.0.0.1 -p "$PG_PORT" -U "$PG_USER" -d postgres -tAc \
     "SELECT 1 FROM pg_database WHERE datname = '$PG_DB'" | grep -q 1 \
@@ -89,8 +137,20 @@ start_postgres() {
 
 stop_postgres() {
   [ "${PG_STARTED:-0}" = 1 ] || return 0
-  pg_run "$PG_BIN/pg_ctl" -D "$DATA_DIR/pg" -m fast -w stop >/dev/null 2>&1 || true
+  pg_run "$PG_BIN/pg_ctl" -D "$PG_DIR" -m fast -w stop >/dev/null 2>&1 || true
   PG_STARTED=0
+}
+
+# Stops whatever cluster this $DATA_DIR uses and deletes it, wherever it lives (the test run's clean-up).
+remove_postgres() {
+  pg_locate
+  PG_BIN="${PG_BIN:-$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -1)}"
+  if [ -f "$PG_DIR/postmaster.pid" ] && [ -n "$PG_BIN" ]; then
+    pg_run "$PG_BIN/pg_ctl" -D "$PG_DIR" -m immediate stop >/dev/null 2>&1 || true
+  fi
+  PG_STARTED=0
+  [ -n "$PG_ELSEWHERE" ] && case "$PG_ELSEWHERE" in /var/tmp/tearline-*) rm -rf "$PG_ELSEWHERE" ;; esac
+  return 0
 }
 
 start_node_service() { # name port portvar command...
