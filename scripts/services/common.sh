@@ -62,8 +62,12 @@ ensure_node_modules() {
 }
 
 # postgres refuses to run as root: when we are root, the cluster belongs to the postgres user.
+# With the cluster kept elsewhere every path is absolute, so it runs from / (postgres may not enter here).
 pg_run() {
-  if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  if [ "$(id -u)" -ne 0 ]; then "$@"
+  elif [ -n "${PG_ELSEWHERE:-}" ]; then (cd / && runuser -u postgres -- "$@")
+  else runuser -u postgres -- "$@"
+  fi
 }
 
 # The cluster lives in $DATA_DIR/pg, unless we are root and the postgres user cannot pass a folder
@@ -71,7 +75,7 @@ pg_run() {
 # /var/tmp, named after the checkout and purpose, and $DATA_DIR/pg-elsewhere names that folder.
 pg_elsewhere_dir() {
   local name hash
-  name="$(basename "$ROOT" | tr -c 'A-Za-z0-9._-' '_')"
+  name="$(basename "$ROOT")"; name="${name//[^A-Za-z0-9._-]/_}"
   hash="$(printf '%s' "$DATA_DIR" | sha256sum | cut -c1-8)"
   printf '/var/tmp/tearline-%s-%s-%s' "$name" "$hash" "${PG_PURPOSE:-$(basename "$DATA_DIR" | tr -dc 'A-Za-z0-9_-')}"
 }
@@ -92,7 +96,7 @@ postgres_reaches_data_dir() {
 
 # A folder under /var/tmp without a pointer in $DATA_DIR is left from a deleted $DATA_DIR: start it afresh.
 pg_make_elsewhere() {
-  local ext; ext="$(pg_elsewhere_dir)"
+  local ext; ext="$(pg_elsewhere_dir)"; PG_ELSEWHERE="$ext"
   if [ -e "$ext" ]; then
     [ -f "$ext/pg/postmaster.pid" ] && pg_run "$PG_BIN/pg_ctl" -D "$ext/pg" -m immediate stop >/dev/null 2>&1
     rm -rf "$ext"
@@ -100,7 +104,7 @@ pg_make_elsewhere() {
   mkdir -m 700 "$ext" || fail "could not create $ext for the PostgreSQL cluster"
   chown postgres: "$ext"
   printf '%s\n' "$ext" >"$DATA_DIR/pg-elsewhere"
-  say "The postgres user cannot enter a folder above $DATA_DIR, so the cluster lives in $ext (removed with $DATA_DIR's pointer file pg-elsewhere)"
+  say "The postgres user cannot enter a folder above $DATA_DIR, so its PostgreSQL cluster is kept in $ext"
   pg_locate
 }
 
