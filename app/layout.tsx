@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { headers } from "next/headers";
 import "./globals.css";
 
 export const metadata: Metadata = {
@@ -15,7 +16,9 @@ export const viewport: Viewport = {
   ],
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page carries a per-request script nonce, so every page renders per request.
+  await headers();
   return (
     <html lang="en">
       <body className="min-h-dvh bg-bg font-sans text-ink antialiased">{children}</body>

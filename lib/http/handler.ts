@@ -4,6 +4,7 @@ import { NextResponse, type NextRequest } from "next/server";
 import { z, type ZodType } from "zod";
 import { requireApiUser, type CurrentUser } from "@/lib/auth/session";
 import type { Permission } from "@/lib/auth/permissions";
+import { JSON_MAX_BYTES, readTextLimited } from "./body";
 import { HttpError } from "./errors";
 
 type Ctx<P> = { req: NextRequest; user: CurrentUser; params: P };
@@ -32,9 +33,10 @@ export function errorResponse(err: unknown): NextResponse {
 }
 
 export async function parseJson<T>(req: NextRequest, schema: ZodType<T>): Promise<T> {
+  const text = await readTextLimited(req, JSON_MAX_BYTES);
   let body: unknown;
   try {
-    body = await req.json();
+    body = JSON.parse(text);
   } catch {
     throw new HttpError(400, "bad-request", "The request body must be JSON.");
   }
