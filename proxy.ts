@@ -1,8 +1,8 @@
 // Runs before every request: security headers with a fresh script nonce on every response, and the
-// origin and body-type check on state-changing API calls.
+// origin check on state-changing API calls (the body type is checked in withRole).
 import { NextResponse, type NextRequest } from "next/server";
 import { HSTS, STATIC_SECURITY_HEADERS, contentSecurityPolicy } from "@/lib/security/headers";
-import { checkApiRequest } from "@/lib/security/request-rules";
+import { checkOrigin } from "@/lib/security/request-rules";
 
 const appUrl = process.env.APP_URL ?? process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
 const allowedOrigins = [new URL(appUrl).origin, new URL(appUrl.replace("127.0.0.1", "localhost")).origin];
@@ -25,8 +25,7 @@ export function proxy(req: NextRequest) {
   const csp = contentSecurityPolicy(nonce, process.env.NODE_ENV === "development");
   const https = overHttps(req);
 
-  const hasBody = req.headers.has("content-length") ? req.headers.get("content-length") !== "0" : req.headers.has("transfer-encoding");
-  const refusal = checkApiRequest(req.method, req.nextUrl.pathname, req.headers.get("origin"), req.headers.get("content-type"), hasBody, allowedOrigins);
+  const refusal = checkOrigin(req.method, req.nextUrl.pathname, req.headers.get("origin"), allowedOrigins);
   if (refusal) {
     return withHeaders(NextResponse.json({ error: refusal.message, code: refusal.code }, { status: refusal.status }), csp, https);
   }

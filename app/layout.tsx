@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import { headers } from "next/headers";
+import { ZodJitless } from "@/components/zod-jitless";
 import "./globals.css";
 
 export const metadata: Metadata = {
@@ -21,7 +22,10 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await headers();
   return (
     <html lang="en">
-      <body className="min-h-dvh bg-bg font-sans text-ink antialiased">{children}</body>
+      <body className="min-h-dvh bg-bg font-sans text-ink antialiased">
+        <ZodJitless />
+        {children}
+      </body>
     </html>
   );
 }

@@ -6,6 +6,7 @@ import { requireApiUser, type CurrentUser } from "@/lib/auth/session";
 import type { Permission } from "@/lib/auth/permissions";
 import { JSON_MAX_BYTES, readTextLimited } from "./body";
 import { HttpError } from "./errors";
+import { checkBodyType, requestHasBody } from "@/lib/security/request-rules";
 
 type Ctx<P> = { req: NextRequest; user: CurrentUser; params: P };
 
@@ -54,6 +55,8 @@ export function withRole<P = Record<string, string>>(
   return async (req: NextRequest, route: { params: Promise<P> }): Promise<Response> => {
     try {
       const user = await requireApiUser(permission ?? undefined);
+      const refusal = checkBodyType(req.method, req.nextUrl.pathname, req.headers.get("content-type"), requestHasBody(req.headers));
+      if (refusal) throw new HttpError(refusal.status, refusal.code, refusal.message);
       const params = route?.params ? await route.params : ({} as P);
       return await handler({ req, user, params });
     } catch (err) {

@@ -45,8 +45,10 @@ export function guardSignIn(handler: Handler): Handler {
     const res = await handler(req);
     if (res.status === 200) {
       if (email) await clearCounter(accountKey(email));
-      await audit("sign-in", null, { subject: email, headers: req.headers });
-    } else if (res.status === 401 || res.status === 403) {
+      const who = (await res.clone().json().catch(() => null)) as { user?: { id?: string; email?: string } } | null;
+      await audit("sign-in", who?.user?.id && who.user.email ? { id: who.user.id, email: who.user.email } : null, { subject: email, headers: req.headers });
+    } else if (res.status === 401) {
+      // Only a wrong e-mail or password counts; a suspended account (403) gave the right one.
       await addFailure(addressKey(address), SIGN_IN_LIMITS.addressWindowSeconds, null, 0);
       if (email) {
         const c = await addFailure(accountKey(email), SIGN_IN_LIMITS.accountWindowSeconds, SIGN_IN_LIMITS.accountFailures, SIGN_IN_LIMITS.lockMinutes);
