@@ -46,7 +46,7 @@ describe("sign-in limits", () => {
     // Only an admin may unlock.
     expect((await (await as("manager")).post(`/api/admin/users/${person.id}/unlock`, {})).status).toBe(403);
     const people = await (await as("admin")).get("/admin/users");
-    expect(await people.text()).toContain("Locked after failed sign-ins");
+    expect(await people.text()).toContain("Sign-in locked");
     expect((await (await as("admin")).post(`/api/admin/users/${person.id}/unlock`, {})).status).toBe(200);
     expect((await signInFrom(loopback(203, 21), person.email, person.password)).status).toBe(200);
 

@@ -59,7 +59,7 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
           {person.name}
           {isSelf ? <Badge tone="accent">You</Badge> : null}
           {suspended ? <Badge tone="danger">Suspended</Badge> : null}
-          {person.locked ? <Badge tone="danger">Locked after failed sign-ins</Badge> : null}
+          {person.locked ? <span title="Locked after repeated failed sign-ins"><Badge tone="danger">Sign-in locked</Badge></span> : null}
         </p>
         <p className="truncate text-sm text-muted">{person.email}</p>
       </div>
