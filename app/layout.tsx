@@ -1,4 +1,6 @@
 import type { Metadata, Viewport } from "next";
+import { headers } from "next/headers";
+import { ZodJitless } from "@/components/zod-jitless";
 import "./globals.css";
 
 export const metadata: Metadata = {
@@ -15,10 +17,15 @@ export const viewport: Viewport = {
   ],
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page carries a per-request script nonce, so every page renders per request.
+  await headers();
   return (
     <html lang="en">
-      <body className="min-h-dvh bg-bg font-sans text-ink antialiased">{children}</body>
+      <body className="min-h-dvh bg-bg font-sans text-ink antialiased">
+        <ZodJitless />
+        {children}
+      </body>
     </html>
   );
 }

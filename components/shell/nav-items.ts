@@ -13,6 +13,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/admin/sites", label: "Sites & limits", icon: "M4 20h16M6 20V9l6-4 6 4v11", permission: "admin:sites", group: "admin" },
   { href: "/admin/codes", label: "Code lists", icon: "M7 7h10M7 12h10M7 17h6", permission: "admin:codes", group: "admin" },
   { href: "/admin/outbox", label: "Outbox", icon: "M4 6h16v12H4zM4 7l8 6 8-6", permission: "admin:outbox", group: "admin" },
+  { href: "/admin/audit", label: "Audit log", icon: "M9 4h6v3H9zM6 6h12v14H6zM9 11h6M9 15h6", permission: "admin:audit", group: "admin" },
 ];
 
 export function navFor(role: Role): NavItem[] {

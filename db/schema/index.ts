@@ -9,3 +9,4 @@ export * from "./photos";
 export * from "./mail";
 export * from "./fleet";
 export * from "./search";
+export * from "./security";

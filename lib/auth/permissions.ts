@@ -36,6 +36,7 @@ export const PERMISSIONS = {
   "admin:sites": ["admin"],
   "admin:codes": ["admin"],
   "admin:outbox": ["admin"],
+  "admin:audit": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -60,7 +60,7 @@ function isCalendarDay(s: string): boolean {
 }
 
 const day = (what: string) =>
-  z.preprocess(blank, z.string().refine(isCalendarDay, `${what} must be a real date written YYYY-MM-DD, like 2026-03-14.`).optional());
+  z.preprocess(blank, z.string().max(10, `${what} must be written YYYY-MM-DD.`).refine(isCalendarDay, `${what} must be a real date written YYYY-MM-DD, like 2026-03-14.`).optional());
 
 const sortSchema = z.preprocess(
   blank,

@@ -59,7 +59,7 @@ export const fieldReportSchema = z.object({
   removedOn: isoDate.nullable(),
   siteId: z.string().uuid("Choose the removal site from the list.").nullable(),
   labSiteId: z.string().uuid("Choose the lab from the list.").nullable(),
-  trigger: z.string().min(1, "Choose what triggered the removal."),
+  trigger: z.string().min(1, "Choose what triggered the removal.").max(40, "Choose a trigger from the list."),
   triggerDetail: z.record(z.string(), z.union([z.string().max(200), z.number(), z.boolean(), z.null()])),
   serviceMiles: z.number().int().min(0).max(10_000_000).nullable(),
   ratingC: optionalNumber(1, 1e9, "Dynamic load rating C"),
@@ -78,7 +78,7 @@ export const teardownSchema = z.object({
 export const findingSchema = z.object({
   component: z.enum(codes(COMPONENTS), { message: "Choose the part the finding is on." }),
   row: z.enum(["inboard", "outboard"]).nullable().optional(),
-  damageCode: z.string().min(1, "Choose a damage code."),
+  damageCode: z.string().min(1, "Choose a damage code.").max(40, "Choose a damage code from the list."),
   severity: z.number().int().min(0, "Severity is 0 to 4.").max(4, "Severity is 0 to 4."),
   clockDeg: z.number().int().min(0, "Clock position is 0° to 359°.").max(359, "Clock position is 0° to 359°.").nullable().optional(),
   arcDeg: z.number().int().min(1, "Arc is 1° to 360°.").max(360, "Arc is 1° to 360°.").nullable().optional(),
@@ -90,7 +90,7 @@ export const findingSchema = z.object({
 export type FindingInput = z.infer<typeof findingSchema>;
 
 export const verdictSchema = z.object({
-  primaryCause: z.string().min(1, "Choose the primary root cause.").nullable(),
+  primaryCause: z.string().min(1, "Choose the primary root cause.").max(40, "Choose a root cause from the list.").nullable(),
   contributingCauses: z.array(z.string().min(1)).max(6, "At most 6 contributing causes."),
   confidence: z.enum(codes(CONFIDENCES) as ["confirmed", "probable", "undetermined"]).nullable(),
   removalConfirmed: z.enum(["confirmed", "no-defect"]).nullable(),

@@ -54,7 +54,7 @@ const sectionSchemas = { field: fieldReportSchema, teardown: teardownSchema, ver
 export const saveSectionSchema = z.object({
   version: z.number().int().positive("Send the version of the case you edited."),
   section: z.enum(["field", "teardown", "verdict"], { message: "Section must be field, teardown or verdict." }),
-  data: z.record(z.string(), z.unknown()),
+  data: z.record(z.string().max(64), z.unknown()).refine((d) => Object.keys(d).length <= 200, "Too many fields in one save."),
 });
 
 export async function saveSection(key: string, body: unknown, user: CurrentUser) {

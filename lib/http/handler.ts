@@ -4,7 +4,9 @@ import { NextResponse, type NextRequest } from "next/server";
 import { z, type ZodType } from "zod";
 import { requireApiUser, type CurrentUser } from "@/lib/auth/session";
 import type { Permission } from "@/lib/auth/permissions";
+import { JSON_MAX_BYTES, readTextLimited } from "./body";
 import { HttpError } from "./errors";
+import { checkBodyType, requestHasBody } from "@/lib/security/request-rules";
 
 type Ctx<P> = { req: NextRequest; user: CurrentUser; params: P };
 
@@ -32,9 +34,10 @@ export function errorResponse(err: unknown): NextResponse {
 }
 
 export async function parseJson<T>(req: NextRequest, schema: ZodType<T>): Promise<T> {
+  const text = await readTextLimited(req, JSON_MAX_BYTES);
   let body: unknown;
   try {
-    body = await req.json();
+    body = JSON.parse(text);
   } catch {
     throw new HttpError(400, "bad-request", "The request body must be JSON.");
   }
@@ -52,6 +55,8 @@ export function withRole<P = Record<string, string>>(
   return async (req: NextRequest, route: { params: Promise<P> }): Promise<Response> => {
     try {
       const user = await requireApiUser(permission ?? undefined);
+      const refusal = checkBodyType(req.method, req.nextUrl.pathname, req.headers.get("content-type"), requestHasBody(req.headers));
+      if (refusal) throw new HttpError(refusal.status, refusal.code, refusal.message);
       const params = route?.params ? await route.params : ({} as P);
       return await handler({ req, user, params });
     } catch (err) {

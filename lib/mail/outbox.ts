@@ -5,6 +5,7 @@ import { and, eq, lte, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { mailOutbox, type OutboxMail } from "@/db/schema";
 import { env } from "@/lib/env";
+import { ONE_TIME_LINK_KINDS, redactOneTimeLinks } from "./redact-links";
 import { mailRetryIntervalMs } from "./retry-interval";
 import { mailTransport } from "./transport";
 import type { RenderedMail } from "./templates/layout";
@@ -40,7 +41,8 @@ export async function deliver(id: string): Promise<boolean> {
 async function send(mail: OutboxMail): Promise<boolean> {
   try {
     await mailTransport().sendMail({ from: env().MAIL_FROM, to: mail.to, subject: mail.subject, html: mail.html, text: mail.text });
-    await db.update(mailOutbox).set({ status: "sent", sentAt: new Date(), lastError: null }).where(eq(mailOutbox.id, mail.id));
+    const redact = ONE_TIME_LINK_KINDS.has(mail.kind) ? { html: redactOneTimeLinks(mail.html), text: redactOneTimeLinks(mail.text) } : {};
+    await db.update(mailOutbox).set({ status: "sent", sentAt: new Date(), lastError: null, ...redact }).where(eq(mailOutbox.id, mail.id));
     return true;
   } catch (err) {
     const failed = mail.attempts >= MAX_ATTEMPTS;

@@ -17,7 +17,7 @@ const value = z.string().trim().min(1).max(80).regex(/^[\p{L}\p{N}][\p{L}\p{N} .
 
 /** "a,b" or ["a", "b,c"] → ["a", "b", "c"], without repeats. */
 const list = z
-  .union([z.string(), z.array(z.string())])
+  .union([z.string().max(2000), z.array(z.string().max(400)).max(100)])
   .transform((v) => [...new Set((Array.isArray(v) ? v : [v]).flatMap((s) => s.split(",")).map((s) => s.trim()).filter(Boolean))])
   .pipe(z.array(value).max(MAX_VALUES));
 

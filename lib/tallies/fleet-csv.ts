@@ -11,7 +11,7 @@ export const MAX_FLEET_ROWS = 200_000;
 export const FLEET_TEMPLATE = `${FLEET_COLUMNS.join(",")}\r\nSRX40001,F,2019-04-10,2026-03-31,,\r\nSRX40002,G,,2026-03-31,58.5,402000\r\n`;
 
 // One message per bad date: the format first, then whether the day exists.
-const isoDate = z.string().superRefine((s, ctx) => {
+const isoDate = z.string().max(10, "write the date as YYYY-MM-DD").superRefine((s, ctx) => {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(s)) ctx.addIssue({ code: "custom", message: "write the date as YYYY-MM-DD" });
   else if (Number.isNaN(Date.parse(`${s}T00:00:00Z`)) || !new Date(`${s}T00:00:00Z`).toISOString().startsWith(s)) ctx.addIssue({ code: "custom", message: "not a real calendar date" });
 });

@@ -1,10 +1,48 @@
 // Debian's Chromium driven by playwright-core (no browser download), for page tests.
-import { chromium, type Browser, type Page } from "playwright-core";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import { afterEach } from "vitest";
 import { DEMO_PASSWORD } from "../../scripts/seed/demo-people";
 import { demoUser, type DemoRole } from "./api";
 import { APP_URL, CHROMIUM_PATH } from "./env";
 
+// Every page runs under the app's content-security policy; any violation fails the test that caused it.
+const cspViolations: string[] = [];
+const CSP_MESSAGE = /Content Security Policy|Content-Security-Policy|securitypolicyviolation/i;
+
+afterEach(() => {
+  const seen = cspViolations.splice(0);
+  if (seen.length) throw new Error(`The page broke the content-security policy:\n${seen.join("\n")}`);
+});
+
+async function watchPolicy(ctx: BrowserContext) {
+  ctx.on("console", (msg) => {
+    if ((msg.type() === "error" || msg.type() === "warning") && CSP_MESSAGE.test(msg.text())) cspViolations.push(msg.text());
+  });
+  await ctx.addInitScript(() => {
+    document.addEventListener("securitypolicyviolation", (e) => {
+      console.error(`securitypolicyviolation: ${e.violatedDirective} blocked ${e.blockedURI || "inline"} (${e.sourceFile}:${e.lineNumber})`);
+    });
+  });
+}
+
 export async function launch(): Promise<Browser> {
+  const browser = await launchChromium();
+  const newContext = browser.newContext.bind(browser);
+  browser.newContext = async (options) => {
+    const ctx = await newContext(options);
+    await watchPolicy(ctx);
+    return ctx;
+  };
+  browser.newPage = async (options) => (await browser.newContext(options)).newPage();
+  return browser;
+}
+
+/** Violations seen so far in this test (a test that expects one can read and clear them). */
+export function takeCspViolations(): string[] {
+  return cspViolations.splice(0);
+}
+
+function launchChromium(): Promise<Browser> {
   return chromium.launch({
     executablePath: CHROMIUM_PATH,
     args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage"],

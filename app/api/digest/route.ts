@@ -3,6 +3,7 @@ import { NextResponse } from "next/server";
 import { z } from "zod";
 import { badRequest } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";
+import { JSON_MAX_BYTES, readTextLimited } from "@/lib/http/body";
 import { sendDigest } from "@/lib/digest/send";
 
 export const dynamic = "force-dynamic";
@@ -11,7 +12,7 @@ export const dynamic = "force-dynamic";
 const body = z.object({}).strict();
 
 export const POST = withRole("digest:send", async ({ req }) => {
-  const text = (await req.text()).trim();
+  const text = (await readTextLimited(req, JSON_MAX_BYTES)).trim();
   if (text) {
     let json: unknown;
     try {

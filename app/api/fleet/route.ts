@@ -4,10 +4,12 @@ import { latestFleetBatch } from "@/db/queries/tallies/life-counts";
 import { storeFleetBatch } from "@/db/queries/tallies/fleet-upload";
 import { badRequest, HttpError } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";
+import { readFormLimited, readTextLimited } from "@/lib/http/body";
 import { FLEET_COLUMNS, parseFleetCsv } from "@/lib/tallies/fleet-csv";
 
 export const dynamic = "force-dynamic";
 const MAX_BYTES = 20 * 1024 * 1024;
+const TOO_LARGE = "The fleet list";
 
 export const GET = withRole("tallies:read", async () => NextResponse.json({ batch: await latestFleetBatch(), columns: FLEET_COLUMNS }));
 
@@ -16,12 +18,12 @@ async function csvText(req: Request): Promise<string> {
   if (length > MAX_BYTES) throw new HttpError(413, "too-large", "The file is larger than 20 MB; split the fleet list.");
   const type = req.headers.get("content-type") ?? "";
   if (type.startsWith("multipart/form-data")) {
-    const file = (await req.formData()).get("file");
+    const file = (await readFormLimited(req, MAX_BYTES + 64 * 1024, TOO_LARGE)).get("file");
     if (!(file instanceof File)) throw badRequest("Attach the fleet list as a CSV file in the field named file.");
     if (file.size > MAX_BYTES) throw new HttpError(413, "too-large", "The file is larger than 20 MB; split the fleet list.");
     return file.text();
   }
-  if (type.startsWith("text/csv") || type.startsWith("text/plain")) return req.text();
+  if (type.startsWith("text/csv") || type.startsWith("text/plain")) return readTextLimited(req, MAX_BYTES, TOO_LARGE);
   throw badRequest("Send the fleet list as text/csv or as a multipart form with a file field.");
 }
 

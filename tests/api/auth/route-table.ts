@@ -61,6 +61,8 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
   "PATCH /api/admin/users/[id]": { access: ADMIN },
   "POST /api/admin/users/[id]/suspend": { access: ADMIN },
   "DELETE /api/admin/users/[id]/suspend": { access: ADMIN },
+  "POST /api/admin/users/[id]/unlock": { access: ADMIN },
+  "GET /api/admin/audit": { access: ADMIN },
   "GET /api/admin/sites": { access: ADMIN },
   "POST /api/admin/sites": { access: ADMIN },
   "PATCH /api/admin/sites/[id]": { access: ADMIN },

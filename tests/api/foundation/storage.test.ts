@@ -48,10 +48,10 @@ describe("object store", () => {
 });
 
 describe("health", () => {
-  it("reports the database, the object store and the mail server as reachable, to anyone", async () => {
+  it("reports the database, the object store and the mail server as reachable, to anyone, as ok alone", async () => {
     const res = await new ApiClient().json<Record<string, { ok: boolean } | boolean>>("GET", "/api/health");
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ ok: true, database: { ok: true }, objectStore: { ok: true }, mail: { ok: true } });
+    expect(res.body).toEqual({ ok: true });
     expect(JSON.stringify(res.body)).not.toMatch(/S3RVER|password|secret/i);
   });
 });

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { ApiClient } from "../../support/api";
 import { linkIn, waitForMail } from "../../support/mail";
 import { acceptAndSignIn, invitedPerson, inviteByMail, mailTo } from "./people";
+import { loopback, signInFrom } from "../../support/from-address";
 
 describe("invitation e-mail", () => {
   it("reaches the invited address with a link that sets the password once", async () => {
@@ -51,7 +52,8 @@ describe("password reset e-mail", () => {
     const newPassword = "a-new-password-for-tove";
     expect((await anonymous.post("/api/auth/reset-password", { newPassword, token })).status).toBe(200);
     await expect(new ApiClient().signIn(person.email, newPassword)).resolves.toBeInstanceOf(ApiClient);
-    const old = await new ApiClient().post("/api/auth/sign-in/email", { email: person.email, password: person.password });
+    // A failing sign-in on purpose: from its own address, so the shared one stays under the limit.
+    const old = await signInFrom(loopback(211, 1), person.email, person.password);
     expect(old.status).toBe(401);
   });
 });

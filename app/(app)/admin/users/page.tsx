@@ -4,6 +4,8 @@ import { Card, PageHeader } from "@/components/ui/card";
 import { listPendingInvitations } from "@/db/queries/invitations";
 import { listSiteChoices } from "@/db/queries/sites";
 import { listUsers } from "@/db/queries/users";
+import { lockedAccountKeys } from "@/db/queries/sign-in-failures";
+import { accountKey } from "@/lib/security/sign-in-rules";
 import { requirePageUser } from "@/lib/auth/session";
 import { InviteForm } from "./_components/invite-form";
 import { PendingInvitations } from "./_components/pending-invitations";
@@ -14,7 +16,8 @@ export const dynamic = "force-dynamic";
 
 export default async function PeoplePage() {
   const me = await requirePageUser("admin:users");
-  const [people, invitations, sites] = await Promise.all([listUsers(), listPendingInvitations(), listSiteChoices()]);
+  const [people, invitations, sites, lockedKeys] = await Promise.all([listUsers(), listPendingInvitations(), listSiteChoices(), lockedAccountKeys()]);
+  const locked = new Set(lockedKeys);
   const active = people.filter((p) => !p.banned).length;
   const now = Date.now();
 
@@ -28,7 +31,7 @@ export default async function PeoplePage() {
       <div className="flex flex-col gap-5">
         <Card title="Everyone with an account">
           <PeopleList
-            people={people.map((p) => ({ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId }))}
+            people={people.map((p) => ({ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId, locked: locked.has(accountKey(p.email)) }))}
             sites={sites}
             meId={me.id}
           />

@@ -30,7 +30,7 @@ export function SignInForm() {
       setErrors({
         form:
           error.status === 429
-            ? "Too many attempts. Wait a minute, then try again."
+            ? (error.message ?? "Too many failed sign-ins. Wait a minute, then try again.")
             : error.status === 401 || error.code === "INVALID_EMAIL_OR_PASSWORD"
               ? "That e-mail and password do not match an account. Check both, or reset the password."
               : error.code === "BANNED_USER"

@@ -5,6 +5,7 @@ import { codeUsageCounts, getCodeEntry, insertCodeEntry, listCodeEntries } from 
 import { familyOfCode } from "@/lib/classification/damage-families";
 import { conflict } from "@/lib/http/errors";
 import { parseJson, parseQuery, withRole } from "@/lib/http/handler";
+import { audit } from "@/lib/security/audit";
 import { CODE_LIST_LABELS, codeCreateSchema, listSchema } from "@/lib/validation/code-entry";
 
 export const GET = withRole("admin:codes", async ({ req }) => {
@@ -13,7 +14,7 @@ export const GET = withRole("admin:codes", async ({ req }) => {
   return NextResponse.json({ codes: rows.map((r) => ({ ...r, cases: usage.get(r.code) ?? 0 })) });
 });
 
-export const POST = withRole("admin:codes", async ({ req }) => {
+export const POST = withRole("admin:codes", async ({ req, user }) => {
   const input = await parseJson(req, codeCreateSchema);
   const taken = `The ${CODE_LIST_LABELS[input.list].one} ${input.code} already exists; edit or restore it instead.`;
   if (await getCodeEntry(input.list, input.code)) throw conflict(taken, { fields: { code: "This code is taken." } });
@@ -27,5 +28,6 @@ export const POST = withRole("admin:codes", async ({ req }) => {
     isoMode: input.list === "damage" ? (input.isoMode ?? null) : null,
   });
   if (!row) throw conflict(taken, { fields: { code: "This code is taken." } });
+  await audit("code-list", user, { subject: `${input.list} ${input.code}`, headers: req.headers, detail: { action: "add" } });
   return NextResponse.json({ code: row }, { status: 201 });
 });

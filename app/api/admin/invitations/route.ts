@@ -3,6 +3,7 @@ import { NextResponse } from "next/server";
 import { listPendingInvitations } from "@/db/queries/invitations";
 import { inviteUser } from "@/lib/accounts/invite";
 import { parseJson, withRole } from "@/lib/http/handler";
+import { audit } from "@/lib/security/audit";
 import { inviteSchema } from "@/lib/validation/account";
 
 export const GET = withRole("admin:users", async () => NextResponse.json({ invitations: await listPendingInvitations() }));
@@ -10,5 +11,6 @@ export const GET = withRole("admin:users", async () => NextResponse.json({ invit
 export const POST = withRole("admin:users", async ({ req, user }) => {
   const input = await parseJson(req, inviteSchema);
   const invitation = await inviteUser(input, user);
+  await audit("invitation", user, { subject: input.email, headers: req.headers, detail: { role: input.role } });
   return NextResponse.json({ invitation }, { status: 201 });
 });

@@ -3,6 +3,7 @@ import { NextResponse } from "next/server";
 import { findSiteByCode, insertSite, listSites, siteUsageCounts } from "@/db/queries/sites";
 import { conflict } from "@/lib/http/errors";
 import { parseJson, withRole } from "@/lib/http/handler";
+import { audit } from "@/lib/security/audit";
 import { siteCreateSchema } from "@/lib/validation/site";
 
 export const GET = withRole("admin:sites", async () => {
@@ -10,9 +11,10 @@ export const GET = withRole("admin:sites", async () => {
   return NextResponse.json({ sites: rows.map((s) => ({ ...s, usage: usage.get(s.id) ?? { cases: 0, users: 0 } })) });
 });
 
-export const POST = withRole("admin:sites", async ({ req }) => {
+export const POST = withRole("admin:sites", async ({ req, user }) => {
   const input = await parseJson(req, siteCreateSchema);
   if (await findSiteByCode(input.code)) throw conflict(`A site with the code ${input.code} already exists.`, { fields: { code: "This code is taken." } });
   const site = await insertSite(input);
+  await audit("site-policy", user, { subject: input.code, headers: req.headers, detail: { action: "add" } });
   return NextResponse.json({ site }, { status: 201 });
 });

@@ -3,6 +3,7 @@ import { streamCasesCsv } from "@/db/queries/case-list";
 import { cappedNote, exportFileName } from "@/lib/cases/list-csv";
 import { parseListParams } from "@/lib/cases/list-params";
 import { withRole } from "@/lib/http/handler";
+import { audit } from "@/lib/security/audit";
 
 // Same reach as the list: an inspector's file holds only the cases the inspector may read.
 export const GET = withRole("case:read", async ({ req, user }) => {
@@ -20,5 +21,6 @@ export const GET = withRole("case:read", async ({ req, user }) => {
     headers["x-export-capped"] = String(csv.cap);
     headers["x-export-note"] = cappedNote(csv.total, csv.cap);
   }
+  await audit("export", user, { subject: "case list CSV", headers: req.headers, detail: { format: "csv", rows: Math.min(csv.total, csv.cap) } });
   return new Response(csv.stream, { status: 200, headers });
 });

@@ -21,6 +21,14 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
   const [note, setNote] = useState<Note>(null);
   const suspended = Boolean(person.banned);
 
+  async function unlock() {
+    setBusy(true);
+    const res = await sendJson("POST", `/api/admin/users/${person.id}/unlock`, {});
+    setBusy(false);
+    setNote(res.ok ? { tone: "ok", text: "Unlocked; they can sign in again now." } : { tone: "danger", text: res.error });
+    if (res.ok) router.refresh();
+  }
+
   async function save(change: { role?: string; siteId?: string | null }, undo: () => void, done: string) {
     setBusy(true);
     setNote(null);
@@ -51,6 +59,7 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
           {person.name}
           {isSelf ? <Badge tone="accent">You</Badge> : null}
           {suspended ? <Badge tone="danger">Suspended</Badge> : null}
+          {person.locked ? <span title="Locked after repeated failed sign-ins"><Badge tone="danger">Sign-in locked</Badge></span> : null}
         </p>
         <p className="truncate text-sm text-muted">{person.email}</p>
       </div>
@@ -85,6 +94,11 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
         />
       </label>
       <div className="order-2 flex flex-wrap items-center justify-end gap-2 self-start md:order-none md:self-center">
+        {person.locked ? (
+          <Button size="sm" variant="secondary" onClick={unlock} disabled={busy}>
+            Unlock
+          </Button>
+        ) : null}
         {isSelf ? (
           <span className="text-xs text-muted">Your account</span>
         ) : confirming ? (

@@ -1,3 +1,4 @@
+import { headers } from "next/headers";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
@@ -36,7 +37,7 @@ export default async function CaseReportPage({ params }: { params: Promise<{ num
 
   return (
     <>
-      <style dangerouslySetInnerHTML={{ __html: margins }} />
+      <style nonce={(await headers()).get("x-nonce") ?? undefined} dangerouslySetInnerHTML={{ __html: margins }} />
       <div className="no-print mx-auto mb-4 flex max-w-[8.5in] flex-col gap-3 sm:flex-row sm:items-center sm:justify-between">
         <Link href={`/cases/${report.number}`} className="text-sm text-muted hover:text-ink">
           ← Back to {report.number}

@@ -4,11 +4,12 @@ import { z } from "zod";
 import { deleteSite, findSiteByCode, getSite, siteUsage, updateSite } from "@/db/queries/sites";
 import { conflict, notFound } from "@/lib/http/errors";
 import { parseJson, withRole } from "@/lib/http/handler";
+import { audit } from "@/lib/security/audit";
 import { sitePatchSchema } from "@/lib/validation/site";
 
 const idSchema = z.string().uuid("Site id must be a UUID.");
 
-export const PATCH = withRole<{ id: string }>("admin:sites", async ({ req, params }) => {
+export const PATCH = withRole<{ id: string }>("admin:sites", async ({ req, params, user }) => {
   const id = idSchema.parse(params.id);
   const input = await parseJson(req, sitePatchSchema);
   const site = await getSite(id);
@@ -16,7 +17,9 @@ export const PATCH = withRole<{ id: string }>("admin:sites", async ({ req, param
   if (input.code && input.code !== site.code && (await findSiteByCode(input.code))) {
     throw conflict(`A site with the code ${input.code} already exists.`, { fields: { code: "This code is taken." } });
   }
-  return NextResponse.json({ site: await updateSite(id, input) });
+  const updated = await updateSite(id, input);
+  await audit("site-policy", user, { subject: site.code, headers: req.headers, detail: { changed: Object.keys(input) } });
+  return NextResponse.json({ site: updated });
 });
 
 export const DELETE = withRole<{ id: string }>("admin:sites", async ({ params }) => {

@@ -5,6 +5,7 @@ import { loadReadableCase } from "@/lib/cases/service";
 import { HttpError, badRequest } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";
 import { FORM_OVERHEAD_BYTES, photoLimits } from "@/lib/photos/limits";
+import { readFormLimited } from "@/lib/http/body";
 import { PhotoRefusal, refuse } from "@/lib/photos/refusal";
 import { mayDeletePhoto } from "@/lib/photos/rules";
 import { loadCaseForPhotoChange, uploadPhoto } from "@/lib/photos/service";
@@ -22,11 +23,8 @@ async function readForm(req: Request): Promise<FormData> {
   if (!(req.headers.get("content-type") ?? "").startsWith("multipart/form-data")) {
     throw badRequest("Send the photo as multipart/form-data with the image in a field named “file”.");
   }
-  try {
-    return await req.formData();
-  } catch {
-    throw badRequest("The upload arrived incomplete and could not be read; send it again.");
-  }
+  const limit = photoLimits().maxBytes;
+  return readFormLimited(req, limit + FORM_OVERHEAD_BYTES, "The photo");
 }
 
 export const POST = withRole<{ id: string }>("photo:upload", async ({ req, params, user }) => {

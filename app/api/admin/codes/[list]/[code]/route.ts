@@ -3,6 +3,7 @@ import { NextResponse } from "next/server";
 import { casesUsingCode, deleteUnusedCodeEntry, getCodeEntry, updateCodeEntry } from "@/db/queries/code-entries";
 import { conflict, notFound } from "@/lib/http/errors";
 import { parseJson, withRole } from "@/lib/http/handler";
+import { audit } from "@/lib/security/audit";
 import { CODE_LIST_LABELS, codePatchSchema, listSchema } from "@/lib/validation/code-entry";
 
 type Params = { list: string; code: string };
@@ -15,16 +16,17 @@ async function existing(params: Params) {
   return row;
 }
 
-export const PATCH = withRole<Params>("admin:codes", async ({ req, params }) => {
+export const PATCH = withRole<Params>("admin:codes", async ({ req, params, user }) => {
   const row = await existing(params);
   const { retired, ...rest } = await parseJson(req, codePatchSchema);
   if (rest.isoMode && row.list !== "damage") throw conflict("Only damage codes carry an ISO 15243 mode.");
   const retiredAt = retired === undefined ? undefined : retired ? (row.retiredAt ?? new Date()) : null;
   const updated = await updateCodeEntry(row.list, row.code, { ...rest, ...(retiredAt !== undefined ? { retiredAt } : {}) });
+  await audit("code-list", user, { subject: `${row.list} ${row.code}`, headers: req.headers, detail: { action: "edit", changed: Object.keys({ ...rest, ...(retired !== undefined ? { retired } : {}) }) } });
   return NextResponse.json({ code: updated });
 });
 
-export const DELETE = withRole<Params>("admin:codes", async ({ params }) => {
+export const DELETE = withRole<Params>("admin:codes", async ({ req, params, user }) => {
   const row = await existing(params);
   if (!(await deleteUnusedCodeEntry(row.list, row.code))) {
     const n = await casesUsingCode(row.list, row.code);
@@ -33,5 +35,6 @@ export const DELETE = withRole<Params>("admin:codes", async ({ params }) => {
       { cases: n },
     );
   }
+  await audit("code-list", user, { subject: `${row.list} ${row.code}`, headers: req.headers, detail: { action: "delete" } });
   return NextResponse.json({ ok: true });
 });

@@ -3,8 +3,11 @@ import { NextResponse } from "next/server";
 import { z } from "zod";
 import { getUserById } from "@/db/queries/users";
 import { auth } from "@/lib/auth/auth";
-import { badRequest, notFound } from "@/lib/http/errors";
+import { LastAdminError, suspendIn, withAdminsLocked } from "@/db/queries/admin-guard";
+import { badRequest, HttpError, notFound } from "@/lib/http/errors";
+import { audit } from "@/lib/security/audit";
 import { withRole } from "@/lib/http/handler";
+import { JSON_MAX_BYTES, readTextLimited } from "@/lib/http/body";
 
 const suspendSchema = z.object({ reason: z.string().trim().max(200, "Keep the reason under 200 characters.").optional() });
 
@@ -15,7 +18,7 @@ async function target(id: string) {
 }
 
 export const POST = withRole<{ id: string }>("admin:users", async ({ req, params, user }) => {
-  const text = await req.text();
+  const text = await readTextLimited(req, JSON_MAX_BYTES);
   let body: unknown = {};
   try {
     body = text ? JSON.parse(text) : {};
@@ -25,13 +28,22 @@ export const POST = withRole<{ id: string }>("admin:users", async ({ req, params
   const { reason } = suspendSchema.parse(body);
   const person = await target(params.id);
   if (person.id === user.id) throw badRequest("You cannot suspend your own account; ask another admin.");
-  // better-auth marks the account banned and ends its sessions; our own check already ran above.
-  await auth.api.banUser({ body: { userId: person.id, banReason: reason || "Suspended by an administrator" }, headers: req.headers });
+  // Marked banned and signed out in the same transaction that checks another admin remains.
+  try {
+    await withAdminsLocked(person.id, true, async (tx) => {
+      await suspendIn(tx, person.id, reason || "Suspended by an administrator");
+      await audit("suspension", user, { subject: person.email, headers: req.headers, detail: reason ? { reason } : {}, tx });
+    });
+  } catch (err) {
+    if (err instanceof LastAdminError) throw new HttpError(409, "last-admin", "This is the last administrator; make someone else an administrator first.");
+    throw err;
+  }
   return NextResponse.json({ user: { id: person.id, suspended: true } });
 });
 
-export const DELETE = withRole<{ id: string }>("admin:users", async ({ req, params }) => {
+export const DELETE = withRole<{ id: string }>("admin:users", async ({ req, params, user }) => {
   const person = await target(params.id);
   await auth.api.unbanUser({ body: { userId: person.id }, headers: req.headers });
+  await audit("restoration", user, { subject: person.email, headers: req.headers });
   return NextResponse.json({ user: { id: person.id, suspended: false } });
 });
