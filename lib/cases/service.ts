@@ -108,7 +108,7 @@ export async function transitionCase(key: string, body: unknown, user: CurrentUs
     confidence: c.confidence,
     removalConfirmed: c.removalConfirmed,
     findingCount: action === "propose" ? await countFindings(c.id) : 0,
-  });
+  }, { actorId: user.id, proposedBy: c.proposedBy });
   if (!check.ok) throw check.status === 400 ? badRequest(check.message) : new HttpError(check.status, check.status === 403 ? "forbidden" : "conflict", check.message);
   const now = new Date();
   const patch: Partial<Case> = { status: check.to };
