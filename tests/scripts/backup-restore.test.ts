@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { execFile, spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import path from "node:path";
+import { freePort } from "../support/free-port";
 import { promisify } from "node:util";
 import pg from "pg";
 import { DEMO_PASSWORD } from "../../scripts/seed/demo-people";
@@ -19,16 +19,6 @@ const work = mkdtempSync(path.join(tmpdir(), "tearline-backup-"));
 const backupDir = path.join(work, "backup");
 const restoreData = path.join(work, "restored-data");
 const children: ChildProcess[] = [];
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer();
-    server.listen(0, "127.0.0.1", () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 async function waitFor(url: string, seconds = 60) {
   for (let i = 0; i < seconds * 4; i++) {
