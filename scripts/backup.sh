@@ -13,4 +13,4 @@ port_in_use "$PG_PORT" || fail "Tearline's database is not running on 127.0.0.1:
 port_in_use "$S3_PORT" || fail "Tearline's object store is not running on 127.0.0.1:$S3_PORT; start it (npm run start:demo) before a backup."
 mkdir -p "$DATA_DIR/logs"
 export_env
-exec node_modules/.bin/tsx scripts/backup/backup.ts ${out:+"$out"}
+exec node_modules/.bin/tsx --conditions=react-server scripts/backup/backup.ts ${out:+"$out"}

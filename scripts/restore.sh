@@ -19,4 +19,4 @@ ensure_node_modules
 mkdir -p "$DATA_DIR/logs"
 export_env
 start_services
-node_modules/.bin/tsx scripts/backup/restore.ts "$from"
+node_modules/.bin/tsx --conditions=react-server scripts/backup/restore.ts "$from"

@@ -13,23 +13,22 @@ const fail = (message: string): never => {
 const folder = process.argv[2] ? path.resolve(process.argv[2]) : fail("usage: npm run restore -- FOLDER");
 const manifest = parseManifest(readFileSync(path.join(folder, "manifest.json"), "utf8"));
 
-// Check the folder itself first: a damaged backup must not half-load.
+// Check the folder itself first: a damaged backup must not half-load. Objects are read one at a
+// time (again when uploading), so a large bucket never has to fit in memory.
 const dumpPath = path.join(folder, manifest.database.dumpFile);
+const objectFile = (key: string) => readFileSync(path.join(folder, "objects", safeObjectPath(key)));
 if (sha256(readFileSync(dumpPath)) !== manifest.database.dumpSha256) fail("the database dump does not match its SHA-256 in the manifest");
-const files = new Map<string, Buffer>();
 for (const o of manifest.objects) {
-  const body = readFileSync(path.join(folder, "objects", safeObjectPath(o.key)));
-  if (sha256(body) !== o.sha256) fail(`object ${o.key} in the folder does not match its SHA-256`);
-  files.set(o.key, body);
+  if (sha256(objectFile(o.key)) !== o.sha256) fail(`object ${o.key} in the folder does not match its SHA-256`);
 }
 
 const s = store();
 const tablesNow = await withDb((c) => c.query("SELECT count(*)::int AS n FROM pg_tables WHERE schemaname NOT IN ('pg_catalog', 'information_schema')"));
-if (tablesNow.rows[0].n > 0) fail("the database is not empty; restore into a fresh one (see the README's Backup and restore)");
-if ((await listKeys(s)).length > 0) fail(`the bucket ${s.bucket} is not empty; restore into a fresh one`);
+if (tablesNow.rows[0].n > 0) fail("the database is not empty; stop Tearline, move its data folder aside and run the restore again");
+if ((await listKeys(s)).length > 0) fail(`the bucket ${s.bucket} is not empty; stop Tearline, move its data folder aside and run the restore again`);
 
 await run(pgBin("pg_restore"), ["--no-owner", "--no-privileges", "--exit-on-error", "--dbname", databaseUrl(), dumpPath]);
-for (const o of manifest.objects) await putBytes(s, o.key, files.get(o.key)!, o.contentType);
+for (const o of manifest.objects) await putBytes(s, o.key, objectFile(o.key), o.contentType);
 
 const restored: ObjectEntry[] = [];
 for (const key of await listKeys(s)) {

@@ -1,9 +1,11 @@
-// The two stores a backup covers, reached from the same environment the app reads.
-import { GetObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+// The two stores a backup covers, reached from the same environment the app reads
+// (run with tsx --conditions=react-server, as the app's own server code is).
+import { GetObjectCommand, ListObjectsV2Command, PutObjectCommand, type S3Client } from "@aws-sdk/client-s3";
 import pg from "pg";
 import { execFile } from "node:child_process";
 import { readdirSync } from "node:fs";
 import { promisify } from "node:util";
+import { bucket, s3 } from "../../lib/storage/s3";
 
 export const run = promisify(execFile);
 
@@ -46,16 +48,9 @@ export async function countRows(client: pg.Client): Promise<Record<string, numbe
   return counts;
 }
 
+// The app's own client, so a backup reaches the bucket exactly as the app does.
 export function store(): { client: S3Client; bucket: string } {
-  const client = new S3Client({
-    region: process.env.S3_REGION ?? "us-east-1",
-    endpoint: process.env.S3_ENDPOINT,
-    forcePathStyle: Boolean(process.env.S3_FORCE_PATH_STYLE),
-    credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "S3RVER", secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "S3RVER" },
-    requestChecksumCalculation: "WHEN_REQUIRED",
-    responseChecksumValidation: "WHEN_REQUIRED",
-  });
-  return { client, bucket: need("S3_BUCKET") };
+  return { client: s3(), bucket: bucket() };
 }
 
 export async function listKeys(s: ReturnType<typeof store>): Promise<string[]> {
