@@ -12,7 +12,7 @@ import { smallPng } from "../../support/photo-files";
 import { freshPerson } from "../admin/fresh-person";
 
 const SEED = Number(process.env.FC_SEED ?? 20261203);
-const RUNS = Number(process.env.FC_RUNS ?? 20); // modest: the whole suite must stay well inside its time on 2 cores
+const RUNS = Number(process.env.FC_RUNS ?? 40); // modest: the whole suite must stay well inside its time on 2 cores
 
 type Ids = { caseId: string; caseNumber: string; findingId: string; photoId: string; userId: string; siteId: string };
 let ids: Ids;
