@@ -94,3 +94,9 @@ export async function countFindings(caseId: string): Promise<number> {
   const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(findings).where(eq(findings.caseId, caseId));
   return n;
 }
+
+/** The damage code a finding of this case has now, or null when there is no such finding. */
+export async function findingCode(caseId: string, findingId: string): Promise<string | null> {
+  const [f] = await db.select({ code: findings.damageCode }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
+  return f?.code ?? null;
+}

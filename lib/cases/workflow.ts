@@ -72,6 +72,9 @@ const stageWords: Record<Stage, string> = {
 
 export type Section = "field" | "teardown" | "verdict";
 
+/** The permission each section's save exercises (the field section at the bench is the lab's, see canEditSection). */
+export const SECTION_PERMISSIONS: Record<Section, Permission> = { field: "case:edit-field", teardown: "case:edit-teardown", verdict: "case:propose" };
+
 /** Which stages let which roles edit which section. A signed case is read-only. */
 export function canEditSection(section: Section, stage: Stage, role: Role): boolean {
   if (stage === "signed" || stage === "signoff") return false;

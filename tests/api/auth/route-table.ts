@@ -17,6 +17,8 @@ const TEARDOWN = ["analyst", "admin"] as const;
 const LINKS = ["engineer", "admin"] as const;
 const EXPORTS = ["analyst", "engineer", "manager", "admin"] as const;
 const FLEET = ["engineer", "manager", "admin"] as const;
+const EDITS_A_SECTION = ["inspector", "analyst", "admin"] as const; // case:edit-field, case:edit-teardown or case:propose
+const TAKES_A_STEP = ["analyst", "engineer", "admin"] as const; // any workflow step's permission
 
 /** A case, finding or photo id that exists nowhere: probes never change real records. */
 export const NO_ID = "00000000-0000-4000-8000-000000000000";
@@ -87,8 +89,8 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
   "POST /api/cases": { access: FILES_REMOVALS },
   "GET /api/cases/export": { access: EVERYONE },
   "GET /api/cases/[id]": { access: EVERYONE },
-  "PATCH /api/cases/[id]": { access: EVERYONE },
-  "POST /api/cases/[id]/transitions": { access: EVERYONE },
+  "PATCH /api/cases/[id]": { access: EDITS_A_SECTION },
+  "POST /api/cases/[id]/transitions": { access: TAKES_A_STEP },
   "GET /api/cases/[id]/history": { access: EVERYONE },
   "POST /api/cases/[id]/findings": { access: TEARDOWN },
   "PATCH /api/cases/[id]/findings/[findingId]": { access: TEARDOWN },
@@ -197,7 +199,7 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   "GET /api/search": { gate: "case:read", reach: "none" },
   "GET /api/cases/[id]": { gate: "case:read", reach: "case" },
   "PATCH /api/cases/[id]": {
-    gate: "case:read",
+    gate: "case:read", // the section in the body names the permission (probes below)
     reach: "case",
     probes: [
       sectionProbe("field", "case:edit-field", (stage, role) => canEditSection("field", stage, role)),

@@ -30,8 +30,8 @@ async function viewerOf(email: string) {
   return { id: u.id, role: u.role as Role, siteId: u.siteId };
 }
 
-/** A case in `stage` at `site`, with a finding, a photo and links to `linkTo`, built through the API where the app writes history. */
-async function seedCase(site: string, by: DemoRole | "inspector.pellham", stage: Stage, linkTo: { id: string }[] = []) {
+/** A field-stage case at `site`, with a finding, a photo and links to `linkTo`, built through the API where the app writes history. */
+async function seedCase(site: string, by: DemoRole | "inspector.pellham", linkTo: { id: string }[] = []) {
   const creator = by === "inspector.pellham" ? await viewerOf("inspector.pellham@sable-river.example") : await viewerOf(demoUser(by).email);
   const row = await createCase({ siteId: await siteId(site), createdBy: creator.id, status: "field", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 3 }] });
   const admin = await as("admin");
@@ -44,6 +44,11 @@ async function seedCase(site: string, by: DemoRole | "inspector.pellham", stage:
     const res = await engineer.post(`/api/cases/${row.id}/links`, { relatedId: other.id, note: `Same lot as the other case` });
     if (res.status !== 201) throw new Error(`link for the matrix failed: ${res.status} ${await res.text()}`);
   }
+  return row;
+}
+
+/** Moves a seeded case to `stage` (links are made first: a signed case refuses new links). */
+async function moveTo(row: { id: string }, stage: Stage) {
   const engineerId = (await viewerOf(demoUser("engineer").email)).id;
   const analystId = (await viewerOf(demoUser("analyst").email)).id;
   const stageValues: Record<Stage, Partial<typeof t.cases.$inferInsert>> = {
@@ -68,9 +73,12 @@ beforeAll(async () => {
   }
   for (const stage of STAGES) {
     // Another shop's case and a case no inspector may read, each linked to the case under test.
-    const other = await seedCase("PYC", "inspector.pellham", stage);
-    const hidden = await seedCase("OSW", "analyst", stage);
-    targets.set(stage, await seedCase("MJC", "inspector", stage, [other, hidden]));
+    const other = await seedCase("PYC", "inspector.pellham");
+    const hidden = await seedCase("OSW", "analyst");
+    const target = await seedCase("MJC", "inspector", [other, hidden]);
+    await moveTo(other, stage);
+    await moveTo(hidden, stage);
+    targets.set(stage, await moveTo(target, stage));
   }
   allCases = await db.select({ number: t.cases.number, siteId: t.cases.siteId, createdBy: t.cases.createdBy }).from(t.cases);
 }, 240_000);
