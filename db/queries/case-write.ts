@@ -43,7 +43,8 @@ async function lockAtVersion(tx: Tx, caseId: string, version: number, attempted:
   return current;
 }
 
-export async function updateCase(caseId: string, version: number, patch: CaseValues, actor: Actor, action: string, reason?: string) {
+/** `alsoInTx` runs in the same transaction after the row is written (the step's notice is queued there). */
+export async function updateCase(caseId: string, version: number, patch: CaseValues, actor: Actor, action: string, reason?: string, alsoInTx?: (tx: Tx, row: Case) => Promise<void>) {
   return db.transaction(async (tx) => {
     const current = await lockAtVersion(tx, caseId, version, Object.keys(patch));
     const changes = diffFields(current as Record<string, unknown>, patch as Record<string, unknown>);
@@ -54,6 +55,7 @@ export async function updateCase(caseId: string, version: number, patch: CaseVal
       .where(and(eq(cases.id, caseId), eq(cases.version, version)))
       .returning();
     await record(tx, caseId, actor.id, action, changes, reason);
+    if (alsoInTx) await alsoInTx(tx, row);
     return row;
   });
 }

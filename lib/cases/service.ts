@@ -13,7 +13,8 @@ import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
 import { fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
 import { canEditSection, checkTransition, editRefusal, type Section, type WorkflowAction } from "./workflow";
-import { afterTransition } from "./notices";
+import { nudgeMail } from "@/lib/jobs/nudge";
+import { queueStepNotice } from "./notices";
 import { linkedNumbers, maskUnreadableLinks } from "./history-view";
 import { codeProblem, siteProblem, type CodeUse, type SiteUse } from "./reference-rules";
 
@@ -150,7 +151,7 @@ export async function transitionCase(c: Case, body: unknown, user: CurrentUser) 
   if (action === "sign") Object.assign(patch, { signedAt: now, signedBy: user.id });
   if (action === "return") Object.assign(patch, { returnReason: reason });
   if (action === "reopen") Object.assign(patch, { signedAt: null, signedBy: null });
-  const row = await updateCase(c.id, version, patch, user, action, reason);
-  afterTransition(action, row, user, reason);
+  const row = await updateCase(c.id, version, patch, user, action, reason, (tx, saved) => queueStepNotice(tx, action, saved, user, reason));
+  nudgeMail();
   return row;
 }
