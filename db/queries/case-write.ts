@@ -102,3 +102,16 @@ export async function findingCode(caseId: string, findingId: string): Promise<st
   const [f] = await db.select({ code: findings.damageCode }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
   return f?.code ?? null;
 }
+
+/** The case, if its latest change is `action` by `userId` taken at `fromVersion` (so it now stands one above). */
+export async function stepAlreadyTaken(caseId: string, fromVersion: number, action: string, userId: string): Promise<Case | null> {
+  const [row] = await db.select().from(cases).where(and(eq(cases.id, caseId), eq(cases.version, fromVersion + 1)));
+  if (!row) return null;
+  const [last] = await db
+    .select({ action: caseEvents.action, userId: caseEvents.userId })
+    .from(caseEvents)
+    .where(eq(caseEvents.caseId, caseId))
+    .orderBy(sql`${caseEvents.at} desc, ${caseEvents.id} desc`)
+    .limit(1);
+  return last && last.action === action && last.userId === userId ? row : null;
+}

@@ -1,7 +1,7 @@
 // Case operations as the API and pages call them: access, stage rules, computed fields, history.
 import "server-only";
 import { z } from "zod";
-import { addFinding, changeFinding, countFindings, findingCode, insertCase, updateCase } from "@/db/queries/case-write";
+import { addFinding, changeFinding, countFindings, findingCode, insertCase, stepAlreadyTaken, updateCase } from "@/db/queries/case-write";
 import { codeStates, siteKinds } from "@/db/queries/reference-rows";
 import { can } from "@/lib/auth/permissions";
 import { findReadableCase, listCaseHistory, sitePolicy } from "@/db/queries/case-read";
@@ -136,6 +136,13 @@ export const transitionSchema = z.object({
 
 export async function transitionCase(c: Case, body: unknown, user: CurrentUser) {
   const { version, action, reason, labSiteId } = transitionSchema.parse(body);
+  // The version a step was asked at, with the step and the person, is its idempotency key: a
+  // doubled or retried request answers with the step already taken, not a second one or a 409.
+  const replay = () => stepAlreadyTaken(c.id, version, action, user.id);
+  if (c.version !== version) {
+    const done = await replay();
+    if (done) return done;
+  }
   const check = checkTransition(action as WorkflowAction, c.status, user.role, reason, {
     primaryCause: c.primaryCause,
     confidence: c.confidence,
@@ -151,7 +158,13 @@ export async function transitionCase(c: Case, body: unknown, user: CurrentUser) 
   if (action === "sign") Object.assign(patch, { signedAt: now, signedBy: user.id });
   if (action === "return") Object.assign(patch, { returnReason: reason });
   if (action === "reopen") Object.assign(patch, { signedAt: null, signedBy: null });
-  const row = await updateCase(c.id, version, patch, user, action, reason, (tx, saved) => queueStepNotice(tx, action, saved, user, reason));
-  nudgeMail();
-  return row;
+  try {
+    const row = await updateCase(c.id, version, patch, user, action, reason, (tx, saved) => queueStepNotice(tx, action, saved, user, reason));
+    nudgeMail();
+    return row;
+  } catch (err) {
+    const done = err instanceof HttpError && err.status === 409 ? await replay() : null;
+    if (done) return done;
+    throw err;
+  }
 }
