@@ -1,7 +1,9 @@
 "use client";
 // The removal form, phone first: where and when, why, the bearing, the checks, and the live field call.
 import { useRouter } from "next/navigation";
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { sendEntry } from "@/components/offline/outbox-send";
+import { deleteEntry, putEntry, type OutboxEntry } from "@/components/offline/outbox-store";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Caution } from "@/components/ui/caution";
@@ -16,7 +18,7 @@ import { FieldCallPanel } from "./field-call-panel";
 import { emptyDraft, forSaving, type RemovalDraft } from "./form-state";
 import { HandRollEntry } from "./hand-roll-grid";
 import { TriggerDetails } from "./trigger-details";
-import { clearLocalDraft, loadLocalDraft, readError, useAutosave } from "./use-autosave";
+import { clearLocalDraft, loadLocalDraft, useAutosave } from "./use-autosave";
 
 export type SiteOption = { id: string; name: string; kind: string; policy: EndPlayPolicy };
 
@@ -27,6 +29,9 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   const [draft, setDraft] = useState<RemovalDraft>(initial ?? emptyDraft(defaultSiteId));
   const [restored, setRestored] = useState(false);
   const [filing, setFiling] = useState(false);
+  const [queued, setQueued] = useState<string | null>(null);
+  // One key per report: a double tap or a replay from the outbox files it once.
+  const fileKey = useRef<string | null>(null);
   const autosave = useAutosave(draft, { mode, caseId, version, enabled: restored || mode === "edit" });
   const errors = autosave.state.fields ?? {};
 
@@ -47,13 +52,43 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   const conf = checks.confirmations ?? {};
 
   async function file() {
+    if (filing) return;
     setFiling(true);
-    const res = await fetch("/api/cases", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(forSaving(draft)) });
+    fileKey.current ??= crypto.randomUUID();
+    const label = [draft.carMark, draft.carNumber].filter(Boolean).join(" ") + (draft.axle && draft.side ? ` · ${draft.axle}${draft.side}` : "");
+    const entry: OutboxEntry = { key: fileKey.current, body: forSaving(draft), label: label || "Removal report", queuedAt: new Date().toISOString(), attempts: 0, state: "waiting" };
+    // Into the device outbox first: whatever the signal does next, the report is not lost.
+    await putEntry(entry);
+    const result = await sendEntry(entry);
     setFiling(false);
-    if (!res.ok) return autosave.setState(await readError(res));
-    const body = (await res.json()) as { case: { number: string } };
+    if (result.kind === "filed") {
+      clearLocalDraft();
+      return router.push(`/cases/${result.number}`);
+    }
+    if (result.kind === "refused") {
+      await deleteEntry(entry.key);
+      fileKey.current = null;
+      return autosave.setState({ kind: "error", message: result.message, fields: result.fields });
+    }
     clearLocalDraft();
-    router.push(`/cases/${body.case.number}`);
+    setQueued(label || "Your report");
+  }
+
+  function startAnother() {
+    fileKey.current = null;
+    setQueued(null);
+    setDraft(emptyDraft(draft.siteId ?? defaultSiteId));
+    window.scrollTo(0, 0);
+  }
+
+  if (queued) {
+    return (
+      <div role="status" data-testid="queued" className="flex flex-col gap-4 rounded-xl border border-warn/40 bg-warn-soft p-5 text-ink">
+        <p className="text-lg font-semibold">{queued} is kept on this device — waiting to send.</p>
+        <p className="text-sm text-ink-2">There is no connection to the server right now. The report is sent by itself, once, when the connection returns; the bar at the top shows when it is filed. Do not file it again.</p>
+        <Button size="lg" onClick={startAnother}>Start another report</Button>
+      </div>
+    );
   }
 
   return (
@@ -214,7 +249,7 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
         </p>
         {mode === "new" ? (
           <Button size="lg" onClick={file} disabled={filing}>
-            {filing ? "Filing…" : "File removal report"}
+            {filing ? "Sending…" : "File removal report"}
           </Button>
         ) : (
           <Button size="lg" variant="secondary" onClick={() => void autosave.saveNow()}>Save now</Button>
