@@ -50,6 +50,7 @@ test("file a report offline, reload offline, come back online and find it filed 
 
   await context.setOffline(false);
   await expect.poll(() => page.textContent('[data-testid="outbox"]'), { timeout: 20_000 }).toContain("is filed");
+  await page.waitForSelector('[data-testid="queued-sent"]');
   await page.screenshot({ path: "/tmp/shots/e2e-offline-sent-phone.png", fullPage: true });
   expect(await filedFor(car)).toBe(1);
 
