@@ -4,10 +4,7 @@ set -euo pipefail
 source "$(dirname "$0")/services/common.sh"
 cd "$ROOT"
 
-DATA_DIR="${TEARLINE_DATA_DIR:-$ROOT/.data}"
-APP_PORT="${APP_PORT:-3000}" PG_PORT="${PG_PORT:-54329}" S3_PORT="${S3_PORT:-4569}"
-SMTP_PORT="${SMTP_PORT:-2525}" MAIL_HTTP_PORT="${MAIL_HTTP_PORT:-8025}"
-PG_USER=tearline PG_PASSWORD="${PG_PASSWORD:-tearline-local}" PG_DB=tearline PG_PURPOSE=demo
+source "$ROOT/scripts/services/demo-env.sh"
 mkdir -p "$DATA_DIR/logs"
 
 # A second signal (npm passes Ctrl-C on as TERM) must not cut the clean-up short.

@@ -3,7 +3,8 @@ import { and } from "drizzle-orm";
 import { StageBadge } from "@/components/ui/badge";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
-import { caseCards, inStages, scopeForInspector, stageCounts, type CaseCard } from "@/db/queries/home";
+import { readableCases } from "@/db/queries/case-scope";
+import { caseCards, inStages, stageCounts, type CaseCard } from "@/db/queries/home";
 import { ROLE_LABELS, can } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
 import { STAGES, STAGE_LABELS, type Stage } from "@/lib/cases/stages";
@@ -47,7 +48,7 @@ function StageTiles({ counts }: { counts: Record<Stage, number> }) {
 }
 
 export async function RoleHome({ user }: { user: CurrentUser }) {
-  const scope = can(user.role, "case:read-all") ? undefined : scopeForInspector(user.id, user.siteId);
+  const scope = readableCases(user);
   const counts = await stageCounts(scope);
   const first = user.name.split(" ")[0];
   const panels: { title: string; rows: CaseCard[]; empty: string; href: string }[] = [];

@@ -1,6 +1,7 @@
 "use client";
 // A case's photos: the uploader (for those who may add), the grid grouped by part, and the lightbox.
 // Mount it on any page that already checked the viewer may read the case.
+import { useRouter } from "next/navigation";
 import { useCallback, useMemo, useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
@@ -47,16 +48,22 @@ export function CasePhotos({ caseId, canUpload, canDelete, readOnly, findings, u
   const groups = useMemo(() => groupByComponent(photos), [photos]);
   const mayAdd = canUpload && !readOnly;
   const openIndex = openId ? ordered.findIndex((p) => p.id === openId) : -1;
+  // A photo change moves the case version; the page re-reads it so the next save or sign-off is current.
+  const router = useRouter();
 
   const upsert = useCallback(
-    (p: PhotoView) => mutate((cur) => ({ photos: [...(cur?.photos ?? []).filter((x) => x.id !== p.id), p] }), { revalidate: false }),
-    [mutate],
+    (p: PhotoView) => {
+      void mutate((cur) => ({ photos: [...(cur?.photos ?? []).filter((x) => x.id !== p.id), p] }), { revalidate: false });
+      router.refresh();
+    },
+    [mutate, router],
   );
   const removeLocal = (id: string) => {
     const i = ordered.findIndex((p) => p.id === id);
     const next = ordered[i + 1] ?? ordered[i - 1];
     setOpenId(next && next.id !== id ? next.id : null);
     void mutate((cur) => ({ photos: (cur?.photos ?? []).filter((x) => x.id !== id) }), { revalidate: false });
+    router.refresh();
   };
 
   return (

@@ -2,6 +2,7 @@
 // Cases linked to this one as related, with the note and who linked them; engineers can
 // link another case by number and unlink (both ways, recorded in both histories).
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { useState } from "react";
 import useSWR, { useSWRConfig } from "swr";
 import { StageBadge } from "@/components/ui/badge";
@@ -54,10 +55,12 @@ function AddLink({ caseId, onDone }: { caseId: string; onDone: () => void }) {
 
 export function RelatedCases({ caseId, canLink }: { caseId: string; canLink: boolean }) {
   const { mutate } = useSWRConfig();
+  const router = useRouter();
   const { data, error, isLoading, mutate: refresh } = useSWR<LinksAnswer>(linksKey(caseId), getJson, { revalidateOnFocus: false });
   const changed = () => {
     void refresh();
     void mutate(similarKey(caseId));
+    router.refresh(); // a link moves the case version
   };
   if (isLoading) return <div className="h-12 animate-pulse rounded-lg bg-surface-2" aria-busy="true" />;
   if (error) return <p role="alert" className="text-sm text-danger">Related cases could not be loaded: {(error as Error).message}</p>;

@@ -2,6 +2,7 @@
 // The ten most similar earlier cases to this one, each with its score, the reasons it
 // matched and photos of the same part side by side; engineers can link one as related.
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { useState } from "react";
 import useSWR, { useSWRConfig } from "swr";
 import { StageBadge } from "@/components/ui/badge";
@@ -75,6 +76,7 @@ function Row({ item, caseId, thisNumber, canLink, onLinked }: { item: SimilarCas
 
 export function SimilarCases({ caseId, canLink }: { caseId: string; canLink: boolean }) {
   const { mutate } = useSWRConfig();
+  const router = useRouter();
   const { data, error, isLoading, mutate: refresh } = useSWR<SimilarAnswer>(similarKey(caseId), getJson, { revalidateOnFocus: false });
   if (isLoading) {
     return (
@@ -90,6 +92,7 @@ export function SimilarCases({ caseId, canLink }: { caseId: string; canLink: boo
   const onLinked = () => {
     void refresh();
     void mutate(linksKey(caseId));
+    router.refresh(); // a link moves the case version
   };
   return (
     <div>

@@ -11,7 +11,7 @@ import { CSV_HEADER, csvValues, EXPORT_CAP } from "@/lib/cases/list-csv";
 import type { CaseFilters, CaseSort } from "@/lib/cases/list-params";
 import { csvRow } from "@/lib/csv";
 import { badRequest } from "@/lib/http/errors";
-import { scopeForInspector } from "./home";
+import { readableCases } from "./case-scope";
 
 export type CaseListViewer = { id: string; role: string; siteId: string | null };
 
@@ -30,11 +30,7 @@ const rowColumns = {
 };
 
 /** Inspectors: their shop's cases and the ones they filed. Other roles: everything. */
-export function viewerCaseScope(viewer: CaseListViewer): SQL | undefined {
-  if (can(viewer.role, "case:read-all")) return undefined;
-  if (!can(viewer.role, "case:read")) return sql`false`;
-  return scopeForInspector(viewer.id, viewer.siteId);
-}
+export const viewerCaseScope = (viewer: CaseListViewer): SQL | undefined => readableCases(viewer);
 
 const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 

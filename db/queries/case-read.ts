@@ -1,9 +1,11 @@
-// Reading one case with everything the case page shows, and resolving a case by id or number.
+// Reading one case with everything the case page shows, and resolving a case by id or number,
+// always within what the viewer may read.
 import "server-only";
-import { asc, desc, eq } from "drizzle-orm";
+import { and, asc, desc, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { caseEvents, cases, findings, sites, user } from "@/db/schema";
+import { readableCases, type CaseViewer } from "./case-scope";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const NUMBER = /^TL-\d{2}-\d{5,}$/;
@@ -14,10 +16,11 @@ export function caseKey(key: string) {
   return null;
 }
 
-export async function findCaseRow(key: string) {
+/** One case by id or number, only if the viewer may read it: one query, no check afterwards. */
+export async function findReadableCase(key: string, viewer: CaseViewer) {
   const where = caseKey(key);
   if (!where) return null;
-  const [row] = await db.select().from(cases).where(where);
+  const [row] = await db.select().from(cases).where(and(where, readableCases(viewer)));
   return row ?? null;
 }
 
@@ -28,7 +31,7 @@ const proposer = alias(user, "proposer");
 const signer = alias(user, "signer");
 const updater = alias(user, "updater");
 
-export async function getCaseDetail(key: string) {
+export async function getCaseDetail(key: string, viewer: CaseViewer) {
   const where = caseKey(key);
   if (!where) return null;
   const [row] = await db
@@ -49,7 +52,7 @@ export async function getCaseDetail(key: string) {
     .leftJoin(proposer, eq(proposer.id, cases.proposedBy))
     .leftJoin(signer, eq(signer.id, cases.signedBy))
     .leftJoin(updater, eq(updater.id, cases.updatedBy))
-    .where(where);
+    .where(and(where, readableCases(viewer)));
   if (!row) return null;
   const caseFindings = await db.select().from(findings).where(eq(findings.caseId, row.c.id)).orderBy(asc(findings.createdAt));
   return { ...row.c, siteName: row.siteName, labName: row.labName, sitePolicy: row.sitePolicy, createdByName: row.createdByName, proposedByName: row.proposedByName, signedByName: row.signedByName, updatedByName: row.updatedByName, findings: caseFindings };

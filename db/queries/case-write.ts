@@ -56,7 +56,9 @@ async function lockAtVersion(tx: Tx, caseId: string, version: number, attempted:
   const [current] = await tx.select().from(cases).where(eq(cases.id, caseId)).for("update");
   if (!current) throw notFound("That case");
   if (current.version !== version) {
-    const [{ name }] = (await tx.execute(sql`select name from "user" where id = ${current.updatedBy}`)).rows as [{ name: string }];
+    // A case imported or seeded without an editor has no updatedBy; the refusal must still be a 409.
+    const [who] = (await tx.execute(sql`select name from "user" where id = ${current.updatedBy}`)).rows as { name: string }[];
+    const name = who?.name ?? null;
     const theirs = Object.fromEntries(attempted.map((k) => [k, (current as Record<string, unknown>)[k]]));
     throw conflict(
       `${name ?? "Someone"} saved this case at ${current.updatedAt.toISOString().slice(11, 16)} UTC while you were editing. Your changes were not saved; reload to see theirs, then apply yours again.`,
@@ -116,4 +118,10 @@ export async function changeFinding(caseId: string, findingId: string, version: 
 export async function countFindings(caseId: string): Promise<number> {
   const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(findings).where(eq(findings.caseId, caseId));
   return n;
+}
+
+/** The damage code a finding of this case has now, or null when there is no such finding. */
+export async function findingCode(caseId: string, findingId: string): Promise<string | null> {
+  const [f] = await db.select({ code: findings.damageCode }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
+  return f?.code ?? null;
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { desc, eq, inArray, or, sql, type SQL } from "drizzle-orm";
+import { desc, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { cases, sites } from "@/db/schema";
 import type { Stage } from "@/lib/cases/stages";
@@ -21,8 +21,5 @@ export async function stageCounts(scope?: SQL): Promise<Record<Stage, number>> {
 export async function caseCards(where: SQL | undefined, limit = 8): Promise<CaseCard[]> {
   return db.select(cardColumns).from(cases).leftJoin(sites, eq(sites.id, cases.siteId)).where(where).orderBy(desc(cases.updatedAt)).limit(limit);
 }
-
-export const scopeForInspector = (userId: string, siteId: string | null) =>
-  siteId ? or(eq(cases.createdBy, userId), eq(cases.siteId, siteId)) : eq(cases.createdBy, userId);
 
 export const inStages = (stages: Stage[]) => inArray(cases.status, stages);

@@ -8,15 +8,18 @@ import { conflict, notFound } from "@/lib/http/errors";
 import type { NewPhotoRow, PhotoRowStore } from "@/lib/photos/ingest";
 import type { PhotoTags } from "@/lib/photos/tags";
 import { diffFields } from "@/lib/cases/diff";
+import { readableCases, type CaseViewer } from "./case-scope";
 import { findingLabel } from "@/lib/photos/grouping";
 
 export const SIGNED_REFUSAL = "This case is signed and read-only, so its photos cannot be added, changed or deleted. An engineer can reopen it with a reason.";
 
-/** Holds the case row against signing while a photo is written, and refuses a signed case. */
-async function lockOpenCase(tx: Tx, caseId: string) {
-  const [c] = await tx.select({ status: cases.status }).from(cases).where(eq(cases.id, caseId)).for("share");
+/** Locks the case, refuses a signed one, and moves its version: a photo is evidence, so a sign-off
+ * at the version the engineer saw before this change is refused as stale. */
+async function touchOpenCase(tx: Tx, caseId: string, actorId: string) {
+  const [c] = await tx.select({ status: cases.status }).from(cases).where(eq(cases.id, caseId)).for("update");
   if (!c) throw notFound("That case");
   if (c.status === "signed") throw conflict(SIGNED_REFUSAL);
+  await tx.update(cases).set({ version: sql`${cases.version} + 1`, updatedBy: actorId, updatedAt: new Date() }).where(eq(cases.id, caseId));
 }
 
 const photoLabel = (p: Pick<Photo, "fileName" | "sha256">) => `${p.fileName || "photo"} (${p.sha256.slice(0, 12)})`;
@@ -34,7 +37,7 @@ export const photoRows: PhotoRowStore<Photo> = {
       return fn({
         findByHash: (c, s) => findByHash(tx, c, s),
         insert: async (values: NewPhotoRow) => {
-          await lockOpenCase(tx, values.caseId);
+          await touchOpenCase(tx, values.caseId, values.uploadedBy);
           const [row] = await tx.insert(photos).values(values).returning();
           await tx.insert(caseEvents).values({ caseId: values.caseId, userId: values.uploadedBy, action: "photo-added", changes: [{ field: "photo", from: null, to: photoLabel(row) }] });
           return row;
@@ -47,13 +50,13 @@ export async function listCasePhotos(caseId: string): Promise<Photo[]> {
   return db.select().from(photos).where(eq(photos.caseId, caseId)).orderBy(asc(photos.takenAt), asc(photos.createdAt));
 }
 
-/** A photo with the case fields that decide who may see and change it. */
-export async function getPhotoWithCase(photoId: string) {
+/** A photo with its case's stage and number, only if the viewer may read that case. */
+export async function getReadablePhoto(photoId: string, viewer: CaseViewer) {
   const [row] = await db
     .select({ photo: photos, caseRow: { id: cases.id, number: cases.number, status: cases.status, siteId: cases.siteId, createdBy: cases.createdBy } })
     .from(photos)
     .innerJoin(cases, eq(cases.id, photos.caseId))
-    .where(eq(photos.id, photoId));
+    .where(and(eq(photos.id, photoId), readableCases(viewer)));
   return row ?? null;
 }
 
@@ -66,10 +69,11 @@ export async function updatePhotoTags(photoId: string, tags: PhotoTags, actorId:
   return db.transaction(async (tx) => {
     const [before] = await tx.select().from(photos).where(eq(photos.id, photoId)).for("update");
     if (!before) throw notFound("That photo");
-    await lockOpenCase(tx, before.caseId);
-    const [after] = await tx.update(photos).set(tags).where(eq(photos.id, photoId)).returning();
     const changes = diffFields(before as Record<string, unknown>, tags as Record<string, unknown>).map((c) => ({ ...c, field: `photo ${photoLabel(before)}: ${c.field}` }));
-    if (changes.length) await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-tagged", changes });
+    if (!changes.length) return before;
+    await touchOpenCase(tx, before.caseId, actorId);
+    const [after] = await tx.update(photos).set(tags).where(eq(photos.id, photoId)).returning();
+    await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-tagged", changes });
     return after;
   });
 }
@@ -79,7 +83,7 @@ export async function deletePhotoRow(photoId: string, actorId: string): Promise<
   return db.transaction(async (tx) => {
     const [before] = await tx.select().from(photos).where(eq(photos.id, photoId)).for("update");
     if (!before) throw notFound("That photo");
-    await lockOpenCase(tx, before.caseId);
+    await touchOpenCase(tx, before.caseId, actorId);
     await tx.delete(photos).where(eq(photos.id, photoId));
     await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-removed", changes: [{ field: "photo", from: photoLabel(before), to: null }] });
     return before;

@@ -1,16 +1,15 @@
 // Everything a case report shows, loaded as plain data for lib/report's pure builder.
 import "server-only";
-import { aliasedTable, asc, eq, inArray } from "drizzle-orm";
+import { aliasedTable, and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { caseLinks, cases, codeEntries, findings, photos, sites, user } from "@/db/schema";
 import type { ReportSource } from "@/lib/report/types";
+import { readableCases, type CaseViewer } from "./case-scope";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export type PhotoObjectKeys = { id: string; sha256: string; fileName: string; contentType: string; originalKey: string; screenKey: string; thumbKey: string };
 export type LoadedReport = {
-  /** What canReadCase needs. */
-  scope: { createdBy: string | null; siteId: string | null };
   source: ReportSource;
   objects: PhotoObjectKeys[];
 };
@@ -22,10 +21,10 @@ async function labelMaps(): Promise<NonNullable<ReportSource["labels"]>> {
   return maps;
 }
 
-/** Loads a case by its id (UUID) or its number (TL-26-00042); null when there is none. */
-export async function loadCaseReport(key: { id: string } | { number: string }): Promise<LoadedReport | null> {
+/** Loads a case by its id (UUID) or its number (TL-26-00042); null when there is none the viewer may read. */
+export async function loadCaseReport(key: { id: string } | { number: string }, viewer: CaseViewer): Promise<LoadedReport | null> {
   if ("id" in key && !UUID.test(key.id)) return null;
-  const [c] = await db.select().from(cases).where("id" in key ? eq(cases.id, key.id) : eq(cases.number, key.number));
+  const [c] = await db.select().from(cases).where(and("id" in key ? eq(cases.id, key.id) : eq(cases.number, key.number), readableCases(viewer)));
   if (!c) return null;
 
   const lab = aliasedTable(sites, "lab");
@@ -40,7 +39,8 @@ export async function loadCaseReport(key: { id: string } | { number: string }): 
       .select({ number: cases.number, status: cases.status, primaryCause: cases.primaryCause, removedOn: cases.removedOn, note: caseLinks.note })
       .from(caseLinks)
       .innerJoin(cases, eq(cases.id, caseLinks.relatedId))
-      .where(eq(caseLinks.caseId, c.id))
+      // Related cases the reader may not read are left out, not masked: their number is news.
+      .where(and(eq(caseLinks.caseId, c.id), readableCases(viewer)))
       .orderBy(asc(cases.number)),
     labelMaps(),
   ]);
@@ -48,7 +48,6 @@ export async function loadCaseReport(key: { id: string } | { number: string }): 
   const site = siteRows[0];
 
   return {
-    scope: { createdBy: c.createdBy, siteId: c.siteId },
     source: {
       case: c,
       site: site ? { code: site.code, name: site.name, endPlayMaxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn } : null,

@@ -2,7 +2,6 @@
 // how matches rank, and the facet filters. Kept apart so each reads on its own.
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
-import { can } from "@/lib/auth/permissions";
 import type { MultiFacet, SearchParams } from "@/lib/search/query-schema";
 import type { PreparedClause } from "./search-terms";
 
@@ -10,16 +9,6 @@ export type SearchViewer = { id: string; role: string; siteId: string | null };
 
 const param = (v: unknown) => sql.param(v);
 const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
-
-/** canReadCase as SQL: inspectors see their shop's cases and the ones they filed. */
-export function scopeSql(viewer: SearchViewer, alias = "s"): SQL | null {
-  const a = sql.raw(alias);
-  if (can(viewer.role, "case:read-all")) return null;
-  if (!can(viewer.role, "case:read")) return sql`false`;
-  return viewer.siteId
-    ? sql`(${a}.created_by = ${viewer.id} OR ${a}.site_id = ${param(viewer.siteId)}::uuid)`
-    : sql`${a}.created_by = ${viewer.id}`;
-}
 
 /** "SRRX204518" is also tried as "SRRX 204518", the way marks and numbers are stored. */
 function identifierPatterns(text: string): string[] {

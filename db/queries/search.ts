@@ -11,7 +11,8 @@ import { M_COLUMNS, activeFacetsSql, and, passiveArrayFacetsSql, passiveScalarFa
 import { labelFacets, type FacetValue } from "./search-facets";
 import { loadHits, type SearchHit } from "./search-hits";
 import { loadSearchLookups } from "./search-lookups";
-import { documentQuery, facetFilters, identifierSql, orderSql, rankSql, scopeSql, type FacetKey, type SearchViewer } from "./search-sql";
+import { documentQuery, facetFilters, identifierSql, orderSql, rankSql, type FacetKey, type SearchViewer } from "./search-sql";
+import { readableIn } from "./case-scope";
 import { prepareClauses, usableClauses } from "./search-terms";
 
 export type { SearchViewer } from "./search-sql";
@@ -37,7 +38,7 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
   const siteIds = lookups.sites.filter((s) => params.site.includes(s.code)).map((s) => s.id);
   const filters = facetFilters(params, siteIds, "s");
   const base = [
-    scopeSql(viewer),
+    readableIn(viewer, "s") ?? null,
     docQuery ? sql`s.document @@ ${docQuery}::tsquery` : null,
     ...identifiers.map(identifierSql),
     params.from ? sql`s.sort_on >= ${params.from}::date` : null,

@@ -7,7 +7,8 @@ import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import type { SimilarityCase } from "@/lib/similarity";
 import { SIMILARITY_WEIGHTS as W } from "@/lib/similarity";
-import { scopeSql, type SearchViewer } from "./search-sql";
+import type { SearchViewer } from "./search-sql";
+import { readableIn } from "./case-scope";
 
 export const CANDIDATE_LIMIT = 150;
 
@@ -45,7 +46,7 @@ function setScore(column: string, keys: string[], weight: number): SQL {
 /** Earlier cases the caller may read that share what `shares` asks, best cheap score first. */
 async function scoredCandidates(t: TargetKeys, viewer: SearchViewer, shares: SQL[], limit: number, skip: string[] = []): Promise<string[]> {
   const cause = t.primaryCause && t.primaryCause !== "undetermined" ? t.primaryCause : null;
-  const scope = scopeSql(viewer);
+  const scope = readableIn(viewer, "s");
   const { rows } = await db.execute<{ id: string }>(sql`
     SELECT s.case_id AS id FROM case_search s
     WHERE s.case_id <> ALL(${sql.param([t.caseId, ...skip])}::uuid[])

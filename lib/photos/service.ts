@@ -1,11 +1,9 @@
 // Photo operations as routes and pages call them: who may touch which case, then ingest,
 // tag and remove with the real bucket and database.
 import "server-only";
-import { deletePhotoRow, findingInCase, getPhotoWithCase, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
+import { deletePhotoRow, findingInCase, getReadablePhoto, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
 import type { Case, Photo } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
-import { canReadCase } from "@/lib/cases/access";
-import { loadReadableCase } from "@/lib/cases/service";
 import { badRequest, conflict, forbidden, notFound } from "@/lib/http/errors";
 import { ingestPhoto } from "./ingest";
 import { photoLimits } from "./limits";
@@ -13,17 +11,14 @@ import { mayDeletePhoto } from "./rules";
 import { s3PhotoStore } from "./object-store";
 import type { PhotoTags } from "./tags";
 
-/** A case the user may see and that is not signed, for adding or changing photos. */
-export async function loadCaseForPhotoChange(caseKey: string, user: CurrentUser): Promise<Case> {
-  const c = await loadReadableCase(caseKey, user);
+/** Photos of a signed case are evidence under a signature: refused until an engineer reopens it. */
+export function assertPhotosOpen(c: Pick<Case, "status">): void {
   if (c.status === "signed") throw conflict(SIGNED_REFUSAL);
-  return c;
 }
 
 /** A photo with its case, or null when it does not exist or the user may not see its case. */
 export async function findReadablePhoto(photoId: string, user: CurrentUser) {
-  const hit = /^[0-9a-f-]{36}$/i.test(photoId) ? await getPhotoWithCase(photoId) : null;
-  return hit && canReadCase(user, hit.caseRow) ? hit : null;
+  return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(photoId) ? getReadablePhoto(photoId, user) : null;
 }
 
 /** As findReadablePhoto, for routes: others answer as if it did not exist. */

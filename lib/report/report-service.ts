@@ -3,7 +3,6 @@ import "server-only";
 import sharp from "sharp";
 import { loadCaseReport, type LoadedReport, type PhotoObjectKeys } from "@/db/queries/report";
 import type { CurrentUser } from "@/lib/auth/session";
-import { canReadCase } from "@/lib/cases/access";
 import { notFound } from "@/lib/http/errors";
 import { getObject } from "@/lib/storage/s3";
 import { buildCaseReport } from "./build-report";
@@ -12,8 +11,8 @@ import type { CaseReport } from "./types";
 
 /** The case if it exists and this person may read it; otherwise "not found", so nothing leaks. */
 export async function readableCaseReport(key: { id: string } | { number: string }, viewer: CurrentUser): Promise<LoadedReport> {
-  const loaded = await loadCaseReport(key);
-  if (!loaded || !canReadCase(viewer, loaded.scope)) throw notFound("That case");
+  const loaded = await loadCaseReport(key, viewer);
+  if (!loaded) throw notFound("That case");
   return loaded;
 }
 

@@ -36,9 +36,9 @@ async function ensureCases(): Promise<number> {
 }
 
 async function viewers(): Promise<{ manager: TallyViewer; inspector: TallyViewer }> {
-  const { rows } = await db.execute<{ role: string; site_id: string | null }>(sql`select role, site_id from "user" where role in ('manager', 'inspector') order by email`);
+  const { rows } = await db.execute<{ id: string; role: string; site_id: string | null }>(sql`select id, role, site_id from "user" where role in ('manager', 'inspector') order by email`);
   const pick = (role: string) => rows.find((r) => r.role === role)!;
-  return { manager: { role: "manager", siteId: null }, inspector: { role: "inspector", siteId: pick("inspector").site_id } };
+  return { manager: { id: pick("manager").id, role: "manager", siteId: null }, inspector: { id: pick("inspector").id, role: "inspector", siteId: pick("inspector").site_id } };
 }
 
 async function workload(): Promise<{ label: string; query: Record<string, string>; as: "manager" | "inspector" }[]> {

@@ -1,12 +1,10 @@
 #!/usr/bin/env bash
 # Starts or stops the private PostgreSQL alone: bash scripts/services/pg.sh start|stop|remove
-# Reads TEARLINE_DATA_DIR (default .data), PG_PORT, PG_PURPOSE, PG_USER, PG_PASSWORD and PG_DB.
+# Reads TEARLINE_DATA_DIR (default .data), PG_PORT, PG_PURPOSE, PG_PASSWORD and PG_DB (scripts/services/demo-env.sh).
 set -euo pipefail
 source "$(dirname "$0")/common.sh"
 
-DATA_DIR="${TEARLINE_DATA_DIR:-$ROOT/.data}"
-PG_PORT="${PG_PORT:-54329}" PG_PURPOSE="${PG_PURPOSE:-demo}"
-PG_USER="${PG_USER:-tearline}" PG_PASSWORD="${PG_PASSWORD:-tearline-local}" PG_DB="${PG_DB:-tearline}"
+source "$ROOT/scripts/services/demo-env.sh"
 
 case "${1:-}" in
   start)

@@ -1,9 +1,9 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { execFileSync } from "node:child_process";
 import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from "node:fs";
-import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import path from "node:path";
+import { freePort } from "../support/free-port";
 
 // A newcomer may clone into a 0700 folder (root's home, mktemp -d) that the postgres user cannot
 // enter; the private PostgreSQL must still start, stop, start over and clean up after itself.
@@ -12,16 +12,6 @@ const parent = mkdtempSync(path.join(tmpdir(), "tearline-clone-")); // created 0
 const clone = path.join(parent, "tl");
 const dataDir = path.join(clone, ".probe-data");
 const isRoot = process.getuid?.() === 0;
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer();
-    server.listen(0, "127.0.0.1", () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 function pg(port: number, command: "start" | "stop" | "remove"): string {
   return execFileSync("bash", ["scripts/services/pg.sh", command], {

@@ -1,12 +1,13 @@
 // The WHERE clause every tally shares: the viewer's reach first, then the chosen filters.
-// Inspectors count only their own site's removals, whatever filters they send.
+// Inspectors count only the cases they may read, whatever filters they send.
 import "server-only";
 import { and, eq, gte, lt, sql, type SQL } from "drizzle-orm";
 import { cases, sites } from "@/db/schema";
 import { can } from "@/lib/auth/permissions";
+import { readableCases } from "../case-scope";
 import { periodBounds, type TallyFilters } from "@/lib/tallies/filters";
 
-export type TallyViewer = { role: string; siteId: string | null };
+export type TallyViewer = { id: string; role: string; siteId: string | null };
 
 /** The site an inspector is held to, or null when the viewer reads every site. */
 export function viewerSiteLimit(viewer: TallyViewer): { limited: boolean; siteId: string | null } {
@@ -15,11 +16,11 @@ export function viewerSiteLimit(viewer: TallyViewer): { limited: boolean; siteId
 }
 
 export function viewerScope(viewer: TallyViewer): SQL | undefined {
-  const limit = viewerSiteLimit(viewer);
-  if (!limit.limited) return undefined;
   if (!can(viewer.role, "tallies:read")) return sql`false`;
-  // An inspector without a home site sees nothing rather than everything.
-  return limit.siteId ? eq(cases.siteId, limit.siteId) : sql`false`;
+  if (can(viewer.role, "tallies:read-all")) return undefined;
+  // Everyone else counts within the one read rule, and only their own shop: a tally is labelled
+  // with that shop, so a case they filed elsewhere is readable but not counted. No home shop, nothing.
+  return viewer.siteId ? and(readableCases(viewer), eq(cases.siteId, viewer.siteId)) : sql`false`;
 }
 
 export type ScopeOptions = { signedOnly?: boolean; ignorePeriod?: boolean };

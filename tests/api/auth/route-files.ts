@@ -29,3 +29,21 @@ export function routeKeys(): string[] {
     return exportedMethods(readFileSync(file, "utf8")).map((method) => `${method} ${route}`);
   });
 }
+
+export const APP_DIR = path.resolve(import.meta.dirname, "../../../app");
+
+function pageFiles(dir: string): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+    const full = path.join(dir, e.name);
+    if (e.isDirectory()) return e.name === "api" && dir === APP_DIR ? [] : pageFiles(full);
+    return e.name === "page.tsx" || e.name === "page.ts" ? [full] : [];
+  });
+}
+
+/** "/cases/[number]" for every page.tsx under app/ (route groups such as "(app)" are not part of the URL). */
+export function pagePatterns(): string[] {
+  return pageFiles(APP_DIR).map((file) => {
+    const parts = path.relative(APP_DIR, path.dirname(file)).split(path.sep).filter((p) => p && !/^\(.*\)$/.test(p));
+    return "/" + parts.join("/");
+  });
+}

@@ -34,3 +34,24 @@ export async function fieldReport(overrides: Record<string, unknown> = {}) {
     ...overrides,
   };
 }
+
+type Stepper = { json<T>(method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> };
+type CaseAnswer = { case?: { id: string; number: string; version: number; status: string }; version?: number; error?: string };
+
+/** Files a case as `filer`, then receives, records a finding, writes a verdict and proposes it as `lab`. */
+export async function caseAwaitingSignoff(filer: Stepper, lab: Stepper, overrides: Record<string, unknown> = {}) {
+  const filed = await filer.json<CaseAnswer>("POST", "/api/cases", await fieldReport(overrides));
+  if (filed.status !== 201) throw new Error(`filing failed: ${filed.status} ${JSON.stringify(filed.body)}`);
+  const { id, number } = filed.body.case!;
+  let version = filed.body.case!.version;
+  const step = async (method: string, path: string, body: Record<string, unknown>) => {
+    const r = await lab.json<CaseAnswer>(method, path, { version, ...body });
+    if (r.status >= 300) throw new Error(`${method} ${path} failed: ${r.status} ${JSON.stringify(r.body)}`);
+    version = r.body.case?.version ?? r.body.version!;
+  };
+  await step("POST", `/api/cases/${id}/transitions`, { action: "receive" });
+  await step("POST", `/api/cases/${id}/findings`, { finding: { component: "cup", row: "outboard", damageCode: "fatigue.subsurface", severity: 2, zone: "raceway" } });
+  await step("PATCH", `/api/cases/${id}`, { section: "verdict", data: { primaryCause: "end-of-life", contributingCauses: [], confidence: "probable", removalConfirmed: "confirmed", correctiveAction: "None." } });
+  await step("POST", `/api/cases/${id}/transitions`, { action: "propose" });
+  return { id, number, version };
+}

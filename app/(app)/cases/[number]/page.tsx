@@ -8,11 +8,11 @@ import { TeardownForm } from "@/components/case/teardown-form";
 import { VerdictForm } from "@/components/case/verdict-form";
 import { WorkflowBar } from "@/components/case/workflow-bar";
 import { RemovalForm } from "@/components/removal/removal-form";
-import { getCaseDetail, listCaseHistory } from "@/db/queries/case-read";
+import { getCaseDetail } from "@/db/queries/case-read";
+import { readableHistory } from "@/lib/cases/service";
 import { listCodeEntries } from "@/db/queries/code-entries";
 import { siteOptions } from "@/db/queries/site-options";
 import { requirePageUser } from "@/lib/auth/session";
-import { canReadCase } from "@/lib/cases/access";
 import { ACTIONS, WORKFLOW, canEditSection, verdictProblems } from "@/lib/cases/workflow";
 import { can } from "@/lib/auth/permissions";
 import { DEFAULT_END_PLAY_POLICY } from "@/lib/field";
@@ -29,9 +29,9 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 export default async function CasePage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<{ edit?: string }> }) {
   const user = await requirePageUser("case:read");
   const { number } = await params;
-  const c = await getCaseDetail(number);
-  if (!c || !canReadCase(user, c)) notFound();
-  const [events, damage, causes, sites] = await Promise.all([listCaseHistory(c.id), listCodeEntries("damage"), listCodeEntries("cause"), siteOptions()]);
+  const c = await getCaseDetail(number, user);
+  if (!c) notFound();
+  const [events, damage, causes, sites] = await Promise.all([readableHistory(c.id, user), listCodeEntries("damage"), listCodeEntries("cause"), siteOptions()]);
   const policy = c.sitePolicy?.endPlayMaxIn ? { maxIn: c.sitePolicy.endPlayMaxIn, dialSpreadIn: c.sitePolicy.dialSpreadIn!, tapeSpreadIn: c.sitePolicy.tapeSpreadIn! } : DEFAULT_END_PLAY_POLICY;
   const editField = canEditSection("field", c.status, user.role);
   const editTeardown = canEditSection("teardown", c.status, user.role);

@@ -2,11 +2,10 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ComparePhotos, type ComparedPhoto } from "@/components/photos/compare-photos";
 import { EmptyState, PageHeader } from "@/components/ui/card";
-import { findCaseRow } from "@/db/queries/case-read";
+import { findReadableCase } from "@/db/queries/case-read";
 import { findingOptions, listCasePhotos } from "@/db/queries/photos";
 import type { CurrentUser } from "@/lib/auth/session";
 import { requirePageUser } from "@/lib/auth/session";
-import { canReadCase } from "@/lib/cases/access";
 import { displayOrder } from "@/lib/photos/grouping";
 import { findReadablePhoto } from "@/lib/photos/service";
 import { toPhotoView } from "@/lib/photos/view";
@@ -28,8 +27,8 @@ async function compared(id: string | undefined, user: CurrentUser): Promise<Comp
 async function otherCase(query: string, user: CurrentUser, aCaseId: string) {
   const empty = { query, number: null, photos: [], problem: null };
   if (!query.trim()) return empty;
-  const c = await findCaseRow(query.trim());
-  if (!c || !canReadCase(user, c)) return { ...empty, problem: `No case ${query.trim().toUpperCase()} that you can see.` };
+  const c = await findReadableCase(query.trim(), user);
+  if (!c) return { ...empty, problem: `No case ${query.trim().toUpperCase()} that you can see.` };
   if (c.id === aCaseId) return { ...empty, problem: "That is photo A's own case; its photos are listed below." };
   return { query, number: c.number, photos: displayOrder((await listCasePhotos(c.id)).map(toPhotoView)), problem: null };
 }

@@ -2,15 +2,16 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { getCaseDetail } from "@/db/queries/case-read";
-import { loadReadableCase, saveSection } from "@/lib/cases/service";
-import { parseJson, withRole } from "@/lib/http/handler";
+import { saveSection } from "@/lib/cases/service";
+import { SECTION_PERMISSIONS } from "@/lib/cases/workflow";
+import { parseJson } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 
-export const GET = withRole<{ id: string }>("case:read", async ({ params, user }) => {
-  await loadReadableCase(params.id, user);
-  return NextResponse.json({ case: await getCaseDetail(params.id) });
+export const GET = withCase("case:read", async ({ case: c, user }) => {
+  return NextResponse.json({ case: await getCaseDetail(c.id, user) });
 });
 
-export const PATCH = withRole<{ id: string }>("case:read", async ({ req, params, user }) => {
-  const saved = await saveSection(params.id, await parseJson(req, z.unknown()), user);
+export const PATCH = withCase(Object.values(SECTION_PERMISSIONS), async ({ req, case: c, user }) => {
+  const saved = await saveSection(c, await parseJson(req, z.unknown()), user);
   return NextResponse.json({ case: saved });
 });

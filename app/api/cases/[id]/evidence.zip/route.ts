@@ -1,11 +1,11 @@
 // GET /api/cases/:id/evidence.zip - report, original photos and their SHA-256 list, for handing evidence over
-import { withRole } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 import { audit } from "@/lib/security/audit";
 import { assertOriginalsStored, evidenceZipStream } from "@/lib/report/evidence-zip";
 import { caseReportPdf, readableCaseReport, reportFileName } from "@/lib/report/report-service";
 
-export const GET = withRole<{ id: string }>("case:export", async ({ params, user, req }) => {
-  const loaded = await readableCaseReport({ id: params.id }, user);
+export const GET = withCase("case:export", async ({ case: c, user, req }) => {
+  const loaded = await readableCaseReport({ id: c.id }, user);
   const { report, pdf } = await caseReportPdf(loaded);
   await assertOriginalsStored(report, loaded.objects);
   const name = reportFileName(report, "zip").replace(/-(draft-)?report\.zip$/, (_m, d: string | undefined) => `-${d ?? ""}evidence.zip`);

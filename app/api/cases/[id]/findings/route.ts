@@ -2,9 +2,10 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { addCaseFinding } from "@/lib/cases/service";
-import { parseJson, withRole } from "@/lib/http/handler";
+import { parseJson } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 
-export const POST = withRole<{ id: string }>("case:edit-teardown", async ({ req, params, user }) => {
-  const result = await addCaseFinding(params.id, await parseJson(req, z.unknown()), user);
+export const POST = withCase("case:edit-teardown", async ({ req, case: c, user }) => {
+  const result = await addCaseFinding(c, await parseJson(req, z.unknown()), user);
   return NextResponse.json(result, { status: 201 });
 });

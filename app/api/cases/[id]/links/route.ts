@@ -4,29 +4,27 @@ import { z } from "zod";
 import { addCaseLink, listCaseLinks, removeCaseLink } from "@/db/queries/case-links";
 import { loadReadableCase } from "@/lib/cases/service";
 import { badRequest } from "@/lib/http/errors";
-import { parseJson, parseQuery, withRole } from "@/lib/http/handler";
+import { parseJson, parseQuery } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 
 const caseRef = z.string().trim().min(1, "Name the case to link, by number or id.").max(64);
 const linkBody = z.object({ relatedId: caseRef, note: z.string().trim().max(500, "Keep the note under 500 characters.").default("") });
 const unlinkQuery = z.object({ relatedId: caseRef });
 
-export const GET = withRole<{ id: string }>("case:read", async ({ params, user }) => {
-  const c = await loadReadableCase(params.id, user);
+export const GET = withCase("case:read", async ({ case: c, user }) => {
   return NextResponse.json({ caseId: c.id, links: await listCaseLinks(c.id, user) });
 });
 
-export const POST = withRole<{ id: string }>("case:link", async ({ req, params, user }) => {
+export const POST = withCase("case:link", async ({ req, case: c, user }) => {
   const { relatedId, note } = await parseJson(req, linkBody);
-  const c = await loadReadableCase(params.id, user);
   const other = await loadReadableCase(relatedId, user);
   if (other.id === c.id) throw badRequest("A case cannot be linked to itself.");
   await addCaseLink(c, other, note, user);
   return NextResponse.json({ caseId: c.id, links: await listCaseLinks(c.id, user) }, { status: 201 });
 });
 
-export const DELETE = withRole<{ id: string }>("case:link", async ({ req, params, user }) => {
+export const DELETE = withCase("case:link", async ({ req, case: c, user }) => {
   const { relatedId } = parseQuery(req, unlinkQuery);
-  const c = await loadReadableCase(params.id, user);
   const other = await loadReadableCase(relatedId, user);
   await removeCaseLink(c, other, user);
   return NextResponse.json({ caseId: c.id, links: await listCaseLinks(c.id, user) });

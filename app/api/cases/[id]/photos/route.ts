@@ -1,19 +1,17 @@
 // POST /api/cases/:id/photos - upload one photo (multipart: file + tags); GET - the case's photos with tags
 import { NextResponse } from "next/server";
 import { listCasePhotos } from "@/db/queries/photos";
-import { loadReadableCase } from "@/lib/cases/service";
 import { HttpError, badRequest } from "@/lib/http/errors";
-import { withRole } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 import { FORM_OVERHEAD_BYTES, photoLimits } from "@/lib/photos/limits";
 import { readFormLimited } from "@/lib/http/body";
 import { PhotoRefusal, refuse } from "@/lib/photos/refusal";
 import { mayDeletePhoto } from "@/lib/photos/rules";
-import { loadCaseForPhotoChange, uploadPhoto } from "@/lib/photos/service";
+import { assertPhotosOpen, uploadPhoto } from "@/lib/photos/service";
 import { photoTagsSchema, tagsFromForm } from "@/lib/photos/tags";
 import { toPhotoView } from "@/lib/photos/view";
 
-export const GET = withRole<{ id: string }>("case:read", async ({ params, user }) => {
-  const c = await loadReadableCase(params.id, user);
+export const GET = withCase("case:read", async ({ case: c, user }) => {
   const rows = await listCasePhotos(c.id);
   const photos = rows.map((p) => ({ ...toPhotoView(p), canDelete: mayDeletePhoto(user, p, c.status) }));
   return NextResponse.json({ caseId: c.id, caseNumber: c.number, readOnly: c.status === "signed", photos });
@@ -27,9 +25,9 @@ async function readForm(req: Request): Promise<FormData> {
   return readFormLimited(req, limit + FORM_OVERHEAD_BYTES, "The photo");
 }
 
-export const POST = withRole<{ id: string }>("photo:upload", async ({ req, params, user }) => {
+export const POST = withCase("photo:upload", async ({ req, case: c, user }) => {
   // Who may add to which case is settled before a byte of the file is read.
-  const c = await loadCaseForPhotoChange(params.id, user);
+  assertPhotosOpen(c);
   const limits = photoLimits();
   const declared = Number(req.headers.get("content-length") ?? 0);
   try {

@@ -1,10 +1,10 @@
 // GET /api/cases/:id/report.pdf - the case report as a PDF (signed revision, or a draft marked as such)
-import { withRole } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 import { audit } from "@/lib/security/audit";
 import { caseReportPdf, readableCaseReport, reportFileName } from "@/lib/report/report-service";
 
-export const GET = withRole<{ id: string }>("case:read", async ({ params, user, req }) => {
-  const loaded = await readableCaseReport({ id: params.id }, user);
+export const GET = withCase("case:read", async ({ case: c, user, req }) => {
+  const loaded = await readableCaseReport({ id: c.id }, user);
   const { report, pdf } = await caseReportPdf(loaded);
   const download = req.nextUrl.searchParams.get("download") === "1";
   await audit("export", user, { subject: report.number, headers: req.headers, detail: { format: "pdf" } });

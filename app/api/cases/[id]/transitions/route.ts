@@ -2,9 +2,12 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { transitionCase } from "@/lib/cases/service";
-import { parseJson, withRole } from "@/lib/http/handler";
+import { ACTIONS, WORKFLOW } from "@/lib/cases/workflow";
+import { parseJson } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 
-export const POST = withRole<{ id: string }>("case:read", async ({ req, params, user }) => {
-  const row = await transitionCase(params.id, await parseJson(req, z.unknown()), user);
+// Which step is in the body; the service checks that step's own permission once it is read.
+export const POST = withCase(ACTIONS.map((a) => WORKFLOW[a].permission), async ({ req, case: c, user }) => {
+  const row = await transitionCase(c, await parseJson(req, z.unknown()), user);
   return NextResponse.json({ case: row });
 });

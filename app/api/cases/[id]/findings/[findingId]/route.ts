@@ -2,15 +2,16 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { editCaseFinding, removeCaseFinding } from "@/lib/cases/service";
-import { parseJson, parseQuery, withRole } from "@/lib/http/handler";
+import { parseJson, parseQuery } from "@/lib/http/handler";
+import { withCase } from "@/lib/http/with-case";
 
 type P = { id: string; findingId: string };
 
-export const PATCH = withRole<P>("case:edit-teardown", async ({ req, params, user }) => {
-  return NextResponse.json(await editCaseFinding(params.id, params.findingId, await parseJson(req, z.unknown()), user));
+export const PATCH = withCase<P>("case:edit-teardown", async ({ req, params, case: c, user }) => {
+  return NextResponse.json(await editCaseFinding(c, params.findingId, await parseJson(req, z.unknown()), user));
 });
 
-export const DELETE = withRole<P>("case:edit-teardown", async ({ req, params, user }) => {
+export const DELETE = withCase<P>("case:edit-teardown", async ({ req, params, case: c, user }) => {
   const { version } = parseQuery(req, z.object({ version: z.coerce.number().int().positive("Send ?version= of the case you edited.") }));
-  return NextResponse.json(await removeCaseFinding(params.id, params.findingId, version, user));
+  return NextResponse.json(await removeCaseFinding(c, params.findingId, version, user));
 });
