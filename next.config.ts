@@ -3,7 +3,7 @@ import type { NextConfig } from "next";
 const config: NextConfig = {
   // The test command builds into its own folder so it never disturbs a running demo.
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
-  serverExternalPackages: ["sharp", "pdfkit", "pg", "archiver", "nodemailer"],
+  serverExternalPackages: ["sharp", "pdfkit", "pg", "pg-boss", "archiver", "nodemailer"],
   poweredByHeader: false,
   // Type checking runs once in the test suite (tests/unit/typecheck.test.ts), not in every build.
   typescript: { ignoreBuildErrors: true },

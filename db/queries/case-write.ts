@@ -68,7 +68,8 @@ async function lockAtVersion(tx: Tx, caseId: string, version: number, attempted:
   return current;
 }
 
-export async function updateCase(caseId: string, version: number, patch: CaseValues, actor: Actor, action: string, reason?: string) {
+/** `alsoInTx` runs in the same transaction after the row is written (the step's notice is queued there). */
+export async function updateCase(caseId: string, version: number, patch: CaseValues, actor: Actor, action: string, reason?: string, alsoInTx?: (tx: Tx, row: Case) => Promise<void>) {
   return db.transaction(async (tx) => {
     const current = await lockAtVersion(tx, caseId, version, Object.keys(patch));
     const changes = diffFields(current as Record<string, unknown>, patch as Record<string, unknown>);
@@ -79,6 +80,7 @@ export async function updateCase(caseId: string, version: number, patch: CaseVal
       .where(and(eq(cases.id, caseId), eq(cases.version, version)))
       .returning();
     await record(tx, caseId, actor.id, action, changes, reason);
+    if (alsoInTx) await alsoInTx(tx, row);
     return row;
   });
 }
@@ -124,4 +126,17 @@ export async function countFindings(caseId: string): Promise<number> {
 export async function findingCode(caseId: string, findingId: string): Promise<string | null> {
   const [f] = await db.select({ code: findings.damageCode }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
   return f?.code ?? null;
+}
+
+/** The case, if its latest change is `action` by `userId` taken at `fromVersion` (so it now stands one above). */
+export async function stepAlreadyTaken(caseId: string, fromVersion: number, action: string, userId: string): Promise<Case | null> {
+  const [row] = await db.select().from(cases).where(and(eq(cases.id, caseId), eq(cases.version, fromVersion + 1)));
+  if (!row) return null;
+  const [last] = await db
+    .select({ action: caseEvents.action, userId: caseEvents.userId })
+    .from(caseEvents)
+    .where(eq(caseEvents.caseId, caseId))
+    .orderBy(sql`${caseEvents.at} desc, ${caseEvents.id} desc`)
+    .limit(1);
+  return last && last.action === action && last.userId === userId ? row : null;
 }

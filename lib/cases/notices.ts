@@ -1,17 +1,15 @@
-// Who hears about a workflow step. Mail is queued after the step is saved and never blocks it.
+// Who hears about a workflow step. The notice is queued in the step's own transaction (a
+// transactional outbox): the step and its mail are saved together or not at all.
 import "server-only";
+import type { Tx } from "@/db";
 import type { Case } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
+import { notifyCaseReopened, notifySignoffRequested, notifyVerdictReturned, notifyVerdictSigned } from "@/lib/notify/case-notices";
 import type { WorkflowAction } from "./workflow";
 
-export function afterTransition(action: WorkflowAction, row: Case, by: CurrentUser, reason?: string) {
-  void send(action, row, by, reason).catch((err) => console.error(`notice for ${action} on ${row.number} failed`, err));
-}
-
-async function send(action: WorkflowAction, row: Case, by: CurrentUser, reason?: string) {
-  const notify = await import("@/lib/notify/case-notices");
-  if (action === "propose") await notify.notifySignoffRequested(row);
-  if (action === "sign") await notify.notifyVerdictSigned(row, by);
-  if (action === "return") await notify.notifyVerdictReturned(row, by, reason ?? "");
-  if (action === "reopen") await notify.notifyCaseReopened(row, by, reason ?? "");
+export async function queueStepNotice(tx: Tx, action: WorkflowAction, row: Case, by: CurrentUser, reason?: string): Promise<void> {
+  if (action === "propose") await notifySignoffRequested(row, undefined, tx);
+  if (action === "sign") await notifyVerdictSigned(row, by, tx);
+  if (action === "return") await notifyVerdictReturned(row, by, reason ?? "", tx);
+  if (action === "reopen") await notifyCaseReopened(row, by, reason ?? "", tx);
 }

@@ -1,13 +1,10 @@
-// Checks once an hour whether the weekly digest is due and sends it. Started once per server
-// process from instrumentation.ts; an advisory lock keeps two processes from both sending.
+// Sends the weekly digest when it is due. The weekly-digest job (lib/jobs) calls it once an hour;
+// an advisory lock and the stored "last sent" keep two workers from both sending.
 import "server-only";
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
-import { startBackgroundTimer } from "@/lib/background-timer";
 import { digestDue } from "./schedule-time";
 import { lastDigestSentAt, sendDigest } from "./send";
-
-const HOUR_MS = 3_600_000;
 
 export async function sendDigestIfDue(now = new Date()): Promise<boolean> {
   return db.transaction(async (tx) => {
@@ -17,8 +14,4 @@ export async function sendDigestIfDue(now = new Date()): Promise<boolean> {
     await sendDigest(now);
     return true;
   });
-}
-
-export function startDigestSchedule(intervalMs = HOUR_MS): boolean {
-  return startBackgroundTimer("weekly digest", intervalMs, () => sendDigestIfDue());
 }

@@ -1,13 +1,15 @@
-// Mail goes through the outbox: stored first, sent right after, retried with back-off on failure.
-// Sending never blocks or breaks the action that caused it.
+// Mail goes through the outbox: stored first (in the caller's transaction when it gives one), then
+// sent by the mail jobs (lib/jobs), retried with back-off on failure. Sending never blocks the action.
+// Each send claims its row first, so two servers never send one mail twice.
 import "server-only";
 import { and, eq, lte, sql } from "drizzle-orm";
-import { db } from "@/db";
+import { db, type Tx } from "@/db";
 import { mailOutbox, type OutboxMail } from "@/db/schema";
 import { env } from "@/lib/env";
 import { ONE_TIME_LINK_KINDS, redactOneTimeLinks } from "./redact-links";
 import { mailRetryIntervalMs } from "./retry-interval";
 import { mailTransport } from "./transport";
+import { nudgeMail, retryMailAt } from "@/lib/jobs/nudge";
 import type { RenderedMail } from "./templates/layout";
 
 const MAX_ATTEMPTS = 8;
@@ -16,14 +18,15 @@ export function nextDelayMs(attempts: number, baseMs = mailRetryIntervalMs()): n
   return Math.min(baseMs * 2 ** Math.max(0, attempts - 1), 3_600_000);
 }
 
-export async function enqueueMail(kind: string, to: string[], mail: RenderedMail): Promise<string | null> {
+/** Stores a mail; `into` a transaction, it is sent once that commits (the caller calls nudgeMail after). */
+export async function enqueueMail(kind: string, to: string[], mail: RenderedMail, into?: Tx): Promise<string | null> {
   const recipients = [...new Set(to.filter(Boolean))];
   if (recipients.length === 0) return null;
-  const [row] = await db
+  const [row] = await (into ?? db)
     .insert(mailOutbox)
     .values({ kind, to: recipients, subject: mail.subject, html: mail.html, text: mail.text })
     .returning({ id: mailOutbox.id });
-  void deliver(row.id).catch(() => undefined);
+  if (!into) nudgeMail();
   return row.id;
 }
 
@@ -71,5 +74,13 @@ export async function deliverDue(force = false): Promise<{ sent: number; failed:
   let sent = 0;
   let failed = 0;
   for (const { id } of due) (await deliver(id)) ? sent++ : failed++;
+  // The next attempt is a job of its own, due when the earliest waiting mail is.
+  const [next] = await db
+    .select({ at: mailOutbox.nextAttemptAt })
+    .from(mailOutbox)
+    .where(eq(mailOutbox.status, "pending"))
+    .orderBy(mailOutbox.nextAttemptAt)
+    .limit(1);
+  if (next) retryMailAt(next.at);
   return { sent, failed };
 }

@@ -1,9 +1,11 @@
-// Case notices by e-mail. The case workflow calls these after its change is saved; they never throw
-// back into it, and the outbox sends (and retries) on its own.
+// Case notices by e-mail. Given the workflow step's transaction (`into`), a notice is queued in it, so
+// the step and its mail are saved together or not at all; without one a notice never throws back to
+// its caller. The outbox sends (and retries) through the job queue.
 import "server-only";
 import { codeLabel, peopleByIds, peopleWithRoles } from "@/db/queries/notices";
 import { CONFIDENCES, ROOT_CAUSES, TRIGGERS } from "@/lib/classification";
 import { env } from "@/lib/env";
+import type { Tx } from "@/db";
 import { enqueueMail } from "@/lib/mail/outbox";
 import { caseReopened, signoffRequested, verdictReturned, verdictSigned } from "@/lib/mail/templates/case-notices";
 import { pickRecipients, type NoticeKind } from "./notice-kinds";
@@ -33,7 +35,8 @@ async function triggerLabel(code: string): Promise<string> {
 }
 
 /** Runs a notice so that no failure reaches the caller; returns the outbox id, or null when nothing was queued. */
-async function safely(kind: NoticeKind, c: NoticeCase, work: () => Promise<string | null>): Promise<string | null> {
+async function safely(kind: NoticeKind, c: NoticeCase, work: () => Promise<string | null>, into?: Tx): Promise<string | null> {
+  if (into) return work(); // inside a step's transaction a failure must undo the step too
   try {
     return await work();
   } catch (err) {
@@ -43,7 +46,7 @@ async function safely(kind: NoticeKind, c: NoticeCase, work: () => Promise<strin
 }
 
 /** To every engineer who wants it: a verdict on this case waits for sign-off. */
-export function notifySignoffRequested(c: NoticeCase, proposer?: NoticeActor): Promise<string | null> {
+export function notifySignoffRequested(c: NoticeCase, proposer?: NoticeActor, into?: Tx): Promise<string | null> {
   return safely("signoff-requested", c, async () => {
     const analyst = proposer ?? (await peopleByIds([c.proposedBy]))[0];
     const to = pickRecipients(await peopleWithRoles(["engineer"]), "signoff-requested", analyst?.id ?? c.proposedBy);
@@ -54,33 +57,33 @@ export function notifySignoffRequested(c: NoticeCase, proposer?: NoticeActor): P
       primaryCauseLabel: await causeLabel(c.primaryCause),
       trigger: await triggerLabel(c.trigger),
     });
-    return enqueueMail("signoff-requested", to, mail);
-  });
+    return enqueueMail("signoff-requested", to, mail, into);
+  }, into);
 }
 
 /** To the analyst who proposed and the inspector who filed: the verdict is signed. */
-export function notifyVerdictSigned(c: NoticeCase, signer: NoticeActor): Promise<string | null> {
+export function notifyVerdictSigned(c: NoticeCase, signer: NoticeActor, into?: Tx): Promise<string | null> {
   return safely("verdict-signed", c, async () => {
     const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy]), "verdict-signed", signer.id);
     const confidence = CONFIDENCES.find((x) => x.code === c.confidence)?.label ?? "not given";
     const mail = verdictSigned({ caseNumber: c.number, url: caseUrl(c), signerName: signer.name, primaryCauseLabel: await causeLabel(c.primaryCause), confidence });
-    return enqueueMail("verdict-signed", to, mail);
-  });
+    return enqueueMail("verdict-signed", to, mail, into);
+  }, into);
 }
 
 /** To the analyst who proposed and the inspector who filed: the verdict went back to the bench. */
-export function notifyVerdictReturned(c: NoticeCase, by: NoticeActor, reason: string): Promise<string | null> {
+export function notifyVerdictReturned(c: NoticeCase, by: NoticeActor, reason: string, into?: Tx): Promise<string | null> {
   return safely("verdict-returned", c, async () => {
     const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy]), "verdict-returned", by.id);
     const mail = verdictReturned({ caseNumber: c.number, url: caseUrl(c), returnedBy: by.name, reason, primaryCauseLabel: await causeLabel(c.primaryCause) });
-    return enqueueMail("verdict-returned", to, mail);
-  });
+    return enqueueMail("verdict-returned", to, mail, into);
+  }, into);
 }
 
 /** To the analyst, the inspector and the engineer who had signed: a signed case was reopened. */
-export function notifyCaseReopened(c: NoticeCase, by: NoticeActor, reason: string): Promise<string | null> {
+export function notifyCaseReopened(c: NoticeCase, by: NoticeActor, reason: string, into?: Tx): Promise<string | null> {
   return safely("case-reopened", c, async () => {
     const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy, c.signedBy]), "case-reopened", by.id);
-    return enqueueMail("case-reopened", to, caseReopened({ caseNumber: c.number, url: caseUrl(c), reopenedBy: by.name, reason }));
-  });
+    return enqueueMail("case-reopened", to, caseReopened({ caseNumber: c.number, url: caseUrl(c), reopenedBy: by.name, reason }), into);
+  }, into);
 }

@@ -1,12 +1,16 @@
 // Case notices: who receives each one, each person's switches, and that a notice never breaks its caller.
 import { eq } from "drizzle-orm";
-import { describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
+import { stopBoss } from "@/lib/jobs/boss";
 import { notifyCaseReopened, notifySignoffRequested, notifyVerdictReturned, notifyVerdictSigned } from "@/lib/notify/case-notices";
 import { ApiClient, as, demoUser } from "../../support/api";
 import { db, t } from "../../support/db";
 import { createCase, userId } from "../../support/factories";
 import { linkIn, mailbox, waitForMail } from "../../support/mail";
 import { invitedPerson, mailTo, recipient } from "./people";
+
+// Notices called from the test nudge the job queue from this process too.
+afterAll(() => stopBoss());
 
 async function outboxRow(id: string | null) {
   expect(id).not.toBeNull();

@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
+import { jobQueueStates } from "@/db/queries/job-queue";
 import { listOutbox, OUTBOX_STATUSES, outboxCounts, type OutboxStatus } from "@/db/queries/outbox";
 import { requirePageUser } from "@/lib/auth/session";
 import { readFakeMailbox } from "@/lib/mail/fake-mailbox";
 import { FakeMailboxPanel } from "./_components/fake-mailbox-panel";
+import { JobQueuePanel } from "./_components/job-queue-panel";
 import { OutboxTable } from "./_components/outbox-table";
 import { RetryButton } from "./_components/retry-button";
 
@@ -17,7 +19,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
   await requirePageUser("admin:outbox");
   const raw = (await searchParams).status;
   const status = (OUTBOX_STATUSES as readonly string[]).includes(raw ?? "") ? (raw as OutboxStatus) : undefined;
-  const [rows, counts, fake] = await Promise.all([listOutbox(status), outboxCounts(), readFakeMailbox()]);
+  const [rows, counts, fake, jobs] = await Promise.all([listOutbox(status), outboxCounts(), readFakeMailbox(), jobQueueStates()]);
   const total = counts.pending + counts.failed + counts.sent;
   const now = Date.now();
 
@@ -25,7 +27,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
     <>
       <PageHeader
         title="Outbox"
-        subtitle="Every e-mail is stored here before it is sent. A failed send is retried on its own, waiting longer each time; Retry now sends everything unsent at once."
+        subtitle="Every e-mail is stored here before it is sent, in the same save as the step that caused it. The job queue sends it and retries a failed send on its own, waiting longer each time; Retry now sends everything unsent at once."
         actions={<RetryButton unsent={counts.pending + counts.failed} />}
       />
       <div className="flex flex-col gap-5">
@@ -49,6 +51,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
           {rows.length ? <OutboxTable rows={rows} now={now} /> : <EmptyState title={status ? `No mail is ${FILTER_LABELS[status].toLowerCase()}.` : "No mail has been sent yet."} />}
           {rows.length === 100 ? <p className="mt-3 text-xs text-muted">Showing the newest 100.</p> : null}
         </Card>
+        <JobQueuePanel states={jobs} now={now} />
         {fake ? <FakeMailboxPanel result={fake} now={now} /> : null}
       </div>
     </>
