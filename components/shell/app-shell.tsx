@@ -4,6 +4,7 @@ import { ROLE_LABELS } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
 import { navFor } from "./nav-items";
 import { NavLinks } from "./nav-links";
+import { OutboxBar } from "@/components/offline/outbox-bar";
 import { SignOutButton } from "./sign-out-button";
 
 export function AppShell({ user, children }: { user: CurrentUser; children: React.ReactNode }) {
@@ -41,6 +42,7 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
           </div>
           <NavLinks items={items} layout="bar" />
         </header>
+        <OutboxBar />
         <main className="mx-auto w-full max-w-7xl px-4 py-5 sm:px-6 lg:px-8 lg:py-8">{children}</main>
       </div>
     </div>

@@ -2,7 +2,7 @@
 // JSON columns hold structured entry (field checks, lubricant, dispositions) whose shape is
 // validated by the zod schemas in lib/cases; the computed results are stored beside them
 // so lists and tallies can filter without recomputing.
-import { date, index, integer, jsonb, numeric, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { date, index, uniqueIndex, integer, jsonb, numeric, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { user } from "./auth";
 import { sites } from "./sites";
 
@@ -67,6 +67,8 @@ export const cases = pgTable(
     returnReason: text("return_reason"),
 
     createdBy: text("created_by").references(() => user.id),
+    // The key a device sent with the filing: a replay or a double tap finds this case instead of making another.
+    createKey: text("create_key"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedBy: text("updated_by").references(() => user.id),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
@@ -79,6 +81,7 @@ export const cases = pgTable(
     index("cases_cause_idx").on(t.primaryCause),
     index("cases_car_idx").on(t.carMark, t.carNumber),
     index("cases_serial_idx").on(t.serial),
+    uniqueIndex("cases_create_key_idx").on(t.createdBy, t.createKey),
   ],
 );
 

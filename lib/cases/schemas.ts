@@ -26,6 +26,8 @@ export const endPlaySchema = z.object({
   unit: z.enum(["in", "mm"], { message: "Unit must be in or mm." }),
   trials: z.array(z.object({ zero: reading.optional(), reading })).max(10, "At most 10 trials."),
   turnsByHand: z.boolean().optional(),
+  rollersSeated: z.boolean().optional(),
+  confirmedAsTyped: z.boolean().optional(),
 });
 
 export const fieldChecksSchema = z.object({

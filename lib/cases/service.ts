@@ -1,14 +1,14 @@
 // Case operations as the API and pages call them: access, stage rules, computed fields, history.
 import "server-only";
 import { z } from "zod";
-import { addFinding, changeFinding, countFindings, findingCode, insertCase, stepAlreadyTaken, updateCase } from "@/db/queries/case-write";
+import { addFinding, changeFinding, countFindings, findingCode, insertCase, insertCaseOnce, stepAlreadyTaken, updateCase } from "@/db/queries/case-write";
 import { codeStates, siteKinds } from "@/db/queries/reference-rows";
 import { can } from "@/lib/auth/permissions";
 import { findReadableCase, listCaseHistory, sitePolicy } from "@/db/queries/case-read";
 import { readableNumbers } from "@/db/queries/case-scope";
 import type { Case } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
-import { DEFAULT_END_PLAY_POLICY, type EndPlayPolicy } from "@/lib/field";
+import { DEFAULT_END_PLAY_POLICY, evaluateEndPlay, type EndPlayPolicy } from "@/lib/field";
 import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
 import { fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
@@ -63,9 +63,9 @@ async function policyFor(siteId: string | null | undefined): Promise<EndPlayPoli
 async function withComputed(input: FieldReportInput, base: Partial<Case>) {
   const merged = { ...base, ...input };
   const out: Record<string, unknown> = { ...input };
-  if (input.fieldChecks || input.siteId !== undefined) {
+  if (input.fieldChecks || input.siteId !== undefined || input.trigger !== undefined) {
     const checks = fieldChecksSchema.parse(merged.fieldChecks ?? {});
-    Object.assign(out, summariseFieldChecks(checks, await policyFor(merged.siteId)));
+    Object.assign(out, summariseFieldChecks(checks, await policyFor(merged.siteId), merged.trigger));
   }
   if (input.mountedOn !== undefined || input.removedOn !== undefined) {
     out.serviceMonths = serviceMonthsOf(merged.mountedOn, merged.removedOn);
@@ -73,14 +73,30 @@ async function withComputed(input: FieldReportInput, base: Partial<Case>) {
   return out;
 }
 
+/** A reading no bearing can show is refused at filing until corrected or confirmed as typed. */
+async function refuseImplausible(input: FieldReportInput) {
+  const endPlay = input.fieldChecks?.endPlay;
+  if (!endPlay || endPlay.trials.length === 0) return;
+  const problem = evaluateEndPlay(endPlay, await policyFor(input.siteId)).messages.find((m) => m.code === "implausible-reading");
+  if (problem) throw badRequest(problem.text, { fields: { endPlay: problem.text } });
+}
+
 export const createCaseSchema = fieldReportSchema.required({ trigger: true, siteId: true, removedOn: true });
 
-export async function createFieldReport(body: unknown, user: CurrentUser) {
+/** A device's key for one filing: letters, digits and dashes (a UUID fits). */
+export const createKeySchema = z
+  .string({ message: "Idempotency-Key must be text." })
+  .regex(/^[A-Za-z0-9_-]{16,100}$/, "Idempotency-Key must be 16 to 100 letters, digits, dashes or underscores.");
+
+/** Files a removal. With a key, a repeat of the same filing answers the first case (`replayed`) instead of a new one. */
+export async function createFieldReport(body: unknown, user: CurrentUser, createKey?: string | null) {
   const input = createCaseSchema.parse(body);
   assertOwnShop(input.siteId, user, null);
   await checkReferences(input, null);
+  await refuseImplausible(input);
   const values = await withComputed({ fieldChecks: { visual: [], confirmations: {} }, ...input }, {});
-  return insertCase(values, user);
+  if (createKey == null) return { row: await insertCase(values, user), replayed: false };
+  return insertCaseOnce(values, user, createKeySchema.parse(createKey));
 }
 
 const sectionSchemas = { field: fieldReportSchema, teardown: teardownSchema, verdict: verdictSchema } as const;
