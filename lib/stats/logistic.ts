@@ -25,7 +25,7 @@ export type LogisticFit = {
   separated: boolean;
 };
 
-export type Interval = { lower: number; upper: number; confidence: number };
+export type CoefficientInterval = { lower: number; upper: number; confidence: number };
 
 /** log(1 + e^t) without overflow. */
 function softplus(t: number): number {
@@ -145,7 +145,7 @@ export function fitLogistic(points: readonly BinomialPoint[]): LogisticFit | nul
 export type Coefficient = "intercept" | "slope";
 
 /** Estimate ± z·SE. */
-export function waldInterval(fit: LogisticFit, which: Coefficient, confidence = 0.95): Interval {
+export function waldInterval(fit: LogisticFit, which: Coefficient, confidence = 0.95): CoefficientInterval {
   const z = twoSidedZ(confidence);
   const est = which === "slope" ? fit.slope : fit.intercept;
   const se = which === "slope" ? fit.seSlope : fit.seIntercept;
@@ -185,7 +185,7 @@ function profileLoglik(points: readonly BinomialPoint[], which: Coefficient, val
  * chi2_1(confidence)/2 of the maximum. A bound that does not close within 50 standard errors is
  * reported as -Infinity or Infinity.
  */
-export function profileInterval(points: readonly BinomialPoint[], fit: LogisticFit, which: Coefficient, confidence = 0.95): Interval {
+export function profileInterval(points: readonly BinomialPoint[], fit: LogisticFit, which: Coefficient, confidence = 0.95): CoefficientInterval {
   checkPoints(points);
   const used = points.filter((p) => p.n > 0);
   const cut = chiSquareQuantile(confidence, 1) / 2;
@@ -228,7 +228,7 @@ export type InversePrediction = {
    * Fieller interval: the x values whose fitted logit is within z standard errors of logit(p).
    * null when the slope is not clearly away from zero (the set is then unbounded).
    */
-  fieller: Interval | null;
+  fieller: CoefficientInterval | null;
 };
 
 /** The reading at which a chosen share of outcomes is expected (e.g. p = 0.5), with its interval. */
@@ -251,7 +251,7 @@ export function inversePrediction(fit: LogisticFit, probability: number, confide
   const B = 2 * (a * b - z2 * v01);
   const C = a * a - z2 * v00;
   const disc = B * B - 4 * A * C;
-  let fieller: Interval | null = null;
+  let fieller: CoefficientInterval | null = null;
   if (A > 0 && disc >= 0) {
     const root = Math.sqrt(disc);
     const r1 = (-B - root) / (2 * A);
