@@ -35,18 +35,18 @@ for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
   test(`every removal-yield figure draws on the demo (${label})`, async () => {
     const page = await signedInPage(browser, "manager", viewport);
     await page.goto("/tallies/yield");
-    await expect(page.getByRole("link", { name: "Removal yield" })).toHaveAttribute("aria-current", "page");
+    await poll(() => page.getByRole("link", { name: "Removal yield" }).getAttribute("aria-current")).toBe("page");
     const summary = page.locator("[data-yield-summary]");
-    await expect(summary).toContainText("over the owner's threshold");
-    await expect(summary).toContainText("applies no alarm threshold of its own");
+    await poll(() => summary.innerText()).toContain("over the owner's threshold");
+    expect(await summary.innerText()).toContain("applies no alarm threshold of its own");
     for (const title of CARDS) {
       const c = card(page, title);
-      await expect(c, title).toHaveCount(1);
+      await poll(() => c.count()).toBe(1);
       await poll(() => c.locator("svg.recharts-surface").count()).toBeGreaterThan(0);
     }
     // the fitted curve and its band are drawn, and the funnel names the over-alarming detector
     await poll(() => card(page, CARDS[0]).locator(".recharts-line-curve").count()).toBeGreaterThan(0);
-    await expect(card(page, "Detectors against the fleet")).toContainText("D-217");
+    await poll(() => card(page, "Detectors against the fleet").innerText()).toContain("D-217");
     await page.screenshot({ path: `${SHOTS}/yield-${label}.png`, fullPage: true });
     expect(await page.evaluate((w) => document.documentElement.scrollWidth <= w, viewport.width)).toBe(true);
     await page.close();
@@ -58,7 +58,7 @@ test("a figure's table view and CSV hold its numbers", async () => {
   await page.goto("/tallies/yield");
   const c = card(page, "Detectors against the fleet");
   await c.getByRole("button", { name: "Table" }).click();
-  await expect(c.locator("table")).toContainText("Fleet");
+  await poll(() => c.locator("table").innerText()).toContain("Fleet");
   const [download] = await Promise.all([page.waitForEvent("download"), c.getByRole("button", { name: "CSV" }).click()]);
   const text = await (await download.createReadStream()).toArray();
   expect(Buffer.concat(text).toString("utf8")).toContain("D-217");
