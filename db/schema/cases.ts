@@ -82,6 +82,8 @@ export const cases = pgTable(
     index("cases_car_idx").on(t.carMark, t.carNumber),
     index("cases_serial_idx").on(t.serial),
     uniqueIndex("cases_create_key_idx").on(t.createdBy, t.createKey),
+    // later removals of the same car and position (missed keep calls)
+    index("cases_position_idx").on(t.carMark, t.carNumber, t.axle, t.side, t.removedOn),
   ],
 );
 

@@ -13,3 +13,5 @@ export * from "./chi-square-describe";
 export * from "./c-chart";
 export * from "./pareto";
 export * from "./clusters";
+export * from "./logistic";
+export * from "./funnel";

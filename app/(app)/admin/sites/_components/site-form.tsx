@@ -11,6 +11,12 @@ import { SITE_KIND_LABELS, SITE_KINDS, siteCreateSchema, sitePatchSchema } from 
 import { PolicyFields, policyTexts, readPolicy } from "./policy-fields";
 import type { SiteView } from "./types";
 
+/** Blank clears the cost; anything else is read as dollars (a wrong text fails the schema with its message). */
+function readCost(text: string): number | null {
+  const t = text.replace(/[$,\s]/g, "");
+  return t === "" ? null : Number(t);
+}
+
 const DEFAULTS = { endPlayMaxIn: DEFAULT_END_PLAY_POLICY.maxIn, dialSpreadIn: DEFAULT_END_PLAY_POLICY.dialSpreadIn, tapeSpreadIn: DEFAULT_END_PLAY_POLICY.tapeSpreadIn };
 
 /** Adds a site (no `site`) or edits one; the limits can be typed in either unit. */
@@ -41,6 +47,7 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
       location: String(data.get("location") ?? ""),
       active: site ? data.get("active") === "on" : true,
       ...policy.values,
+      removalCostUsd: readCost(String(data.get("removalCostUsd") ?? "")),
     };
     const checked = (site ? sitePatchSchema : siteCreateSchema).safeParse(input);
     const local: Record<string, string> = { ...policy.errors };
@@ -89,6 +96,12 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
           <Input id={f("location")} name="location" defaultValue={site?.location} aria-invalid={!!errors.location} placeholder="Town or yard" />
         </Field>
       </div>
+      <Field label="Cost of one removal (USD) — optional" htmlFor={f("cost")} error={errors.removalCostUsd} hint="Wheelset change, car out of service and lab time. Tallies use it to price removals that teardown did not confirm.">
+        <div className="relative w-44">
+          <span className="pointer-events-none absolute inset-y-0 left-3 flex items-center text-sm text-muted">$</span>
+          <Input id={f("cost")} name="removalCostUsd" inputMode="decimal" defaultValue={site?.removalCostUsd ?? ""} aria-invalid={!!errors.removalCostUsd} className="pl-7 tabular" placeholder="not set" />
+        </div>
+      </Field>
       <div className="rounded-lg border border-line bg-surface-2 p-4">
         <PolicyFields texts={texts} unit={unit} errors={errors} onChange={setTexts} onUnit={switchUnit} />
       </div>
