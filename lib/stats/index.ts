@@ -13,3 +13,4 @@ export * from "./chi-square-describe";
 export * from "./c-chart";
 export * from "./pareto";
 export * from "./clusters";
+export * from "./association";
