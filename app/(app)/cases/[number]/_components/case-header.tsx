@@ -15,7 +15,8 @@ export function CaseHeader({ c }: { c: CaseDetail }) {
         <h1 className="text-2xl font-semibold tracking-tight tabular sm:text-3xl">{c.number}</h1>
         <StageBadge stage={c.status} />
         {c.fieldCall ? <Badge tone={callTone[c.fieldCall]}>Field call: {c.fieldCall}</Badge> : null}
-        {c.removalConfirmed === "no-defect" ? <Badge tone="warn">No defect found</Badge> : c.removalConfirmed === "confirmed" ? <Badge tone="ok">Removal confirmed</Badge> : null}
+        {/* the outcome is the engineer's to state: no badge until the verdict is signed */}
+        {c.status !== "signed" ? null : c.removalConfirmed === "no-defect" ? <Badge tone="warn">No defect found</Badge> : c.removalConfirmed === "confirmed" ? <Badge tone="ok">Removal confirmed</Badge> : null}
       </div>
       <p className="text-sm text-ink-2">
         {[c.carMark && `${c.carMark} ${c.carNumber}`, c.axle && c.side ? `position ${c.axle}${c.side}` : null, triggerLabel(c.trigger), c.siteName, c.removedOn && `removed ${c.removedOn}`, c.serial && `serial ${c.serial}`].filter(Boolean).join(" · ")}
