@@ -1,0 +1,19 @@
+// GET /api/cases/:id/signature - what a signature covers now (hash) and, once signed, whether it still matches
+// POST /api/cases/:id/signature - sign the verdict: password again, meaning confirmed, hash of what was shown
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import { loadReadableCase } from "@/lib/cases/service";
+import { SIGNATURE_MEANING, contentHash } from "@/lib/cases/signature-content";
+import { checkSignature, contentOf, signCase } from "@/lib/cases/signature-service";
+import { parseJson, withRole } from "@/lib/http/handler";
+
+export const GET = withRole<{ id: string }>("case:read", async ({ params, user }) => {
+  const c = await loadReadableCase(params.id, user);
+  const content = await contentOf(c);
+  return NextResponse.json({ meaning: SIGNATURE_MEANING, contentHash: contentHash(content), content, version: c.version, signature: await checkSignature(c) });
+});
+
+export const POST = withRole<{ id: string }>("case:sign", async ({ req, params, user }) => {
+  const row = await signCase(params.id, await parseJson(req, z.unknown()), user);
+  return NextResponse.json({ case: { id: row.id, number: row.number, status: row.status, version: row.version, signedContentHash: row.signedContentHash } });
+});
