@@ -23,3 +23,13 @@ describe("root-cause colours", () => {
       for (let j = i + 1; j < list.length; j++) expect(dE(list[i][1], list[j][1]), `${list[i][0]} vs ${list[j][0]}`).toBeGreaterThanOrEqual(20);
   });
 });
+
+describe("image legend layout", () => {
+  it("never lets two entries overlap, wrapping long ones to a new row (arithmetic)", async () => {
+    const { layoutLegend } = await import("@/components/charts/export-image");
+    const widths = [120, 200, 90, 260, 60];
+    const at = layoutLegend(widths, 400);
+    expect(at).toEqual([{ x: 0, row: 0 }, { x: 136, row: 0 }, { x: 0, row: 1 }, { x: 106, row: 1 }, { x: 0, row: 2 }]);
+    for (let i = 1; i < at.length; i++) if (at[i].row === at[i - 1].row) expect(at[i].x).toBeGreaterThanOrEqual(at[i - 1].x + widths[i - 1]);
+  });
+});
