@@ -64,6 +64,9 @@ export const cases = pgTable(
     proposedAt: timestamp("proposed_at", { withTimezone: true }),
     signedBy: text("signed_by").references(() => user.id),
     signedAt: timestamp("signed_at", { withTimezone: true }),
+    // What the signer confirmed, in words, and a SHA-256 of exactly what was signed (lib/cases/signature-content.ts).
+    signedMeaning: text("signed_meaning"),
+    signedContentHash: text("signed_content_hash"),
     returnReason: text("return_reason"),
 
     createdBy: text("created_by").references(() => user.id),

@@ -41,6 +41,9 @@ export type ReportSourceCase = {
   verdictNotes: string;
   proposedAt: DateLike;
   signedAt: DateLike;
+  /** What the signer confirmed and the SHA-256 of the signed content (absent on older signatures). */
+  signedMeaning?: string | null;
+  signedContentHash?: string | null;
   returnReason: string | null;
   createdAt: DateLike;
   updatedAt: DateLike;

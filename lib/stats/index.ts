@@ -15,3 +15,4 @@ export * from "./pareto";
 export * from "./clusters";
 export * from "./logistic";
 export * from "./funnel";
+export * from "./association";

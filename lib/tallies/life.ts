@@ -15,6 +15,7 @@ import {
   type ShapeReading,
 } from "@/lib/stats";
 import { causeLabel } from "./labels";
+import { lifeCautions, type LifeCaution } from "./life-cautions";
 import { LR_LIMIT } from "./life-data";
 
 export type LifeMeasure = "months" | "miles";
@@ -33,7 +34,14 @@ export type LifeSummary = {
   fit: null | { beta: number; eta: number; b10: number; betaBounds: Bounds; etaBounds: Bounds; b10Bounds: Bounds; shapeReading: ShapeReading };
   /** Why no fit was made, in words. */
   note: string | null;
+  /** Longest service life among the units (failures and suspensions alike). */
+  longestLife: number;
+  /** Reasons not to take the fit's figures at face value (empty when there is no fit). */
+  cautions: LifeCaution[];
 };
+
+/** The shape is read from one bound everywhere (cause table, detail panel, CSV): this one. */
+export const SHAPE_BOUND_WORDS = "95% Fisher bounds";
 
 export type LifeDetail = LifeSummary & {
   rankRegression: { beta: number; eta: number; b10: number; r2: number } | null;
@@ -73,9 +81,10 @@ export function lifeCauses(rows: readonly LifeCountRow[]): { cause: string; fail
 const noteFor = (err: unknown) => (err instanceof WeibullInputError ? err.message : "The fit did not converge on these data.");
 
 /** MLE with Fisher bounds: quick enough for every cause on one screen. */
-export function summariseCause(cause: string, units: readonly LifeUnit[], confidence = 0.95): LifeSummary {
+export function summariseCause(cause: string, units: readonly LifeUnit[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary {
   const failures = units.filter((u) => u.failed).length;
-  const base = { cause, label: causeLabel(cause), failures, suspensions: units.length - failures };
+  const longestLife = units.reduce((m, u) => Math.max(m, u.time), 0);
+  const base = { cause, label: causeLabel(cause), failures, suspensions: units.length - failures, longestLife };
   try {
     assertFittable(units);
     const data = prepareLikelihoodData(units);
@@ -85,9 +94,10 @@ export function summariseCause(cause: string, units: readonly LifeUnit[], confid
       ...base,
       fit: { beta: fit.beta, eta: fit.eta, b10: fit.b10, betaBounds: fisher.beta, etaBounds: fisher.eta, b10Bounds: fisher.b10, shapeReading: readShape(fit.beta, fisher.beta).reading },
       note: null,
+      cautions: lifeCautions({ failures, suspensions: base.suspensions, eta: fit.eta, b10: fit.b10, longestLife, unit }),
     };
   } catch (err) {
-    return { ...base, fit: null, note: noteFor(err) };
+    return { ...base, fit: null, note: noteFor(err), cautions: [] };
   }
 }
 
@@ -111,9 +121,9 @@ function line(beta: number, eta: number, tMin: number, tMax: number, steps = 24)
  * Everything the life section shows for one cause. Likelihood-ratio bounds profile the
  * likelihood hundreds of times, so above `lrLimit` units only the Fisher bounds are given.
  */
-export function analyseCause(cause: string, units: readonly LifeUnit[], opts: { confidence?: number; lrLimit?: number; maxPlotPoints?: number } = {}): LifeDetail {
+export function analyseCause(cause: string, units: readonly LifeUnit[], opts: { confidence?: number; lrLimit?: number; maxPlotPoints?: number; unit?: LifeMeasure } = {}): LifeDetail {
   const confidence = opts.confidence ?? 0.95;
-  const summary = summariseCause(cause, units, confidence);
+  const summary = summariseCause(cause, units, confidence, opts.unit);
   const empty = { rankRegression: null, mle: null, likelihoodRatio: null, shapeExplanation: "", plotPoints: [], fittedLine: [], thinnedFrom: null };
   if (!summary.fit) return { ...summary, ...empty };
   const small = units.length <= (opts.lrLimit ?? LR_LIMIT);
@@ -125,10 +135,12 @@ export function analyseCause(cause: string, units: readonly LifeUnit[], opts: { 
   const tMin = ranked.reduce((m, p) => Math.min(m, p.time), eta / 10);
   const tMax = units.reduce((m, u) => Math.max(m, u.time), eta * 1.5);
   const maxPoints = opts.maxPlotPoints ?? 300;
-  const shape = full ? { explanation: full.shapeExplanation, reading: full.shapeReading } : readShape(beta, summary.fit.betaBounds);
+  // the same reading as the cause table: from the Fisher bounds, never the likelihood-ratio ones
+  const shape = readShape(summary.fit.beta, summary.fit.betaBounds);
+  const [lo, hi] = summary.fit.betaBounds;
+  shape.explanation += ` Read from the ${SHAPE_BOUND_WORDS} on the shape (${lo.toFixed(2)} – ${hi.toFixed(2)}), as everywhere on this page.`;
   return {
     ...summary,
-    fit: { ...summary.fit, shapeReading: shape.reading },
     rankRegression: { beta: rr.beta, eta: rr.eta, b10: rr.b10, r2: rr.r2 },
     mle: { beta, eta, b10: summary.fit.b10, fisher: { beta: summary.fit.betaBounds, eta: summary.fit.etaBounds, b10: summary.fit.b10Bounds } },
     likelihoodRatio: full ? { beta: full.mle.likelihoodRatio.beta, eta: full.mle.likelihoodRatio.eta, b10: full.mle.likelihoodRatio.b10 } : null,

@@ -92,6 +92,8 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
   "PATCH /api/cases/[id]": { access: EDITS_A_SECTION },
   "POST /api/cases/[id]/transitions": { access: TAKES_A_STEP },
   "GET /api/cases/[id]/history": { access: EVERYONE },
+  "GET /api/cases/[id]/signature": { access: EVERYONE },
+  "POST /api/cases/[id]/signature": { access: LINKS },
   "POST /api/cases/[id]/findings": { access: TEARDOWN },
   "PATCH /api/cases/[id]/findings/[findingId]": { access: TEARDOWN },
   "DELETE /api/cases/[id]/findings/[findingId]": { access: TEARDOWN },
@@ -210,6 +212,9 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
   },
   "POST /api/cases/[id]/transitions": { gate: "case:read", reach: "case", probes: [...ACTIONS.map(stepProbe), unreadable("no step named", ACTIONS.map((a) => WORKFLOW[a].permission))] },
   "GET /api/cases/[id]/history": { gate: "case:read", reach: "case" },
+  "GET /api/cases/[id]/signature": { gate: "case:read", reach: "case" },
+  // A stale version is refused before the password is checked, so a permitted probe signs nothing.
+  "POST /api/cases/[id]/signature": { gate: "case:sign", reach: "case", probes: [{ body: () => ({ version: STALE, password: "matrix probe", contentHash: "0".repeat(64), meaningAccepted: true }), stageAllows: (stage) => stage === "signoff" }] },
   "POST /api/cases/[id]/findings": { gate: "case:edit-teardown", reach: "case", probes: [{ body: () => ({ version: STALE, finding: { component: "cup", damageCode: "fatigue.subsurface", severity: 3 } }), stageAllows: teardownOpen }] },
   "PATCH /api/cases/[id]/findings/[findingId]": { gate: "case:edit-teardown", reach: "case", probes: [{ body: () => ({ version: STALE, finding: {} }), stageAllows: teardownOpen }] },
   "DELETE /api/cases/[id]/findings/[findingId]": { gate: "case:edit-teardown", reach: "case", probes: [{ query: () => `?version=${STALE}`, stageAllows: teardownOpen }] },
