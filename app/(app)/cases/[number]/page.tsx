@@ -19,6 +19,8 @@ import { DEFAULT_END_PLAY_POLICY } from "@/lib/field";
 import { CaseHeader } from "./_components/case-header";
 import { CaseExtras } from "./_components/case-extras";
 import { toDraft } from "./_components/to-draft";
+import { SafetyFlagNote } from "./_components/safety-flag-note";
+import { safetyFlagOf } from "@/lib/cases/safety-flag";
 
 export const dynamic = "force-dynamic";
 
@@ -46,6 +48,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
       <CaseHeader c={c} />
       {actions.length ? (
         <Card className="mb-5" title="Next step">
+          {actions.includes("sign") ? <div className="mb-3"><SafetyFlagNote flag={safetyFlagOf(c.fieldChecks, c.trigger)} signing /></div> : null}
           <WorkflowBar caseId={c.id} version={c.version} actions={actions} verdictProblems={problems} />
         </Card>
       ) : null}
