@@ -71,9 +71,9 @@ test("axe-core finds no serious or critical problem on sign-in, the list, a case
   await anon.close();
   const page = await signedInPage(browser, "analyst", PHONE);
   await page.goto("/cases");
-  await page.locator("main a[href^='/cases/TL-']").first().waitFor();
+  await page.locator("main a[href^='/cases/TL-']:visible").first().waitFor();
   found["/cases"] = await seriousAxeProblems(page);
-  const first = await page.locator("main a[href^='/cases/TL-']").first().getAttribute("href");
+  const first = await page.locator("main a[href^='/cases/TL-']:visible").first().getAttribute("href");
   await page.goto(first!);
   found[first!] = await seriousAxeProblems(page);
   await page.context().close();
@@ -83,3 +83,23 @@ test("axe-core finds no serious or critical problem on sign-in, the list, a case
   await inspector.context().close();
   expect(found).toEqual({ "/sign-in": [], "/cases": [], [first!]: [], "/cases/new": [] });
 }, 90_000);
+
+test("on a phone the menu shows every destination without sideways scrolling, each at least 44 px tall", async () => {
+  const page = await signedInPage(browser, "admin", PHONE);
+  await page.goto("/");
+  await page.getByRole("button", { name: "Menu" }).click();
+  const links = page.locator('#phone-menu nav[aria-label="Main"] a');
+  // The admin sees every destination: six for the casebook, five for administration (components/shell/nav-items.ts).
+  expect(await links.count()).toBe(11);
+  for (const box of await links.evaluateAll((els) => els.map((e) => e.getBoundingClientRect().toJSON() as DOMRect))) {
+    expect(box.height).toBeGreaterThanOrEqual(44);
+    expect(box.right).toBeLessThanOrEqual(PHONE.width);
+    expect(box.left).toBeGreaterThanOrEqual(0);
+  }
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
+  await page.screenshot({ path: "/tmp/shots/e2e-phone-menu.png", fullPage: false });
+  await page.getByRole("link", { name: "Sites & limits" }).click();
+  await page.waitForURL((u) => u.pathname === "/admin/sites");
+  expect(await page.locator("#phone-menu").count()).toBe(0);
+  await page.context().close();
+});
