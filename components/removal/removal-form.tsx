@@ -10,7 +10,8 @@ import { Card } from "@/components/ui/card";
 import { Caution } from "@/components/ui/caution";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { evaluateFieldChecks } from "@/lib/cases/compute";
-import { BEARING_CLASSES } from "@/lib/cases/schemas";
+import { BEARING_CLASSES, createCaseSchema } from "@/lib/cases/schemas";
+import { ErrorSummary } from "@/components/ui/error-summary";
 import { DEFAULT_END_PLAY_POLICY, VISUAL_FINDINGS, safetyConfirmationsFor, type EndPlayPolicy } from "@/lib/field";
 import { AxlePicker } from "./axle-picker";
 import { ChoiceChips } from "./choice-chips";
@@ -36,7 +37,8 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   const { lastSent } = useOutboxEntries();
   const sentNow = queued && lastSent && lastSent.key === fileKey.current ? lastSent.number : null;
   const autosave = useAutosave(draft, { mode, caseId, version, enabled: restored || mode === "edit" });
-  const errors = autosave.state.fields ?? {};
+  const [checked, setChecked] = useState<Record<string, string> | null>(null);
+  const errors = checked ?? autosave.state.fields ?? {};
 
   useEffect(() => {
     if (mode === "new") {
@@ -56,6 +58,14 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
 
   async function file() {
     if (filing) return;
+    // Checked on the device first: what is missing is shown now, not after the outbox replays it.
+    const parsed = createCaseSchema.safeParse(forSaving(draft));
+    if (!parsed.success) {
+      const fields: Record<string, string> = {};
+      for (const issue of parsed.error.issues) fields[issue.path.join(".") || "_"] ??= issue.message;
+      return setChecked(fields);
+    }
+    setChecked(null);
     setFiling(true);
     fileKey.current ??= crypto.randomUUID();
     const label = [draft.carMark, draft.carNumber].filter(Boolean).join(" ") + (draft.axle && draft.side ? ` · ${draft.axle}${draft.side}` : "");
@@ -108,6 +118,7 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
 
   return (
     <form className="flex flex-col gap-5" onSubmit={(e) => e.preventDefault()} noValidate aria-label="Removal report">
+      <ErrorSummary errors={errors} />
       <Caution title="Before you start">
         Wear the protective equipment your employer requires (safety-toe boots, safety glasses, gloves). Work on, under or between cars only under
         blue-signal protection. The wheelset must be out from under the car and secured against rolling.
@@ -137,7 +148,9 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
           <p className="mb-2 text-sm font-medium text-ink-2">
             Wheelset position {draft.axle && draft.side ? <span className="ml-1 rounded bg-accent-soft px-1.5 py-0.5 text-accent">{draft.axle}{draft.side}</span> : null}
           </p>
-          <AxlePicker axle={draft.axle} side={draft.side} onPick={(axle, side) => patch({ axle, side })} />
+          <div data-field="axle">
+            <AxlePicker axle={draft.axle} side={draft.side} onPick={(axle, side) => patch({ axle, side })} />
+          </div>
           {errors.axle || errors.side ? <p className="text-sm text-danger">{errors.axle ?? errors.side}</p> : null}
         </div>
         <div className="mt-4">
@@ -227,7 +240,9 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
         <p className="mb-3 text-sm text-muted">
           Turn the bearing first so the rollers seat. Dial indicator on a magnetic base on the cup, stem against the wheel hub: push the cup toward the wheel and zero, pull toward the end cap and read the travel.
         </p>
-        <EndPlayEntry value={checks.endPlay ?? { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] }} onChange={(endPlay) => setChecks({ endPlay })} policy={policy} />
+        <div data-field="endPlay">
+          <EndPlayEntry value={checks.endPlay ?? { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] }} onChange={(endPlay) => setChecks({ endPlay })} policy={policy} />
+        </div>
       </Card>
 
       <Card title="6 · What can be seen">

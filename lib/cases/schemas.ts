@@ -101,3 +101,6 @@ export const verdictSchema = z.object({
 }).partial();
 
 export const reasonSchema = z.object({ reason: z.string().trim().min(5, "Give a reason of at least a few words.").max(2000) });
+
+/** What a new removal needs before it can be filed; the form checks it on the device too, so an offline filing is not refused later. */
+export const createCaseSchema = fieldReportSchema.required({ trigger: true, siteId: true, removedOn: true });

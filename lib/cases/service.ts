@@ -11,7 +11,7 @@ import type { CurrentUser } from "@/lib/auth/session";
 import { DEFAULT_END_PLAY_POLICY, evaluateEndPlay, type EndPlayPolicy } from "@/lib/field";
 import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
-import { fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
+import { createCaseSchema, fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
 import { canEditSection, checkTransition, editRefusal, type Section, type WorkflowAction } from "./workflow";
 import { nudgeMail } from "@/lib/jobs/nudge";
 import { queueStepNotice } from "./notices";
@@ -81,7 +81,7 @@ async function refuseImplausible(input: FieldReportInput) {
   if (problem) throw badRequest(problem.text, { fields: { endPlay: problem.text } });
 }
 
-export const createCaseSchema = fieldReportSchema.required({ trigger: true, siteId: true, removedOn: true });
+export { createCaseSchema } from "./schemas";
 
 /** A device's key for one filing: letters, digits and dashes (a UUID fits). */
 export const createKeySchema = z

@@ -17,9 +17,10 @@ export function zodMessage(error: z.ZodError): { message: string; fields: Record
     const key = issue.path.join(".") || "_";
     fields[key] ??= issue.message;
   }
-  const first = error.issues[0];
-  const where = first?.path.length ? `${first.path.join(".")}: ` : "";
-  return { message: `${where}${first?.message ?? "invalid input"}`, fields };
+  // The words of the form only: internal field names stay in `fields` for the screen to place the message.
+  const first = error.issues[0]?.message ?? "Some of what was entered is not valid.";
+  const more = Object.keys(fields).length - 1;
+  return { message: more > 0 ? `${first} (and ${more} more to fix)` : first, fields };
 }
 
 export function errorResponse(err: unknown): NextResponse {

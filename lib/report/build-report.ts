@@ -121,7 +121,7 @@ export function buildCaseReport(s: ReportSource): CaseReport {
     ],
     trigger: { label: trigger, details: triggerDetails(c.trigger, c.triggerDetail) },
     service: serviceRows(s),
-    field: buildFieldSection(c.fieldChecks ?? {}, s.site, { fieldCall: c.fieldCall, fieldNotes: c.fieldNotes ?? "" }),
+    field: buildFieldSection(c.fieldChecks ?? {}, s.site, { fieldCall: c.fieldCall, fieldNotes: c.fieldNotes ?? "", trigger: c.trigger }),
     teardown: {
       rows: [
         ["Lab", s.lab ? `${s.lab.name} (${s.lab.code})` : DASH],

@@ -129,6 +129,8 @@ export type FieldSection = {
   /** The call stored with the case, when it differs from the one recomputed here. */
   storedCallDiffers: string | null;
   notes: string;
+  /** Safety confirmations that applied and were left unticked at filing, each with its caution. */
+  safetyFlag: string[];
 };
 
 export type ReportFinding = {

@@ -22,6 +22,8 @@ import { CaseHeader } from "./_components/case-header";
 import { SignatureCheckLine } from "./_components/signature-check";
 import { CaseExtras } from "./_components/case-extras";
 import { toDraft } from "./_components/to-draft";
+import { SafetyFlagNote } from "./_components/safety-flag-note";
+import { safetyFlagOf } from "@/lib/cases/safety-flag";
 
 export const dynamic = "force-dynamic";
 
@@ -51,6 +53,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
       {signature ? <div className="-mt-2 mb-5"><SignatureCheckLine check={signature} /></div> : null}
       {actions.length ? (
         <Card className="mb-5" title="Next step">
+          {actions.includes("sign") ? <div className="mb-3"><SafetyFlagNote flag={safetyFlagOf(c.fieldChecks, c.trigger)} signing /></div> : null}
           <WorkflowBar caseId={c.id} version={c.version} actions={actions} verdictProblems={problems} />
         </Card>
       ) : null}

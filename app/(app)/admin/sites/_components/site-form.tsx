@@ -10,6 +10,7 @@ import { DEFAULT_END_PLAY_POLICY } from "@/lib/field/end-play-policy";
 import { SITE_KIND_LABELS, SITE_KINDS, siteCreateSchema, sitePatchSchema } from "@/lib/validation/site";
 import { PolicyFields, policyTexts, readPolicy } from "./policy-fields";
 import type { SiteView } from "./types";
+import { ErrorSummary } from "@/components/ui/error-summary";
 
 /** Blank clears the cost; anything else is read as dollars (a wrong text fails the schema with its message). */
 function readCost(text: string): number | null {
@@ -73,6 +74,7 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
   const f = (name: string) => `${id}-${name}`;
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label={site ? `Edit ${site.code}` : "Add a site"}>
+      <ErrorSummary errors={errors} idPrefix={`${id}-`} />
       <div className="grid gap-4 sm:grid-cols-[8rem_1fr]">
         <Field label="Code" htmlFor={f("code")} error={errors.code}>
           <Input id={f("code")} name="code" defaultValue={site?.code} aria-invalid={!!errors.code} className="uppercase" placeholder="e.g. RSC" />
