@@ -51,14 +51,17 @@ export function funnelLimits(n: number, p0: number): FunnelLimits {
   };
 }
 
-/** Where a unit falls: outside the 99.8% limits, outside the 95% limits, or inside both. */
+/**
+ * Where a unit falls, by its exact binomial tail under p0 (two-sided 95% and 99.8%). The drawn limits
+ * are interpolated and can sit just under 100% at small n, so a whole count is judged by its tail instead.
+ */
 export function funnelPosition(x: number, n: number, p0: number): "below-998" | "below-95" | "inside" | "above-95" | "above-998" {
-  const share = x / n;
-  const l = funnelLimits(n, p0);
-  if (share < l.lower998) return "below-998";
-  if (share < l.lower95) return "below-95";
-  if (share > l.upper998) return "above-998";
-  if (share > l.upper95) return "above-95";
+  const lowerTail = binomialCdf(x, n, p0);
+  const upperTail = 1 - binomialCdf(x - 1, n, p0);
+  if (lowerTail < 0.001) return "below-998";
+  if (lowerTail < 0.025) return "below-95";
+  if (upperTail < 0.001) return "above-998";
+  if (upperTail < 0.025) return "above-95";
   return "inside";
 }
 

@@ -108,8 +108,12 @@ export function detectorRows(cells: readonly DetectorCell[], triggerLabel: (code
   const n = cells.reduce((s, c) => s + c.n, 0);
   const confirmed = cells.reduce((s, c) => s + c.confirmed, 0);
   const fleet = { ...wilsonInterval(confirmed, n), n, confirmed };
+  // a detector that gives both hot-bearing and acoustic alarms appears once per kind, named so
+  const kinds = new Map<string, number>();
+  for (const c of cells) kinds.set(c.key, (kinds.get(c.key) ?? 0) + 1);
+  const nameOf = (c: DetectorCell) => ((kinds.get(c.key) ?? 0) > 1 ? `${c.key} · ${c.trigger === "wayside-acoustic" ? "acoustic" : "hot-bearing"}` : c.key);
   const rows: DetectorRow[] = cells.map((c) => ({
-    ...rateRow(c, c.key),
+    ...rateRow(c, nameOf(c)),
     trigger: triggerLabel(c.trigger),
     location: c.location ?? "",
     alarms: c.alarms,

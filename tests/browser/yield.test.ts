@@ -46,11 +46,11 @@ for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
     }
     // the fitted curve and its band are drawn, and the funnel names the over-alarming detector
     await poll(() => card(page, CARDS[0]).locator(".recharts-line-curve").count()).toBeGreaterThan(0);
-    await poll(() => card(page, "Detectors against the fleet").innerText()).toContain("D-217");
     await page.screenshot({ path: `${SHOTS}/yield-${label}.png`, fullPage: true });
+    await poll(() => card(page, "Detectors against the fleet").innerText()).toContain("D-217");
     expect(await page.evaluate((w) => document.documentElement.scrollWidth <= w, viewport.width)).toBe(true);
     await page.close();
-  });
+  }, 120_000);
 }
 
 test("a figure's table view and CSV hold its numbers", async () => {
@@ -63,4 +63,4 @@ test("a figure's table view and CSV hold its numbers", async () => {
   const text = await (await download.createReadStream()).toArray();
   expect(Buffer.concat(text).toString("utf8")).toContain("D-217");
   await page.close();
-});
+}, 60_000);

@@ -47,6 +47,10 @@ describe("funnel limits", () => {
     expect(funnelPosition(10, 100, 0.6)).toBe("below-998"); // 10% against 60% over 100 alarms
     expect(funnelPosition(60, 100, 0.6)).toBe("inside");
     expect(funnelPosition(3, 5, 0.6)).toBe("inside"); // five alarms tell little
+    // arithmetic: 3 of 3 at p0 = 0.67 has upper tail 0.67^3 = 0.30, well inside
+    expect(funnelPosition(3, 3, 0.67)).toBe("inside");
+    // arithmetic: 1 of 6 at p0 = 0.67: P(X <= 1) = 0.33^6 + 6 (0.67) 0.33^5 = 0.0171 < 0.025
+    expect(funnelPosition(1, 6, 0.67)).toBe("below-95");
   });
 
   it("refuses impossible input", () => {

@@ -50,6 +50,8 @@ describe("removal yield shaping", () => {
     expect(d.rows[0].position).toBe("below-998");
     expect(d.rows.find((r) => r.label === "D-1")!.position).not.toMatch(/below/);
     expect(d.funnel.length).toBeGreaterThan(5);
+    const both = detectorRows([{ ...cell("D-9", 4, 2), trigger: "wayside-hot", location: null, alarms: 4 }, { ...cell("D-9", 2, 1), trigger: "wayside-acoustic", location: null, alarms: 2 }], (c) => c);
+    expect(both.rows.map((r) => r.label).sort()).toEqual(["D-9 · acoustic", "D-9 · hot-bearing"]);
   });
 
   it("joins remove calls with keep calls per group", () => {

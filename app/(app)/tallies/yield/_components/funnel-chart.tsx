@@ -15,10 +15,11 @@ function Dot(props: { cx?: number; cy?: number; payload?: DetectorRow & { y: num
   if (cx === undefined || cy === undefined || !payload) return null;
   const colour = toneOf(payload.position);
   const flagged = colour !== TONE.inside;
+  const named = colour === TONE.low;
   return (
     <g>
       <circle cx={cx} cy={cy} r={flagged ? 6 : 4.5} fill={colour} stroke="#ffffff" strokeWidth={1.5} />
-      {flagged ? <text x={cx + 9} y={cy + 4} fontSize={11} fontWeight={600} fill={colour}>{payload.label}</text> : null}
+      {named ? <text x={cx + 9} y={cy + 4} fontSize={11} fontWeight={600} fill={colour}>{payload.label}</text> : null}
     </g>
   );
 }

@@ -90,7 +90,7 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
                   <div><dt className="inline font-medium text-ink">80% confirmed at </dt><dd className="inline tabular">{fit.fit.at80 ? `${fit.fit.at80.x} °F${fit.fit.at80.lower !== null ? ` (95%: ${fit.fit.at80.lower} to ${fit.fit.at80.upper})` : " (interval open)"}` : "–"}</dd></div>
                   <div className="text-xs text-muted sm:col-span-2">
                     Slope {f1(fit.fit.slope)} per °F on the log-odds scale (95% profile {f1(fit.fit.slopeProfile[0])} to {f1(fit.fit.slopeProfile[1])}; Wald {f1(fit.fit.slopeWald[0])} to {f1(fit.fit.slopeWald[1])}) ·
-                    likelihood-ratio p = {fit.fit.pValue < 0.001 ? "< 0.001" : fit.fit.pValue.toFixed(3)} · {fit.n} alarms · intervals for the 50% and 80% points by Fieller&apos;s method
+                    likelihood-ratio {fit.fit.pValue < 0.001 ? "p < 0.001" : `p = ${fit.fit.pValue.toFixed(3)}`} · {fit.n} alarms · intervals for the 50% and 80% points by Fieller&apos;s method
                   </div>
                 </dl>
               ) : fit.noFit ? <p className="text-muted">{fit.noFit}</p> : undefined
