@@ -113,6 +113,7 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
   // Tallies and life statistics: everyone reads (inspectors their own shop's); fleet lists come from engineering.
   "GET /api/tallies": { access: EVERYONE },
   "GET /api/tallies/life": { access: EVERYONE },
+  "GET /api/tallies/yield": { access: EVERYONE },
   "GET /api/fleet": { access: EVERYONE },
   "POST /api/fleet": { access: FLEET },
 };
@@ -210,7 +211,8 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
       unreadable("no section named", ["case:edit-field", "case:edit-teardown", "case:propose"]),
     ],
   },
-  "POST /api/cases/[id]/transitions": { gate: "case:read", reach: "case", probes: [...ACTIONS.map(stepProbe), unreadable("no step named", ACTIONS.map((a) => WORKFLOW[a].permission))] },
+  "POST /api/cases/[id]/transitions": { gate: "case:read", reach: "case", // Signing is its own route (POST /api/cases/[id]/signature); here it is refused as a step.
+    probes: [...ACTIONS.filter((a) => a !== "sign").map(stepProbe), unreadable("no step named", ACTIONS.map((a) => WORKFLOW[a].permission))] },
   "GET /api/cases/[id]/history": { gate: "case:read", reach: "case" },
   "GET /api/cases/[id]/signature": { gate: "case:read", reach: "case" },
   // A stale version is refused before the password is checked, so a permitted probe signs nothing.
@@ -235,6 +237,7 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
 
   "GET /api/tallies": { gate: "tallies:read", reach: "none" },
   "GET /api/tallies/life": { gate: "tallies:read", reach: "none" },
+  "GET /api/tallies/yield": { gate: "tallies:read", reach: "none" },
   "GET /api/fleet": { gate: "tallies:read", reach: "none" },
   "POST /api/fleet": { gate: "fleet:upload", reach: "none" },
 };
@@ -251,6 +254,7 @@ export const PAGE_RULES: Record<string, { gate: Gate | "anonymous-only"; reach: 
   "/photos/compare": { gate: "case:read", reach: "none" },
   "/tallies": { gate: "tallies:read", reach: "none" },
   "/tallies/life": { gate: "tallies:read", reach: "none" },
+  "/tallies/yield": { gate: "tallies:read", reach: "none" },
   "/reference": { gate: "signed-in", reach: "none" },
   "/profile": { gate: "signed-in", reach: "none" },
   "/admin/users": { gate: "admin:users", reach: "none" },
