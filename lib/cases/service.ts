@@ -1,7 +1,7 @@
 // Case operations as the API and pages call them: access, stage rules, computed fields, history.
 import "server-only";
 import { z } from "zod";
-import { addFinding, changeFinding, countFindings, findingCode, insertCase, insertCaseOnce, stepAlreadyTaken, updateCase } from "@/db/queries/case-write";
+import { addFinding, changeFinding, countFindings, findingCode, insertCase, insertCaseOnce, updateCase } from "@/db/queries/case-write";
 import { codeStates, siteKinds } from "@/db/queries/reference-rows";
 import { can } from "@/lib/auth/permissions";
 import { findReadableCase, listCaseHistory, sitePolicy } from "@/db/queries/case-read";
@@ -13,8 +13,7 @@ import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
 import { createCaseSchema, fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
 import { canEditSection, checkTransition, editRefusal, type Section, type WorkflowAction } from "./workflow";
-import { nudgeMail } from "@/lib/jobs/nudge";
-import { queueStepNotice } from "./notices";
+import { stepReplay, writeStep } from "./step-write";
 import { linkedNumbers, maskUnreadableLinks } from "./history-view";
 import { codeProblem, siteProblem, type CodeUse, type SiteUse } from "./reference-rules";
 
@@ -152,13 +151,8 @@ export const transitionSchema = z.object({
 
 export async function transitionCase(c: Case, body: unknown, user: CurrentUser) {
   const { version, action, reason, labSiteId } = transitionSchema.parse(body);
-  // The version a step was asked at, with the step and the person, is its idempotency key: a
-  // doubled or retried request answers with the step already taken, not a second one or a 409.
-  const replay = () => stepAlreadyTaken(c.id, version, action, user.id);
-  if (c.version !== version) {
-    const done = await replay();
-    if (done) return done;
-  }
+  const done = await stepReplay(c, version, action, user);
+  if (done) return done;
   const check = checkTransition(action as WorkflowAction, c.status, user.role, reason, {
     primaryCause: c.primaryCause,
     confidence: c.confidence,
@@ -174,13 +168,5 @@ export async function transitionCase(c: Case, body: unknown, user: CurrentUser) 
   if (action === "sign") Object.assign(patch, { signedAt: now, signedBy: user.id });
   if (action === "return") Object.assign(patch, { returnReason: reason });
   if (action === "reopen") Object.assign(patch, { signedAt: null, signedBy: null });
-  try {
-    const row = await updateCase(c.id, version, patch, user, action, reason, (tx, saved) => queueStepNotice(tx, action, saved, user, reason));
-    nudgeMail();
-    return row;
-  } catch (err) {
-    const done = err instanceof HttpError && err.status === 409 ? await replay() : null;
-    if (done) return done;
-    throw err;
-  }
+  return writeStep(c, version, action, patch, user, reason);
 }

@@ -3,15 +3,13 @@
 import "server-only";
 import { verifyPassword } from "better-auth/crypto";
 import { z } from "zod";
-import { stepAlreadyTaken, updateCase } from "@/db/queries/case-write";
 import { passwordHashOf, signedParts } from "@/db/queries/signature";
 import { addFailure, clearCounter, readCounters } from "@/db/queries/sign-in-failures";
 import type { Case } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
 import { HttpError, badRequest, conflict } from "@/lib/http/errors";
 import { minutesLeft } from "@/lib/security/sign-in-rules";
-import { nudgeMail } from "@/lib/jobs/nudge";
-import { queueStepNotice } from "./notices";
+import { stepReplay, writeStep } from "./step-write";
 import { SIGNATURE_MEANING, contentHash, type SignedContent } from "./signature-content";
 import { checkTransition } from "./workflow";
 
@@ -52,11 +50,8 @@ export async function checkSignature(c: Case): Promise<SignatureCheck | null> {
 export async function signCase(c: Case, body: unknown, user: CurrentUser): Promise<Case> {
   const input = signSchema.parse(body);
   // A doubled or retried signature (same version, same signer) answers with the one already made.
-  const replay = () => stepAlreadyTaken(c.id, input.version, "sign", user.id);
-  if (c.version !== input.version) {
-    const done = await replay();
-    if (done) return done;
-  }
+  const done = await stepReplay(c, input.version, "sign", user);
+  if (done) return done;
   const check = checkTransition("sign", c.status, user.role, undefined, { primaryCause: c.primaryCause, confidence: c.confidence, removalConfirmed: c.removalConfirmed, findingCount: 0 }, { actorId: user.id, proposedBy: c.proposedBy });
   if (!check.ok) throw check.status === 400 ? badRequest(check.message) : new HttpError(check.status, check.status === 403 ? "forbidden" : "conflict", check.message);
   if (c.version !== input.version) throw conflict("The case changed since you opened it; reload to see what you are signing.");
@@ -76,15 +71,5 @@ export async function signCase(c: Case, body: unknown, user: CurrentUser): Promi
 
   const signedHash = contentHash(await contentOf(c));
   if (signedHash !== input.contentHash) throw conflict("The case changed while you were reading it; reload and look again before signing.");
-  try {
-    const patch = { status: check.to, signedAt: now, signedBy: user.id, signedMeaning: SIGNATURE_MEANING, signedContentHash: signedHash };
-    // The notice is queued in the signature's own transaction: both are saved or neither.
-    const row = await updateCase(c.id, input.version, patch, user, "sign", undefined, (tx, saved) => queueStepNotice(tx, "sign", saved, user));
-    nudgeMail();
-    return row;
-  } catch (err) {
-    const done = err instanceof HttpError && err.status === 409 ? await replay() : null;
-    if (done) return done;
-    throw err;
-  }
+  return writeStep(c, input.version, "sign", { status: check.to, signedAt: now, signedBy: user.id, signedMeaning: SIGNATURE_MEANING, signedContentHash: signedHash }, user);
 }
