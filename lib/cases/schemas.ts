@@ -104,3 +104,21 @@ export const reasonSchema = z.object({ reason: z.string().trim().min(5, "Give a 
 
 /** What a new removal needs before it can be filed; the form checks it on the device too, so an offline filing is not refused later. */
 export const createCaseSchema = fieldReportSchema.required({ trigger: true, siteId: true, removedOn: true });
+
+/** What the form says when a required answer of a new removal is missing (zod's own words name no field). */
+const MISSING_WORDS: Record<string, string> = {
+  trigger: "Choose what triggered the removal.",
+  siteId: "Choose the removal site from the list.",
+  removedOn: "Enter the date the bearing was removed.",
+};
+
+/** createCaseSchema.parse, with a missing required answer told in the form's words. */
+export function parseNewRemoval(body: unknown) {
+  const parsed = createCaseSchema.safeParse(body);
+  if (parsed.success) return parsed.data;
+  for (const issue of parsed.error.issues) {
+    const words = MISSING_WORDS[String(issue.path[0])];
+    if (words && issue.path.length === 1 && issue.code === "invalid_type") (issue as { message: string }).message = words;
+  }
+  throw parsed.error;
+}

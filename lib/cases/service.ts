@@ -11,7 +11,7 @@ import type { CurrentUser } from "@/lib/auth/session";
 import { DEFAULT_END_PLAY_POLICY, evaluateEndPlay, type EndPlayPolicy } from "@/lib/field";
 import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
-import { createCaseSchema, fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
+import { fieldChecksSchema, parseNewRemoval, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
 import { canEditSection, checkTransition, editRefusal, type Section, type WorkflowAction } from "./workflow";
 import { stepReplay, writeStep } from "./step-write";
 import { linkedNumbers, maskUnreadableLinks } from "./history-view";
@@ -89,7 +89,7 @@ export const createKeySchema = z
 
 /** Files a removal. With a key, a repeat of the same filing answers the first case (`replayed`) instead of a new one. */
 export async function createFieldReport(body: unknown, user: CurrentUser, createKey?: string | null) {
-  const input = createCaseSchema.parse(body);
+  const input = parseNewRemoval(body);
   assertOwnShop(input.siteId, user, null);
   await checkReferences(input, null);
   await refuseImplausible(input);
