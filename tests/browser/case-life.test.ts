@@ -22,7 +22,7 @@ test("inspector files a removal on a phone and sees the live field call", async 
   await page.reload();
   await page.fill("#carMark", "brwx");
   await page.fill("#carNumber", car);
-  await page.click('[aria-label^="Axle 3 left"]');
+  await page.click('[aria-label$="Axle 3 left"]');
   await page.selectOption("#trigger", "end-play-high");
   await page.fill("#detail-endPlayIn", "0.07");
   await page.fill("#serial", "BRW7781");

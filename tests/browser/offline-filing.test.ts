@@ -35,7 +35,7 @@ test("file a report offline, reload offline, come back online and find it filed 
 
   await page.fill("#carMark", "brwx");
   await page.fill("#carNumber", car);
-  await page.click('[aria-label^="Axle 2 right"]');
+  await page.click('[aria-label$="Axle 2 right"]');
   await page.selectOption("#trigger", "end-play-high");
   await page.fill("#detail-endPlayIn", "0.07");
   await page.fill("#serial", `OFF${car}`);
