@@ -15,14 +15,19 @@ export interface LikelihoodData {
 }
 
 export function prepareLikelihoodData(units: readonly LifeUnit[]): LikelihoodData {
+  return prepareLikelihoodCounts(units.map((u) => ({ time: u.time, failed: u.failed, count: 1 })));
+}
+
+/** The same from units already counted by life and outcome (as the database groups them). */
+export function prepareLikelihoodCounts(groups: readonly (LifeUnit & { count: number })[]): LikelihoodData {
   const byTime = new Map<number, number>();
   let sumLogFailureTimes = 0;
   let failures = 0;
-  for (const u of units) {
-    byTime.set(u.time, (byTime.get(u.time) ?? 0) + 1);
+  for (const u of groups) {
+    byTime.set(u.time, (byTime.get(u.time) ?? 0) + u.count);
     if (u.failed) {
-      failures++;
-      sumLogFailureTimes += Math.log(u.time);
+      failures += u.count;
+      sumLogFailureTimes += u.count * Math.log(u.time);
     }
   }
   const logTimes: number[] = [];

@@ -5,6 +5,7 @@ import {
   fisherBounds,
   fitWeibull,
   johnsonAdjustedRanks,
+  prepareLikelihoodCounts,
   prepareLikelihoodData,
   readShape,
   weibullMleFromData,
@@ -12,6 +13,7 @@ import {
   weibullRankRegression,
   WeibullInputError,
   type LifeUnit,
+  type LikelihoodData,
   type ShapeReading,
 } from "@/lib/stats";
 import { causeLabel } from "./labels";
@@ -74,11 +76,41 @@ const noteFor = (err: unknown) => (err instanceof WeibullInputError ? err.messag
 
 /** MLE with Fisher bounds: quick enough for every cause on one screen. */
 export function summariseCause(cause: string, units: readonly LifeUnit[], confidence = 0.95): LifeSummary {
-  const failures = units.filter((u) => u.failed).length;
-  const base = { cause, label: causeLabel(cause), failures, suspensions: units.length - failures };
   try {
     assertFittable(units);
-    const data = prepareLikelihoodData(units);
+  } catch (err) {
+    const failures = units.filter((u) => u.failed).length;
+    return { cause, label: causeLabel(cause), failures, suspensions: units.length - failures, fit: null, note: noteFor(err) };
+  }
+  return summariseData(cause, prepareLikelihoodData(units), units.length, confidence);
+}
+
+/**
+ * summariseCause from the counted rows, without one object per unit: the summary for every cause
+ * then costs the distinct lives, not the casebook. Same checks and the same fit.
+ */
+export function summariseCauseCounts(cause: string, rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[], confidence = 0.95): LifeSummary {
+  const groups = [
+    ...rows.filter((r) => r.time > 0).map((r) => ({ time: r.time, failed: r.cause === cause, count: r.count })),
+    ...fleet.filter((f) => f.time > 0).map((f) => ({ time: f.time, failed: false, count: f.count })),
+  ];
+  const total = groups.reduce((s, g) => s + g.count, 0);
+  const failing = groups.filter((g) => g.failed);
+  const failures = failing.reduce((s, g) => s + g.count, 0);
+  // The rules of assertFittable, on counts.
+  const note =
+    failures < 2
+      ? `At least two failures are needed to fit a Weibull distribution (got ${failures}).`
+      : failing.every((g) => g.time === failing[0].time)
+        ? "All failure times are equal, so the spread of lives (the Weibull shape) cannot be estimated."
+        : null;
+  if (note) return { cause, label: causeLabel(cause), failures, suspensions: total - failures, fit: null, note };
+  return summariseData(cause, prepareLikelihoodCounts(groups), total, confidence);
+}
+
+function summariseData(cause: string, data: LikelihoodData, total: number, confidence: number): LifeSummary {
+  const base = { cause, label: causeLabel(cause), failures: data.failures, suspensions: total - data.failures };
+  try {
     const fit = weibullMleFromData(data);
     const fisher = fisherBounds(data, fit, confidence);
     return {
