@@ -84,8 +84,6 @@ export const cases = pgTable(
     index("cases_list_updated_idx").on(t.updatedAt.desc().nullsLast(), t.number.desc()),
     index("cases_list_removed_desc_idx").on(t.removedOn.desc().nullsLast(), t.number.desc()),
     index("cases_list_removed_asc_idx").on(t.removedOn.asc().nullsLast(), t.number.desc()),
-    // Every column a tally or the life section groups or filters by: those read the index alone.
-    index("cases_tally_idx").on(t.status, t.removedOn, t.siteId, t.trigger, t.primaryCause, t.removalConfirmed, t.bearingClass, t.serviceMonths, t.serviceMiles, t.createdBy),
   ],
 );
 
