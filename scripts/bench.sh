@@ -5,6 +5,7 @@
 # Ends with one table of every figure, its target and floor; a missed target fails the run.
 #   npm run bench                       everything, 10,000 and 100,000 cases
 #   npm run bench -- photo              only scripts/bench/*photo*.ts (no HTTP step)
+#   npm run bench -- http               only the HTTP figures and first-load JS (REUSE_BUILD=1 to skip the build)
 #   npm run bench -- --cases 1000000    the full size is 1,000,000 cases (the growth line 100,000 -> 1,000,000)
 #   npm run bench -- --fresh            throw away the kept data folder first
 #   npm run bench -- --no-http          skip the build, the HTTP figures and first-load JS
@@ -36,8 +37,9 @@ for f in scripts/bench/*.ts; do
   if [ ${#wants[@]} -eq 0 ]; then benches+=("$f"); continue; fi
   for want in "${wants[@]}"; do [[ "$(basename "$f")" == *"$want"* ]] && benches+=("$f") && break; done
 done
-[ ${#benches[@]} -gt 0 ] || fail "no bench in scripts/bench/ matches: ${wants[*]}"
-[ ${#wants[@]} -eq 0 ] || HTTP=0
+# "http" among the names keeps the HTTP step (npm run bench -- http runs it alone).
+if [ ${#wants[@]} -gt 0 ] && [[ " ${wants[*]} " != *" http "* ]]; then HTTP=0; fi
+[ ${#benches[@]} -gt 0 ] || [ "$HTTP" = 1 ] || fail "no bench in scripts/bench/ matches: ${wants[*]}"
 
 cleanup() {
   trap "" INT TERM
@@ -73,7 +75,7 @@ prepare_db() { # name cases
 failed=0
 run_benches() { # cases pass
   export BENCH_CASES="$1" BENCH_PASS="$2"
-  for f in "${benches[@]}"; do
+  for f in "${benches[@]+"${benches[@]}"}"; do
     say "bench: $(basename "$f" .ts) at $1 cases"
     # react-server lets scripts import the server-only modules the app uses.
     node_modules/.bin/tsx --conditions=react-server "$f" || { failed=$((failed + 1)); printf '\033[31m[tearline] %s failed\033[0m\n' "$f"; }

@@ -7,7 +7,7 @@ import { Card } from "@/components/ui/card";
 import { Caution } from "@/components/ui/caution";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { evaluateFieldChecks } from "@/lib/cases/compute";
-import { BEARING_CLASSES } from "@/lib/cases/schemas";
+import { BEARING_CLASSES } from "@/lib/cases/bearing-classes";
 import { DEFAULT_END_PLAY_POLICY, VISUAL_FINDINGS, type EndPlayPolicy } from "@/lib/field";
 import { AxlePicker } from "./axle-picker";
 import { ChoiceChips } from "./choice-chips";

@@ -39,7 +39,8 @@ export const fieldChecksSchema = z.object({
 });
 export type FieldChecks = z.infer<typeof fieldChecksSchema>;
 
-export const BEARING_CLASSES = ["D", "E", "F", "G", "K", "other"] as const;
+import { BEARING_CLASSES } from "./bearing-classes";
+export { BEARING_CLASSES };
 
 /** The field report: bearing, removal and the shop checks. Every key optional so drafts can autosave. */
 export const fieldReportSchema = z.object({
