@@ -11,7 +11,28 @@ function databaseUrl(): string | undefined {
   return url;
 }
 
-export const pool = globalForDb.tearlinePool ?? new Pool({ connectionString: databaseUrl(), max: 10 });
+// Timeouts so an outage answers quickly instead of hanging a request: a connection must open in
+// 10 s (a refused connection fails at once; this bounds a black-holed host or a long wait for a free
+// pooled connection), a statement finish in 30 s, and a transaction left idle is ended by the server after 30 s.
+// Scripts (migrations, seeds, backups) run without the two server-side limits; PG_STATEMENT_TIMEOUT_MS overrides.
+function createPool(): Pool {
+  const inApp = Boolean(process.env.NEXT_RUNTIME);
+  const created = new Pool({
+    connectionString: databaseUrl(),
+    max: Number(process.env.PG_POOL_MAX ?? 10),
+    connectionTimeoutMillis: 10_000,
+    idleTimeoutMillis: 30_000,
+    statement_timeout: Number(process.env.PG_STATEMENT_TIMEOUT_MS ?? (inApp ? 30_000 : 0)),
+    idle_in_transaction_session_timeout: inApp ? 30_000 : 0,
+    keepAlive: true,
+  });
+  // An idle connection dropped by the server (restart, failover, network) emits 'error' on the pool;
+  // without a listener that would end the process. The pool discards the client and opens a new one.
+  created.on("error", (err) => console.error(`database connection lost (the pool will reconnect): ${err.message}`));
+  return created;
+}
+
+export const pool = globalForDb.tearlinePool ?? createPool();
 globalForDb.tearlinePool = pool;
 
 export const db = drizzle(pool, { schema, casing: "snake_case" });

@@ -5,6 +5,7 @@
 # Ends with one table of every figure, its target and floor; a missed target fails the run.
 #   npm run bench                       everything, 10,000 and 100,000 cases
 #   npm run bench -- photo              only scripts/bench/*photo*.ts (no HTTP step)
+#   npm run bench -- load              readers and writers through the production build (full size only)
 #   npm run bench -- http               only the HTTP figures and first-load JS (REUSE_BUILD=1 to skip the build)
 #   npm run bench -- --cases 1000000    the full size is 1,000,000 cases (the growth line 100,000 -> 1,000,000)
 #   npm run bench -- --fresh            throw away the kept data folder first
@@ -34,7 +35,8 @@ GROWTH=$((CASES / 10))
 
 benches=()
 for f in scripts/bench/*.ts; do
-  if [ ${#wants[@]} -eq 0 ]; then benches+=("$f"); continue; fi
+  # The load run (a minute of readers and writers on its own build) runs only when named.
+  if [ ${#wants[@]} -eq 0 ]; then [ "$(basename "$f")" = load.ts ] || benches+=("$f"); continue; fi
   for want in "${wants[@]}"; do [[ "$(basename "$f")" == *"$want"* ]] && benches+=("$f") && break; done
 done
 # "http" among the names keeps the HTTP step (npm run bench -- http runs it alone).
@@ -76,6 +78,7 @@ failed=0
 run_benches() { # cases pass
   export BENCH_CASES="$1" BENCH_PASS="$2"
   for f in "${benches[@]+"${benches[@]}"}"; do
+    if [ "$2" = growth ] && [ "$(basename "$f")" = load.ts ]; then continue; fi
     say "bench: $(basename "$f" .ts) at $1 cases"
     # react-server lets scripts import the server-only modules the app uses.
     node_modules/.bin/tsx --conditions=react-server "$f" || { failed=$((failed + 1)); printf '\033[31m[tearline] %s failed\033[0m\n' "$f"; }

@@ -6,7 +6,7 @@ export default function ForbiddenPage() {
       <p className="text-sm font-semibold uppercase tracking-widest text-accent">Not for your role</p>
       <h1 className="mt-2 text-2xl font-semibold">This page is not open to your role</h1>
       <p className="mt-2 text-muted">If you need it for your work, ask your Tearline administrator to change your role.</p>
-      <Link href="/" className="mt-6 text-sm font-medium text-accent hover:underline">
+      <Link href="/" className="mt-6 inline-flex min-h-11 items-center justify-center rounded-lg bg-accent px-4 font-medium text-accent-ink">
         Back to your home page
       </Link>
     </main>

@@ -5,6 +5,8 @@ import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { passwordSchema, PASSWORD_MIN } from "@/lib/validation/account";
+import { ErrorSummary } from "@/components/ui/error-summary";
+import { fetchWithTimeout } from "@/lib/http/client-fetch";
 
 /** Sets a password from a reset link or an invitation link. */
 export function SetPasswordForm({ mode, token }: { mode: "reset" | "invitation"; token: string }) {
@@ -26,12 +28,13 @@ export function SetPasswordForm({ mode, token }: { mode: "reset" | "invitation";
       const { error } = await authClient.resetPassword({ newPassword: password, token });
       if (error) problem = "This reset link is not valid any more. Ask for a new one from the sign-in page.";
     } else {
-      const res = await fetch("/api/invitations/accept", {
+      const { res, ...failed } = await fetchWithTimeout("/api/invitations/accept", {
         method: "POST",
         headers: { "content-type": "application/json" },
         body: JSON.stringify({ token, password }),
       });
-      if (!res.ok) problem = ((await res.json().catch(() => ({}))) as { error?: string }).error ?? "The invitation could not be accepted.";
+      if (!res) problem = "message" in failed ? failed.message : "The invitation could not be accepted.";
+      else if (!res.ok) problem = ((await res.json().catch(() => ({}))) as { error?: string }).error ?? "The invitation could not be accepted.";
     }
     setPending(false);
     if (problem) return setErrors({ form: problem });
@@ -40,6 +43,7 @@ export function SetPasswordForm({ mode, token }: { mode: "reset" | "invitation";
 
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 flex flex-col gap-4">
+      <ErrorSummary errors={{ password: errors.password, confirm: errors.confirm }} />
       {errors.form ? (
         <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm text-danger">
           {errors.form}

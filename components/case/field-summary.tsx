@@ -1,4 +1,5 @@
 // The field report as read back: facts, the hand-roll grid, the end-play arithmetic and the call.
+import { formatDay } from "@/lib/cases/list-columns";
 import { AXLE_POSITIONS, ROLL_DIRECTIONS, formatInches, formatMm, wheelRevolutions, type EndPlayPolicy, type HandRollGrid } from "@/lib/field";
 import { evaluateFieldChecks } from "@/lib/cases/compute";
 import { fieldChecksSchema } from "@/lib/cases/schemas";
@@ -24,7 +25,7 @@ export function FieldSummary({ c, policy }: { c: CaseDetail; policy: EndPlayPoli
         items={[
           ["Car", `${c.carMark} ${c.carNumber}`.trim()],
           ["Position", c.axle && c.side ? `Axle ${c.axle}, ${c.side === "L" ? "left" : "right"} (${c.axle}${c.side})` : null],
-          ["Removed", c.removedOn],
+          ["Removed", formatDay(c.removedOn)],
           ["Site", c.siteName],
           ["Trigger", triggerLabel(c.trigger)],
           ...detail.map(([k, v]) => [trigger?.fields.find((f) => f.key === k)?.label ?? k, `${v}${trigger?.fields.find((f) => f.key === k)?.unit ? ` ${trigger?.fields.find((f) => f.key === k)?.unit}` : ""}`] as [string, string]),

@@ -66,7 +66,7 @@ export function FindingsSection({ caseId, version, findings, codes, editable }: 
           <Button variant="secondary" onClick={() => setEditing("new")}>Add finding</Button>
         </div>
       ) : null}
-      <ActionError error={error} />
+      <ActionError error={error} idPrefix="f-" />
     </div>
   );
 }

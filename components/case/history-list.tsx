@@ -23,7 +23,27 @@ const ACTION_WORDS: Record<string, string> = {
   reopened: "reopened the case",
   linked: "linked a related case",
   unlinked: "unlinked a related case",
+  "photo-added": "added a photo",
+  "photo-removed": "removed a photo",
+  "photo-tagged": "tagged a photo",
 };
+
+/** A step not listed above still reads as words: "photo-moved" → "photo moved". */
+export const actionWords = (action: string) => ACTION_WORDS[action] ?? action.replace(/[-_]/g, " ");
+
+// Stored field names as people say them; anything else is split from camelCase.
+const FIELD_WORDS: Record<string, string> = {
+  status: "stage", primaryCause: "primary cause", contributingCauses: "contributing causes", removalConfirmed: "removal",
+  signedBy: "signed by", signedAt: "signed at", signedMeaning: "signature meaning", signedContentHash: "signed content (SHA-256)",
+  proposedBy: "proposed by", proposedAt: "proposed at", receivedBy: "received by", receivedAt: "received at", returnReason: "reason returned",
+};
+
+export function fieldWords(field: string): string {
+  if (field.startsWith("finding ")) return field.replace(/^finding (\S+)/, (_, p) => `finding on ${componentLabel(p).toLowerCase()}`);
+  return FIELD_WORDS[field] ?? field.replace(/([a-z])([A-Z])/g, "$1 $2").toLowerCase();
+}
+
+const changeCount = (n: number) => (n === 1 ? "1 change" : `${n} changes`);
 
 function show(v: unknown): string {
   if (v === null || v === undefined || v === "") return "∅";
@@ -40,17 +60,17 @@ export function HistoryList({ events }: { events: Event[] }) {
         <li key={e.id} className="relative">
           <span className="absolute -left-[25px] top-1.5 h-2.5 w-2.5 rounded-full border-2 border-surface bg-accent" aria-hidden />
           <p className="text-sm">
-            <strong>{e.userName ?? "Someone"}</strong> {ACTION_WORDS[e.action] ?? e.action}
+            <strong>{e.userName ?? "Someone"}</strong> {actionWords(e.action)}
             <time className="ml-2 text-xs text-muted" dateTime={new Date(e.at).toISOString()}>{new Date(e.at).toISOString().slice(0, 16).replace("T", " ")} UTC</time>
           </p>
           {e.reason ? <p className="mt-1 rounded bg-surface-2 px-2 py-1 text-sm italic text-ink-2">“{e.reason}”</p> : null}
           {e.changes.filter((c) => !HIDDEN.has(c.field)).length ? (
             <details className="mt-1 text-xs text-muted">
-              <summary className="cursor-pointer">{e.changes.filter((c) => !HIDDEN.has(c.field)).length} field(s)</summary>
+              <summary className="cursor-pointer">{changeCount(e.changes.filter((c) => !HIDDEN.has(c.field)).length)}</summary>
               <ul className="mt-1 flex flex-col gap-0.5">
                 {e.changes.filter((c) => !HIDDEN.has(c.field)).map((c, i) => (
                   <li key={i} className="break-words">
-                    <span className="font-medium text-ink-2">{c.field.startsWith("finding ") ? c.field.replace(/^finding (\S+)/, (_, p) => `finding on ${componentLabel(p).toLowerCase()}`) : c.field}</span>: {show(c.from)} → {show(c.to)}
+                    <span className="font-medium text-ink-2">{fieldWords(c.field)}</span>: {show(c.from)} → {show(c.to)}
                   </li>
                 ))}
               </ul>

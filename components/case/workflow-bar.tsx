@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Textarea } from "@/components/ui/field";
 import { WORKFLOW, type WorkflowAction } from "@/lib/cases/workflow";
+import { SignatureCeremony } from "./signature-ceremony";
 import { ActionError, useCaseAction } from "./use-case-action";
 
 type Props = { caseId: string; version: number; actions: WorkflowAction[]; verdictProblems: string[] };
@@ -14,7 +15,10 @@ export function WorkflowBar({ caseId, version, actions, verdictProblems }: Props
   const [reason, setReason] = useState("");
   if (!actions.length) return null;
 
+  const [signing, setSigning] = useState(false);
   const go = async (action: WorkflowAction) => {
+    // a signature is never one click: it opens the ceremony
+    if (action === "sign") return setSigning(true);
     if (WORKFLOW[action].needsReason && asking !== action) return setAsking(action);
     const ok = await run("POST", `/api/cases/${caseId}/transitions`, { version, action, reason: WORKFLOW[action].needsReason ? reason : undefined });
     if (ok) {
@@ -55,6 +59,7 @@ export function WorkflowBar({ caseId, version, actions, verdictProblems }: Props
           </div>
         </div>
       ) : null}
+      {signing ? <SignatureCeremony caseId={caseId} onCancel={() => setSigning(false)} /> : null}
       <ActionError error={error} />
     </div>
   );

@@ -2,7 +2,7 @@
 // A chart in a card: Chart/Table toggle, CSV and PNG downloads. The chart comes first; its numbers
 // are one click away.
 import { useId, useRef, useState, type ReactNode } from "react";
-import { toCsv, downloadName } from "@/lib/tallies/csv";
+import { chartCsv, downloadName } from "@/lib/tallies/csv";
 import type { DataTable } from "@/lib/tallies/tables";
 import { downloadBlob, svgToPngBlob, type ImageLegend } from "./export-image";
 import { DataTableView } from "./data-table-view";
@@ -38,8 +38,9 @@ export function ChartCard({ title, subtitle, imageSubtitle, table, legend, contr
   const headingId = useId();
 
   function downloadCsv() {
-    // A byte-order mark lets spreadsheet programs read the file as UTF-8.
-    const blob = new Blob(["\uFEFF", toCsv(table.columns, table.rows)], { type: "text/csv;charset=utf-8" });
+    // A byte-order mark lets spreadsheet programs read the file as UTF-8; the first line says
+    // which filters (from the page address) made these numbers.
+    const blob = new Blob(["\uFEFF", chartCsv(window.location.search, table.columns, table.rows)], { type: "text/csv;charset=utf-8" });
     downloadBlob(blob, downloadName(title, "csv"));
   }
 

@@ -41,7 +41,10 @@ export async function svgToPngBlob(svg: SVGSVGElement, opts: { title: string; su
   const colour = (name: string, fallback: string) => page.getPropertyValue(name).trim() || fallback;
   const pad = 24;
   const header = opts.subtitle ? 64 : 44;
-  const legendRows = opts.legend?.length ? Math.ceil(opts.legend.length / 4) : 0;
+  const measure = document.createElement("canvas").getContext("2d");
+  if (measure) measure.font = "12px Inter, system-ui, sans-serif";
+  const legend = layoutLegend((opts.legend ?? []).map((l) => 18 + (measure?.measureText(l.label).width ?? l.label.length * 7)), width);
+  const legendRows = legend.length ? legend[legend.length - 1].row + 1 : 0;
   const footer = legendRows * 22 + 28;
   const scale = opts.scale ?? 2;
   const canvas = document.createElement("canvas");
@@ -63,8 +66,8 @@ export async function svgToPngBlob(svg: SVGSVGElement, opts: { title: string; su
   ctx.drawImage(img, pad, header, width, height);
   ctx.font = "12px Inter, system-ui, sans-serif";
   opts.legend?.forEach((item, i) => {
-    const x = pad + (i % 4) * ((width - 8) / 4);
-    const y = header + height + 16 + Math.floor(i / 4) * 22;
+    const x = pad + legend[i].x;
+    const y = header + height + 16 + legend[i].row * 22;
     ctx.fillStyle = item.colour;
     ctx.fillRect(x, y - 9, 12, 10);
     ctx.fillStyle = colour("--ink-2", "#334155");
@@ -74,6 +77,25 @@ export async function svgToPngBlob(svg: SVGSVGElement, opts: { title: string; su
   ctx.font = "11px Inter, system-ui, sans-serif";
   ctx.fillText(`Tearline · ${new Date().toISOString().slice(0, 10)}`, pad, height + header + footer - 10);
   return new Promise((resolve, reject) => canvas.toBlob((b) => (b ? resolve(b) : reject(new Error("PNG encoding failed."))), "image/png"));
+}
+
+/**
+ * Legend entries laid out left to right, each as wide as its words, wrapping before an entry
+ * would pass the image's width, so no two entries ever print on top of each other.
+ */
+export function layoutLegend(widths: readonly number[], maxWidth: number, gap = 16): { x: number; row: number }[] {
+  const out: { x: number; row: number }[] = [];
+  let x = 0;
+  let row = 0;
+  for (const w of widths) {
+    if (x > 0 && x + w > maxWidth) {
+      x = 0;
+      row++;
+    }
+    out.push({ x, row });
+    x += w + gap;
+  }
+  return out;
 }
 
 export function downloadBlob(blob: Blob, fileName: string): void {

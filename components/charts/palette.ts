@@ -12,23 +12,26 @@ export const THEME = {
   warn: "var(--warn)",
 } as const;
 
-// Our own categorical set for root causes; unknown codes take the spare hues in turn.
-const CAUSE_COLOURS: Record<string, string> = {
-  "water-ingress": "#0284c7",
-  "debris-ingress": "#92400e",
-  lubrication: "#ca8a04",
-  seal: "#7c3aed",
-  electrical: "#db2777",
-  impact: "#dc2626",
-  mounting: "#0d9488",
-  handling: "#475569",
-  reconditioning: "#ea580c",
-  material: "#4f46e5",
-  "end-of-life": "#16a34a",
-  "no-defect": "#a1a1aa",
-  undetermined: "#78716c",
+// Categorical set for root causes, built on the Okabe–Ito colour-blind-safe palette (Okabe & Ito
+// 2008) with a few darker hues from Paul Tol's schemes; every pair differs clearly in lightness or
+// hue (tests/unit/charts/palette.test.ts).
+// Unknown codes take the spare hues in turn.
+export const CAUSE_COLOURS: Record<string, string> = {
+  "water-ingress": "#0072B2",
+  "debris-ingress": "#882255",
+  lubrication: "#E69F00",
+  seal: "#CC79A7",
+  electrical: "#332288",
+  impact: "#D55E00",
+  mounting: "#009E73",
+  handling: "#56B4E9",
+  reconditioning: "#999933",
+  material: "#5C3A1E",
+  "end-of-life": "#1A1A1A",
+  "no-defect": "#A3A3A3",
+  undetermined: "#6B6B6B",
 };
-const SPARE = ["#0891b2", "#65a30d", "#c026d3", "#b45309", "#2563eb", "#9f1239"];
+export const SPARE = ["#44AA99", "#AA4499", "#117733", "#DDCC77", "#88CCEE", "#661100"];
 
 export function causeColour(code: string, index = 0): string {
   return CAUSE_COLOURS[code] ?? SPARE[index % SPARE.length];

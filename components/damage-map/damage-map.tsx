@@ -161,9 +161,16 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
       </svg>
       <figcaption className="mt-2 max-w-[34rem] text-xs leading-relaxed text-muted">
         Seen from the outboard end, 12 o&apos;clock at the top, clockwise. {summed ? `Each ${sectorDeg}° sector is shaded by how many findings touch it.` : "Each arc is centred on its clock position."}
-        {!summed && offMap ? ` ${offMap} finding${offMap === 1 ? " is" : "s are"} not on a raceway or has no clock position.` : ""}
+        {!summed && offMap ? ` ${offMapWords(offMap)}` : ""}
         {caption ? ` ${caption}` : ""}
       </figcaption>
     </figure>
   );
+}
+
+/** "1 finding is not drawn…" / "2 findings are not drawn…": the verb agrees with the count. */
+export function offMapWords(n: number): string {
+  return n === 1
+    ? "1 finding is not drawn: it is off the raceways or has no clock position."
+    : `${n} findings are not drawn: they are off the raceways or have no clock position.`;
 }

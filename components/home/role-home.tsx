@@ -1,10 +1,8 @@
 import Link from "next/link";
-import { and } from "drizzle-orm";
 import { StageBadge } from "@/components/ui/badge";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
-import { readableCases } from "@/db/queries/case-scope";
-import { caseCards, inStages, stageCounts, type CaseCard } from "@/db/queries/home";
+import { caseCards, stageCounts, type CaseCard } from "@/db/queries/home";
 import { ROLE_LABELS, can } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
 import { STAGES, STAGE_LABELS, type Stage } from "@/lib/cases/stages";
@@ -48,23 +46,22 @@ function StageTiles({ counts }: { counts: Record<Stage, number> }) {
 }
 
 export async function RoleHome({ user }: { user: CurrentUser }) {
-  const scope = readableCases(user);
-  const counts = await stageCounts(scope);
+  const counts = await stageCounts(user);
   const first = user.name.split(" ")[0];
   const panels: { title: string; rows: CaseCard[]; empty: string; href: string }[] = [];
   if (user.role === "inspector") {
-    panels.push({ title: "My shop's open field reports", rows: await caseCards(and(scope, inStages(["field"]))), empty: "No open field reports.", href: "/cases?status=field" });
-    panels.push({ title: "Recently updated", rows: await caseCards(scope), empty: "No cases yet.", href: "/cases" });
+    panels.push({ title: "My shop's open field reports", rows: await caseCards(user, ["field"]), empty: "No open field reports.", href: "/cases?status=field" });
+    panels.push({ title: "Recently updated", rows: await caseCards(user), empty: "No cases yet.", href: "/cases" });
   }
   if (user.role === "analyst" || user.role === "admin") {
-    panels.push({ title: "Waiting for the bench", rows: await caseCards(inStages(["field"])), empty: "Nothing waiting to be received.", href: "/cases?status=field" });
-    panels.push({ title: "On the bench", rows: await caseCards(inStages(["bench"])), empty: "Nothing on the bench.", href: "/cases?status=bench" });
+    panels.push({ title: "Waiting for the bench", rows: await caseCards(user, ["field"]), empty: "Nothing waiting to be received.", href: "/cases?status=field" });
+    panels.push({ title: "On the bench", rows: await caseCards(user, ["bench"]), empty: "Nothing on the bench.", href: "/cases?status=bench" });
   }
   if (user.role === "engineer" || user.role === "admin") {
-    panels.push({ title: "Sign-off queue", rows: await caseCards(inStages(["signoff"])), empty: "No verdicts waiting for sign-off.", href: "/cases?status=signoff" });
+    panels.push({ title: "Sign-off queue", rows: await caseCards(user, ["signoff"]), empty: "No verdicts waiting for sign-off.", href: "/cases?status=signoff" });
   }
   if (user.role === "manager" || user.role === "engineer") {
-    panels.push({ title: "Recently signed", rows: await caseCards(inStages(["signed"])), empty: "No signed verdicts yet.", href: "/cases?status=signed" });
+    panels.push({ title: "Recently signed", rows: await caseCards(user, ["signed"]), empty: "No signed verdicts yet.", href: "/cases?status=signed" });
   }
   return (
     <>

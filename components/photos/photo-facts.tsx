@@ -15,6 +15,12 @@ export function photoTitle(p: PhotoView): string {
   return `${part}${row}`;
 }
 
+/** Words for a thumbnail's alt text: the part, row, clock position and caption. */
+export function photoAlt(p: PhotoView): string {
+  const at = p.clockDeg !== null ? ` at ${clockLabel(p.clockDeg)}` : "";
+  return `${photoTitle(p)}${at}${p.caption ? `: ${p.caption}` : ""}`;
+}
+
 export function PhotoTagLine({ photo, findings }: { photo: PhotoView; findings: FindingOption[] }) {
   const finding = photo.findingId ? findings.find((f) => f.id === photo.findingId) : undefined;
   return (

@@ -1,6 +1,7 @@
 // The case's photos grouped by part, as tiles that open the lightbox.
 import { degToOClock } from "@/lib/photos/clock";
 import type { PhotoGroup } from "@/lib/photos/grouping";
+import { photoAlt } from "./photo-facts";
 import type { PhotoView } from "@/lib/photos/view";
 
 type Props = { groups: PhotoGroup<PhotoView>[]; onOpen: (photo: PhotoView) => void };
@@ -25,7 +26,7 @@ export function PhotoGrid({ groups, onOpen }: Props) {
                   data-testid="photo-tile"
                 >
                   {/* eslint-disable-next-line @next/next/no-img-element */}
-                  <img src={p.urls.thumb} alt="" loading="lazy" decoding="async" className="h-full w-full object-cover transition duration-300 group-hover:scale-[1.03]" />
+                  <img src={p.urls.thumb} alt={photoAlt(p)} loading="lazy" decoding="async" className="h-full w-full object-cover transition duration-300 group-hover:scale-[1.03]" />
                   {p.clockDeg !== null || p.findingId || p.caption ? (
                     <span className="absolute inset-x-0 bottom-0 flex items-end justify-between gap-1 bg-gradient-to-t from-black/75 via-black/30 to-transparent px-1.5 pb-1 pt-5 text-left text-[11px] leading-tight text-white">
                       <span className="line-clamp-2 min-w-0">{p.caption}</span>

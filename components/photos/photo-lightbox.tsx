@@ -6,7 +6,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
 import type { PhotoView } from "@/lib/photos/view";
 import { ChevronIcon, CloseIcon, CompareIcon, ZoomIcon } from "./icons";
-import { PhotoFactList, PhotoTagLine, photoTitle } from "./photo-facts";
+import { PhotoFactList, PhotoTagLine, photoAlt, photoTitle } from "./photo-facts";
 import { TagFields } from "./tag-fields";
 import { tagsForApi, tagsOf, type FindingOption, type TagValues } from "./tag-values";
 import { deletePhoto, patchPhoto } from "./upload-request";
@@ -140,7 +140,7 @@ export function PhotoLightbox({ photos, index, findings, canTag, canDelete, onIn
               <li key={p.id}>
                 <button type="button" onClick={() => onIndex(i)} aria-label={`Photo ${i + 1}`} aria-current={i === index} className={`block h-12 w-12 overflow-hidden rounded-md ring-2 transition ${i === index ? "opacity-100 ring-accent" : "opacity-55 ring-transparent hover:opacity-90"}`}>
                   {/* eslint-disable-next-line @next/next/no-img-element */}
-                  <img src={p.urls.thumb} alt="" loading="lazy" className="h-full w-full object-cover" />
+                  <img src={p.urls.thumb} alt={photoAlt(p)} loading="lazy" className="h-full w-full object-cover" />
                 </button>
               </li>
             ))}

@@ -22,7 +22,7 @@ export function AxlePicker({ axle, side, onPick }: Props) {
               const y = s === "L" ? 6 : 118;
               const active = axle === i + 1 && side === s;
               return (
-                <g key={s} onClick={() => onPick(i + 1, s)} className="cursor-pointer" role="button" aria-pressed={active} aria-label={`Axle ${i + 1} ${s === "L" ? "left" : "right"}`} tabIndex={0} onKeyDown={(e) => (e.key === "Enter" || e.key === " ") && onPick(i + 1, s)}>
+                <g key={s} onClick={() => onPick(i + 1, s)} className="cursor-pointer" role="button" aria-pressed={active} aria-label={`${i + 1}${s}: Axle ${i + 1} ${s === "L" ? "left" : "right"}`} tabIndex={0} onKeyDown={(e) => (e.key === "Enter" || e.key === " ") && onPick(i + 1, s)}>
                   <rect x={x - 22} y={y} width="44" height="26" rx="6" className={active ? "fill-accent stroke-accent" : "fill-surface stroke-line-strong hover:fill-accent-soft"} strokeWidth="2" />
                   <text x={x} y={y + 18} textAnchor="middle" className={`text-[13px] font-bold ${active ? "fill-accent-ink" : "fill-ink"}`}>
                     {i + 1}{s}

@@ -1,5 +1,5 @@
 "use client";
-// Large touch-friendly single-choice chips (a radio group), used across the removal form.
+// Glove-sized single-choice chips (a radio group; every target at least 44 px), used across the removal form.
 type Option<T extends string> = { value: T; label: string; tone?: "ok" | "warn" | "danger" };
 
 const toneActive = { ok: "bg-ok text-white border-ok", warn: "bg-warn text-white border-warn", danger: "bg-danger text-white border-danger" };
@@ -16,7 +16,7 @@ export function ChoiceChips<T extends string>({ options, value, onChange, label,
             role="radio"
             aria-checked={active}
             onClick={() => onChange(o.value)}
-            className={`rounded-lg border font-medium transition ${size === "sm" ? "min-h-9 px-2.5 text-xs" : "min-h-11 px-3.5 text-sm"} ${
+            className={`rounded-lg border font-medium transition ${size === "sm" ? "min-h-11 min-w-11 px-3 text-sm" : "min-h-12 min-w-12 px-4 text-base"} ${
               active ? (o.tone ? toneActive[o.tone] : "border-accent bg-accent text-accent-ink") : "border-line-strong bg-surface text-ink-2 hover:border-accent"
             }`}
           >

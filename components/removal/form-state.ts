@@ -21,7 +21,8 @@ export function emptyDraft(siteId: string | null): RemovalDraft {
     fieldChecks: {
       visual: [],
       confirmations: {},
-      handRoll: { grid: {}, procedure: { turnedBy: "hand", oneDirection: true, judgedBy: "feel" } },
+      // Nothing about how the check was done is assumed: the mechanic says it.
+      handRoll: { grid: {}, procedure: {} },
       endPlay: { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] },
     },
   };

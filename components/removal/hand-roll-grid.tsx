@@ -17,8 +17,9 @@ const DIRECTION_LABEL = { pull: "Cup pulled outboard", push: "Cup pushed inboard
 
 export function HandRollEntry({ value, onChange, readOnly }: { value: HandRoll; onChange: (v: HandRoll) => void; readOnly?: boolean }) {
   const grid = value.grid as Record<string, Record<string, { feel: Feel | null; revolutions?: number }>>;
-  const setCell = (pos: number, dir: string, cell: { feel?: Feel | null; revolutions?: number }) => {
-    const prev = grid[pos]?.[dir] ?? { feel: null, revolutions: 2 };
+  const setCell = (pos: number, dir: string, cell: { feel?: Feel | null; revolutions?: number | undefined }) => {
+    // Revolutions start empty: two full turns are confirmed by entering them, never assumed.
+    const prev = grid[pos]?.[dir] ?? { feel: null };
     onChange({ ...value, grid: { ...value.grid, [pos]: { ...grid[pos], [dir]: { ...prev, ...cell } } } });
   };
   const proc = value.procedure;
@@ -49,9 +50,9 @@ export function HandRollEntry({ value, onChange, readOnly }: { value: HandRoll; 
                 <div key={dir} className="mb-3 last:mb-0" data-cell={`${pos}-${dir}`}>
                   <p className="mb-1 text-xs text-muted">{DIRECTION_LABEL[dir]}</p>
                   <ChoiceChips label={`${pos}° ${dir}`} size="sm" options={FEELS} value={cell?.feel ?? null} onChange={(feel) => setCell(pos, dir, { feel })} />
-                  <label className="mt-1.5 flex items-center gap-2 text-xs text-muted">
-                    Revolutions
-                    <input type="number" min={0} max={20} inputMode="numeric" className="h-8 w-14 rounded border border-line-strong bg-surface px-2 text-sm text-ink" value={cell?.revolutions ?? 2} onChange={(e) => setCell(pos, dir, { revolutions: Number(e.target.value) })} />
+                  <label className="mt-2 flex items-center gap-2 text-sm text-muted">
+                    Full revolutions
+                    <input type="number" min={0} max={20} inputMode="numeric" aria-label={`${pos}° ${dir} revolutions`} placeholder="2" className="h-11 w-16 rounded-lg border border-line-strong bg-surface px-2 text-base text-ink placeholder:text-muted/50" value={cell?.revolutions ?? ""} onChange={(e) => setCell(pos, dir, { revolutions: e.target.value === "" ? undefined : Number(e.target.value) })} />
                   </label>
                 </div>
               );

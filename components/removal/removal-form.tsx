@@ -1,14 +1,19 @@
 "use client";
 // The removal form, phone first: where and when, why, the bearing, the checks, and the live field call.
 import { useRouter } from "next/navigation";
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { sendEntry } from "@/components/offline/outbox-send";
+import { deleteEntry, putEntry, type OutboxEntry } from "@/components/offline/outbox-store";
+import { useOutboxEntries } from "@/components/offline/use-connection";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Caution } from "@/components/ui/caution";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { evaluateFieldChecks } from "@/lib/cases/compute";
 import { BEARING_CLASSES } from "@/lib/cases/bearing-classes";
-import { DEFAULT_END_PLAY_POLICY, VISUAL_FINDINGS, type EndPlayPolicy } from "@/lib/field";
+import { createCaseSchema } from "@/lib/cases/schemas";
+import { ErrorSummary } from "@/components/ui/error-summary";
+import { DEFAULT_END_PLAY_POLICY, VISUAL_FINDINGS, safetyConfirmationsFor, type EndPlayPolicy } from "@/lib/field";
 import { AxlePicker } from "./axle-picker";
 import { ChoiceChips } from "./choice-chips";
 import { EndPlayEntry } from "./end-play-entry";
@@ -16,7 +21,7 @@ import { FieldCallPanel } from "./field-call-panel";
 import { emptyDraft, forSaving, type RemovalDraft } from "./form-state";
 import { HandRollEntry } from "./hand-roll-grid";
 import { TriggerDetails } from "./trigger-details";
-import { clearLocalDraft, loadLocalDraft, readError, useAutosave } from "./use-autosave";
+import { clearLocalDraft, loadLocalDraft, useAutosave } from "./use-autosave";
 
 export type SiteOption = { id: string; name: string; kind: string; policy: EndPlayPolicy };
 
@@ -27,8 +32,14 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   const [draft, setDraft] = useState<RemovalDraft>(initial ?? emptyDraft(defaultSiteId));
   const [restored, setRestored] = useState(false);
   const [filing, setFiling] = useState(false);
+  const [queued, setQueued] = useState<string | null>(null);
+  // One key per report: a double tap or a replay from the outbox files it once.
+  const fileKey = useRef<string | null>(null);
+  const { lastSent } = useOutboxEntries();
+  const sentNow = queued && lastSent && lastSent.key === fileKey.current ? lastSent.number : null;
   const autosave = useAutosave(draft, { mode, caseId, version, enabled: restored || mode === "edit" });
-  const errors = autosave.state.fields ?? {};
+  const [checked, setChecked] = useState<Record<string, string> | null>(null);
+  const errors = checked ?? autosave.state.fields ?? {};
 
   useEffect(() => {
     if (mode === "new") {
@@ -47,17 +58,68 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   const conf = checks.confirmations ?? {};
 
   async function file() {
+    if (filing) return;
+    // Checked on the device first: what is missing is shown now, not after the outbox replays it.
+    const parsed = createCaseSchema.safeParse(forSaving(draft));
+    if (!parsed.success) {
+      const fields: Record<string, string> = {};
+      for (const issue of parsed.error.issues) fields[issue.path.join(".") || "_"] ??= issue.message;
+      return setChecked(fields);
+    }
+    setChecked(null);
     setFiling(true);
-    const res = await fetch("/api/cases", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(forSaving(draft)) });
+    fileKey.current ??= crypto.randomUUID();
+    const label = [draft.carMark, draft.carNumber].filter(Boolean).join(" ") + (draft.axle && draft.side ? ` · ${draft.axle}${draft.side}` : "");
+    const entry: OutboxEntry = { key: fileKey.current, body: forSaving(draft), label: label || "Removal report", queuedAt: new Date().toISOString(), attempts: 0, state: "waiting" };
+    // Into the device outbox first: whatever the signal does next, the report is not lost.
+    await putEntry(entry);
+    const result = await sendEntry(entry);
     setFiling(false);
-    if (!res.ok) return autosave.setState(await readError(res));
-    const body = (await res.json()) as { case: { number: string } };
+    if (result.kind === "filed") {
+      clearLocalDraft();
+      return router.push(`/cases/${result.number}`);
+    }
+    if (result.kind === "refused") {
+      await deleteEntry(entry.key);
+      fileKey.current = null;
+      return autosave.setState({ kind: "error", message: result.message, fields: result.fields });
+    }
     clearLocalDraft();
-    router.push(`/cases/${body.case.number}`);
+    setQueued(label || "Your report");
+  }
+
+  function startAnother() {
+    fileKey.current = null;
+    setQueued(null);
+    setDraft(emptyDraft(draft.siteId ?? defaultSiteId));
+    window.scrollTo(0, 0);
+  }
+
+  if (queued && sentNow) {
+    return (
+      <div role="status" data-testid="queued-sent" className="flex flex-col gap-4 rounded-xl border border-ok/40 bg-ok-soft p-5 text-ink">
+        <p className="text-lg font-semibold">{queued} is filed as {sentNow}.</p>
+        <div className="flex flex-col gap-3 sm:flex-row">
+          <Button size="lg" onClick={() => router.push(`/cases/${sentNow}`)}>Open {sentNow}</Button>
+          <Button size="lg" variant="secondary" onClick={startAnother}>Start another report</Button>
+        </div>
+      </div>
+    );
+  }
+
+  if (queued) {
+    return (
+      <div role="status" data-testid="queued" className="flex flex-col gap-4 rounded-xl border border-warn/40 bg-warn-soft p-5 text-ink">
+        <p className="text-lg font-semibold">{queued} is kept on this device — waiting to send.</p>
+        <p className="text-sm text-ink-2">There is no connection to the server right now. The report is sent by itself, once, when the connection returns; the bar at the top shows when it is filed. Do not file it again.</p>
+        <Button size="lg" onClick={startAnother}>Start another report</Button>
+      </div>
+    );
   }
 
   return (
     <form className="flex flex-col gap-5" onSubmit={(e) => e.preventDefault()} noValidate aria-label="Removal report">
+      <ErrorSummary errors={errors} />
       <Caution title="Before you start">
         Wear the protective equipment your employer requires (safety-toe boots, safety glasses, gloves). Work on, under or between cars only under
         blue-signal protection. The wheelset must be out from under the car and secured against rolling.
@@ -87,7 +149,9 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
           <p className="mb-2 text-sm font-medium text-ink-2">
             Wheelset position {draft.axle && draft.side ? <span className="ml-1 rounded bg-accent-soft px-1.5 py-0.5 text-accent">{draft.axle}{draft.side}</span> : null}
           </p>
-          <AxlePicker axle={draft.axle} side={draft.side} onPick={(axle, side) => patch({ axle, side })} />
+          <div data-field="axle">
+            <AxlePicker axle={draft.axle} side={draft.side} onPick={(axle, side) => patch({ axle, side })} />
+          </div>
           {errors.axle || errors.side ? <p className="text-sm text-danger">{errors.axle ?? errors.side}</p> : null}
         </div>
         <div className="mt-4">
@@ -155,16 +219,15 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
 
       <Card title="4 · Hand roll">
         <div className="mb-4 grid gap-2 text-sm text-ink-2 sm:grid-cols-2">
-          {([
-            ["blueSignal", "Blue-signal protection is in place"],
-            ["wheelsetSecured", "Wheelset is out from under the car and secured against rolling"],
-            ["ppe", "Required protective equipment is worn"],
-            ["cooled", "A hot bearing has cooled enough to handle"],
-          ] as const).map(([key, label]) => (
-            <label key={key} className="flex min-h-11 items-center gap-3 rounded-lg border border-line px-3">
-              <input type="checkbox" className="h-5 w-5 accent-[var(--accent)]" checked={!!conf[key]} onChange={(e) => setChecks({ confirmations: { ...conf, [key]: e.target.checked } })} />
-              {label}
-            </label>
+          {safetyConfirmationsFor(draft.trigger).map(({ key, label, caution }) => (
+            <div key={key} data-safety={key}>
+              <label className={`flex min-h-12 items-center gap-3 rounded-lg border px-3 ${conf[key] ? "border-line" : "border-warn/50"}`}>
+                <input type="checkbox" className="h-6 w-6 accent-[var(--accent)]" checked={!!conf[key]} onChange={(e) => setChecks({ confirmations: { ...conf, [key]: e.target.checked } })} />
+                {label}
+              </label>
+              {/* Unticked is allowed (the report still files) but recorded on the case and shown to the engineer. */}
+              {!conf[key] ? <p className="mt-1 px-1 text-xs text-warn">Not confirmed: {caution} If filed unticked, the case carries a safety flag.</p> : null}
+            </div>
           ))}
         </div>
         <p className="mb-3 text-sm text-muted">
@@ -178,7 +241,9 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
         <p className="mb-3 text-sm text-muted">
           Turn the bearing first so the rollers seat. Dial indicator on a magnetic base on the cup, stem against the wheel hub: push the cup toward the wheel and zero, pull toward the end cap and read the travel.
         </p>
-        <EndPlayEntry value={checks.endPlay ?? { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] }} onChange={(endPlay) => setChecks({ endPlay })} policy={policy} />
+        <div data-field="endPlay">
+          <EndPlayEntry value={checks.endPlay ?? { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] }} onChange={(endPlay) => setChecks({ endPlay })} policy={policy} />
+        </div>
       </Card>
 
       <Card title="6 · What can be seen">
@@ -214,7 +279,7 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
         </p>
         {mode === "new" ? (
           <Button size="lg" onClick={file} disabled={filing}>
-            {filing ? "Filing…" : "File removal report"}
+            {filing ? "Sending…" : "File removal report"}
           </Button>
         ) : (
           <Button size="lg" variant="secondary" onClick={() => void autosave.saveNow()}>Save now</Button>

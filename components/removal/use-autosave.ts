@@ -3,6 +3,7 @@
 // an existing case saves to the server a moment after typing stops, at the version it was loaded.
 import { useCallback, useEffect, useRef, useState } from "react";
 import { forSaving, type RemovalDraft } from "./form-state";
+import { fetchWithTimeout } from "@/lib/http/client-fetch";
 
 export type SaveState = { kind: "idle" | "saving" | "saved" | "error" | "conflict"; message?: string; fields?: Record<string, string> };
 
@@ -39,11 +40,16 @@ export function useAutosave(draft: RemovalDraft, opts: { mode: "new" | "edit"; c
       return;
     }
     setState({ kind: "saving" });
-    const res = await fetch(`/api/cases/${opts.caseId}`, {
+    const sent = await fetchWithTimeout(`/api/cases/${opts.caseId}`, {
       method: "PATCH",
       headers: { "content-type": "application/json" },
       body: JSON.stringify({ version: version.current, section: "field", data: forSaving(draft) }),
     });
+    const res = sent.res;
+    if (!res) {
+      localStorage.setItem(`${DRAFT_KEY}:${opts.caseId}`, JSON.stringify(draft));
+      return setState({ kind: "error", message: `${"message" in sent ? sent.message : ""} Your edits are kept on this device.` });
+    }
     if (!res.ok) {
       // Keep the unsaved edits on this device so a refused save never loses them.
       localStorage.setItem(`${DRAFT_KEY}:${opts.caseId}`, JSON.stringify(draft));

@@ -4,6 +4,7 @@ import type { CaseReport, ComponentSection, ReportPhoto } from "@/lib/report/typ
 import { ReportDamageMap } from "./report-damage-map";
 import { Callout, Facts, Notes, ReportSection, Sub, Table } from "./report-parts";
 import "./report-print.css";
+import { SAFETY_FLAG_DEFERRAL, SAFETY_FLAG_TITLE } from "@/lib/cases/safety-flag";
 
 function Photos({ photos }: { photos: ReportPhoto[] }) {
   if (!photos.length) return null;
@@ -135,6 +136,11 @@ export function ReportDocument({ r }: { r: CaseReport }) {
           ) : null}
           <Sub>Before the checks</Sub>
           <Facts rows={f.confirmations} />
+          {f.safetyFlag.length ? (
+            <Callout tone="warn" title={SAFETY_FLAG_TITLE}>
+              {f.safetyFlag.map((t) => `Not confirmed: ${t}`).join(" ")} {SAFETY_FLAG_DEFERRAL}
+            </Callout>
+          ) : null}
           <Callout tone={f.call.call === "remove" ? "danger" : f.call.call === "keep" ? "ok" : "warn"} title={`Field call: ${f.call.label}`}>
             {f.storedCallDiffers ? `The call stored with the case was “${f.storedCallDiffers}”; the checks as recorded now give the call above.` : "Recomputed from the readings above."}
           </Callout>

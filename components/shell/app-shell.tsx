@@ -4,7 +4,9 @@ import { ROLE_LABELS } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
 import { navFor } from "./nav-items";
 import { NavLinks } from "./nav-links";
+import { OutboxBar } from "@/components/offline/outbox-bar";
 import { SignOutButton } from "./sign-out-button";
+import { PhoneMenu } from "./phone-menu";
 
 export function AppShell({ user, children }: { user: CurrentUser; children: React.ReactNode }) {
   const items = navFor(user.role);
@@ -34,13 +36,20 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
               <BrandMark className="h-6 w-6" />
               <span className="font-semibold text-ink">Tearline</span>
             </Link>
-            <div className="flex items-center gap-3 text-xs text-muted">
-              <Link href="/profile" className="max-w-[9rem] truncate hover:text-ink" title="Your notices">{ROLE_LABELS[user.role]}</Link>
-              <SignOutButton className="rounded-md border border-line px-2 py-1 text-ink-2" />
-            </div>
+            <PhoneMenu
+              items={items}
+              footer={
+                <>
+                  <Link href="/profile" className="inline-flex min-h-11 items-center truncate text-ink-2 underline-offset-4 hover:underline" title="Your notices">
+                    {user.name} · {ROLE_LABELS[user.role]}
+                  </Link>
+                  <SignOutButton className="inline-flex min-h-11 items-center rounded-lg border border-line px-3 text-ink-2" />
+                </>
+              }
+            />
           </div>
-          <NavLinks items={items} layout="bar" />
         </header>
+        <OutboxBar />
         <main className="mx-auto w-full max-w-7xl px-4 py-5 sm:px-6 lg:px-8 lg:py-8">{children}</main>
       </div>
     </div>

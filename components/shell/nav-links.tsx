@@ -23,17 +23,24 @@ export function NavLinks({ items, layout }: { items: NavItem[]; layout: "side" |
         className={
           layout === "side"
             ? `flex items-center gap-3 rounded-lg px-3 py-2 text-sm font-medium ${active ? "bg-white/10 text-white" : "text-slate-400 hover:bg-white/5 hover:text-white"}`
-            : `flex shrink-0 items-center gap-1.5 rounded-full px-3 py-1.5 text-sm font-medium ${active ? "bg-accent text-accent-ink" : "text-ink-2 hover:bg-surface-2"}`
+            : `flex min-h-12 items-center gap-3 rounded-lg border px-3 text-[15px] font-medium ${active ? "border-accent bg-accent text-accent-ink" : "border-line text-ink hover:bg-surface-2"}`
         }
       >
-        <svg viewBox="0 0 24 24" className={layout === "side" ? "h-5 w-5" : "h-4 w-4"} fill="none" stroke="currentColor" strokeWidth="1.8" strokeLinecap="round" strokeLinejoin="round" aria-hidden>
+        <svg viewBox="0 0 24 24" className="h-5 w-5 shrink-0" fill="none" stroke="currentColor" strokeWidth="1.8" strokeLinecap="round" strokeLinejoin="round" aria-hidden>
           <path d={i.icon} />
         </svg>
         {i.label}
       </Link>
     );
   };
-  if (layout === "bar") return <nav aria-label="Main" className="flex gap-1 overflow-x-auto px-3 pb-2 [scrollbar-width:none]">{items.map(link)}</nav>;
+  if (layout === "bar")
+    return (
+      <nav aria-label="Main" className="flex flex-col gap-2">
+        <div className="grid grid-cols-2 gap-2">{main.map(link)}</div>
+        {admin.length ? <p className="mt-2 px-1 text-[11px] font-semibold uppercase tracking-widest text-muted">Administration</p> : null}
+        {admin.length ? <div className="grid grid-cols-2 gap-2">{admin.map(link)}</div> : null}
+      </nav>
+    );
   return (
     <nav aria-label="Main" className="flex flex-col gap-1">
       {main.map(link)}

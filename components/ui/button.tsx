@@ -7,7 +7,8 @@ const variants = {
   ghost: "text-ink-2 hover:bg-surface-2",
   danger: "bg-danger text-white hover:brightness-110",
 } as const;
-const sizes = { sm: "h-8 px-3 text-sm", md: "h-10 px-4 text-sm", lg: "h-12 px-5 text-base" } as const;
+// Touch targets are at least 44 px on phones (gloved hands); desks get the compact sizes.
+const sizes = { sm: "h-11 px-3 text-sm lg:h-8", md: "h-11 px-4 text-sm lg:h-10", lg: "h-12 px-5 text-base" } as const;
 
 type Style = { variant?: keyof typeof variants; size?: keyof typeof sizes };
 

@@ -26,6 +26,31 @@ export async function insertCase(values: CaseValues, actor: Actor): Promise<Case
   });
 }
 
+function isCreateKeyClash(e: unknown): boolean {
+  const cause = ((e as { cause?: unknown })?.cause ?? e) as { code?: string; constraint?: string };
+  return cause?.code === "23505" && cause.constraint === "cases_create_key_idx";
+}
+
+const findByCreateKey = async (userId: string, key: string) =>
+  (await db.select().from(cases).where(and(eq(cases.createdBy, userId), eq(cases.createKey, key))).limit(1))[0];
+
+/**
+ * Files a case at most once per (person, key). The unique index in PostgreSQL is the judge, so a replay
+ * or a double tap landing on another app server at the same moment still finds the first case.
+ */
+export async function insertCaseOnce(values: CaseValues, actor: Actor, key: string): Promise<{ row: Case; replayed: boolean }> {
+  const earlier = await findByCreateKey(actor.id, key);
+  if (earlier) return { row: earlier, replayed: true };
+  try {
+    return { row: await insertCase({ ...values, createKey: key }, actor), replayed: false };
+  } catch (e) {
+    if (!isCreateKeyClash(e)) throw e;
+    const winner = await findByCreateKey(actor.id, key);
+    if (!winner) throw e;
+    return { row: winner, replayed: true };
+  }
+}
+
 /** Locks the case and refuses when someone saved since `version`: the second save never overwrites. */
 async function lockAtVersion(tx: Tx, caseId: string, version: number, attempted: string[]) {
   const [current] = await tx.select().from(cases).where(eq(cases.id, caseId)).for("update");
@@ -101,4 +126,17 @@ export async function countFindings(caseId: string): Promise<number> {
 export async function findingCode(caseId: string, findingId: string): Promise<string | null> {
   const [f] = await db.select({ code: findings.damageCode }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
   return f?.code ?? null;
+}
+
+/** The case, if its latest change is `action` by `userId` taken at `fromVersion` (so it now stands one above). */
+export async function stepAlreadyTaken(caseId: string, fromVersion: number, action: string, userId: string): Promise<Case | null> {
+  const [row] = await db.select().from(cases).where(and(eq(cases.id, caseId), eq(cases.version, fromVersion + 1)));
+  if (!row) return null;
+  const [last] = await db
+    .select({ action: caseEvents.action, userId: caseEvents.userId })
+    .from(caseEvents)
+    .where(eq(caseEvents.caseId, caseId))
+    .orderBy(sql`${caseEvents.at} desc, ${caseEvents.id} desc`)
+    .limit(1);
+  return last && last.action === action && last.userId === userId ? row : null;
 }

@@ -2,7 +2,9 @@
 // how matches rank, and the facet filters. Kept apart so each reads on its own.
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
+import { namesFinding } from "@/lib/search/parse-query";
 import type { MultiFacet, SearchParams } from "@/lib/search/query-schema";
+import { FIXED_ROWS } from "@/lib/search/structured-words";
 import type { PreparedClause } from "./search-terms";
 
 export type SearchViewer = { id: string; role: string; siteId: string | null };
@@ -29,9 +31,54 @@ function clauseTsquery(c: PreparedClause): string {
   return parts.length ? `( ${parts.join(" | ")} )` : "";
 }
 
-/** Every word clause at once, answered by the narrative index. */
+/** Clauses answered by a case's own field (trigger, class) rather than by its words alone. */
+export const isCaseField = (c: PreparedClause) => c.triggers.length > 0 || c.classes.length > 0;
+
+/** Every word clause at once, answered by the narrative index (or only those given). */
 export function documentQuery(clauses: readonly PreparedClause[]): string {
-  return clauses.filter((c) => c.kind !== "identifier").map(clauseTsquery).filter(Boolean).join(" & ");
+  return clauses.filter((c) => c.kind !== "identifier" && !isCaseField(c)).map(clauseTsquery).filter(Boolean).join(" & ");
+}
+
+/** A trigger or class clause: the case's field, or (where the narrative is at hand) its words. */
+export function caseFieldSql(c: PreparedClause, withText: boolean): SQL {
+  const field = c.triggers.length ? sql`s.trigger = ANY(${param(c.triggers)}::text[])` : sql`s.bearing_class = ANY(${param(c.classes)}::text[])`;
+  return withText && c.tsquery ? sql`(${field} OR s.document @@ ${c.tsquery}::tsquery)` : field;
+}
+
+const EFFECTIVE_ROW = `coalesce(fi.row, CASE fi.component ${FIXED_ROWS.map((f) => `WHEN '${f.component}' THEN '${f.row}'`).join(" ")} END)`;
+
+/**
+ * Cases holding one finding that is everything the words name together: the part, the row
+ * (recorded, or the part's own), the zone and the damage. Null when the words name no finding.
+ * An array sub-select, so PostgreSQL works it out once and can OR it with the text index.
+ */
+export function structuredFindingIds(clauses: readonly PreparedClause[]): SQL | null {
+  const named = clauses.filter(namesFinding);
+  if (named.length === 0) return null;
+  const conditions = named.map((c) => {
+    const either: SQL[] = [];
+    if (c.codes.length) either.push(sql`fi.damage_code = ANY(${param(c.codes)}::text[])`);
+    if (c.components.length) either.push(sql`fi.component = ANY(${param(c.components)}::text[])`);
+    if (c.rows.length) either.push(sql`${sql.raw(EFFECTIVE_ROW)} = ANY(${param(c.rows)}::text[])`);
+    if (c.zones.length) either.push(sql`fi.zone = ANY(${param(c.zones)}::text[])`);
+    return sql`(${sql.join(either, sql` OR `)})`;
+  });
+  return sql`ARRAY(SELECT DISTINCT fi.case_id FROM findings fi WHERE ${sql.join(conditions, sql` AND `)})`;
+}
+
+/**
+ * What the words ask of a case: every word clause in its text (or its codes and parts), or a
+ * finding that is what the part, row, zone and damage words name together, with the other
+ * words still in its text.
+ */
+export function wordMatchSql(clauses: readonly PreparedClause[]): { match: SQL | null; structured: SQL | null } {
+  const all = documentQuery(clauses);
+  const structured = structuredFindingIds(clauses);
+  const textAll = all ? sql`s.document @@ ${all}::tsquery` : null;
+  if (!structured) return { match: textAll, structured: null };
+  const rest = documentQuery(clauses.filter((c) => !namesFinding(c)));
+  const byFinding = rest ? sql`(s.case_id = ANY(${structured}) AND s.document @@ ${rest}::tsquery)` : sql`s.case_id = ANY(${structured})`;
+  return { match: textAll ? sql`(${textAll} OR ${byFinding})` : byFinding, structured };
 }
 
 /** A serial, car or case number in part; or the same token in the narrative ("1/16"). */
@@ -42,13 +89,17 @@ export function identifierSql(c: PreparedClause): SQL {
     ${c.tsquery ? sql`UNION SELECT d.case_id FROM case_search_text d WHERE d.document @@ ${c.tsquery}::tsquery` : sql``})`;
 }
 
-/** Text relevance, plus a lift for coded findings the query names and for serial or car hits. */
-export function rankSql(clauses: readonly PreparedClause[], withText: boolean): SQL {
+/**
+ * Text relevance, plus a lift for coded findings the query names and for serial or car hits;
+ * a case holding the very finding the words name (part, row, zone and damage together) first.
+ */
+export function rankSql(clauses: readonly PreparedClause[], withText: boolean, structured: SQL | null = null): SQL {
   const tsqueries = clauses.filter((c) => c.kind !== "identifier").map((c) => c.tsquery).filter(Boolean);
   const codes = [...new Set(clauses.flatMap((c) => c.codes))];
   const components = [...new Set(clauses.flatMap((c) => c.components))];
   const pairs = components.flatMap((p) => codes.map((code) => `${p}|${code}`));
   const terms: SQL[] = [sql`0`];
+  if (structured) terms.push(sql`2 * (s.case_id = ANY(${structured}))::int`);
   if (withText && tsqueries.length) terms.push(sql`ts_rank(s.document, ${tsqueries.map((q) => `( ${q} )`).join(" | ")}::tsquery, 1)`);
   if (codes.length) terms.push(sql`0.25 * (s.damage_codes && ${param(codes)}::text[])::int`);
   if (pairs.length) terms.push(sql`0.25 * (s.finding_keys && ${param(pairs)}::text[])::int`);

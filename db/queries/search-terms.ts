@@ -24,7 +24,7 @@ type Row = { i: number; base: string; corrections: string[]; similarities: numbe
 
 export async function prepareClauses(clauses: readonly SearchClause[]): Promise<PreparedClause[]> {
   if (clauses.length === 0) return [];
-  const texts = clauses.map((c) => (c.kind === "identifier" ? c.words.join(" ") : c.text));
+  const texts = clauses.map((c) => c.searchText);
   const kinds = clauses.map((c) => c.kind);
   const correctable = clauses.map((c) => c.correctable);
   const { rows } = await db.execute<Row>(sql`
@@ -62,4 +62,4 @@ export async function prepareClauses(clauses: readonly SearchClause[]): Promise<
 
 /** Clauses that can still match something: PostgreSQL may drop a word as a stop word. */
 export const usableClauses = (prepared: readonly PreparedClause[]) =>
-  prepared.filter((c) => c.kind === "identifier" || c.tsquery !== "" || c.codes.length > 0 || c.components.length > 0);
+  prepared.filter((c) => c.kind === "identifier" || c.tsquery !== "" || c.codes.length > 0 || c.components.length > 0 || c.triggers.length > 0 || c.classes.length > 0);

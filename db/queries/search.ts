@@ -4,14 +4,14 @@
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
-import { parseSearchText } from "@/lib/search/parse-query";
+import { parseSearchText, queryWithout, type SearchClause } from "@/lib/search/parse-query";
 import { MULTI_FACETS, PAGE_SIZE, type SearchParams } from "@/lib/search/query-schema";
 import { cachedFacets, keepFacets, searchRevision, type FacetRow } from "./search-facet-cache";
 import { M_COLUMNS, activeFacetsSql, and, passiveArrayFacetsSql, passiveScalarFacetsSql } from "./search-facet-sql";
 import { labelFacets, type FacetValue } from "./search-facets";
 import { loadHits, type SearchHit } from "./search-hits";
 import { loadSearchLookups } from "./search-lookups";
-import { documentQuery, facetFilters, identifierSql, orderSql, rankSql, type FacetKey, type SearchViewer } from "./search-sql";
+import { caseFieldSql, documentQuery, facetFilters, identifierSql, isCaseField, orderSql, rankSql, wordMatchSql, type FacetKey, type SearchViewer } from "./search-sql";
 import { readableIn } from "./case-scope";
 import { prepareClauses, usableClauses } from "./search-terms";
 
@@ -25,7 +25,7 @@ export interface SearchResult {
   readonly hits: SearchHit[];
   readonly facets: Record<FacetKey, FacetValue[]>;
   /** How the query was read: the clauses, the codes their shop words named, any corrections. */
-  readonly understood: { text: string; kind: string; codes: { code: string; label: string }[]; corrections: string[] }[];
+  readonly understood: { text: string; kind: string; codes: { code: string; label: string }[]; corrections: string[]; reading: string; role: string; without: string }[];
 }
 
 type PageRow = { id: string; rank: number };
@@ -34,13 +34,16 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
   const [lookups, revision] = await Promise.all([loadSearchLookups(), searchRevision()]);
   const prepared = usableClauses(await prepareClauses(parseSearchText(params.q, lookups.damageEntries)));
   const docQuery = documentQuery(prepared);
+  const words = wordMatchSql(prepared);
   const identifiers = prepared.filter((c) => c.kind === "identifier");
+  const caseFields = prepared.filter(isCaseField);
   const siteIds = lookups.sites.filter((s) => params.site.includes(s.code)).map((s) => s.id);
   const filters = facetFilters(params, siteIds, "s");
   const base = [
     readableIn(viewer, "s") ?? null,
-    docQuery ? sql`s.document @@ ${docQuery}::tsquery` : null,
+    words.match,
     ...identifiers.map(identifierSql),
+    ...caseFields.map((c) => caseFieldSql(c, docQuery !== "")),
     params.from ? sql`s.sort_on >= ${params.from}::date` : null,
     params.to ? sql`s.sort_on <= ${params.to}::date` : null,
   ].filter((x): x is SQL => x !== null);
@@ -48,10 +51,10 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
   const from = docQuery ? sql`case_search_text s` : sql`case_search s`;
   const where = and([...base, ...(Object.values(filters) as SQL[])]);
   const ranked = prepared.length > 0 && params.sort === "relevance";
-  const rank = ranked ? rankSql(prepared, docQuery !== "") : sql`0`;
+  const rank = ranked ? rankSql(prepared, docQuery !== "", words.structured) : sql`0`;
   const limit = sql`LIMIT ${PAGE_SIZE} OFFSET ${(params.page - 1) * PAGE_SIZE}`;
 
-  const key = JSON.stringify([viewer.role, viewer.id, viewer.siteId, docQuery, identifiers.map((c) => c.text), params.from, params.to, params.severity, MULTI_FACETS.map((f) => params[f])]);
+  const key = JSON.stringify([viewer.role, viewer.id, viewer.siteId, docQuery, prepared.map((c) => [c.rows, c.zones, c.triggers, c.classes, c.codes, c.components]), identifiers.map((c) => c.text), params.from, params.to, params.severity, MULTI_FACETS.map((f) => params[f])]);
   const cached = cachedFacets(key, revision);
   const pageOnly = () => db.execute<PageRow>(sql`SELECT s.case_id AS id, ${rank}::real AS rank FROM ${from} WHERE ${where} ORDER BY ${orderSql(params.sort, ranked)} ${limit}`).then((r) => r.rows);
 
@@ -93,9 +96,22 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
     pageSize: PAGE_SIZE,
     hits: await loadHits(page, prepared, lookups, params.q.trim() !== ""),
     facets: labelFacets(facetRows, params, lookups),
-    understood: prepared.map((c) => ({
-      text: c.text, kind: c.kind, corrections: [...c.corrections],
+    understood: prepared.map((c, i) => ({
+      text: c.text, kind: c.kind, corrections: [...c.corrections], reading: c.reading, role: roleOf(c),
+      without: queryWithout(prepared, i),
       codes: c.codes.map((code) => ({ code, label: lookups.labels.damage.get(code) ?? code })),
     })),
   };
+}
+
+/** What kind of thing a clause names, for the "read as" line. */
+function roleOf(c: SearchClause): string {
+  if (c.kind !== "words") return c.kind;
+  if (c.rows.length) return "row";
+  if (c.zones.length) return "zone";
+  if (c.triggers.length) return "trigger";
+  if (c.classes.length) return "class";
+  if (c.components.length) return "part";
+  if (c.codes.length) return "damage";
+  return "words";
 }

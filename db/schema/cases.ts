@@ -2,7 +2,7 @@
 // JSON columns hold structured entry (field checks, lubricant, dispositions) whose shape is
 // validated by the zod schemas in lib/cases; the computed results are stored beside them
 // so lists and tallies can filter without recomputing.
-import { date, index, integer, jsonb, numeric, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { date, index, uniqueIndex, integer, jsonb, numeric, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { user } from "./auth";
 import { sites } from "./sites";
 
@@ -64,9 +64,14 @@ export const cases = pgTable(
     proposedAt: timestamp("proposed_at", { withTimezone: true }),
     signedBy: text("signed_by").references(() => user.id),
     signedAt: timestamp("signed_at", { withTimezone: true }),
+    // What the signer confirmed, in words, and a SHA-256 of exactly what was signed (lib/cases/signature-content.ts).
+    signedMeaning: text("signed_meaning"),
+    signedContentHash: text("signed_content_hash"),
     returnReason: text("return_reason"),
 
     createdBy: text("created_by").references(() => user.id),
+    // The key a device sent with the filing: a replay or a double tap finds this case instead of making another.
+    createKey: text("create_key"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedBy: text("updated_by").references(() => user.id),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
@@ -84,6 +89,9 @@ export const cases = pgTable(
     index("cases_list_updated_idx").on(t.updatedAt.desc().nullsLast(), t.number.desc()),
     index("cases_list_removed_desc_idx").on(t.removedOn.desc().nullsLast(), t.number.desc()),
     index("cases_list_removed_asc_idx").on(t.removedOn.asc().nullsLast(), t.number.desc()),
+    uniqueIndex("cases_create_key_idx").on(t.createdBy, t.createKey),
+    // later removals of the same car and position (missed keep calls)
+    index("cases_position_idx").on(t.carMark, t.carNumber, t.axle, t.side, t.removedOn),
   ],
 );
 

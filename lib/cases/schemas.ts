@@ -27,6 +27,8 @@ export const endPlaySchema = z.object({
   unit: z.enum(["in", "mm"], { message: "Unit must be in or mm." }),
   trials: z.array(z.object({ zero: reading.optional(), reading })).max(10, "At most 10 trials."),
   turnsByHand: z.boolean().optional(),
+  rollersSeated: z.boolean().optional(),
+  confirmedAsTyped: z.boolean().optional(),
 });
 
 export const fieldChecksSchema = z.object({
@@ -100,3 +102,24 @@ export const verdictSchema = z.object({
 }).partial();
 
 export const reasonSchema = z.object({ reason: z.string().trim().min(5, "Give a reason of at least a few words.").max(2000) });
+
+/** What a new removal needs before it can be filed; the form checks it on the device too, so an offline filing is not refused later. */
+export const createCaseSchema = fieldReportSchema.required({ trigger: true, siteId: true, removedOn: true });
+
+/** What the form says when a required answer of a new removal is missing (zod's own words name no field). */
+const MISSING_WORDS: Record<string, string> = {
+  trigger: "Choose what triggered the removal.",
+  siteId: "Choose the removal site from the list.",
+  removedOn: "Enter the date the bearing was removed.",
+};
+
+/** createCaseSchema.parse, with a missing required answer told in the form's words. */
+export function parseNewRemoval(body: unknown) {
+  const parsed = createCaseSchema.safeParse(body);
+  if (parsed.success) return parsed.data;
+  for (const issue of parsed.error.issues) {
+    const words = MISSING_WORDS[String(issue.path[0])];
+    if (words && issue.path.length === 1 && issue.code === "invalid_type") (issue as { message: string }).message = words;
+  }
+  throw parsed.error;
+}

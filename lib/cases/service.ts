@@ -1,20 +1,19 @@
 // Case operations as the API and pages call them: access, stage rules, computed fields, history.
 import "server-only";
 import { z } from "zod";
-import { addFinding, changeFinding, countFindings, findingCode, insertCase, updateCase } from "@/db/queries/case-write";
+import { addFinding, changeFinding, countFindings, findingCode, insertCase, insertCaseOnce, updateCase } from "@/db/queries/case-write";
 import { codeStates, siteKinds } from "@/db/queries/reference-rows";
 import { can } from "@/lib/auth/permissions";
 import { findReadableCase, listCaseHistory, sitePolicy } from "@/db/queries/case-read";
 import { readableNumbers } from "@/db/queries/case-scope";
 import type { Case } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
-import { DEFAULT_END_PLAY_POLICY, type EndPlayPolicy } from "@/lib/field";
+import { DEFAULT_END_PLAY_POLICY, evaluateEndPlay, type EndPlayPolicy } from "@/lib/field";
 import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
-import { fieldChecksSchema, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
+import { fieldChecksSchema, parseNewRemoval, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
 import { canEditSection, checkTransition, editRefusal, type Section, type WorkflowAction } from "./workflow";
-import { nudgeMail } from "@/lib/jobs/nudge";
-import { queueStepNotice } from "./notices";
+import { stepReplay, writeStep } from "./step-write";
 import { linkedNumbers, maskUnreadableLinks } from "./history-view";
 import { codeProblem, siteProblem, type CodeUse, type SiteUse } from "./reference-rules";
 
@@ -63,9 +62,9 @@ async function policyFor(siteId: string | null | undefined): Promise<EndPlayPoli
 async function withComputed(input: FieldReportInput, base: Partial<Case>) {
   const merged = { ...base, ...input };
   const out: Record<string, unknown> = { ...input };
-  if (input.fieldChecks || input.siteId !== undefined) {
+  if (input.fieldChecks || input.siteId !== undefined || input.trigger !== undefined) {
     const checks = fieldChecksSchema.parse(merged.fieldChecks ?? {});
-    Object.assign(out, summariseFieldChecks(checks, await policyFor(merged.siteId)));
+    Object.assign(out, summariseFieldChecks(checks, await policyFor(merged.siteId), merged.trigger));
   }
   if (input.mountedOn !== undefined || input.removedOn !== undefined) {
     out.serviceMonths = serviceMonthsOf(merged.mountedOn, merged.removedOn);
@@ -73,14 +72,30 @@ async function withComputed(input: FieldReportInput, base: Partial<Case>) {
   return out;
 }
 
-export const createCaseSchema = fieldReportSchema.required({ trigger: true, siteId: true, removedOn: true });
+/** A reading no bearing can show is refused at filing until corrected or confirmed as typed. */
+async function refuseImplausible(input: FieldReportInput) {
+  const endPlay = input.fieldChecks?.endPlay;
+  if (!endPlay || endPlay.trials.length === 0) return;
+  const problem = evaluateEndPlay(endPlay, await policyFor(input.siteId)).messages.find((m) => m.code === "implausible-reading");
+  if (problem) throw badRequest(problem.text, { fields: { endPlay: problem.text } });
+}
 
-export async function createFieldReport(body: unknown, user: CurrentUser) {
-  const input = createCaseSchema.parse(body);
+export { createCaseSchema } from "./schemas";
+
+/** A device's key for one filing: letters, digits and dashes (a UUID fits). */
+export const createKeySchema = z
+  .string({ message: "Idempotency-Key must be text." })
+  .regex(/^[A-Za-z0-9_-]{16,100}$/, "Idempotency-Key must be 16 to 100 letters, digits, dashes or underscores.");
+
+/** Files a removal. With a key, a repeat of the same filing answers the first case (`replayed`) instead of a new one. */
+export async function createFieldReport(body: unknown, user: CurrentUser, createKey?: string | null) {
+  const input = parseNewRemoval(body);
   assertOwnShop(input.siteId, user, null);
   await checkReferences(input, null);
+  await refuseImplausible(input);
   const values = await withComputed({ fieldChecks: { visual: [], confirmations: {} }, ...input }, {});
-  return insertCase(values, user);
+  if (createKey == null) return { row: await insertCase(values, user), replayed: false };
+  return insertCaseOnce(values, user, createKeySchema.parse(createKey));
 }
 
 const sectionSchemas = { field: fieldReportSchema, teardown: teardownSchema, verdict: verdictSchema } as const;
@@ -136,6 +151,8 @@ export const transitionSchema = z.object({
 
 export async function transitionCase(c: Case, body: unknown, user: CurrentUser) {
   const { version, action, reason, labSiteId } = transitionSchema.parse(body);
+  const done = await stepReplay(c, version, action, user);
+  if (done) return done;
   const check = checkTransition(action as WorkflowAction, c.status, user.role, reason, {
     primaryCause: c.primaryCause,
     confidence: c.confidence,
@@ -151,7 +168,5 @@ export async function transitionCase(c: Case, body: unknown, user: CurrentUser) 
   if (action === "sign") Object.assign(patch, { signedAt: now, signedBy: user.id });
   if (action === "return") Object.assign(patch, { returnReason: reason });
   if (action === "reopen") Object.assign(patch, { signedAt: null, signedBy: null });
-  const row = await updateCase(c.id, version, patch, user, action, reason, (tx, saved) => queueStepNotice(tx, action, saved, user, reason));
-  nudgeMail();
-  return row;
+  return writeStep(c, version, action, patch, user, reason);
 }

@@ -7,6 +7,10 @@ export type EndPlayPolicy = {
   dialSpreadIn: number;
   /** Largest difference between trials read off a metal tape, inches. */
   tapeSpreadIn: number;
+  /** Largest end play a journal bearing can show; above it a reading must be confirmed as typed. Default 0.25 in. */
+  plausibleMaxIn?: number;
+  /** Triggers for which a keep may rest on the other checks without an end-play reading. Default: none. */
+  endPlayOptionalFor?: readonly string[];
 };
 
 /**

@@ -9,6 +9,7 @@ import {
 } from "./end-play-policy";
 import { parseTrials, type EndPlayMethod, type EndPlayTrialInput, type EndPlayTrialValue, type LengthUnit } from "./end-play-trials";
 import { listInWords, message, type FieldMessage } from "./messages";
+import { checkPlausibility } from "./plausibility";
 import { formatInches, formatMm, inToMm, nearestSixtyFourth } from "./units";
 
 export type EndPlayInput = {
@@ -17,6 +18,10 @@ export type EndPlayInput = {
   trials: EndPlayTrialInput[];
   /** Asked when end play is zero: does the bearing turn easily by hand? */
   turnsByHand?: boolean;
+  /** Was the bearing turned so the rollers seat before measuring? No means the reading is not valid. */
+  rollersSeated?: boolean;
+  /** The person confirmed an implausible reading is what they meant. */
+  confirmedAsTyped?: boolean;
 };
 
 export type EndPlayMeasured = {
@@ -60,6 +65,18 @@ export function evaluateEndPlay(input: EndPlayInput, policy: EndPlayPolicy = DEF
       message("error", "no-usable-trial", "No usable end-play trial: enter at least one reading that can be read."),
     );
     return { call: "incomplete", removes: false, count: 0, trials: [], messages };
+  }
+
+  const plausibility = checkPlausibility(values, input.method, policy, input.confirmedAsTyped);
+  messages.push(...plausibility.messages);
+  // Refused until confirmed or corrected: a slip of the hand must not remove or keep a bearing.
+  if (plausibility.needsConfirmation) return { call: "incomplete", removes: false, count: 0, trials: [], messages };
+  if (input.rollersSeated === false) {
+    messages.unshift(message("error", "not-seated", "The bearing was not turned to seat the rollers before measuring, so the reading is not valid. Turn it, then measure again."));
+    return { call: "incomplete", removes: false, count: 0, trials: [], messages };
+  }
+  if (input.rollersSeated === undefined) {
+    messages.push(message("warn", "seating-unstated", "Say whether the bearing was turned so the rollers seat before measuring."));
   }
 
   const inches = values.map((v) => v.in);

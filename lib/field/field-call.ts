@@ -5,7 +5,7 @@ import type { HandRollEvaluation } from "./hand-roll";
 import type { FieldMessageLevel } from "./messages";
 import { visualFindingDefinition, type VisualFinding } from "./visual-findings";
 
-export type FieldCallSource = "hand-roll" | "end-play" | "visual" | "detector";
+export type FieldCallSource = "hand-roll" | "end-play" | "visual" | "detector" | "safety";
 export type FieldCallReason = { source: FieldCallSource; level: FieldMessageLevel; code: string; text: string };
 
 export type FieldCallInput = {
@@ -14,6 +14,10 @@ export type FieldCallInput = {
   visual?: VisualFinding[];
   /** A wayside detector alarm confirmed (true) or not confirmed (false) on inspection. */
   waysideAlarmConfirmed?: boolean;
+  /** False when the site policy lets this trigger keep without an end-play reading. Default true. */
+  endPlayRequired?: boolean;
+  /** Safety confirmations left unticked at filing: recorded with the call, never deciding it. */
+  safetyUnconfirmed?: readonly { key: string; text: string }[];
 };
 
 export type FieldCall = { call: "remove" | "keep" | "undecided"; reasons: FieldCallReason[] };
@@ -27,8 +31,13 @@ function endPlayBlock(endPlay: EndPlayResult): string | null {
   if (endPlay.call === "incomplete") return "End play has no usable reading: measure it, or leave it out if it was not measured.";
   if (endPlay.call === "tight-remeasure") return "End play read zero on a free-turning bearing: measure it again before deciding.";
   if (endPlay.call === "tight-unknown") return "End play read zero: say whether the bearing turns easily by hand.";
+  const has = (code: string) => endPlay.messages.some((m) => m.code === code);
+  if (has("implausible-reading")) return "An end-play reading is more than a bearing can show: correct it or confirm it as typed.";
+  if (has("not-seated")) return "Undecided — re-measure: the rollers were not seated before measuring.";
   if (endPlay.messages.some((m) => m.level === "error")) return "Some end-play trials could not be used: correct or delete them before deciding.";
-  if (endPlay.messages.some((m) => m.code === "trial-over-limit")) return "A trial read over the end-play limit: re-measure before keeping the bearing.";
+  if (has("trial-over-limit")) return "Undecided — re-measure: a trial read over the end-play limit.";
+  if (has("spread-too-large") || has("outlier-trial")) return "Undecided — re-measure: the trials do not agree.";
+  if (has("seating-unstated")) return "Say whether the rollers were seated before measuring; until then end play cannot clear the bearing.";
   return null;
 }
 
@@ -58,8 +67,14 @@ export function decideFieldCall(input: FieldCallInput): FieldCall {
     for (const m of endPlay.messages) add("end-play", m.level, m.code, m.text);
     const block = endPlayBlock(endPlay);
     if (block) blockers.push({ source: "end-play", level: "warn", code: "end-play-unsettled", text: block });
+  } else if (input.endPlayRequired === false) {
+    add("end-play", "info", "end-play-not-measured", "End play was not measured; the site policy lets this trigger rest on the other checks.");
   } else {
-    add("end-play", "warn", "end-play-not-measured", "End play was not measured; the call rests on the other checks.");
+    blockers.push({ source: "end-play", level: "warn", code: "end-play-not-measured", text: "End play was not measured, so the bearing cannot be kept on the other checks alone. Measure it." });
+  }
+
+  for (const item of input.safetyUnconfirmed ?? []) {
+    add("safety", "warn", `safety-unconfirmed-${item.key}`, `Not confirmed at filing: ${item.text}`);
   }
 
   for (const finding of input.visual ?? []) {

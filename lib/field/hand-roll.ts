@@ -23,7 +23,7 @@ export type HandRollProcedure = {
 export type HandRollEvaluation = {
   /** The procedure is fully stated and has no fault. */
   valid: boolean;
-  /** Every cell has a feel and no cell is short of two revolutions. */
+  /** Every cell has a feel and an entered count of at least two revolutions. */
   complete: boolean;
   result: "remove" | "keep" | "not-valid" | "incomplete";
   messages: FieldMessage[];
@@ -56,6 +56,7 @@ export function evaluateHandRoll(grid: HandRollGrid, procedure: Partial<HandRoll
   const messages: FieldMessage[] = [...faults];
   const missing: string[] = [];
   const short: string[] = [];
+  const uncounted: string[] = [];
   const rough: string[] = [];
   const stiff: string[] = [];
   let badCount = false;
@@ -68,7 +69,11 @@ export function evaluateHandRoll(grid: HandRollGrid, procedure: Partial<HandRoll
       else if (cell.feel === "rough" || cell.feel === "catch") rough.push(`${name} (${cell.feel})`);
       else if (cell.feel === "stiff") stiff.push(name);
       const revolutions = cell?.revolutions;
-      if (revolutions === undefined) continue;
+      if (revolutions === undefined || revolutions === null) {
+        // Two full turns are confirmed by entering them, never assumed.
+        if (cell?.feel) uncounted.push(name);
+        continue;
+      }
       if (!Number.isFinite(revolutions) || revolutions < 0) {
         badCount = true;
         messages.push(message("error", "revolutions-invalid", `${name}: the number of revolutions must be zero or more.`));
@@ -85,7 +90,10 @@ export function evaluateHandRoll(grid: HandRollGrid, procedure: Partial<HandRoll
   if (short.length > 0) {
     messages.push(message("warn", "too-few-revolutions", `Fewer than two full revolutions at ${listInWords(short)}. Turn two full revolutions each way.`));
   }
-  const complete = missing.length === 0 && short.length === 0 && !badCount;
+  if (uncounted.length > 0) {
+    messages.push(message("warn", "revolutions-missing", `Enter the revolutions turned at ${listInWords(uncounted)}.`));
+  }
+  const complete = missing.length === 0 && short.length === 0 && uncounted.length === 0 && !badCount;
   const valid = faults.length === 0 && unstated.length === 0;
   const roughText = listInWords(rough);
 

@@ -7,3 +7,6 @@ export * from "./hand-roll";
 export * from "./visual-findings";
 export * from "./field-call";
 export * from "./service-life";
+export * from "./plausibility";
+export * from "./safety";
+export * from "./unit-switch";

@@ -6,6 +6,7 @@ import { requireApiUser, type CurrentUser } from "@/lib/auth/session";
 import type { Permission } from "@/lib/auth/permissions";
 import { JSON_MAX_BYTES, readTextLimited } from "./body";
 import { HttpError } from "./errors";
+import { UNAVAILABLE_MESSAGES, unavailableService } from "./unavailable";
 import { checkBodyType, requestHasBody } from "@/lib/security/request-rules";
 
 type Ctx<P> = { req: NextRequest; user: CurrentUser; params: P };
@@ -16,9 +17,10 @@ export function zodMessage(error: z.ZodError): { message: string; fields: Record
     const key = issue.path.join(".") || "_";
     fields[key] ??= issue.message;
   }
-  const first = error.issues[0];
-  const where = first?.path.length ? `${first.path.join(".")}: ` : "";
-  return { message: `${where}${first?.message ?? "invalid input"}`, fields };
+  // The words of the form only: internal field names stay in `fields` for the screen to place the message.
+  const first = error.issues[0]?.message ?? "Some of what was entered is not valid.";
+  const more = Object.keys(fields).length - 1;
+  return { message: more > 0 ? `${first} (and ${more} more to fix)` : first, fields };
 }
 
 export function errorResponse(err: unknown): NextResponse {
@@ -28,6 +30,12 @@ export function errorResponse(err: unknown): NextResponse {
   if (err instanceof z.ZodError) {
     const { message, fields } = zodMessage(err);
     return NextResponse.json({ error: message, code: "bad-request", fields }, { status: 400 });
+  }
+  const service = unavailableService(err);
+  if (service) {
+    // Expected during an outage or restart: one line in the log, a plain 503 to the caller.
+    console.error(`${service} unavailable: ${err instanceof Error ? err.message : String(err)}`);
+    return NextResponse.json({ error: UNAVAILABLE_MESSAGES[service], code: "unavailable", service }, { status: 503, headers: { "retry-after": "30" } });
   }
   console.error(err);
   return NextResponse.json({ error: "Something went wrong on the server; nothing was changed.", code: "internal" }, { status: 500 });

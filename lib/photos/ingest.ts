@@ -1,6 +1,7 @@
-// Ingest: check and process the file, store its objects, and only then write its row.
-// A failure part-way removes whatever was stored, so there is never a row without objects
-// nor (barring a crash, which the sweeper handles) objects without a row.
+// Ingest: check and process the file, store its objects, and only then write its row (in a short
+// transaction of its own, after the store has the bytes). A failure part-way removes whatever was
+// stored, so there is never a row without objects nor (barring a crash, which the sweeper handles)
+// objects without a row.
 import type { PhotoLimits } from "./limits";
 import { photoKeys, type PhotoKeys } from "./keys";
 import { processPhoto, sha256Hex, type ProcessedPhoto } from "./process";
@@ -89,30 +90,36 @@ export async function ingestPhoto<Row>(
   const processed = await processPhoto(input.file, input.fileName, input.limits);
   const keys = photoKeys(input.caseId, processed.sha256);
 
-  return deps.rows.exclusive(input.caseId, processed.sha256, async (rows) => {
-    const existing = await rows.findByHash(input.caseId, processed.sha256);
-    if (existing) return { photo: existing, duplicate: true };
+  // The bytes go to the store before any database work, so a slow or stalled store never holds a
+  // connection or lock. The keys are content-addressed: a concurrent upload of the same file writes
+  // the same bytes to the same keys, and whichever row lands first owns them.
+  const stored: string[] = [];
+  const put = async (key: string, body: Buffer, type: string) => {
+    await deps.store.put(key, body, type);
+    stored.push(key);
+  };
+  try {
+    // The evidence first; derivatives can always be made again from it.
+    await put(keys.original, input.file, processed.contentType);
+    const results = await Promise.allSettled([
+      put(keys.screen, processed.screen.data, "image/webp"),
+      put(keys.thumb, processed.thumb.data, "image/webp"),
+    ]);
+    const failed = results.find((r): r is PromiseRejectedResult => r.status === "rejected");
+    if (failed) throw failed.reason;
 
-    const stored: string[] = [];
-    const put = async (key: string, body: Buffer, type: string) => {
-      await deps.store.put(key, body, type);
-      stored.push(key);
-    };
-    try {
-      // The evidence first; derivatives can always be made again from it.
-      await put(keys.original, input.file, processed.contentType);
-      const results = await Promise.allSettled([
-        put(keys.screen, processed.screen.data, "image/webp"),
-        put(keys.thumb, processed.thumb.data, "image/webp"),
-      ]);
-      const failed = results.find((r): r is PromiseRejectedResult => r.status === "rejected");
-      if (failed) throw failed.reason;
+    // Then one short transaction: the row, under a lock per (case, file).
+    return await deps.rows.exclusive(input.caseId, processed.sha256, async (rows) => {
+      const existing = await rows.findByHash(input.caseId, processed.sha256);
+      if (existing) return { photo: existing, duplicate: true };
       const photo = await rows.insert(rowValues(input, processed, keys));
       return { photo, duplicate: false };
-    } catch (err) {
-      // Whatever is left behind if this removal fails too is found later by the sweeper.
-      await deps.store.remove(stored).catch(() => undefined);
-      throw err;
-    }
-  });
+    });
+  } catch (err) {
+    // Objects a row already uses (the same file, stored by another upload) stay. Whatever is left
+    // behind if this removal fails too, or the process dies first, is found later by the sweeper.
+    const owner = await deps.rows.findByHash(input.caseId, processed.sha256).catch(() => "unknown" as const);
+    if (owner === null) await deps.store.remove(stored).catch(() => undefined);
+    throw err;
+  }
 }

@@ -16,7 +16,25 @@ import {
   text,
   triggerLabel,
 } from "./format";
+import { contentHash, groupedHash } from "@/lib/cases/signature-content";
 import type { CaseReport, ReportSource, Revision, Row } from "./types";
+
+/** The signature's meaning, its hash, and whether the case still holds exactly what was signed. */
+function signatureRows(s: ReportSource): Row[] {
+  const c = s.case;
+  if (c.status !== "signed" || !c.signedContentHash) return [];
+  const now = contentHash({
+    caseNumber: c.number,
+    verdict: { primaryCause: c.primaryCause, contributingCauses: c.contributingCauses, confidence: c.confidence, removalConfirmed: c.removalConfirmed, correctiveAction: c.correctiveAction, verdictNotes: c.verdictNotes },
+    findings: s.findings.map((f) => ({ component: f.component, row: f.row, zone: f.zone, damageCode: f.damageCode, severity: f.severity, clockDeg: f.clockDeg, arcDeg: f.arcDeg, lengthMm: f.lengthMm, widthMm: f.widthMm, notes: f.notes })),
+    photoHashes: s.photos.map((p) => p.sha256),
+  });
+  return [
+    ["Signature means", c.signedMeaning ?? DASH],
+    ["Signed content (SHA-256)", groupedHash(c.signedContentHash)],
+    ["Signature check", now === c.signedContentHash ? "Matches: the verdict, findings and photos are exactly as signed." : "Does not match: the verdict, findings or photos changed after signing."],
+  ];
+}
 
 function revisionOf(s: ReportSource): Revision {
   const c = s.case;
@@ -103,7 +121,7 @@ export function buildCaseReport(s: ReportSource): CaseReport {
     ],
     trigger: { label: trigger, details: triggerDetails(c.trigger, c.triggerDetail) },
     service: serviceRows(s),
-    field: buildFieldSection(c.fieldChecks ?? {}, s.site, { fieldCall: c.fieldCall, fieldNotes: c.fieldNotes ?? "" }),
+    field: buildFieldSection(c.fieldChecks ?? {}, s.site, { fieldCall: c.fieldCall, fieldNotes: c.fieldNotes ?? "", trigger: c.trigger }),
     teardown: {
       rows: [
         ["Lab", s.lab ? `${s.lab.name} (${s.lab.code})` : DASH],
@@ -124,6 +142,7 @@ export function buildCaseReport(s: ReportSource): CaseReport {
         ["Removal", removal],
         ["Proposed by", s.people.proposedBy ? `${s.people.proposedBy} · ${formatDateTime(c.proposedAt)}` : "Not proposed yet"],
         ["Signed by", c.status === "signed" && s.people.signedBy ? `${s.people.signedBy} · ${formatDateTime(c.signedAt)}` : "Not signed"],
+        ...signatureRows(s),
       ],
       correctiveAction: c.correctiveAction.trim(),
       notes: c.verdictNotes.trim(),

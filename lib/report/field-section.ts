@@ -21,6 +21,7 @@ import {
   type VisualFinding,
   VISUAL_FINDINGS,
 } from "@/lib/field";
+import { safetyFlagOf } from "@/lib/cases/safety-flag";
 import { DASH } from "./format";
 import type { EndPlaySection, FieldSection, HandRollSection, Note, ReportSourceSite, Row } from "./types";
 
@@ -109,7 +110,7 @@ function endPlaySection(ep: EndPlayInput, result: EndPlayResult, policy: EndPlay
 export function buildFieldSection(
   raw: Record<string, unknown>,
   site: ReportSourceSite | null,
-  stored: { fieldCall: string | null; fieldNotes: string },
+  stored: { fieldCall: string | null; fieldNotes: string; trigger?: string | null },
 ): FieldSection {
   const checks = raw as Checks;
   const policy: EndPlayPolicy = site ? { maxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn } : DEFAULT_END_PLAY_POLICY;
@@ -117,7 +118,8 @@ export function buildFieldSection(
   const hasTrials = Array.isArray(checks.endPlay?.trials) && checks.endPlay.trials.length > 0;
   const endPlay = checks.endPlay && hasTrials ? evaluateEndPlay(checks.endPlay, policy) : undefined;
   const visual = (Array.isArray(checks.visual) ? checks.visual : []).filter((v) => VISUAL_FINDINGS.some((d) => d.code === v?.code));
-  const call = decideFieldCall({ handRoll, endPlay, visual, waysideAlarmConfirmed: checks.waysideAlarmConfirmed });
+  const safetyFlag = safetyFlagOf(raw, stored.trigger);
+  const call = decideFieldCall({ handRoll, endPlay, visual, waysideAlarmConfirmed: checks.waysideAlarmConfirmed, safetyUnconfirmed: safetyFlag });
   const confirmations = checks.confirmations ?? {};
   return {
     handRoll: checks.handRoll && handRoll ? handRollSection(checks.handRoll, handRoll) : null,
@@ -127,5 +129,6 @@ export function buildFieldSection(
     call: { call: call.call, label: CALL_LABEL[call.call], reasons: call.reasons.map((r) => ({ level: r.level, text: r.text })) },
     storedCallDiffers: stored.fieldCall && stored.fieldCall !== call.call ? CALL_LABEL[stored.fieldCall as keyof typeof CALL_LABEL] ?? stored.fieldCall : null,
     notes: stored.fieldNotes.trim(),
+    safetyFlag: safetyFlag.map((f) => f.text),
   };
 }

@@ -41,6 +41,9 @@ export type ReportSourceCase = {
   verdictNotes: string;
   proposedAt: DateLike;
   signedAt: DateLike;
+  /** What the signer confirmed and the SHA-256 of the signed content (absent on older signatures). */
+  signedMeaning?: string | null;
+  signedContentHash?: string | null;
   returnReason: string | null;
   createdAt: DateLike;
   updatedAt: DateLike;
@@ -126,6 +129,8 @@ export type FieldSection = {
   /** The call stored with the case, when it differs from the one recomputed here. */
   storedCallDiffers: string | null;
   notes: string;
+  /** Safety confirmations that applied and were left unticked at filing, each with its caution. */
+  safetyFlag: string[];
 };
 
 export type ReportFinding = {

@@ -6,6 +6,7 @@ import type { CodeSearchEntry } from "@/lib/classification/code-search";
 import { expandQueryWithSynonyms } from "@/lib/classification/query-expansion";
 import { isStopWord, stem, words } from "@/lib/classification/text-tokens";
 import { componentsForRun } from "./component-words";
+import { structuredForRun } from "./structured-words";
 
 export type ClauseKind = "words" | "phrase" | "identifier";
 
@@ -23,7 +24,18 @@ export interface SearchClause {
   readonly correctable: boolean;
   /** Terms to mark in snippets: the words and the shop words of the codes named. */
   readonly highlight: readonly string[];
+  /** Rows, zones, removal triggers and bearing classes the words name. */
+  readonly rows: readonly string[];
+  readonly zones: readonly string[];
+  readonly triggers: readonly string[];
+  readonly classes: readonly string[];
+  /** The words searched as text ("outboard row" searches "outboard"; "class F" nothing). */
+  readonly searchText: string;
+  /** How the clause was understood, in words ("cup", "outboard row", "subsurface spall"). */
+  readonly reading: string;
 }
+
+const NO_FIELDS = { rows: [], zones: [], triggers: [], classes: [] } as const;
 
 const MAX_CLAUSES = 12;
 const MAX_RUN = 4;
@@ -46,12 +58,29 @@ function entriesForWord(word: string, entries: readonly CodeSearchEntry[]): Code
   return entries.filter((e) => named.has(e.code));
 }
 
+/** Parts read back in words: "cone" names both cones but reads as "cone". */
+const partWords = (run: readonly string[], components: readonly string[]) => (components.length ? run.join(" ") : "");
+
 function clauseFor(run: readonly string[], entries: readonly CodeSearchEntry[]): SearchClause | null {
   const exact = entriesForRun(run, entries);
-  const matched = run.length === 1 && exact.length === 0 ? entriesForWord(run[0], entries) : exact;
   const components = componentsForRun(run);
+  // a row, zone, trigger or class, unless the words are a damage or part name first
+  const field = exact.length === 0 && components.length === 0 ? structuredForRun(run) : null;
+  if (field) {
+    const ws = field.role === "row" && run[run.length - 1] === "row" ? run.slice(0, -1) : run;
+    return {
+      kind: "words", text: run.join(" "), words: [...ws], codes: [], components: [], correctable: false,
+      highlight: [ws.join(" ")],
+      rows: field.role === "row" ? field.codes : [], zones: field.role === "zone" ? field.codes : [],
+      triggers: field.role === "trigger" ? field.codes : [], classes: field.role === "class" ? field.codes : [],
+      searchText: field.role === "class" ? "" : ws.join(" "),
+      reading: field.label,
+    };
+  }
+  const matched = run.length === 1 && exact.length === 0 ? entriesForWord(run[0], entries) : exact;
   if (run.length > 1 && matched.length === 0 && components.length === 0) return null;
   const single = run.length === 1 ? run[0] : null;
+  const damageWords = matched.map((e) => e.label.toLowerCase()).join(" or ");
   return {
     kind: "words",
     text: run.join(" "),
@@ -60,6 +89,9 @@ function clauseFor(run: readonly string[], entries: readonly CodeSearchEntry[]):
     components,
     correctable: !!single && single.length >= MIN_CORRECTABLE && exact.length === 0 && components.length === 0 && /^[a-z]+$/.test(single),
     highlight: [...new Set([run.join(" "), ...matched.flatMap((e) => [e.label, ...(e.synonyms ?? [])])])],
+    ...NO_FIELDS,
+    searchText: run.join(" "),
+    reading: [partWords(run, components), damageWords].filter(Boolean).join(" / ") || run.join(" "),
   };
 }
 
@@ -102,7 +134,7 @@ export function parseSearchText(raw: string, entries: readonly CodeSearchEntry[]
         const named = entriesForRun(ws, entries);
         clauses.push({
           kind: "phrase", text: ws.join(" "), words: ws, codes: named.map((e) => e.code), components: [],
-          correctable: false, highlight: [ws.join(" ")],
+          correctable: false, highlight: [ws.join(" ")], ...NO_FIELDS, searchText: ws.join(" "), reading: `“${ws.join(" ")}”`,
         });
       }
       continue;
@@ -111,12 +143,20 @@ export function parseSearchText(raw: string, entries: readonly CodeSearchEntry[]
     if (/\d/.test(token)) {
       flush();
       const id = token.slice(0, IDENTIFIER_MAX);
-      clauses.push({ kind: "identifier", text: id, words: words(id), codes: [], components: [], correctable: false, highlight: [id] });
+      clauses.push({ kind: "identifier", text: id, words: words(id), codes: [], components: [], correctable: false, highlight: [id], ...NO_FIELDS, searchText: words(id).join(" "), reading: id });
     } else pending.push(...words(token));
   }
   flush();
   return clauses.slice(0, MAX_CLAUSES);
 }
+
+/** The search text without one clause: what "drop this part of the reading" links to. */
+export function queryWithout(clauses: readonly SearchClause[], index: number): string {
+  return clauses.filter((_, i) => i !== index).map((c) => (c.kind === "phrase" ? `"${c.text}"` : c.text)).join(" ");
+}
+
+/** Clauses that name something a finding records: a damage, a part, a row or a zone. */
+export const namesFinding = (c: SearchClause) => c.kind === "words" && (c.codes.length > 0 || c.components.length > 0 || c.rows.length > 0 || c.zones.length > 0);
 
 /** Every damage code the query names, for ranking boosts and chips. */
 export const codesIn = (clauses: readonly SearchClause[]) => [...new Set(clauses.flatMap((c) => c.codes))];

@@ -66,7 +66,8 @@ export function chiSquareTest(table: readonly (readonly number[])[], opts: ChiSq
   if (lowExpectedShare > 0.2) {
     warnings.push(
       `${lowCells} of ${cells} cells (${Math.round(lowExpectedShare * 100)}%) expect fewer than 5 cases; ` +
-        "with more than 20% such cells the p-value is unreliable (Cochran's rule). Combine categories or gather more data.",
+        "when more than a fifth of the cells expect fewer than 5, the p-value is not to be trusted " +
+        "(the usual rule of thumb, Cochran's rule). Combine categories or gather more data.",
     );
   }
   const df = (rowIndices.length - 1) * (colIndices.length - 1);

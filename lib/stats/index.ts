@@ -13,3 +13,6 @@ export * from "./chi-square-describe";
 export * from "./c-chart";
 export * from "./pareto";
 export * from "./clusters";
+export * from "./logistic";
+export * from "./funnel";
+export * from "./association";

@@ -9,6 +9,7 @@ declare module "jstat" {
     normal: JStatDistribution;
     chisquare: JStatDistribution;
     lowRegGamma(a: number, x: number): number;
+    ibeta(x: number, a: number, b: number): number;
   }
   const jStat: JStatStatic;
   export default jStat;

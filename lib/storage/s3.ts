@@ -2,6 +2,7 @@
 import "server-only";
 import { GetObjectCommand, HeadBucketCommand, PutObjectCommand, DeleteObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { env } from "@/lib/env";
+import { isObjectStoreOutage, ObjectStoreUnavailable } from "@/lib/http/unavailable";
 
 let client: S3Client | undefined;
 
@@ -16,7 +17,22 @@ export function s3(): S3Client {
     // The fake stores the SDK's default streaming checksum frames verbatim; only send checksums when required.
     requestChecksumCalculation: "WHEN_REQUIRED",
     responseChecksumValidation: "WHEN_REQUIRED",
+    // A store that is down or stuck must fail the request in seconds, not hang it: 3 s to connect,
+    // 60 s for a whole request (a 25 MB original on a slow link), two tries in all.
+    requestHandler: { connectionTimeout: 3_000, requestTimeout: 60_000, throwOnRequestTimeout: true },
+    maxAttempts: 2,
   });
+  // Outermost step, after the SDK's retries: an outage becomes one error the API answers with 503.
+  client.middlewareStack.add(
+    (next) => async (args) => {
+      try {
+        return await next(args);
+      } catch (err) {
+        throw isObjectStoreOutage(err) ? new ObjectStoreUnavailable(err) : err;
+      }
+    },
+    { step: "initialize", name: "tearlineObjectStoreOutage" },
+  );
   return client;
 }
 

@@ -8,6 +8,23 @@ export function toCsv(header: readonly string[], rows: readonly (readonly Cell[]
   return writeCsv(header, rows.map((row) => row.map((c) => (typeof c === "boolean" ? (c ? "yes" : "no") : c))));
 }
 
+/**
+ * The filters that made a chart's numbers, as one line above its table: "Filters: site MJC;
+ * from 2026-01-01". Keys a chart only uses for display (which cause is picked) are left out.
+ */
+export function filtersLine(search: string): string {
+  const sp = new URLSearchParams(search);
+  const parts: string[] = [];
+  for (const [k, v] of sp) if (v.trim() && !DISPLAY_ONLY.has(k)) parts.push(`${k.replace(/([a-z])([A-Z])/g, "$1 $2").toLowerCase()} ${v}`);
+  return `Filters: ${parts.length ? parts.join("; ") : "none (every case you may see)"}`;
+}
+const DISPLAY_ONLY = new Set(["cause", "tab", "view"]);
+
+/** A chart table's CSV with its filters stated on the first line. */
+export function chartCsv(search: string, header: readonly string[], rows: readonly (readonly Cell[])[]): string {
+  return writeCsv([filtersLine(search)], []) + toCsv(header, rows);
+}
+
 /** Uploaded lists are read leniently; the fleet parser reports bad rows by number. */
 export function parseCsv(input: string): string[][] {
   return readCsv(input, { lenient: true });

@@ -1,5 +1,6 @@
-// Cause x site: Pearson chi-square test of independence and the cells that stand out, in words.
-import { chiSquareTest, describeResiduals } from "@/lib/stats";
+// Cause x site: Pearson chi-square test of independence, the likelihood-ratio G test and
+// Cramér's V beside it (how strong, not only whether), and the cells that stand out, in words.
+import { association, chiSquareTest, describeResiduals } from "@/lib/stats";
 import { causeLabel } from "./labels";
 import { sumBy } from "./shape-verdicts";
 import type { CauseSiteTally, VerdictCell } from "./types";
@@ -20,7 +21,7 @@ export function causeSiteTally(cells: readonly VerdictCell[], siteLabel: (id: st
 
   const residuals: (number | null)[][] = sites.map(() => causes.map(() => null));
   if (sites.length === 0 || causes.length === 0) {
-    return { sites, causes, counts, residuals, statistic: null, df: 0, pValue: null, warnings: [], notes: [], summary: "No signed verdicts to compare." };
+    return { sites, causes, counts, residuals, statistic: null, df: 0, pValue: null, gStatistic: null, gPValue: null, cramersV: null, strength: null, warnings: [], notes: [], summary: "No signed verdicts to compare." };
   }
   const test = chiSquareTest(counts);
   test.adjustedResiduals.forEach((row, i) => row.forEach((r, j) => (residuals[test.rowIndices[i]][test.colIndices[j]] = r)));
@@ -32,7 +33,8 @@ export function causeSiteTally(cells: readonly VerdictCell[], siteLabel: (id: st
     residual: d.adjustedResidual,
     sentence: d.sentence,
   }));
-  return { sites, causes, counts, residuals, statistic: test.statistic, df: test.df, pValue: test.pValue, warnings: test.warnings, notes, summary: plainSummary(test.pValue, sites.length) };
+  const strength = association(test);
+  return { sites, causes, counts, residuals, statistic: test.statistic, df: test.df, pValue: test.pValue, ...strength, warnings: test.warnings, notes, summary: plainSummary(test.pValue, sites.length) };
 }
 
 /** What the p-value means for a manager, without the jargon. */
@@ -43,4 +45,11 @@ export function plainSummary(pValue: number | null, siteCount: number): string {
   if (pValue < 0.001) return "The sites' mixes of causes clearly differ (a difference this large would almost never arise by chance).";
   if (pValue < 0.05) return "The sites' mixes of causes differ more than chance alone would usually explain.";
   return "The sites' mixes of causes look alike: the differences are within what chance alone produces.";
+}
+
+/** Cramér's V in a sentence a manager can read. */
+export function strengthWords(v: number | null, strength: CauseSiteTally["strength"]): string | null {
+  if (v === null || strength === null) return null;
+  const what = { negligible: "hardly at all", weak: "weakly", moderate: "moderately", strong: "strongly" }[strength];
+  return `Site and cause go together ${what}: Cramér's V = ${v.toFixed(2)}, on a scale from 0 (the site tells nothing about the cause) to 1 (the site decides the cause).`;
 }

@@ -75,10 +75,11 @@ export function damageTable(d: Pick<TalliesData, "damage">): DataTable {
 
 export function lifeTable(l: LifeData): DataTable {
   return {
-    columns: ["Root cause", "Failures", "Suspensions", "Shape beta", "beta low", "beta high", "Scale eta", "B10", "B10 low", "B10 high", "Reading"],
+    columns: ["Root cause", "Failures", "Suspensions", "Shape beta", "beta low (Fisher 95%)", "beta high (Fisher 95%)", "Scale eta", "B10", "B10 low", "B10 high", "Reading (from the Fisher bounds)", "Longest life", "Cautions"],
     rows: l.causes.map((c) => [
       c.label, c.failures, c.suspensions, r3(c.fit?.beta), r3(c.fit?.betaBounds[0]), r3(c.fit?.betaBounds[1]),
       r3(c.fit?.eta), r3(c.fit?.b10), r3(c.fit?.b10Bounds[0]), r3(c.fit?.b10Bounds[1]), c.fit?.shapeReading ?? c.note ?? "",
+      r3(c.longestLife), c.cautions.map((x) => x.text).join(" "),
     ]),
   };
 }

@@ -64,6 +64,12 @@ export type CauseSiteTally = {
   statistic: number | null;
   df: number;
   pValue: number | null;
+  /** Likelihood-ratio G statistic on the same degrees of freedom, and its p-value. */
+  gStatistic: number | null;
+  gPValue: number | null;
+  /** Cramér's V, 0 to 1: how strongly site and cause go together. */
+  cramersV: number | null;
+  strength: "negligible" | "weak" | "moderate" | "strong" | null;
   warnings: string[];
   notes: ResidualNote[];
   summary: string;

@@ -36,6 +36,15 @@ export const sitePolicySchema = z.object({
   tapeSpreadIn: inches("The tape spread"),
 });
 
+/** Cost of one removal at the site (USD), for the money on removals teardown did not confirm; null clears it. */
+export const removalCost = z
+  .number({ message: "The cost per removal must be a number of dollars." })
+  .finite("The cost per removal must be a number of dollars.")
+  .min(0, "The cost per removal cannot be negative.")
+  .max(10_000_000, "The cost per removal must be under $10,000,000.")
+  .transform((v) => Math.round(v * 100) / 100)
+  .nullable();
+
 const siteFields = {
   code: z
     .string()
@@ -55,6 +64,7 @@ export const siteCreateSchema = z.object({
   endPlayMaxIn: sitePolicySchema.shape.endPlayMaxIn.optional(),
   dialSpreadIn: sitePolicySchema.shape.dialSpreadIn.optional(),
   tapeSpreadIn: sitePolicySchema.shape.tapeSpreadIn.optional(),
+  removalCostUsd: removalCost.optional(),
 });
 
 export const sitePatchSchema = z
@@ -69,6 +79,7 @@ export const sitePatchSchema = z
       endPlayMaxIn: sitePolicySchema.shape.endPlayMaxIn.optional(),
       dialSpreadIn: sitePolicySchema.shape.dialSpreadIn.optional(),
       tapeSpreadIn: sitePolicySchema.shape.tapeSpreadIn.optional(),
+      removalCostUsd: removalCost.optional(),
     },
     "Unknown field for a site.",
   )

@@ -42,7 +42,7 @@ export function buildCase(rng: Rng, spec: CaseSpec, ctx: SeedContext, teardownDo
   const bearing = pickBearing(rng, spec.cause, spec.removedOn, months, spec.bearing);
   const car = spec.car ?? pickCar(rng);
   const field = buildFieldReport(rng, spec, spec.status === "field");
-  const computed = summariseFieldChecks(field.fieldChecks, site.policy);
+  const computed = summariseFieldChecks(field.fieldChecks, site.policy, spec.trigger);
   const times = stageTimes(rng, spec);
   const atBench = spec.status !== "field";
   const tornDown = atBench && (spec.status !== "bench" || teardownDone || !!spec.returned);

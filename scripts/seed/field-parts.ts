@@ -50,20 +50,20 @@ export function endPlayTrials(rng: Rng, targetIn: number, style: EndPlayStyle): 
     const over = targetIn > 0.0625;
     const base = over ? Math.max(5, Math.min(7, Math.round(targetIn * 64))) : Math.max(1, Math.min(3, Math.round(targetIn * 64)));
     const trials = Array.from({ length: count }, () => ({ reading: SIXTY_FOURTHS[base + (over && rng.chance(0.25) ? 1 : 0)] }));
-    return { method: "tape", unit: "in", trials };
+    return { method: "tape", unit: "in", trials, rollersSeated: true };
   }
   if (style === "dial-mm") {
     const baseMm = targetIn * 25.4;
     const trials = Array.from({ length: count }, () => ({ zero: 0, reading: round(baseMm + rng.real(-0.015, 0.015), 2) }));
-    return { method: "dial", unit: "mm", trials };
+    return { method: "dial", unit: "mm", trials, rollersSeated: true };
   }
   // A mechanic sometimes zeroes the dial off zero and subtracts.
   const zero = rng.chance(0.25) ? round(rng.real(0.005, 0.02), 3) : 0;
   const trials = Array.from({ length: count }, () => ({ zero, reading: round(zero + targetIn + rng.real(-0.0007, 0.0007), 3) }));
-  return { method: "dial", unit: "in", trials };
+  return { method: "dial", unit: "in", trials, rollersSeated: true };
 }
 
 /** Zero end play on a bearing that will not turn by hand. */
 export function tightEndPlay(rng: Rng): EndPlay {
-  return { method: "dial", unit: "in", trials: Array.from({ length: rng.int(2, 3) }, () => ({ zero: 0, reading: 0 })), turnsByHand: false };
+  return { method: "dial", unit: "in", trials: Array.from({ length: rng.int(2, 3) }, () => ({ zero: 0, reading: 0 })), turnsByHand: false, rollersSeated: true };
 }

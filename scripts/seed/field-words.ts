@@ -10,8 +10,25 @@ type Visual = FieldChecks["visual"];
 const PLACES = ["Crane Hollow", "Tasker Bend", "Millford Siding", "Owl Creek", "Dunmore Flats", "Hessel Cut", "Barrow Point"];
 const WHEEL_DEFECTS = ["Shelled tread", "Slid flat, about 2 in", "Thin flange", "High flange", "Built-up tread", "Out of round, thumping", "Cracked rim"];
 
-function detector(rng: Rng): Detail {
-  return { detectorId: `D-${rng.int(100, 399)}`, detectorLocation: `MP ${rng.int(12, 418)}.${rng.int(0, 9)}, ${rng.pick(PLACES)}` };
+/** The invented wayside detectors of the demo line; D-217 alarms more often than the others (the demo's over-alarming detector). */
+export const DEMO_DETECTORS = [
+  { id: "D-104", location: "MP 31.2, Crane Hollow" },
+  { id: "D-158", location: "MP 96.7, Tasker Bend" },
+  { id: "D-217", location: "MP 142.5, Owl Creek" },
+  { id: "D-263", location: "MP 208.1, Hessel Cut" },
+  { id: "D-331", location: "MP 377.9, Barrow Point" },
+] as const;
+export const OVER_ALARMING_DETECTOR = "D-217";
+
+// Four draws as before, so the rest of the demo stays the same. D-217 sends in three of every four no-defect
+// alarms and few confirmed ones: on the funnel it sits below the fleet's limits.
+function detector(rng: Rng, noDefect: boolean): Detail {
+  const a = rng.int(100, 399);
+  rng.int(12, 418);
+  rng.int(0, 9);
+  rng.pick(PLACES);
+  const d = noDefect ? (a % 4 !== 0 ? DEMO_DETECTORS[2] : DEMO_DETECTORS[[0, 1, 3, 4][a % 4]]) : a % 9 === 0 ? DEMO_DETECTORS[2] : DEMO_DETECTORS[[0, 1, 3, 4][a % 4]];
+  return { detectorId: d.id, detectorLocation: d.location };
 }
 
 export function visualFor(rng: Rng, spec: CaseSpec): Visual {
@@ -48,11 +65,12 @@ export function triggerDetailFor(rng: Rng, spec: CaseSpec, seen: { felt?: string
   switch (spec.trigger) {
     case "wayside-hot": {
       const thresholdF = rng.chance(0.75) ? 170 : 200;
-      const over = spec.cause === "no-defect" ? rng.int(1, 22) : spec.cause === "lubrication" ? rng.int(30, 140) : rng.int(4, 95);
-      return { readingF: thresholdF + over, thresholdF, readingBasis: "above-ambient", ...detector(rng) };
+      // the demo's pattern: the further over the threshold, the likelier teardown confirms the alarm
+      const over = spec.cause === "no-defect" ? rng.int(1, 30) : spec.cause === "lubrication" ? rng.int(30, 140) : rng.int(6, 95);
+      return { readingF: thresholdF + over, thresholdF, readingBasis: "above-ambient", ...detector(rng, spec.cause === "no-defect") };
     }
     case "wayside-acoustic":
-      return { alarmLevel: rng.pick(["level 2", "level 2", "level 3"]), ...detector(rng) };
+      return { alarmLevel: rng.pick(["level 2", "level 2", "level 3"]), ...detector(rng, spec.cause === "no-defect") };
     case "hand-roll":
       return { felt: seen.felt ?? "roughness" };
     case "end-play-high": {

@@ -1,5 +1,5 @@
 // In Chromium: an inspector files a case on a phone, an analyst records findings and a verdict,
-// an engineer signs it, and the case list shows it signed.
+// an engineer signs it through the signature ceremony, and the case list shows it signed.
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Browser } from "playwright-core";
 import { launch, PHONE, DESK, signedInPage } from "../support/browser";
@@ -22,7 +22,7 @@ test("inspector files a removal on a phone and sees the live field call", async 
   await page.reload();
   await page.fill("#carMark", "brwx");
   await page.fill("#carNumber", car);
-  await page.click('[aria-label="Axle 3 left"]');
+  await page.click('[aria-label$="Axle 3 left"]');
   await page.selectOption("#trigger", "end-play-high");
   await page.fill("#detail-endPlayIn", "0.07");
   await page.fill("#serial", "BRW7781");
@@ -69,11 +69,32 @@ test("analyst receives, records a finding with the code picker, writes the verdi
   await page.context().close();
 });
 
-test("engineer signs, and the case list shows it signed", async () => {
+test("engineer signs through the ceremony: wrong password refused, right one signs, the report shows the hash check", async () => {
   const page = await signedInPage(browser, "engineer", DESK);
   await page.goto(`/cases/${number}`);
   await page.click("text=Sign verdict");
+  const ceremony = page.locator('[data-testid="signature-ceremony"]');
+  await ceremony.waitFor();
+  expect(await ceremony.textContent()).toContain("End of life");
+  expect(await ceremony.textContent()).toContain("What your signature means");
+  const shownHash = (await page.textContent('[data-testid="sign-hash"]'))!.trim();
+  expect(shownHash).toMatch(/^[0-9a-f]{64}$/);
+  await page.screenshot({ path: "/tmp/shots/e2e-sign-ceremony-desk.png", fullPage: true });
+  await page.check("text=I have reviewed this and sign it as my own judgement.");
+  await page.fill("#sign-password", "not-my-password-9");
+  await page.click("text=Sign this verdict");
+  await page.waitForSelector("text=That password is not right");
+  expect(await page.textContent("main")).not.toContain("This case is read-only");
+  const { DEMO_PASSWORD } = await import("../../scripts/seed/demo-people");
+  await page.fill("#sign-password", DEMO_PASSWORD);
+  await page.click("text=Sign this verdict");
   await page.waitForSelector("text=This case is read-only");
+  expect(await page.textContent('[data-testid="signature-check"]')).toContain("exactly as signed");
+  await page.goto(`/cases/${number}/report`);
+  const report = (await page.textContent("main")) ?? "";
+  expect(report.replace(/\s+/g, "")).toContain(shownHash);
+  expect(report).toContain("Matches: the verdict, findings and photos are exactly as signed.");
+  await page.goto(`/cases/${number}`);
   await page.goto(`/cases?q=${car}`);
   const row = page.locator(`text=${number}`).first();
   await row.waitFor();

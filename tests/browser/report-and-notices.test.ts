@@ -87,7 +87,7 @@ test("the outbox lists mail with its status and shows what the mail fake receive
     const page = await signedInPage(browser, "admin", viewport);
     await page.goto("/admin/outbox");
     await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Outbox");
-    await expect.poll(() => page.getByText("Received by the mail fake (development)").count()).toBe(1);
+    await expect.poll(() => page.getByText("Test mailbox: mail caught on this installation, never delivered").count()).toBe(1);
     expect(await fitsWidth(page, viewport.width), "the outbox is wider than the screen").toBe(true);
     await page.screenshot({ path: `${SHOTS}/admin-outbox-${label}.png`, fullPage: true });
     await page.context().close();

@@ -68,7 +68,9 @@ test("a chart's numbers are one click away, and it downloads as CSV and PNG", as
   const [csv] = await Promise.all([page.waitForEvent("download"), pareto.getByRole("button", { name: "CSV" }).click()]);
   expect(csv.suggestedFilename()).toMatch(/^tearline-root-causes-\d{4}-\d{2}-\d{2}\.csv$/);
   const text = readFileSync((await csv.path())!, "utf8");
-  expect(text.replace(/^\uFEFF/, "").split("\r\n")[0]).toBe("Root cause,Verdicts,Share %,Cumulative %");
+  const lines = text.replace(/^\uFEFF/, "").split("\r\n");
+  expect(lines[0]).toMatch(/^Filters: /); // the filters that made the numbers come first
+  expect(lines[1]).toBe("Root cause,Verdicts,Share %,Cumulative %");
 
   await pareto.getByRole("button", { name: "Chart" }).click();
   const [png] = await Promise.all([page.waitForEvent("download"), pareto.getByRole("button", { name: "PNG" }).click()]);

@@ -6,15 +6,18 @@ export type DemoRole = (typeof DEMO_USERS)[number]["role"];
 
 export class ApiClient {
   cookie = "";
-  constructor(public label = "anonymous") {}
+  constructor(
+    public label = "anonymous",
+    public base = APP_URL,
+  ) {}
 
   async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Response> {
     const isForm = typeof FormData !== "undefined" && body instanceof FormData;
-    const res = await fetch(`${APP_URL}${path}`, {
+    const res = await fetch(`${this.base}${path}`, {
       method,
       redirect: "manual",
       headers: {
-        origin: APP_URL,
+        origin: this.base,
         ...(this.cookie ? { cookie: this.cookie } : {}),
         ...(body !== undefined && !isForm ? { "content-type": "application/json" } : {}),
         ...headers,

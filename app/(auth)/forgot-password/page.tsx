@@ -5,6 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { emailSchema } from "@/lib/validation/account";
+import { ErrorSummary } from "@/components/ui/error-summary";
 
 export default function ForgotPasswordPage() {
   const [error, setError] = useState<string>();
@@ -32,6 +33,7 @@ export default function ForgotPasswordPage() {
         </p>
       ) : (
         <form onSubmit={onSubmit} noValidate className="mt-6 flex flex-col gap-4">
+          <ErrorSummary errors={{ email: error ?? undefined }} />
           <Field label="E-mail" htmlFor="email" error={error}>
             <Input id="email" name="email" type="email" autoComplete="username" aria-invalid={!!error} />
           </Field>

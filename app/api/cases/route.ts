@@ -7,8 +7,9 @@ import { parseJson, withRole } from "@/lib/http/handler";
 import { createFieldReport } from "@/lib/cases/service";
 
 export const POST = withRole("case:create", async ({ req, user }) => {
-  const created = await createFieldReport(await parseJson(req, z.unknown()), user);
-  return NextResponse.json({ case: created }, { status: 201 });
+  // A device that may send twice (offline outbox, double tap) names the filing with an Idempotency-Key.
+  const { row, replayed } = await createFieldReport(await parseJson(req, z.unknown()), user, req.headers.get("idempotency-key"));
+  return NextResponse.json({ case: row, replayed }, { status: replayed ? 200 : 201 });
 });
 
 // Inspectors get only their shop's cases and their own, whatever the filters say (listCases scopes).

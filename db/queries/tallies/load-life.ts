@@ -15,8 +15,8 @@ export async function loadLife(filters: TallyFilters, viewer: TallyViewer, measu
   const why = !batch ? "No fleet list uploaded yet." : siteBound ? "Fleet list not used while one site is in view: it covers the whole fleet." : null;
 
   // Every cause from the counts; only the chosen one is spread into units for its plot and ranks.
-  const causes = lifeCauses(rows).map((c) => summariseCauseCounts(c.cause, rows, fleet));
+  const causes = lifeCauses(rows).map((c) => summariseCauseCounts(c.cause, rows, fleet, 0.95, measure));
   const chosen = cause && causes.some((c) => c.cause === cause) ? cause : causes.find((c) => c.fit)?.cause;
-  const selected = chosen ? analyseCause(chosen, unitsFor(chosen, rows, fleet)) : null;
+  const selected = chosen ? analyseCause(chosen, unitsFor(chosen, rows, fleet), { unit: measure }) : null;
   return { measure, causes, selected, withoutLife, fleet: { batch, used, why } };
 }

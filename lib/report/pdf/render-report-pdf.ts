@@ -7,6 +7,7 @@ import { pdfText } from "./pdf-text";
 import { DANGER, DANGER_SOFT, FONT, INK, LINE_STRONG, MUTED, OK, OK_SOFT, PAGE, SIZE, SURFACE_2, WARN, WARN_SOFT } from "./pdf-style";
 import { PdfWriter } from "./pdf-writer";
 import { bytesWords } from "../format";
+import { SAFETY_FLAG_DEFERRAL, SAFETY_FLAG_TITLE } from "@/lib/cases/safety-flag";
 
 export type PhotoImages = Map<string, Buffer>;
 
@@ -100,6 +101,10 @@ function fieldChecks(w: PdfWriter, r: CaseReport) {
   }
   w.subheading("Before the checks");
   w.facts(f.confirmations, 4);
+  if (f.safetyFlag.length) {
+    w.gap(2);
+    w.callout(SAFETY_FLAG_TITLE, `${f.safetyFlag.map((t) => `Not confirmed: ${t}`).join(" ")} ${SAFETY_FLAG_DEFERRAL}`, { fill: WARN_SOFT, ink: WARN });
+  }
   const tone = f.call.call === "remove" ? { fill: DANGER_SOFT, ink: DANGER } : f.call.call === "keep" ? { fill: OK_SOFT, ink: OK } : { fill: WARN_SOFT, ink: WARN };
   w.gap(2);
   w.callout(`Field call: ${f.call.label}`, f.storedCallDiffers ? `The call stored with the case was "${f.storedCallDiffers}"; the checks as recorded now give the call above.` : "Recomputed from the readings above.", tone);

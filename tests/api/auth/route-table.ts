@@ -92,6 +92,8 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
   "PATCH /api/cases/[id]": { access: EDITS_A_SECTION },
   "POST /api/cases/[id]/transitions": { access: TAKES_A_STEP },
   "GET /api/cases/[id]/history": { access: EVERYONE },
+  "GET /api/cases/[id]/signature": { access: EVERYONE },
+  "POST /api/cases/[id]/signature": { access: LINKS },
   "POST /api/cases/[id]/findings": { access: TEARDOWN },
   "PATCH /api/cases/[id]/findings/[findingId]": { access: TEARDOWN },
   "DELETE /api/cases/[id]/findings/[findingId]": { access: TEARDOWN },
@@ -111,6 +113,7 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
   // Tallies and life statistics: everyone reads (inspectors their own shop's); fleet lists come from engineering.
   "GET /api/tallies": { access: EVERYONE },
   "GET /api/tallies/life": { access: EVERYONE },
+  "GET /api/tallies/yield": { access: EVERYONE },
   "GET /api/fleet": { access: EVERYONE },
   "POST /api/fleet": { access: FLEET },
 };
@@ -208,8 +211,12 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
       unreadable("no section named", ["case:edit-field", "case:edit-teardown", "case:propose"]),
     ],
   },
-  "POST /api/cases/[id]/transitions": { gate: "case:read", reach: "case", probes: [...ACTIONS.map(stepProbe), unreadable("no step named", ACTIONS.map((a) => WORKFLOW[a].permission))] },
+  "POST /api/cases/[id]/transitions": { gate: "case:read", reach: "case", // Signing is its own route (POST /api/cases/[id]/signature); here it is refused as a step.
+    probes: [...ACTIONS.filter((a) => a !== "sign").map(stepProbe), unreadable("no step named", ACTIONS.map((a) => WORKFLOW[a].permission))] },
   "GET /api/cases/[id]/history": { gate: "case:read", reach: "case" },
+  "GET /api/cases/[id]/signature": { gate: "case:read", reach: "case" },
+  // A stale version is refused before the password is checked, so a permitted probe signs nothing.
+  "POST /api/cases/[id]/signature": { gate: "case:sign", reach: "case", probes: [{ body: () => ({ version: STALE, password: "matrix probe", contentHash: "0".repeat(64), meaningAccepted: true }), stageAllows: (stage) => stage === "signoff" }] },
   "POST /api/cases/[id]/findings": { gate: "case:edit-teardown", reach: "case", probes: [{ body: () => ({ version: STALE, finding: { component: "cup", damageCode: "fatigue.subsurface", severity: 3 } }), stageAllows: teardownOpen }] },
   "PATCH /api/cases/[id]/findings/[findingId]": { gate: "case:edit-teardown", reach: "case", probes: [{ body: () => ({ version: STALE, finding: {} }), stageAllows: teardownOpen }] },
   "DELETE /api/cases/[id]/findings/[findingId]": { gate: "case:edit-teardown", reach: "case", probes: [{ query: () => `?version=${STALE}`, stageAllows: teardownOpen }] },
@@ -230,6 +237,7 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
 
   "GET /api/tallies": { gate: "tallies:read", reach: "none" },
   "GET /api/tallies/life": { gate: "tallies:read", reach: "none" },
+  "GET /api/tallies/yield": { gate: "tallies:read", reach: "none" },
   "GET /api/fleet": { gate: "tallies:read", reach: "none" },
   "POST /api/fleet": { gate: "fleet:upload", reach: "none" },
 };
@@ -246,6 +254,7 @@ export const PAGE_RULES: Record<string, { gate: Gate | "anonymous-only"; reach: 
   "/photos/compare": { gate: "case:read", reach: "none" },
   "/tallies": { gate: "tallies:read", reach: "none" },
   "/tallies/life": { gate: "tallies:read", reach: "none" },
+  "/tallies/yield": { gate: "tallies:read", reach: "none" },
   "/reference": { gate: "signed-in", reach: "none" },
   "/profile": { gate: "signed-in", reach: "none" },
   "/admin/users": { gate: "admin:users", reach: "none" },

@@ -1,6 +1,7 @@
 // A signed verdict needs a second person: whoever proposed it (an admin may do both steps) cannot sign.
 import { describe, expect, test } from "vitest";
 import { as } from "../../support/api";
+import { signVerdict } from "../../support/sign";
 import { fieldReport } from "./fixtures";
 
 type CaseBody = { case: { id: string; version: number; status: string } };
@@ -23,12 +24,12 @@ describe("separation of duties at sign-off", () => {
     await step({ section: "verdict", data: { primaryCause: "end-of-life", contributingCauses: [], confidence: "probable", removalConfirmed: "confirmed", correctiveAction: "None." } });
     await step({ action: "propose" });
 
-    const own = await admin.json<{ error: string }>("POST", `/api/cases/${id}/transitions`, { version, action: "sign" });
+    const own = await signVerdict(admin, id, { version });
     expect(own.status).toBe(403);
     expect(own.body.error).toMatch(/another engineer or an admin must sign/);
 
     const engineer = await as("engineer");
-    const signed = await engineer.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version, action: "sign" });
+    const signed = await signVerdict<CaseBody>(engineer, id, { version });
     expect(signed.status).toBe(200);
     expect(signed.body.case.status).toBe("signed");
   });

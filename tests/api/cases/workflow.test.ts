@@ -5,6 +5,7 @@ import { describe, expect, test } from "vitest";
 import { ApiClient, as, demoUser } from "../../support/api";
 import { db, t } from "../../support/db";
 import { waitForMail } from "../../support/mail";
+import { signVerdict } from "../../support/sign";
 import { fieldReport } from "./fixtures";
 
 type CaseBody = { case: { id: string; number: string; version: number; status: string; fieldCall: string; endPlayMeanIn: number; serviceMonths: number } };
@@ -70,7 +71,11 @@ describe("case life", () => {
 
   test("only engineers sign; a return needs a reason and e-mails the analyst and the inspector", async () => {
     const analyst = await as("analyst");
-    expect((await analyst.json("POST", `/api/cases/${id}/transitions`, { version, action: "sign" })).status).toBe(403);
+    expect((await signVerdict(analyst, id)).status).toBe(403);
+    // never on one click: the plain step is refused and points to the signature step
+    const oneClick = await (await as("engineer")).json<{ error: string }>("POST", `/api/cases/${id}/transitions`, { version, action: "sign" });
+    expect(oneClick.status).toBe(400);
+    expect(oneClick.body.error).toMatch(/asks for your password/);
     const engineer = await as("engineer");
     const noReason = await engineer.json("POST", `/api/cases/${id}/transitions`, { version, action: "return" });
     expect(noReason.status).toBe(400);
@@ -87,7 +92,7 @@ describe("case life", () => {
     const p = await analyst.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version, action: "propose" });
     version = p.body.case.version;
     const engineer = await as("engineer");
-    const s = await engineer.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version, action: "sign" });
+    const s = await signVerdict<CaseBody>(engineer, id, { version });
     expect(s.status).toBe(200);
     expect(s.body.case.status).toBe("signed");
     version = s.body.case.version;

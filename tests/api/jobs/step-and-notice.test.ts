@@ -5,6 +5,7 @@ import { as } from "../../support/api";
 import { db, t } from "../../support/db";
 import { waitForMail } from "../../support/mail";
 import { caseAwaitingSignoff } from "../cases/fixtures";
+import { signVerdict } from "../../support/sign";
 
 const dropRefusal = () => db.execute(sql`drop trigger if exists test_refuse_mail on mail_outbox; drop function if exists test_refuse_mail()`);
 afterAll(dropRefusal);
@@ -17,7 +18,7 @@ describe("transactional outbox", () => {
     await db.execute(sql`create function test_refuse_mail() returns trigger language plpgsql as $$ begin raise exception 'outbox refused for the test'; end $$`);
     await db.execute(sql`create trigger test_refuse_mail before insert on mail_outbox for each row execute function test_refuse_mail()`);
 
-    const refused = await engineer.json<{ error: string }>("POST", `/api/cases/${c.id}/transitions`, { version: c.version, action: "sign" });
+    const refused = await signVerdict<{ error: string }>(engineer, c.id, { version: c.version });
     expect(refused.status).toBe(500);
     expect(refused.body.error).toMatch(/nothing was changed/);
     const [still] = await db.select().from(t.cases).where(eq(t.cases.id, c.id));
@@ -26,7 +27,7 @@ describe("transactional outbox", () => {
     expect(await db.select().from(t.caseEvents).where(and(eq(t.caseEvents.caseId, c.id), eq(t.caseEvents.action, "sign")))).toHaveLength(0);
 
     await dropRefusal();
-    const signed = await engineer.json<{ case: { status: string } }>("POST", `/api/cases/${c.id}/transitions`, { version: c.version, action: "sign" });
+    const signed = await signVerdict<{ case: { status: string } }>(engineer, c.id, { version: c.version });
     expect(signed.status).toBe(200);
     // The outbox row is there the moment the answer is: it was committed with the step.
     const rows = await db.select().from(t.mailOutbox).where(and(eq(t.mailOutbox.kind, "verdict-signed"), sql`${t.mailOutbox.subject} like ${`%${c.number}%`}`));

@@ -8,6 +8,7 @@ import { db, t } from "../../support/db";
 import { siteId } from "../../support/factories";
 import { smallPng } from "../../support/photo-files";
 import { caseAwaitingSignoff, fieldReport } from "../cases/fixtures";
+import { signVerdict } from "../../support/sign";
 
 type CaseBody = { case: { id: string; number: string; version: number; status: string; siteId: string | null }; error?: string; details?: { fields?: Record<string, string> } };
 type Answer = { error?: string; case?: CaseBody["case"]; photo?: { id: string } };
@@ -37,9 +38,9 @@ describe("evidence freeze", () => {
     expect(await versionOf(c.id)).toBe(c.version + 1);
     expect(await events(c.id, "photo-added")).toHaveLength(1);
 
-    const stale = await engineer.json<Answer>("POST", `/api/cases/${c.id}/transitions`, { version: c.version, action: "sign" });
+    const stale = await signVerdict<Answer>(engineer, c.id, { version: c.version });
     expect(stale.status).toBe(409);
-    const fresh = await engineer.json<Answer>("POST", `/api/cases/${c.id}/transitions`, { version: c.version + 1, action: "sign" });
+    const fresh = await signVerdict<Answer>(engineer, c.id, { version: c.version + 1 });
     expect(fresh.status).toBe(200);
     expect(fresh.body.case?.status).toBe("signed");
   });
@@ -70,7 +71,7 @@ describe("evidence freeze", () => {
     expect(linked.status).toBe(201);
     expect([await versionOf(a.id), await versionOf(b.id)]).toEqual([a.version + 1, b.version + 1]);
 
-    const signed = await engineer.json<Answer>("POST", `/api/cases/${b.id}/transitions`, { version: b.version + 1, action: "sign" });
+    const signed = await signVerdict<Answer>(engineer, b.id, { version: b.version + 1 });
     expect(signed.status).toBe(200);
     const c = await caseAwaitingSignoff(inspector, analyst);
     const toSigned = await engineer.json<Answer>("POST", `/api/cases/${c.id}/links`, { relatedId: b.number, note: "Same lot" });

@@ -107,6 +107,7 @@ const JSON_ROUTES: Array<[string, string, () => string, string[], "admin" | "ins
   ["file a removal", "POST", () => "/api/cases", ["trigger", "siteId", "removedOn", "serial", "bearingClass", "carMark", "carNumber", "axle", "side", "fieldChecks", "mountedOn"], "inspector"],
   ["save a section", "PATCH", () => `/api/cases/${ids.caseId}`, ["version", "section", "data"], "admin"],
   ["take a step", "POST", () => `/api/cases/${ids.caseId}/transitions`, ["version", "action", "reason", "labSiteId"], "admin"],
+  ["sign a verdict", "POST", () => `/api/cases/${ids.caseId}/signature`, ["version", "password", "contentHash", "meaningAccepted"], "admin"],
   ["add a finding", "POST", () => `/api/cases/${ids.caseId}/findings`, ["version", "finding"], "admin"],
   ["change a finding", "PATCH", () => `/api/cases/${ids.caseId}/findings/${ids.findingId}`, ["version", "finding"], "admin"],
   ["link a case", "POST", () => `/api/cases/${ids.caseId}/links`, ["relatedId", "note"], "admin"],

@@ -106,7 +106,7 @@ describe("demo cases obey the app's rules", () => {
     const policies = await rows<{ id: string; max: number; dial: number; tape: number }>(sql`select id, end_play_max_in::float as max, dial_spread_in::float as dial, tape_spread_in::float as tape from sites`);
     for (const c of demo) {
       const p = policies.find((s) => s.id === c.site_id)!;
-      const again = summariseFieldChecks(fieldChecksSchema.parse(c.field_checks), { maxIn: p.max, dialSpreadIn: p.dial, tapeSpreadIn: p.tape });
+      const again = summariseFieldChecks(fieldChecksSchema.parse(c.field_checks), { maxIn: p.max, dialSpreadIn: p.dial, tapeSpreadIn: p.tape }, c.trigger as string);
       expect(c.field_call, String(c.number)).toBe(again.fieldCall);
       expect(c.end_play_mean_in === null ? null : Number(c.end_play_mean_in)).toBe(again.endPlayMeanIn);
     }

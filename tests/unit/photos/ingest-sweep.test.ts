@@ -30,6 +30,7 @@ class MemoryRows implements PhotoRowStore<NewPhotoRow & { id: number }> {
     return this.rows.find((r) => r.caseId === caseId && r.sha256 === sha) ?? null;
   }
   async exclusive<T>(_c: string, _s: string, fn: Parameters<PhotoRowStore<NewPhotoRow & { id: number }>["exclusive"]>[2]) {
+    this.events.push("lock");
     return fn({
       findByHash: async (caseId, sha) => this.findByHash(caseId, sha),
       insert: async (values) => {
@@ -76,6 +77,26 @@ describe("ingestPhoto", () => {
     await expect(ingestPhoto(await input(4), { store: bucket, rows })).rejects.toThrow(/store refused/);
     expect(bucket.objects.size).toBe(0);
     expect(rows.events).toEqual([]);
+  });
+
+  it("stores every object before it opens the row transaction", async () => {
+    const bucket = new MemoryBucket();
+    const rows = new MemoryRows();
+    const spy: PhotoObjectStore = { put: async (k, b) => (rows.events.push(`put ${k.split("/").pop()}`), bucket.put(k, b)), remove: (k) => bucket.remove(k) };
+    await ingestPhoto(await input(6), { store: spy, rows });
+    expect(rows.events.slice(0, 1)).toEqual(["put original"]);
+    expect(rows.events.slice(3)).toEqual(["lock", "insert"]);
+  });
+
+  it("keeps the objects when the same file's row is already there", async () => {
+    const bucket = new MemoryBucket();
+    const rows = new MemoryRows();
+    const first = await ingestPhoto(await input(7), { store: bucket, rows });
+    rows.failInsert = true;
+    // A second upload that lost the race: it finds the row under the lock and leaves the shared objects.
+    const again = await ingestPhoto(await input(7), { store: bucket, rows: { ...rows, findByHash: async () => null, exclusive: rows.exclusive.bind(rows) } });
+    expect(again).toEqual({ photo: first.photo, duplicate: true });
+    expect(bucket.objects.size).toBe(3);
   });
 
   it("removes the stored objects when the row cannot be written", async () => {

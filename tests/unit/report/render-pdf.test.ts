@@ -35,4 +35,15 @@ describe.skipIf(!hasPoppler())("case report PDF", () => {
     for (const m of marks) expect(m).toBe("DRAFT—NOTSIGNED");
     expect(pages.join("\n")).not.toContain("Signed revision");
   });
+
+  it("prints the safety flag beside the confirmations left unticked, and none when all were ticked", async () => {
+    const src = demoReportSource();
+    const unticked = { ...src, case: { ...src.case, fieldChecks: { ...src.case.fieldChecks, confirmations: { ppe: true, blueSignal: true } } } };
+    const flagged = pdfPages(await renderReportPdf(buildCaseReport(unticked))).join("\n").replace(/\s+/g, " ");
+    expect(flagged).toContain("Safety flag: confirmations left unticked at filing");
+    expect(flagged).toContain("Not confirmed: wheelset is out from under the car and secured against rolling");
+    expect(flagged).not.toContain("Not confirmed: blue-signal");
+    const clean = pdfPages(await renderReportPdf(buildCaseReport(src))).join("\n");
+    expect(clean).not.toContain("Safety flag");
+  });
 });

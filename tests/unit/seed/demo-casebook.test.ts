@@ -53,7 +53,7 @@ describe("built demo cases", () => {
     for (const { c } of built) {
       const parsed = fieldChecksSchema.safeParse(c.values.fieldChecks);
       expect(parsed.success, c.values.trigger).toBe(true);
-      const again = summariseFieldChecks(parsed.data!, policy);
+      const again = summariseFieldChecks(parsed.data!, policy, c.values.trigger);
       expect(c.values.fieldCall).toBe(again.fieldCall);
       expect(c.values.endPlayMeanIn).toBe(again.endPlayMeanIn);
     }

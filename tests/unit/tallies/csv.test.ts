@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { downloadName, parseCsv, toCsv } from "@/lib/tallies/csv";
+import { chartCsv, downloadName, filtersLine, parseCsv, toCsv } from "@/lib/tallies/csv";
 
 describe("CSV", () => {
   it("quotes fields with commas, quotes and line breaks, and ends rows with CRLF (RFC 4180 section 2)", () => {
@@ -27,5 +27,11 @@ describe("CSV", () => {
 
   it("names downloads after the chart", () => {
     expect(downloadName("Cause Pareto (signed)", "csv", "2026-03-31")).toBe("tearline-cause-pareto-signed-2026-03-31.csv");
+  });
+
+  it("states the filters that made a chart's numbers on its first line", () => {
+    expect(filtersLine("?site=MJC&from=2026-01-01&cause=seal")).toBe("Filters: site MJC; from 2026-01-01");
+    expect(filtersLine("")).toBe("Filters: none (every case you may see)");
+    expect(chartCsv("?class=F", ["a"], [[1]])).toBe("Filters: class F\r\na\r\n1\r\n");
   });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { analyseCause, lifeCauses, summariseCause, unitsFor, type LifeCountRow } from "@/lib/tallies/life";
+import { cautionTags, lifeFigure } from "@/lib/tallies/life-cautions";
 import { checkValues, expectAbs } from "../stats/check-values";
 
 // NIST/SEMATECH e-Handbook 8.4.1.3: 10 failures and 10 units still running at 500 hours (fixture).
@@ -66,5 +67,49 @@ describe("life analysis per root cause", () => {
     const s = summariseCause("seal", unitsFor("seal", [{ cause: "seal", time: 40, count: 1 }], []));
     expect(s.fit).toBeNull();
     expect(s.note).toMatch(/At least two failures/);
+  });
+
+  it("reads the shape from one bound everywhere, even where the two kinds of bounds disagree", () => {
+    // 6 failures among 12 units (invented): 95% Fisher bounds on beta 1.0008 - 4.05 leave out 1,
+    // likelihood-ratio bounds 0.89 - 3.73 hold it (both from this code; checked against fixtures elsewhere)
+    const fails = [54, 20, 27, 47, 47, 8];
+    const susp = [46, 33, 60, 53, 12, 36];
+    const units = [...fails.map((time) => ({ time, failed: true })), ...susp.map((time) => ({ time, failed: false }))];
+    const quick = summariseCause("seal", units);
+    const full = analyseCause("seal", units);
+    expect(full.likelihoodRatio!.beta[0]).toBeLessThan(1);
+    expect(quick.fit!.betaBounds[0]).toBeGreaterThan(1);
+    expect(quick.fit!.shapeReading).toBe("wear-out");
+    expect(full.fit!.shapeReading).toBe(quick.fit!.shapeReading);
+    expect(full.shapeExplanation).toMatch(/above 1/);
+    expect(full.shapeExplanation).toMatch(/Read from the 95% Fisher bounds on the shape \(1\.00 – 4\.05\)/);
+  });
+
+  it("cautions a four-failure fit that extrapolates far past the longest life", () => {
+    // 4 early failures and 400 units running 60 to 118.5 months (invented): eta and B10 land far past them
+    const units = [
+      ...[3, 9, 20, 41].map((time) => ({ time, failed: true })),
+      ...Array.from({ length: 400 }, (_, i) => ({ time: 60 + (i % 40) * 1.5, failed: false })),
+    ];
+    const s = summariseCause("mounting", units, 0.95, "months");
+    expect(s.fit!.eta).toBeGreaterThan(10 * s.longestLife);
+    expect(s.longestLife).toBe(118.5);
+    const kinds = s.cautions.map((c) => c.kind);
+    expect(kinds).toEqual(["few-failures", "heavy-censoring", "eta-beyond-data", "b10-beyond-data"]);
+    expect(s.cautions[0].text).toMatch(/^Only 4 failures: /);
+    // 400 of 404 suspended = 99% (arithmetic)
+    expect(s.cautions[1].text).toMatch(/^400 of 404 units \(99%\) are suspensions/);
+    expect(s.cautions[2].text).toMatch(/the longest life observed \(119 months\)/);
+    expect(cautionTags(s.cautions)).toBe("few failures · heavily censored · beyond the data");
+    // no bare far-off figure: words instead of the number past 10 x the longest life
+    expect(lifeFigure(s.fit!.eta, s.longestLife, (v) => v.toFixed(0))).toBe("over 1185");
+    expect(lifeFigure(100, s.longestLife, (v) => v.toFixed(0))).toBe("100");
+  });
+
+  it("gives no caution to a well-supported fit", () => {
+    // NIST 8.4.1.3: 10 failures, 10 suspensions, eta 606.5 beyond the 500-hour test end but B10 164 inside it
+    const s = summariseCause("water-ingress", unitsFor("water-ingress", rows, fleet));
+    expect(s.cautions.map((c) => c.kind)).toEqual(["eta-beyond-data"]);
+    expect(s.cautions[0].text).toMatch(/1\.2 times the longest life observed \(500 months\)/);
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { causeSiteTally, plainSummary } from "@/lib/tallies/shape-cause-site";
+import { causeSiteTally, plainSummary, strengthWords } from "@/lib/tallies/shape-cause-site";
 import type { VerdictCell } from "@/lib/tallies/types";
 import { checkValues, expectRel } from "../stats/check-values";
 
@@ -17,6 +17,13 @@ describe("cause x site test of independence", () => {
     expectRel(t.pValue!, ref.pearson.p_value, ref.rel_tol);
     expect(t.df).toBe(1);
     expect(t.notes).toEqual([]);
+    // computed: scipy 1.17.1 chi2_contingency(lambda_='log-likelihood') and association(method='cramer') (fixture)
+    expectRel(t.gStatistic!, ref.likelihood_ratio_G.statistic, ref.rel_tol);
+    expectRel(t.gPValue!, ref.likelihood_ratio_G.p_value, ref.rel_tol);
+    expectRel(t.cramersV!, ref.cramers_v.value, ref.rel_tol);
+    expect(strengthWords(t.cramersV, t.strength)).toBe(
+      "Site and cause go together weakly: Cramér's V = 0.10, on a scale from 0 (the site tells nothing about the cause) to 1 (the site decides the cause).",
+    );
   });
 
   it("describes the cells that stand out in words", () => {
@@ -35,6 +42,8 @@ describe("cause x site test of independence", () => {
   it("says plainly when there is nothing to compare", () => {
     const t = causeSiteTally([c("east", "seal", 3)], label);
     expect(t.statistic).toBeNull();
+    expect(t.cramersV).toBeNull();
+    expect(strengthWords(t.cramersV, t.strength)).toBeNull();
     expect(t.summary).toMatch(/Only one site/);
     expect(causeSiteTally([], label).summary).toBe("No signed verdicts to compare.");
     expect(plainSummary(0.2, 3)).toMatch(/look alike/);

@@ -16,9 +16,14 @@ import { requirePageUser } from "@/lib/auth/session";
 import { ACTIONS, WORKFLOW, canEditSection, verdictProblems } from "@/lib/cases/workflow";
 import { can } from "@/lib/auth/permissions";
 import { DEFAULT_END_PLAY_POLICY } from "@/lib/field";
+import { loadReadableCase } from "@/lib/cases/service";
+import { checkSignature } from "@/lib/cases/signature-service";
 import { CaseHeader } from "./_components/case-header";
+import { SignatureCheckLine } from "./_components/signature-check";
 import { CaseExtras } from "./_components/case-extras";
 import { toDraft } from "./_components/to-draft";
+import { SafetyFlagNote } from "./_components/safety-flag-note";
+import { safetyFlagOf } from "@/lib/cases/safety-flag";
 
 export const dynamic = "force-dynamic";
 
@@ -39,13 +44,16 @@ export default async function CasePage({ params, searchParams }: { params: Promi
   const actions = ACTIONS.filter((a) => WORKFLOW[a].from.includes(c.status) && can(user.role, WORKFLOW[a].permission));
   const problems = verdictProblems({ primaryCause: c.primaryCause, confidence: c.confidence, removalConfirmed: c.removalConfirmed, findingCount: c.findings.length });
   const editing = (await searchParams).edit === "field" && editField;
+  const signature = c.status === "signed" ? await checkSignature(await loadReadableCase(c.id, user)) : null;
   const codes = damage.map((d) => ({ code: d.code, label: d.label, description: d.description, synonyms: d.synonyms, retired: d.retiredAt !== null, family: d.family }));
 
   return (
     <div className="mx-auto max-w-5xl">
       <CaseHeader c={c} />
+      {signature ? <div className="-mt-2 mb-5"><SignatureCheckLine check={signature} /></div> : null}
       {actions.length ? (
         <Card className="mb-5" title="Next step">
+          {actions.includes("sign") ? <div className="mb-3"><SafetyFlagNote flag={safetyFlagOf(c.fieldChecks, c.trigger)} signing /></div> : null}
           <WorkflowBar caseId={c.id} version={c.version} actions={actions} verdictProblems={problems} />
         </Card>
       ) : null}

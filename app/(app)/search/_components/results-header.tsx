@@ -1,4 +1,5 @@
-// How many cases matched, how the query was read (corrections, shop words), and the sort.
+// How many cases matched, how the query was read (part, row, damage…; corrections, shop words),
+// and the sort. Each part of the reading can be dropped with one click.
 import Link from "next/link";
 import type { SearchResult } from "@/db/queries/search";
 import { SORTS, type SearchParams, type SearchSort } from "@/lib/search/query-schema";
@@ -34,6 +35,7 @@ export function ResultsHeader({ params, result }: { params: SearchParams; result
           })}
         </nav>
       </div>
+      <ReadAs params={params} result={result} />
       {corrections.length || shopWords.length ? (
         <p className="text-sm text-muted" data-testid="understood">
           {corrections.map((u) => (
@@ -44,6 +46,31 @@ export function ResultsHeader({ params, result }: { params: SearchParams; result
           ))}
         </p>
       ) : null}
+    </div>
+  );
+}
+
+const STRUCTURED = new Set(["part", "row", "zone", "damage", "trigger", "class"]);
+
+/** "Read as: cup · outboard row · subsurface spall", each with a link that drops it. */
+function ReadAs({ params, result }: { params: SearchParams; result: SearchResult }) {
+  const parts = result.understood;
+  if (!parts.some((u) => STRUCTURED.has(u.role))) return null;
+  return (
+    <div className="flex flex-wrap items-center gap-1.5 text-sm" data-testid="read-as">
+      <span className="text-muted">Read as</span>
+      {parts.map((u, i) => (
+        <span key={`${u.text}-${i}`} className="inline-flex items-center gap-1">
+          {i > 0 ? <span aria-hidden className="text-muted">·</span> : null}
+          <span className={`inline-flex items-center gap-1 rounded-full py-0.5 pl-2.5 pr-1 ring-1 ${STRUCTURED.has(u.role) ? "bg-accent-soft text-ink ring-accent/30" : "bg-surface-2 text-ink-2 ring-line"}`}>
+            {u.reading}
+            <Link href={searchHref(withChange(params, { q: u.without }))} scroll={false} aria-label={`Search without “${u.reading}”`}
+              className="inline-flex h-6 w-6 items-center justify-center rounded-full text-muted hover:bg-surface hover:text-ink">
+              <span aria-hidden>×</span>
+            </Link>
+          </span>
+        </span>
+      ))}
     </div>
   );
 }

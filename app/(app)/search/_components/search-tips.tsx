@@ -4,7 +4,7 @@ import type { SearchParams } from "@/lib/search/query-schema";
 import { activeFilterCount, clearFilters, searchHref } from "@/lib/search/url-state";
 
 const EXAMPLES = [
-  { q: "spalling cup", why: "damage on a part" },
+  { q: "spall cup outboard row", why: "damage on a part and row" },
   { q: "rust", why: "shop words find water etch" },
   { q: "milky grease", why: "grease condition" },
   { q: "arc burn welding", why: "electrical damage" },

@@ -1,6 +1,9 @@
 // Cause x site counts with the cells that stand out shaded: warm where a site has more of a cause
 // than its share of verdicts would suggest, cool where it has fewer.
+import { strengthWords } from "@/lib/tallies/shape-cause-site";
 import type { CauseSiteTally } from "@/lib/tallies/types";
+
+const pWords = (p: number) => (p < 0.001 ? "p < 0.001" : `p = ${p.toFixed(3)}`);
 
 function shade(r: number | null): string {
   if (r === null || Math.abs(r) <= 2) return "";
@@ -55,12 +58,14 @@ export function CauseSiteTable({ tally }: { tally: CauseSiteTally }) {
 export function CauseSiteFindings({ tally }: { tally: CauseSiteTally }) {
   const significant = tally.pValue !== null && tally.pValue < 0.05;
   const notes = tally.notes.slice(0, 6);
+  const strength = strengthWords(tally.cramersV, tally.strength);
   return (
     <div className="space-y-2">
       <p className="font-medium text-ink">{tally.summary}</p>
+      {strength ? <p data-cause-site-strength>{strength}</p> : null}
       {tally.statistic !== null ? (
-        <p className="text-xs text-muted tabular">
-          Pearson chi-square {tally.statistic.toFixed(1)} on {tally.df} degrees of freedom, p {tally.pValue! < 0.001 ? "< 0.001" : `= ${tally.pValue!.toFixed(3)}`}.
+        <p className="text-xs text-muted tabular" data-cause-site-tests>
+          {`Pearson chi-square ${tally.statistic.toFixed(1)}, ${pWords(tally.pValue!)}; likelihood-ratio G ${tally.gStatistic!.toFixed(1)}, ${pWords(tally.gPValue!)}; both on ${tally.df} degrees of freedom.`}
         </p>
       ) : null}
       {notes.length ? (

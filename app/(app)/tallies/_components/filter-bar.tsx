@@ -44,8 +44,8 @@ export function FilterBar({ filters, sites, classes, triggers, siteLimit, curren
   function go(change: Partial<TallyFilters>) {
     const next = { ...filters, ...change };
     const q = new URLSearchParams(filtersToQuery(next));
-    // keep page-specific settings (life measure, chosen cause)
-    for (const key of ["measure", "cause"]) {
+    // keep page-specific settings (life measure, chosen cause, missed-call window)
+    for (const key of ["measure", "cause", "miss"]) {
       const v = params.get(key);
       if (v) q.set(key, v);
     }

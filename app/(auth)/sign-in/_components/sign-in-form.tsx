@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { signInSchema } from "@/lib/validation/account";
+import { ErrorSummary } from "@/components/ui/error-summary";
 
 export function SignInForm() {
   const router = useRouter();
@@ -45,6 +46,7 @@ export function SignInForm() {
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Sign in">
+      <ErrorSummary errors={{ email: errors.email, password: errors.password }} />
       {errors.form ? (
         <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm text-danger">
           {errors.form}

@@ -8,6 +8,7 @@ import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import type { CodeListName } from "@/db/schema/code-lists";
 import { DAMAGE_FAMILIES } from "@/lib/classification/damage-families";
 import { CODE_LIST_LABELS, codeCreateSchema, parseSynonyms } from "@/lib/validation/code-entry";
+import { ErrorSummary } from "@/components/ui/error-summary";
 
 /** Adds a code to one list. Damage codes are built from a family and a short name. */
 export function AddCodeForm({ list, onDone }: { list: CodeListName; onDone: () => void }) {
@@ -57,6 +58,7 @@ export function AddCodeForm({ list, onDone }: { list: CodeListName; onDone: () =
   const f = (n: string) => `${id}-${n}`;
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label={`Add a ${CODE_LIST_LABELS[list].one}`}>
+      <ErrorSummary errors={errors} idPrefix={`${id}-`} />
       <div className={`grid gap-4 ${damage ? "sm:grid-cols-[12rem_1fr]" : ""}`}>
         {damage ? (
           <Field label="Family" htmlFor={f("family")}>

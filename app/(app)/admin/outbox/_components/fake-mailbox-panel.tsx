@@ -6,14 +6,14 @@ import { when } from "./when";
 /** What the local mail fake accepted, newest first, each opening to the message as it would look. */
 export function FakeMailboxPanel({ result, now }: { result: { messages: FakeMessage[]; refusing: boolean } | { error: string }; now: number }) {
   return (
-    <Card title="Received by the mail fake (development)" action={"refusing" in result && result.refusing ? <Badge tone="warn">Refusing mail (test mode)</Badge> : null}>
+    <Card title="Test mailbox: mail caught on this installation, never delivered" action={"refusing" in result && result.refusing ? <Badge tone="warn">Refusing mail (test mode)</Badge> : null}>
       <p className="mb-3 text-sm text-muted">
         In development and tests, mail goes to a local stand-in for an SMTP server instead of real inboxes. These are the latest messages it accepted.
       </p>
       {"error" in result ? (
         <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm text-danger">Cannot show them: {result.error}.</p>
       ) : result.messages.length === 0 ? (
-        <EmptyState title="The mail fake has received nothing yet." />
+        <EmptyState title="The test mailbox has caught no mail yet." />
       ) : (
         <ul className="divide-y divide-line rounded-lg border border-line" data-testid="fake-mailbox">
           {result.messages.map((m) => (

@@ -75,7 +75,8 @@ export function SiteCard({ site }: { site: SiteView }) {
             </dl>
             <div className="flex flex-wrap items-center justify-between gap-2 text-xs text-muted">
               <span>
-                {ownLimit ? <Badge tone="warn">Own limit</Badge> : <span>Common limit</span>} · {plural(site.usage.cases, "case", "cases")} · {plural(site.usage.users, "person", "people")}
+                {ownLimit ? <Badge tone="warn">Own limit</Badge> : <span>Common limit</span>} · {plural(site.usage.cases, "case", "cases")} · {plural(site.usage.users, "person", "people")} ·{" "}
+                <span data-testid={`cost-${site.code}`}>{site.removalCostUsd === null ? "no cost per removal set" : `$${site.removalCostUsd.toLocaleString("en-US")} per removal`}</span>
               </span>
               {inUse ? (
                 <span>In use: can be made inactive, not deleted.</span>

@@ -10,6 +10,13 @@ import { DEFAULT_END_PLAY_POLICY } from "@/lib/field/end-play-policy";
 import { SITE_KIND_LABELS, SITE_KINDS, siteCreateSchema, sitePatchSchema } from "@/lib/validation/site";
 import { PolicyFields, policyTexts, readPolicy } from "./policy-fields";
 import type { SiteView } from "./types";
+import { ErrorSummary } from "@/components/ui/error-summary";
+
+/** Blank clears the cost; anything else is read as dollars (a wrong text fails the schema with its message). */
+function readCost(text: string): number | null {
+  const t = text.replace(/[$,\s]/g, "");
+  return t === "" ? null : Number(t);
+}
 
 const DEFAULTS = { endPlayMaxIn: DEFAULT_END_PLAY_POLICY.maxIn, dialSpreadIn: DEFAULT_END_PLAY_POLICY.dialSpreadIn, tapeSpreadIn: DEFAULT_END_PLAY_POLICY.tapeSpreadIn };
 
@@ -41,6 +48,7 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
       location: String(data.get("location") ?? ""),
       active: site ? data.get("active") === "on" : true,
       ...policy.values,
+      removalCostUsd: readCost(String(data.get("removalCostUsd") ?? "")),
     };
     const checked = (site ? sitePatchSchema : siteCreateSchema).safeParse(input);
     const local: Record<string, string> = { ...policy.errors };
@@ -66,6 +74,7 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
   const f = (name: string) => `${id}-${name}`;
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label={site ? `Edit ${site.code}` : "Add a site"}>
+      <ErrorSummary errors={errors} idPrefix={`${id}-`} />
       <div className="grid gap-4 sm:grid-cols-[8rem_1fr]">
         <Field label="Code" htmlFor={f("code")} error={errors.code}>
           <Input id={f("code")} name="code" defaultValue={site?.code} aria-invalid={!!errors.code} className="uppercase" placeholder="e.g. RSC" />
@@ -89,6 +98,12 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
           <Input id={f("location")} name="location" defaultValue={site?.location} aria-invalid={!!errors.location} placeholder="Town or yard" />
         </Field>
       </div>
+      <Field label="Cost of one removal (USD) — optional" htmlFor={f("cost")} error={errors.removalCostUsd} hint="Wheelset change, car out of service and lab time. Tallies use it to price removals that teardown did not confirm.">
+        <div className="relative w-44">
+          <span className="pointer-events-none absolute inset-y-0 left-3 flex items-center text-sm text-muted">$</span>
+          <Input id={f("cost")} name="removalCostUsd" inputMode="decimal" defaultValue={site?.removalCostUsd ?? ""} aria-invalid={!!errors.removalCostUsd} className="pl-7 tabular" placeholder="not set" />
+        </div>
+      </Field>
       <div className="rounded-lg border border-line bg-surface-2 p-4">
         <PolicyFields texts={texts} unit={unit} errors={errors} onChange={setTexts} onUnit={switchUnit} />
       </div>

@@ -12,6 +12,8 @@ export type SiteView = {
   endPlayMaxIn: number;
   dialSpreadIn: number;
   tapeSpreadIn: number;
+  /** What one removal costs here, USD; null when not set. */
+  removalCostUsd: number | null;
   usage: { cases: number; users: number };
 };
 

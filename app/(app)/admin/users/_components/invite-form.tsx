@@ -11,6 +11,7 @@ import { inviteSchema } from "@/lib/validation/account";
 import { RoleSelect } from "./role-select";
 import { SiteSelect } from "./site-select";
 import type { SiteChoice } from "./types";
+import { ErrorSummary } from "@/components/ui/error-summary";
 
 /** Invites a person by e-mail; the server's field messages appear under the fields. */
 export function InviteForm({ sites }: { sites: SiteChoice[] }) {
@@ -51,6 +52,7 @@ export function InviteForm({ sites }: { sites: SiteChoice[] }) {
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Invite someone">
+      <ErrorSummary errors={errors} idPrefix="invite-" />
       <Field label="Name" htmlFor="invite-name" error={errors.name}>
         <Input id="invite-name" name="name" autoComplete="off" aria-invalid={!!errors.name} placeholder="Full name" />
       </Field>

@@ -2,10 +2,14 @@ import Link from "next/link";
 import { StageBadge, Badge } from "@/components/ui/badge";
 import { triggerLabel } from "@/components/case/labels";
 import type { CaseDetail } from "@/db/queries/case-read";
+import { formatDay } from "@/lib/cases/list-columns";
+import { safetyFlagOf } from "@/lib/cases/safety-flag";
+import { SafetyFlagNote } from "./safety-flag-note";
 
 const callTone = { remove: "danger", keep: "ok", undecided: "warn" } as const;
 
 export function CaseHeader({ c }: { c: CaseDetail }) {
+  const flag = safetyFlagOf(c.fieldChecks, c.trigger);
   return (
     <header className="mb-5 flex flex-col gap-3">
       <nav className="text-sm text-muted no-print">
@@ -15,14 +19,17 @@ export function CaseHeader({ c }: { c: CaseDetail }) {
         <h1 className="text-2xl font-semibold tracking-tight tabular sm:text-3xl">{c.number}</h1>
         <StageBadge stage={c.status} />
         {c.fieldCall ? <Badge tone={callTone[c.fieldCall]}>Field call: {c.fieldCall}</Badge> : null}
-        {c.removalConfirmed === "no-defect" ? <Badge tone="warn">No defect found</Badge> : c.removalConfirmed === "confirmed" ? <Badge tone="ok">Removal confirmed</Badge> : null}
+        {flag.length ? <Badge tone="warn">Safety flag</Badge> : null}
+        {/* the outcome is the engineer's to state: no badge until the verdict is signed */}
+        {c.status !== "signed" ? null : c.removalConfirmed === "no-defect" ? <Badge tone="warn">No defect found</Badge> : c.removalConfirmed === "confirmed" ? <Badge tone="ok">Removal confirmed</Badge> : null}
       </div>
       <p className="text-sm text-ink-2">
-        {[c.carMark && `${c.carMark} ${c.carNumber}`, c.axle && c.side ? `position ${c.axle}${c.side}` : null, triggerLabel(c.trigger), c.siteName, c.removedOn && `removed ${c.removedOn}`, c.serial && `serial ${c.serial}`].filter(Boolean).join(" · ")}
+        {[c.carMark && `${c.carMark} ${c.carNumber}`, c.axle && c.side ? `position ${c.axle}${c.side}` : null, triggerLabel(c.trigger), c.siteName, c.removedOn && `removed ${formatDay(c.removedOn)}`, c.serial && `serial ${c.serial}`].filter(Boolean).join(" · ")}
       </p>
+      <SafetyFlagNote flag={flag} />
       {c.status === "signed" ? (
         <p className="rounded-lg border border-ok/30 bg-ok-soft px-3 py-2 text-sm text-ok">
-          Signed by <strong>{c.signedByName ?? "an engineer"}</strong> on {c.signedAt?.toISOString().slice(0, 10)}. This case is read-only; an engineer can reopen it with a reason.
+          Signed by <strong>{c.signedByName ?? "an engineer"}</strong> on {c.signedAt ? formatDay(c.signedAt.toISOString()) : "—"}. This case is read-only; an engineer can reopen it with a reason.
         </p>
       ) : null}
       {c.status === "bench" && c.returnReason ? (

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { buttonClass } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { componentLabel } from "@/lib/photos/grouping";
+import { photoAlt } from "@/components/photos/photo-facts";
 import type { PhotoView } from "@/lib/photos/view";
 
 type Props = {
@@ -18,7 +19,7 @@ function Thumbs({ aId, photos }: { aId: string; photos: PhotoView[] }) {
         <li key={p.id}>
           <Link href={`/photos/compare?a=${aId}&b=${p.id}`} className="group block overflow-hidden rounded-lg ring-1 ring-line hover:ring-2 hover:ring-accent" data-testid="pick-photo">
             {/* eslint-disable-next-line @next/next/no-img-element */}
-            <img src={p.urls.thumb} alt="" loading="lazy" className="aspect-square w-full object-cover" />
+            <img src={p.urls.thumb} alt={photoAlt(p)} loading="lazy" className="aspect-square w-full object-cover" />
             <span className="block truncate bg-surface-2 px-1.5 py-1 text-[11px] text-ink-2">{p.component ? componentLabel(p.component) : "Untagged"}</span>
           </Link>
         </li>

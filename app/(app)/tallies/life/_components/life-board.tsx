@@ -11,6 +11,7 @@ import type { LifeData } from "@/lib/tallies/life-data";
 import { lifeTable, probabilityPlotTable } from "@/lib/tallies/tables";
 import { CauseTable } from "./cause-table";
 import { FleetUpload } from "./fleet-upload";
+import { LifeCautions } from "./life-cautions";
 import { ParameterTable } from "./parameter-table";
 import { SHAPE_GUIDE, ShapeBadge } from "./shape-badge";
 
@@ -64,7 +65,10 @@ export function LifeBoard({ data, canUpload, scopeWords }: { data: LifeData; can
 
         {s?.mle ? (
           <Card title="Parameters and 95% bounds">
-            <ParameterTable detail={s} unit={unit} />
+            <div className="space-y-3">
+              <LifeCautions cautions={s.cautions} />
+              <ParameterTable detail={s} unit={unit} />
+            </div>
           </Card>
         ) : null}
       </div>
@@ -84,7 +88,7 @@ export function LifeBoard({ data, canUpload, scopeWords }: { data: LifeData; can
               <li key={g.reading} className="flex items-start gap-3"><span className="w-20 shrink-0"><ShapeBadge reading={g.reading} /></span><span>{g.text}</span></li>
             ))}
           </ul>
-          <p className="mt-3 text-xs text-muted">When the 95% bounds on the shape include 1 the data cannot tell it from random, so it reads as random.</p>
+          <p className="mt-3 text-xs text-muted">The shape is read from its 95% Fisher bounds, in the table and the chart alike: when they include 1 the data cannot tell it from random, so it reads as random.</p>
         </Card>
 
         {canUpload ? (
