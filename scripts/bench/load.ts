@@ -13,7 +13,7 @@ import sharp from "sharp";
 import { DEMO_PASSWORD, DEMO_USERS } from "../seed/demo-people";
 
 const num = (name: string, fallback: number) => Number(process.env[name] ?? fallback);
-const WANT_CASES = num("LOAD_CASES", 100_000);
+const WANT_CASES = num("LOAD_CASES", Number(process.env.BENCH_CASES ?? 100_000));
 const SECONDS = num("LOAD_SECONDS", 60);
 const READERS = num("LOAD_READERS", 50);
 const WRITERS = num("LOAD_WRITERS", 5);

@@ -8,14 +8,11 @@ import { Select } from "@/components/ui/field";
 import { monthLabel } from "@/lib/tallies/labels";
 import { causeSiteTable, clustersTable, confirmationView, controlLimitsTable, damageTable, monthlyTable, paretoTable, triggerVerdictTable } from "@/lib/tallies/tables";
 import type { TalliesData } from "@/lib/tallies/types";
-import { CauseSiteChart, causeLegend } from "./cause-site-chart";
+import { CauseSiteChart, ConfirmationChart, ControlChart, ParetoChart, TriggerVerdictChart } from "./charts";
+import { causeLegend, CONFIRMATION_LEGEND, CONTROL_LEGEND, paretoHeadline, TRIGGER_VERDICT_LEGEND } from "./chart-words";
 import { CauseSiteFindings, CauseSiteTable } from "./cause-site-table";
 import { ClusterControls, ClustersList } from "./clusters-list";
-import { ConfirmationChart, CONFIRMATION_LEGEND } from "./confirmation-chart";
-import { ControlChart, CONTROL_LEGEND } from "./control-chart";
 import { HeadlineTiles } from "./headline-tiles";
-import { ParetoChart, paretoHeadline } from "./pareto-chart";
-import { TriggerVerdictChart, TRIGGER_VERDICT_LEGEND } from "./trigger-verdict-chart";
 
 const SIGNED = "Signed verdicts only";
 
