@@ -5,7 +5,6 @@ import { and, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { cases, codeEntries, sites } from "@/db/schema";
-import { can } from "@/lib/auth/permissions";
 import type { CaseColumnId, CaseListRow } from "@/lib/cases/list-columns";
 import { CSV_HEADER, csvValues, EXPORT_CAP } from "@/lib/cases/list-csv";
 import type { CaseFilters, CaseSort } from "@/lib/cases/list-params";

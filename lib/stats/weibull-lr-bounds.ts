@@ -2,7 +2,7 @@
 // { theta : 2 * (logL_max - logL_profile(theta)) <= chi-square(1) quantile }.
 import { chiSquareQuantile } from "./distributions";
 import type { Interval, WeibullMle } from "./weibull-mle";
-import { profileLogLikBeta, weibullLogLik, type LikelihoodData } from "./weibull-likelihood";
+import { profileLogLikBeta, type LikelihoodData } from "./weibull-likelihood";
 import { bisectRoot } from "./solve-1d";
 
 export interface LikelihoodRatioBounds {

@@ -51,7 +51,7 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
           footer={
             lowShops.length ? (
               <p><span className="font-semibold text-danger">Training signal:</span> {lowShops.map((s) => s.label).join(", ")} {lowShops.length === 1 ? "has" : "have"} a confirmed share clearly below the rest.</p>
-            ) : data.byShop.rows.length > 1 ? <p className="text-muted">No shop's confirmed share differs clearly from the others.</p> : undefined
+            ) : data.byShop.rows.length > 1 ? <p className="text-muted">No shop&rsquo;s confirmed share differs clearly from the others.</p> : undefined
           }
         >
           <ConfirmationChart table={data.byShop} nameWidth={170} />
