@@ -66,7 +66,7 @@ export function HistoryList({ events }: { events: Event[] }) {
           {e.reason ? <p className="mt-1 rounded bg-surface-2 px-2 py-1 text-sm italic text-ink-2">“{e.reason}”</p> : null}
           {e.changes.filter((c) => !HIDDEN.has(c.field)).length ? (
             <details className="mt-1 text-xs text-muted">
-              <summary className="cursor-pointer">{changeCount(e.changes.filter((c) => !HIDDEN.has(c.field)).length)}</summary>
+              <summary className="flex min-h-11 cursor-pointer items-center lg:min-h-0">{changeCount(e.changes.filter((c) => !HIDDEN.has(c.field)).length)}</summary>
               <ul className="mt-1 flex flex-col gap-0.5">
                 {e.changes.filter((c) => !HIDDEN.has(c.field)).map((c, i) => (
                   <li key={i} className="break-words">

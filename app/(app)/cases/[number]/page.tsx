@@ -59,12 +59,12 @@ export default async function CasePage({ params, searchParams }: { params: Promi
       ) : null}
       <nav className="no-print mb-5 flex gap-2 overflow-x-auto text-sm [scrollbar-width:none]" aria-label="Sections">
         {[["field", "Field report"], ["teardown", "Teardown"], ["verdict", "Verdict"], ["photos", "Photos"], ["similar", "Similar"], ["history", "History"]].map(([id, label]) => (
-          <a key={id} href={`#${id}`} className="shrink-0 rounded-full border border-line bg-surface px-3 py-1.5 text-ink-2 hover:border-accent">{label}</a>
+          <a key={id} href={`#${id}`} className="inline-flex min-h-11 shrink-0 items-center rounded-full border border-line bg-surface px-3 text-ink-2 hover:border-accent lg:min-h-0 lg:py-1.5">{label}</a>
         ))}
       </nav>
       <div className="flex flex-col gap-5">
         <section id="field" className="scroll-mt-24">
-          <Card title="Field report" action={editField && !editing ? <a href="?edit=field#field" className="text-sm font-medium text-accent hover:underline">Edit</a> : editing ? <a href="?#field" className="text-sm text-muted hover:underline">Done</a> : null}>
+          <Card title="Field report" action={editField && !editing ? <a href="?edit=field#field" className="inline-flex min-h-11 min-w-11 items-center justify-center text-sm font-medium text-accent hover:underline lg:min-h-0 lg:min-w-0">Edit</a> : editing ? <a href="?#field" className="inline-flex min-h-11 min-w-11 items-center justify-center text-sm text-muted hover:underline lg:min-h-0 lg:min-w-0">Done</a> : null}>
             {editing ? <RemovalForm mode="edit" sites={sites} initial={toDraft(c)} caseId={c.id} version={c.version} defaultSiteId={c.siteId} /> : <FieldSummary c={c} policy={policy} />}
           </Card>
         </section>

@@ -29,7 +29,7 @@ export function CauseTable({ causes, selected, hrefFor, unit }: { causes: LifeSu
             return (
               <tr key={c.cause} className={`border-t border-line ${on ? "bg-accent-soft/60" : "hover:bg-surface-2"}`}>
                 <th scope="row" className="px-2.5 py-2 text-left font-medium">
-                  <Link href={hrefFor(c.cause)} aria-current={on ? "true" : undefined} scroll={false} className={`hover:text-accent ${on ? "text-accent" : "text-ink"}`}>{c.label}</Link>
+                  <Link href={hrefFor(c.cause)} aria-current={on ? "true" : undefined} scroll={false} className={`inline-flex min-h-11 min-w-11 items-center hover:text-accent lg:min-h-0 ${on ? "text-accent" : "text-ink"}`}>{c.label}</Link>
                   {c.cautions.length ? <span className="mt-0.5 block text-xs font-normal text-warn" data-life-caution-tags><span aria-hidden>⚠ </span>{cautionTags(c.cautions)}</span> : null}
                 </th>
                 <td className="px-2.5 py-2 text-right tabular text-ink-2">{c.failures.toLocaleString("en-US")}</td>

@@ -54,12 +54,12 @@ export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
         CSV with a header row: {FLEET_COLUMNS.join(", ")}. Dates as YYYY-MM-DD; months are worked out from mounted_on and as_of when left empty. A new upload replaces the list in use; a file with any bad row stores nothing.
       </p>
       <div className="flex flex-wrap items-center gap-2">
-        <label className="inline-flex h-10 cursor-pointer items-center rounded-lg border border-dashed border-line-strong bg-surface-2 px-3 text-sm text-ink-2 hover:border-accent">
+        <label className="inline-flex h-11 cursor-pointer lg:h-10 items-center rounded-lg border border-dashed border-line-strong bg-surface-2 px-3 text-sm text-ink-2 hover:border-accent">
           <input ref={input} type="file" accept=".csv,text/csv" className="sr-only" aria-label="Fleet list CSV" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
           {file ? file.name : "Choose a CSV file…"}
         </label>
         <Button onClick={upload} disabled={!file || busy}>{busy ? "Checking…" : "Upload fleet list"}</Button>
-        <button type="button" className="h-10 px-2 text-sm text-accent hover:underline" onClick={() => downloadBlob(new Blob([FLEET_TEMPLATE], { type: "text/csv" }), "tearline-fleet-template.csv")}>
+        <button type="button" className="h-11 px-2 text-sm lg:h-10 text-accent hover:underline" onClick={() => downloadBlob(new Blob([FLEET_TEMPLATE], { type: "text/csv" }), "tearline-fleet-template.csv")}>
           Template
         </button>
       </div>
