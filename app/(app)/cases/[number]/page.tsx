@@ -37,7 +37,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
   const c = await getCaseDetail(number, user);
   if (!c) notFound();
   const [events, damage, causes, sites] = await Promise.all([readableHistory(c.id, user), listCodeEntries("damage"), listCodeEntries("cause"), siteOptions()]);
-  const policy = c.sitePolicy?.endPlayMaxIn ? { maxIn: c.sitePolicy.endPlayMaxIn, dialSpreadIn: c.sitePolicy.dialSpreadIn!, tapeSpreadIn: c.sitePolicy.tapeSpreadIn! } : DEFAULT_END_PLAY_POLICY;
+  const policy = c.sitePolicy?.endPlayMaxIn ? { maxIn: c.sitePolicy.endPlayMaxIn, dialSpreadIn: c.sitePolicy.dialSpreadIn!, tapeSpreadIn: c.sitePolicy.tapeSpreadIn!, plausibleMaxIn: c.sitePolicy.plausibleMaxIn ?? undefined } : DEFAULT_END_PLAY_POLICY;
   const editField = canEditSection("field", c.status, user.role);
   const editTeardown = canEditSection("teardown", c.status, user.role);
   const editVerdict = canEditSection("verdict", c.status, user.role);
