@@ -50,7 +50,7 @@ export function PolicyFields({ texts, unit, errors, onChange, onUnit }: {
               role="radio"
               aria-checked={unit === u}
               onClick={() => onUnit(u)}
-              className={`h-8 min-w-12 rounded-md px-3 font-medium ${unit === u ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}
+              className={`h-11 min-w-12 rounded-md px-3 font-medium lg:h-8 ${unit === u ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}
             >
               {u === "in" ? "inches" : "mm"}
             </button>
