@@ -8,6 +8,7 @@ import useSWR, { useSWRConfig } from "swr";
 import { StageBadge } from "@/components/ui/badge";
 import { getJson, linkCase, linksKey, similarKey, unlinkCase, type LinksAnswer } from "./case-links-api";
 import type { CaseLinkItem } from "@/db/queries/case-links";
+import { formatDay } from "@/lib/dates";
 
 function Unlink({ caseId, link, onDone }: { caseId: string; link: CaseLinkItem; onDone: () => void }) {
   const [confirm, setConfirm] = useState(false);
@@ -80,7 +81,7 @@ export function RelatedCases({ caseId, canLink }: { caseId: string; canLink: boo
                 </div>
                 <p className="mt-0.5 text-xs text-muted">{[l.triggerLabel, l.causeLabel ? `Cause: ${l.causeLabel}` : "No verdict yet", l.removedOn ? `removed ${l.removedOn}` : null].filter(Boolean).join(" · ")}</p>
                 {l.note ? <p className="mt-1 text-sm text-ink-2">“{l.note}”</p> : null}
-                <p className="mt-0.5 text-xs text-muted">Linked{l.linkedBy ? ` by ${l.linkedBy}` : ""} on {l.linkedAt.slice(0, 10)}</p>
+                <p className="mt-0.5 text-xs text-muted">Linked{l.linkedBy ? ` by ${l.linkedBy}` : ""} on {formatDay(l.linkedAt)}</p>
               </div>
               {canLink ? <Unlink caseId={caseId} link={l} onDone={changed} /> : null}
             </li>

@@ -24,6 +24,7 @@ import { CaseExtras } from "./_components/case-extras";
 import { toDraft } from "./_components/to-draft";
 import { SafetyFlagNote } from "./_components/safety-flag-note";
 import { safetyFlagOf } from "@/lib/cases/safety-flag";
+import { formatDay } from "@/lib/dates";
 
 export const dynamic = "force-dynamic";
 
@@ -93,7 +94,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
                 value={{ primaryCause: c.primaryCause, contributingCauses: c.contributingCauses, confidence: c.confidence, removalConfirmed: c.removalConfirmed, correctiveAction: c.correctiveAction, verdictNotes: c.verdictNotes }}
               />
             )}
-            {c.proposedByName ? <p className="mt-4 text-xs text-muted">Proposed by {c.proposedByName} on {c.proposedAt?.toISOString().slice(0, 10)}{c.signedByName ? ` · signed by ${c.signedByName} on ${c.signedAt?.toISOString().slice(0, 10)}` : ""}</p> : null}
+            {c.proposedByName ? <p className="mt-4 text-xs text-muted">Proposed by {c.proposedByName} on {formatDay(c.proposedAt)}{c.signedByName ? ` · signed by ${c.signedByName} on ${formatDay(c.signedAt)}` : ""}</p> : null}
           </Card>
         </section>
         <CaseExtras c={c} user={user} />

@@ -5,6 +5,7 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useTransition } from "react";
 import type { ClusterTally } from "@/lib/tallies/types";
+import { formatDay } from "@/lib/dates";
 
 const KINDS = [
   { id: "site", label: "Same site" },
@@ -13,7 +14,7 @@ const KINDS = [
 ] as const;
 const WINDOWS = [7, 14, 30, 60, 90, 180];
 
-const fmt = (d: string) => new Date(`${d}T00:00:00Z`).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const fmt = (d: string) => formatDay(d);
 
 export function ClusterControls({ tally }: { tally: ClusterTally }) {
   const router = useRouter();

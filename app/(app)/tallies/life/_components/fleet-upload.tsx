@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { downloadBlob } from "@/components/charts/export-image";
 import { FLEET_COLUMNS, FLEET_TEMPLATE } from "@/lib/tallies/fleet-csv";
 import type { FleetBatch } from "@/lib/tallies/life-data";
+import { formatDay } from "@/lib/dates";
 
 type RowError = { row: number; column: string | null; message: string };
 type Outcome = { tone: "ok" | "danger"; text: string; rows?: RowError[]; more?: number } | null;
@@ -45,7 +46,7 @@ export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
     <div className="space-y-3" data-fleet-upload>
       <p className="text-sm text-ink-2">
         {batch ? (
-          <>In use: <span className="font-medium text-ink">{batch.units.toLocaleString("en-US")} units</span>, uploaded {new Date(batch.uploadedAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}{batch.uploadedBy ? ` by ${batch.uploadedBy}` : ""}.</>
+          <>In use: <span className="font-medium text-ink">{batch.units.toLocaleString("en-US")} units</span>, uploaded {formatDay(batch.uploadedAt)}{batch.uploadedBy ? ` by ${batch.uploadedBy}` : ""}.</>
         ) : (
           "No fleet list yet: analyses count only removed bearings."
         )}
