@@ -62,7 +62,7 @@ export function HistoryList({ events }: { events: Event[] }) {
           <span className="absolute -left-[25px] top-1.5 h-2.5 w-2.5 rounded-full border-2 border-surface bg-accent" aria-hidden />
           <p className="text-sm">
             <strong>{e.userName ?? "Someone"}</strong> {actionWords(e.action)}
-            <time className="ml-2 text-xs text-muted" dateTime={new Date(e.at).toISOString()}>{formatMoment(e.at)}</time>
+            <time className="ml-2 inline-block whitespace-nowrap text-xs text-muted" dateTime={new Date(e.at).toISOString()}>{formatMoment(e.at)}</time>
           </p>
           {e.reason ? <p className="mt-1 rounded bg-surface-2 px-2 py-1 text-sm italic text-ink-2">“{e.reason}”</p> : null}
           {e.changes.filter((c) => !HIDDEN.has(c.field)).length ? (
