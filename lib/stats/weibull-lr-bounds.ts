@@ -2,7 +2,7 @@
 // { theta : 2 * (logL_max - logL_profile(theta)) <= chi-square(1) quantile }.
 import { chiSquareQuantile } from "./distributions";
 import type { Interval, WeibullMle } from "./weibull-mle";
-import { profileLogLikBeta, type LikelihoodData } from "./weibull-likelihood";
+import { profileLogLikBeta, shiftedSums, type LikelihoodData } from "./weibull-likelihood";
 import { bisectRoot } from "./solve-1d";
 
 export interface LikelihoodRatioBounds {
@@ -22,18 +22,9 @@ export interface LikelihoodRatioBounds {
 export function profileOverBeta(d: LikelihoodData, logScale: number, shift: number, start: number): { beta: number; logLik: number } {
   const r = d.failures;
   const gap = d.maxLogTime - logScale;
-  // sums over w = c e^(b (ln t - max ln t)), scaled back by e^(b gap) so nothing overflows
+  // shiftedSums scales by e^(-b max ln t); e^(b gap) scales back to logScale
   const at = (b: number) => {
-    let s0 = 0;
-    let s1 = 0;
-    let s2 = 0;
-    for (let i = 0; i < d.logTimes.length; i++) {
-      const x = d.logTimes[i] - d.maxLogTime;
-      const w = d.counts[i] * Math.exp(b * x);
-      s0 += w;
-      s1 += w * x;
-      s2 += w * x * x;
-    }
+    const { s0, s1, s2 } = shiftedSums(d, b);
     const f = Math.exp(shift + b * gap);
     return {
       value: r * Math.log(b) - r * (b * logScale - shift) + (b - 1) * d.sumLogFailureTimes - f * s0,

@@ -11,6 +11,7 @@ import {
   weibullMleFromData,
   weibullPlotY,
   WeibullInputError,
+  unfittableReason,
   type CountedUnit,
   type LifeUnit,
   type LikelihoodData,
@@ -134,12 +135,7 @@ export function summariseEveryCause(rows: readonly LifeCountRow[], fleet: readon
   return causes.map(({ cause }) => {
     const c = own.get(cause)!;
     // The rules of assertFittable, on counts.
-    const note =
-      c.failures < 2
-        ? `At least two failures are needed to fit a Weibull distribution (got ${c.failures}).`
-        : c.first === c.last
-          ? "All failure times are equal, so the spread of lives (the Weibull shape) cannot be estimated."
-          : null;
+    const note = unfittableReason(c.failures, c.first === c.last);
     if (note) return { cause, label: causeLabel(cause), failures: c.failures, suspensions: total - c.failures, longestLife, fit: null, note, cautions: [] };
     const data: LikelihoodData = { logTimes, counts, maxLogTime, failures: c.failures, sumLogFailureTimes: c.sumLog };
     return summariseData(cause, data, { total, longestLife, confidence, unit });
@@ -150,7 +146,7 @@ function summariseCounted(cause: string, groups: readonly CountedUnit[], total: 
   const rows = groups.map((g) => ({ cause: g.failed ? cause : null, time: g.time, count: g.count }));
   return summariseEveryCause(rows, [], confidence, unit).find((s) => s.cause === cause) ?? {
     cause, label: causeLabel(cause), failures: 0, suspensions: total, longestLife: groups.reduce((m, g) => Math.max(m, g.time), 0), fit: null,
-    note: "At least two failures are needed to fit a Weibull distribution (got 0).", cautions: [],
+    note: unfittableReason(0, false), cautions: [],
   };
 }
 
