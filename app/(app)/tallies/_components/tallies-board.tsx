@@ -85,7 +85,7 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
             {series ? <ControlChart months={data.monthly.months} series={series} partialMonth={data.monthly.partialMonth} /> : null}
             <ChartLegend items={CONTROL_LEGEND} />
             <details className="mt-3 text-sm">
-              <summary className="cursor-pointer text-accent">All series: limits and months beyond</summary>
+              <summary className="flex min-h-11 cursor-pointer items-center text-accent lg:min-h-0">All series: limits and months beyond</summary>
               <div className="mt-2 overflow-x-auto">
                 <table className="w-full text-sm">
                   <tbody>
