@@ -1,6 +1,6 @@
 // Input rules for sites and their end-play limit policy (server and client alike).
 // Limits are stored in inches; the screens let people type either unit.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import type { SiteKind } from "@/db/schema/sites";
 
 /** The largest end-play limit a site may set: 1/4 in. Anything above is a typing slip, not a policy. */

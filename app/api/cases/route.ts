@@ -1,6 +1,6 @@
 // POST /api/cases - file a new removal (field report); GET /api/cases - the case list, filtered, sorted and paged
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { parseListParams } from "@/lib/cases/list-params";
 import { parseJson, withRole } from "@/lib/http/handler";
 import { createFieldReport } from "@/lib/cases/service";

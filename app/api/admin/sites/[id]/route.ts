@@ -1,6 +1,6 @@
 // PATCH /api/admin/sites/:id - edit a site, its end-play policy or active flag; DELETE - only an unused site
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { deleteSite, findSiteByCode, getSite, siteUsage, updateSite } from "@/db/queries/sites";
 import { badRequest, conflict, notFound } from "@/lib/http/errors";
 import { parseJson, withRole } from "@/lib/http/handler";
