@@ -13,11 +13,3 @@ export const dispositionLabel = (c?: string | null) => find(DISPOSITIONS, c);
 export const confidenceLabel = (c?: string | null) => find(CONFIDENCES, c);
 export const lubricantLabel = (c?: string | null) => find(LUBRICANT_CONDITIONS, c);
 export const severityLabel = (s?: number | null) => find(SEVERITIES as unknown as { code: number; label: string }[], s);
-
-/** Clock position in degrees to the nearest half hour, as the lab says it: 0° = 12 o'clock. */
-export function clockWords(deg: number | null | undefined): string {
-  if (deg === null || deg === undefined) return "—";
-  const hours = Math.round((((deg % 360) + 360) % 360) / 15) / 2;
-  const h = Math.floor(hours) === 0 ? 12 : Math.floor(hours);
-  return `${deg}° (${h}${hours % 1 ? ":30" : " o'clock"})`;
-}

@@ -1,7 +1,7 @@
 // How the case page orders photos: by part, in the order a bearing is taken apart, untagged last.
 import { COMPONENTS } from "@/lib/classification/components";
 import { damageCodeInfo } from "@/lib/classification/damage-codes";
-import { clockLabel } from "./clock";
+import { clockWords } from "@/lib/damage-map/geometry";
 
 export const UNTAGGED = "untagged";
 
@@ -41,6 +41,6 @@ type FindingLike = { id: string; component: string; row: string | null; damageCo
 /** "Cup · Subsurface spall · severity 3 · 3 o'clock (90°)": how a finding is named in the photo tags. */
 export function findingLabel(f: FindingLike): string {
   const damage = damageCodeInfo(f.damageCode)?.label ?? f.damageCode;
-  const parts = [componentLabel(f.component), f.row && !componentLabel(f.component).toLowerCase().includes(f.row) ? `${f.row} row` : null, damage, `severity ${f.severity}`, f.clockDeg !== null ? clockLabel(f.clockDeg) : null];
+  const parts = [componentLabel(f.component), f.row && !componentLabel(f.component).toLowerCase().includes(f.row) ? `${f.row} row` : null, damage, `severity ${f.severity}`, f.clockDeg !== null ? clockWords(f.clockDeg) : null];
   return parts.filter(Boolean).join(" · ");
 }

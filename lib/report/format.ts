@@ -20,14 +20,6 @@ export function formatDateTime(value: Date | string | null | undefined): string 
   return `${d.toISOString().slice(0, 10)} ${d.toISOString().slice(11, 16)} UTC`;
 }
 
-/** 60° → "2 o'clock (60°)"; 75° → "2:30 (75°)": the nearest half hour, as the shop reads a clock. */
-export function clockWords(deg: number): string {
-  const d = ((Math.round(deg) % 360) + 360) % 360;
-  const halfHours = Math.round(d / 15) % 24;
-  const hour = Math.floor(halfHours / 2) || 12;
-  return halfHours % 2 === 0 ? `${hour} o'clock (${d}°)` : `${hour}:30 (${d}°)`;
-}
-
 export const text = (value: string | number | null | undefined, suffix = ""): string =>
   value === null || value === undefined || value === "" ? DASH : `${value}${suffix}`;
 
