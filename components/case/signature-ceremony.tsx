@@ -5,7 +5,7 @@ import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import type { SignedContent } from "@/lib/cases/signature-content";
-import { causeLabel, componentLabel, confidenceLabel, damageLabel, severityLabel, zoneLabel } from "@/lib/report/format";
+import { causeLabel, componentLabel, confidenceLabel, damageLabel, severityLabel, zoneLabel } from "@/lib/classification/labels";
 import { ActionError, useCaseAction } from "./use-case-action";
 import { callApi } from "@/lib/client/api";
 

@@ -2,7 +2,7 @@
 // cup raceway as the outer band and the cone raceway as the inner band, 12 o'clock at the top,
 // the load zone marked on the cup. Give `findings` for one case (each finding its own arc), or
 // `sectors` for many cases summed (shaded by how many findings touch each clock sector).
-import { damageCodeInfo } from "@/lib/classification/damage-codes";
+import { damageLabel } from "@/lib/classification/labels";
 import { bandPath, clockPoint, clockWords, HOUR_TICKS } from "@/lib/damage-map/geometry";
 import { arcOf, HEAT_COLOURS, heatColour, LOAD_ZONE_COLOUR, LOAD_ZONE_HALF_DEG, LOAD_ZONE_INK, offMapWords, RING_BANDS, RING_LABELS, RING_NAMES, ringKindOf, SEVERITY_COLOURS, SEVERITY_KEYS, severityColour, severityWord } from "@/lib/damage-map/look";
 import { ringsOf, type RingId, type SectorCell } from "@/lib/damage-map/rings";
@@ -88,7 +88,7 @@ const LEGEND_WORDS = SEVERITY_KEYS;
 const LEGEND_X = LEGEND_WORDS.reduce<number[]>((xs, w, i) => [...xs, i === 0 ? 0 : xs[i - 1] + 24 + LEGEND_WORDS[i - 1].length * 4.9], []);
 
 function describe(f: DamageMapFinding): string {
-  const code = f.damageCode ? (damageCodeInfo(f.damageCode)?.label ?? f.damageCode) : "Finding";
+  const code = f.damageCode ? damageLabel(f.damageCode) : "Finding";
   const at = f.clockDeg === null || f.clockDeg === undefined ? "" : ` at ${clockWords(f.clockDeg)}`;
   const arc = f.arcDeg ? `, ${f.arcDeg}° arc` : ", extent not recorded";
   return `${code}${at}${arc} · severity ${f.severity} (${severityWord(f.severity)})`;

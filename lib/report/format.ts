@@ -1,8 +1,11 @@
-// Wording the report shares between the PDF and the printable page: dates, clock positions, labels.
-import { COMPONENTS, CONFIDENCES, DAMAGE_CODES, DISPOSITIONS, LUBRICANT_CONDITIONS, ROOT_CAUSES, SEVERITIES, TRIGGERS, ZONES } from "@/lib/classification";
+// Wording the report shares between the PDF and the printable page: dates, sizes, stages.
+// Code labels come from lib/classification/labels.ts, clock words from lib/damage-map/geometry.ts.
+import { DAMAGE_CODES } from "@/lib/classification/damage-codes";
 import { STAGE_LABELS, type Stage } from "@/lib/cases/stages";
 
-export const DASH = "—";
+import { NO_CODE } from "@/lib/classification/labels";
+
+export const DASH = NO_CODE;
 
 /** "2026-06-15" stays as written; a timestamp becomes "2026-06-20 14:05 UTC". */
 export function formatDate(value: Date | string | null | undefined): string {
@@ -22,24 +25,6 @@ export function formatDateTime(value: Date | string | null | undefined): string 
 
 export const text = (value: string | number | null | undefined, suffix = ""): string =>
   value === null || value === undefined || value === "" ? DASH : `${value}${suffix}`;
-
-const from = <T extends { code: string | number; label: string }>(list: readonly T[]) => (code: string | number | null | undefined) =>
-  code === null || code === undefined ? DASH : (list.find((x) => x.code === code)?.label ?? String(code));
-
-export const componentLabel = from(COMPONENTS);
-export const dispositionLabel = from(DISPOSITIONS);
-export const confidenceLabel = from(CONFIDENCES);
-export const severityLabel = from(SEVERITIES);
-export const zoneLabel = from(ZONES);
-export const lubricantLabel = from(LUBRICANT_CONDITIONS);
-
-type Overrides = Record<string, string> | undefined;
-const withOverrides = (base: (c: string | null | undefined) => string) => (code: string | null | undefined, overrides: Overrides) =>
-  code && overrides?.[code] ? overrides[code] : base(code);
-
-export const causeLabel = withOverrides(from(ROOT_CAUSES));
-export const triggerLabel = withOverrides(from(TRIGGERS));
-export const damageLabel = withOverrides(from(DAMAGE_CODES));
 
 export function isoModeOf(code: string): string | null {
   return DAMAGE_CODES.find((d) => d.code === code)?.isoMode ?? null;
