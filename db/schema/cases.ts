@@ -84,6 +84,11 @@ export const cases = pgTable(
     index("cases_cause_idx").on(t.primaryCause),
     index("cases_car_idx").on(t.carMark, t.carNumber),
     index("cases_serial_idx").on(t.serial),
+    index("cases_created_by_idx").on(t.createdBy),
+    // The case list's usual orders, each with its tie-break, so a page walks the index and stops.
+    index("cases_list_updated_idx").on(t.updatedAt.desc().nullsLast(), t.number.desc()),
+    index("cases_list_removed_desc_idx").on(t.removedOn.desc().nullsLast(), t.number.desc()),
+    index("cases_list_removed_asc_idx").on(t.removedOn.asc().nullsLast(), t.number.desc()),
     uniqueIndex("cases_create_key_idx").on(t.createdBy, t.createKey),
     // later removals of the same car and position (missed keep calls)
     index("cases_position_idx").on(t.carMark, t.carNumber, t.axle, t.side, t.removedOn),

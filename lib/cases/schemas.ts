@@ -2,6 +2,7 @@
 import { z } from "zod";
 import { COMPONENTS, CONFIDENCES, DISPOSITIONS, LUBRICANT_CONDITIONS, ZONES } from "@/lib/classification";
 import { VISUAL_FINDINGS } from "@/lib/field";
+import { BEARING_CLASSES } from "./bearing-classes";
 
 const codes = <T extends { code: string }>(list: readonly T[]) => list.map((x) => x.code) as [string, ...string[]];
 const text = (max: number, what: string) => z.string().trim().max(max, `${what}: at most ${max} characters.`);
@@ -41,7 +42,7 @@ export const fieldChecksSchema = z.object({
 });
 export type FieldChecks = z.infer<typeof fieldChecksSchema>;
 
-export const BEARING_CLASSES = ["D", "E", "F", "G", "K", "other"] as const;
+export { BEARING_CLASSES };
 
 /** The field report: bearing, removal and the shop checks. Every key optional so drafts can autosave. */
 export const fieldReportSchema = z.object({

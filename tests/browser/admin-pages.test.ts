@@ -5,9 +5,9 @@ import { expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { as } from "../support/api";
 import { DESK, PHONE } from "../support/browser";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);

@@ -2,12 +2,12 @@
 // an engineer signs it through the signature ceremony, and the case list shows it signed.
 import { expect, test } from "vitest";
 import { PHONE, DESK } from "../support/browser";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { CaseListPage } from "../support/pages/case-list-page";
 import { CasePage } from "../support/pages/case-page";
 import { NewRemovalPage } from "../support/pages/new-removal-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 let number = "";
 const car = String(300000 + Math.floor(Math.random() * 99999));

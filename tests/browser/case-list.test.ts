@@ -4,10 +4,10 @@ import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { PHONE, DESK } from "../support/browser";
 import { buildCasebook, removeCasebook, TOKEN, type Built } from "../api/cases/list-fixture";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { CaseListPage } from "../support/pages/case-list-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 let book: Built[] = [];
 

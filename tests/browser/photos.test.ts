@@ -9,10 +9,10 @@ import { db, t } from "../support/db";
 import { createCase } from "../support/factories";
 import { racewayJpeg, textAsJpeg } from "../support/photo-files";
 import { upload } from "../api/photos/helpers";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { CasePage } from "../support/pages/case-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 let caseNumber = "";
 let caseId = "";

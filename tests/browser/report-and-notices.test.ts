@@ -11,10 +11,10 @@ import { DESK, PHONE } from "../support/browser";
 import { db, t } from "../support/db";
 import { createCase } from "../support/factories";
 import { pdfPageCount, pdfPages } from "../support/pdf-text";
-import { SHOTS, useBrowser } from "../support/browser-fixture";
+import { SHOTS, browserPerFile } from "../support/browser-fixture";
 import { CasePage } from "../support/pages/case-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);
 

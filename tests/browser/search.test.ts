@@ -3,10 +3,10 @@
 import { beforeAll, expect, test } from "vitest";
 import { PHONE, DESK } from "../support/browser";
 import { caseWith, markerWord, people } from "../api/search/casebook";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { SearchPage } from "../support/pages/search-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 const marker = markerWord();
 const url = `/search?q=spaling+${marker}`;

@@ -2,15 +2,16 @@
 // confirmations carries a flag the engineer sees; the main screens pass axe-core's serious and critical rules.
 import { expect, test } from "vitest";
 import { as } from "../support/api";
+import { pool } from "../support/db";
 import { seriousAxeProblems } from "../support/axe";
 import { DESK, PHONE } from "../support/browser";
 import { APP_URL } from "../support/env";
 import { fieldReport } from "../api/cases/fixtures";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { CasePage } from "../support/pages/case-page";
 import { NewRemovalPage } from "../support/pages/new-removal-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 test("an incomplete removal shows a summary at the top with a link per field, and focus moves to the first", async () => {
   const page = await ui.signIn("inspector", PHONE);
@@ -48,7 +49,7 @@ test("a report filed with safety confirmations unticked shows the flag to the en
     expect(text).toContain("Not confirmed: wheelset is out from under the car and secured against rolling");
     expect(text).not.toContain("blue-signal protection is in place");
     expect(text).toMatch(/employer's procedures, the applicable interchange rules and local codes/);
-    await page.screenshot({ path: `/tmp/shots/e2e-safety-flag-${viewport === PHONE ? "phone" : "desk"}.png`, fullPage: false });
+    await ui.shot(page, `e2e-safety-flag-${viewport === PHONE ? "phone" : "desk"}`, { fullPage: false });
     await page.context().close();
   }
   // The printed report carries it too.
@@ -97,3 +98,21 @@ test("on a phone the menu shows every destination without sideways scrolling, ea
   expect(await page.locator("#phone-menu").count()).toBe(0);
   await page.context().close();
 });
+
+test("axe-core finds no serious or critical problem on a signed case, the search results and the tallies", async () => {
+  const { rows } = await pool.query<{ number: string }>(
+    "SELECT c.number FROM cases c WHERE c.status = 'signed' AND EXISTS (SELECT 1 FROM photos p WHERE p.case_id = c.id) ORDER BY c.number LIMIT 1",
+  );
+  const signed = `/cases/${rows[0].number}`;
+  const found: Record<string, unknown> = {};
+  for (const viewport of [PHONE, DESK]) {
+    const page = await ui.signIn("engineer", viewport);
+    for (const [path, ready] of [[signed, '[data-testid="photo-tile"]'], ["/search?q=spall+cup+outboard+row", '[data-testid="search-hit"]'], ["/tallies", "main h1"], ["/tallies/life", "[data-life-causes]"]] as const) {
+      await page.goto(path);
+      await page.locator(ready).first().waitFor();
+      found[`${path} (${viewport.width} px)`] = await seriousAxeProblems(page);
+    }
+    await page.context().close();
+  }
+  expect(found).toEqual(Object.fromEntries(Object.keys(found).map((k) => [k, []])));
+}, 120_000);

@@ -3,10 +3,10 @@ import { expect, test } from "vitest";
 import { DEMO_PASSWORD } from "../../scripts/seed/demo-people";
 import { demoUser } from "../support/api";
 import { PHONE } from "../support/browser";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { SignInPage } from "../support/pages/sign-in-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 test("sign-in on a phone: wrong password refused with a message, right password opens the home page", async () => {
   const page = await ui.open(PHONE, { hasTouch: true, isMobile: true });

@@ -5,10 +5,10 @@ import { as } from "../support/api";
 import { PHONE, DESK } from "../support/browser";
 import { caseWith, markerWord, people } from "../api/search/casebook";
 import { racewayJpeg } from "./similar-photos";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { CasePage } from "../support/pages/case-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 const marker = markerWord();
 let target: { id: string; number: string }, twin: { id: string; number: string };

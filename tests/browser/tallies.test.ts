@@ -8,10 +8,10 @@ import { DESK, PHONE } from "../support/browser";
 import { createCase } from "../support/factories";
 import { checkValues } from "../unit/stats/check-values";
 import { insertCasebook, makeSites, specs, tag } from "../api/tallies/casebook";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { TalliesPage } from "../support/pages/tallies-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 const CLASS = tag();
 

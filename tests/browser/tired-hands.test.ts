@@ -1,10 +1,10 @@
 // In Chromium on a phone: the unit switch asks before touching a number, and a reading no bearing can show is refused until confirmed.
 import { expect, test } from "vitest";
 import { PHONE } from "../support/browser";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { NewRemovalPage } from "../support/pages/new-removal-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 test("switching units asks; converting keeps the reading, 5 in is refused until confirmed as typed", async () => {
   const page = await ui.signIn("inspector", PHONE);

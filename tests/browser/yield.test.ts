@@ -3,10 +3,10 @@
 import { expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { DESK, PHONE } from "../support/browser";
-import { useBrowser } from "../support/browser-fixture";
+import { browserPerFile } from "../support/browser-fixture";
 import { TalliesPage } from "../support/pages/tallies-page";
 
-const ui = useBrowser();
+const ui = browserPerFile();
 
 const CARDS = [
   "Hot-bearing alarms: reading against outcome",

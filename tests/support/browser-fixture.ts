@@ -1,6 +1,6 @@
 // One browser per test file: launched before the file's tests, closed after, with sign-in as a
 // demo role and a screenshot folder. Use it at the top of a browser test file:
-//   const ui = useBrowser();
+//   const ui = browserPerFile();   (not a React hook: a plain name so the hooks rule leaves it alone)
 //   test("…", async () => { const page = await ui.signIn("inspector", PHONE); … await ui.shot(page, "name"); });
 import { mkdirSync } from "node:fs";
 import path from "node:path";
@@ -27,7 +27,7 @@ export type BrowserFixture = {
   shot(page: Page, name: string, options?: { fullPage?: boolean }): Promise<string>;
 };
 
-export function useBrowser(): BrowserFixture {
+export function browserPerFile(): BrowserFixture {
   let browser: Browser | undefined;
   beforeAll(async () => {
     mkdirSync(SHOTS, { recursive: true });
@@ -43,7 +43,7 @@ export function useBrowser(): BrowserFixture {
   };
   const fixture: BrowserFixture = {
     get browser() {
-      if (!browser) throw new Error("The browser is not running yet: call useBrowser() at the top of the file and use it inside tests.");
+      if (!browser) throw new Error("The browser is not running yet: call browserPerFile() at the top of the file and use it inside tests.");
       return browser;
     },
     open,

@@ -1,5 +1,5 @@
 // Debian's Chromium driven by playwright-core (no browser download), for page tests. Test files
-// use it through tests/support/browser-fixture.ts (useBrowser) and the page objects in tests/support/pages/.
+// use it through tests/support/browser-fixture.ts (browserPerFile) and the page objects in tests/support/pages/.
 import { chromium, type Browser, type BrowserContext } from "playwright-core";
 import { afterEach } from "vitest";
 import { CHROMIUM_PATH } from "./env";

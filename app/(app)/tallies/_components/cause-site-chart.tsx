@@ -23,7 +23,3 @@ export function CauseSiteChart({ tally }: { tally: CauseSiteTally }) {
     </BarChart>
   );
 }
-
-export function causeLegend(tally: CauseSiteTally) {
-  return tally.causes.map((c, j) => ({ label: c.label, colour: causeColour(c.code, j) }));
-}

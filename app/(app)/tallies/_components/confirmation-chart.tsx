@@ -4,9 +4,9 @@
 import { Bar, CartesianGrid, ComposedChart, ReferenceLine, Tooltip, XAxis, YAxis, type BarShapeProps } from "recharts";
 import { AXIS_TICK, THEME } from "@/components/charts/palette";
 import { percent, percentRange } from "@/lib/tallies/labels";
+import { TONE } from "./chart-words";
 import type { ConfirmationRow, ConfirmationTable } from "@/lib/tallies/types";
 
-const TONE = { below: "#dc2626", above: "#047857", none: "#334155" } as const;
 
 function IntervalShape(props: BarShapeProps) {
   const { x, y, width, height, payload } = props;
@@ -48,10 +48,3 @@ export function ConfirmationChart({ table, nameWidth = 150 }: { table: Confirmat
     </ComposedChart>
   );
 }
-
-export const CONFIRMATION_LEGEND = [
-  { label: "Confirmed share with 95% interval", colour: TONE.none },
-  { label: "Interval wholly below all", colour: TONE.below },
-  { label: "Interval wholly above all", colour: TONE.above },
-  { label: "Rate over all (dashed)", colour: "#b45309" },
-];

@@ -44,10 +44,3 @@ export function ControlChart({ months, series, partialMonth }: { months: string[
     </LineChart>
   );
 }
-
-export const CONTROL_LEGEND = [
-  { label: "Count per month", colour: "#b45309" },
-  { label: "Centre line c̄", colour: "#64748b" },
-  { label: "Control limits c̄ ± 3√c̄", colour: "#dc2626" },
-  { label: "Month beyond a limit", colour: "#dc2626" },
-];

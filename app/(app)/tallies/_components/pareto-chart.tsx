@@ -2,7 +2,6 @@
 // Root causes, most frequent first, with the running share of all signed verdicts.
 import { Bar, CartesianGrid, Cell, ComposedChart, Line, Tooltip, XAxis, YAxis } from "recharts";
 import { AXIS_TICK, causeColour, THEME } from "@/components/charts/palette";
-import { percent } from "@/lib/tallies/labels";
 import type { ParetoBar } from "@/lib/tallies/types";
 
 const compact = (v: number) => (v >= 10_000 ? `${Math.round(v / 1000)}k` : v.toLocaleString("en-US"));
@@ -28,11 +27,4 @@ export function ParetoChart({ rows }: { rows: ParetoBar[] }) {
       <Line yAxisId="pct" dataKey="cumulativePct" name="Running share" stroke={THEME.ink2} strokeWidth={2} dot={{ r: 3, fill: THEME.ink2 }} isAnimationActive={false} />
     </ComposedChart>
   );
-}
-
-/** "The top 3 causes make up 71% of verdicts." */
-export function paretoHeadline(rows: ParetoBar[]): string {
-  if (rows.length === 0) return "";
-  const k = Math.min(3, rows.length);
-  return `The top ${k === 1 ? "cause" : `${k} causes`} make${k === 1 ? "s" : ""} up ${percent(rows[k - 1].cumulativeShare)} of signed verdicts.`;
 }

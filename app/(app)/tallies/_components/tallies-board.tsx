@@ -8,14 +8,11 @@ import { Select } from "@/components/ui/field";
 import { monthLabel } from "@/lib/tallies/labels";
 import { causeSiteTable, clustersTable, confirmationView, controlLimitsTable, damageTable, monthlyTable, paretoTable, triggerVerdictTable } from "@/lib/tallies/tables";
 import type { TalliesData } from "@/lib/tallies/types";
-import { CauseSiteChart, causeLegend } from "./cause-site-chart";
+import { CauseSiteChart, ConfirmationChart, ControlChart, ParetoChart, TriggerVerdictChart } from "./charts";
+import { causeLegend, CONFIRMATION_LEGEND, CONTROL_LEGEND, paretoHeadline, TRIGGER_VERDICT_LEGEND } from "./chart-words";
 import { CauseSiteFindings, CauseSiteTable } from "./cause-site-table";
 import { ClusterControls, ClustersList } from "./clusters-list";
-import { ConfirmationChart, CONFIRMATION_LEGEND } from "./confirmation-chart";
-import { ControlChart, CONTROL_LEGEND } from "./control-chart";
 import { HeadlineTiles } from "./headline-tiles";
-import { ParetoChart, paretoHeadline } from "./pareto-chart";
-import { TriggerVerdictChart, TRIGGER_VERDICT_LEGEND } from "./trigger-verdict-chart";
 
 const SIGNED = "Signed verdicts only";
 
@@ -54,7 +51,7 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
           footer={
             lowShops.length ? (
               <p><span className="font-semibold text-danger">Training signal:</span> {lowShops.map((s) => s.label).join(", ")} {lowShops.length === 1 ? "has" : "have"} a confirmed share clearly below the rest.</p>
-            ) : data.byShop.rows.length > 1 ? <p className="text-muted">No shop's confirmed share differs clearly from the others.</p> : undefined
+            ) : data.byShop.rows.length > 1 ? <p className="text-muted">No shop&rsquo;s confirmed share differs clearly from the others.</p> : undefined
           }
         >
           <ConfirmationChart table={data.byShop} nameWidth={170} />
@@ -88,7 +85,7 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
             {series ? <ControlChart months={data.monthly.months} series={series} partialMonth={data.monthly.partialMonth} /> : null}
             <ChartLegend items={CONTROL_LEGEND} />
             <details className="mt-3 text-sm">
-              <summary className="cursor-pointer text-accent">All series: limits and months beyond</summary>
+              <summary className="flex min-h-11 cursor-pointer items-center text-accent lg:min-h-0">All series: limits and months beyond</summary>
               <div className="mt-2 overflow-x-auto">
                 <table className="w-full text-sm">
                   <tbody>

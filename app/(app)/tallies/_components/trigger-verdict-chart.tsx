@@ -18,9 +18,3 @@ export function TriggerVerdictChart({ rows }: { rows: TriggerVerdictRow[] }) {
     </BarChart>
   );
 }
-
-export const TRIGGER_VERDICT_LEGEND = [
-  { label: "Confirmed at teardown", colour: OUTCOME_COLOURS.confirmed },
-  { label: "No defect found", colour: OUTCOME_COLOURS.noDefect },
-  { label: "Outcome not recorded", colour: OUTCOME_COLOURS.notRecorded },
-];

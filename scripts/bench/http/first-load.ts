@@ -1,0 +1,66 @@
+// First-load JavaScript per page, compressed as it crosses the wire: the scripts the page's HTML
+// asks for, loaded in headless Chromium from the running production server, signed in as a manager.
+// Scripts fetched later (charts behind next/dynamic) are shown beside it, not counted in first load.
+import { chromium } from "playwright-core";
+import { Client } from "pg";
+import { record } from "../support/figures";
+import { APP_URL, signedInCookie } from "./session";
+
+const ROUTE_KB = 200;
+const FORM_KB = 150;
+
+const pg = new Client({ connectionString: process.env.DATABASE_URL });
+await pg.connect();
+const number = (await pg.query<{ number: string }>("select number from cases where status = 'signed' order by number limit 1")).rows[0].number;
+await pg.end();
+
+const pages: { path: string; target: number; signedIn: boolean }[] = [
+  { path: "/sign-in", target: ROUTE_KB, signedIn: false },
+  { path: "/", target: ROUTE_KB, signedIn: true },
+  { path: "/cases", target: ROUTE_KB, signedIn: true },
+  { path: "/cases/new", target: FORM_KB, signedIn: true },
+  { path: `/cases/${number}`, target: ROUTE_KB, signedIn: true },
+  { path: `/cases/${number}/photos`, target: ROUTE_KB, signedIn: true },
+  { path: "/search", target: ROUTE_KB, signedIn: true },
+  { path: "/tallies", target: ROUTE_KB, signedIn: true },
+  { path: "/tallies/life", target: ROUTE_KB, signedIn: true },
+  { path: "/reference", target: ROUTE_KB, signedIn: true },
+  { path: "/profile", target: ROUTE_KB, signedIn: true },
+];
+
+const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH, args: ["--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run"] });
+try {
+  const cookie = await signedInCookie("manager");
+  const host = new URL(APP_URL).hostname;
+  for (const p of pages) {
+    const ctx = await browser.newContext({ baseURL: APP_URL });
+    if (p.signedIn) {
+      await ctx.addCookies(cookie.split("; ").map((pair) => {
+        const at = pair.indexOf("=");
+        return { name: pair.slice(0, at), value: pair.slice(at + 1), domain: host, path: "/" };
+      }));
+    }
+    const page = await ctx.newPage();
+    const sizes = new Map<string, Promise<number>>();
+    page.on("requestfinished", (req) => {
+      if (req.resourceType() === "script") sizes.set(req.url(), req.sizes().then((s) => s.responseBodySize));
+    });
+    const res = await page.goto(p.path, { waitUntil: "networkidle" });
+    if (!res || res.status() !== 200) throw new Error(`${p.path} answered ${res?.status()}`);
+    // What the served HTML itself asks for (script tags and script preloads), not what the page adds later.
+    const html = await res.text();
+    const refs = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*as="script"[^>]*\shref|link[^>]*\shref)="([^"]+\.js[^"]*)"/g)].map((m) => new URL(m[1].replace(/&amp;/g, "&"), APP_URL).href);
+    const inHtml = new Set(refs);
+    let first = 0, later = 0;
+    for (const [url, size] of sizes) {
+      if (inHtml.has(url)) first += await size;
+      else later += await size;
+    }
+    const kb = first / 1024;
+    const label = p.path.replace(number, "[number]");
+    record({ name: `first-load JS ${label}`, runs: 1, p50: kb, p95: kb, unit: "kB", target: p.target, note: `${(later / 1024).toFixed(1)} kB more fetched after load` });
+    await ctx.close();
+  }
+} finally {
+  await browser.close();
+}
