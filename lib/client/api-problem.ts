@@ -13,6 +13,14 @@ export const CLIENT_TIMEOUT_MS = 20_000;
 /** Uploads (photos, fleet lists) carry megabytes over the same weak signal. */
 export const UPLOAD_TIMEOUT_MS = 120_000;
 
+/** The limit for an ordinary call: CLIENT_TIMEOUT_MS, unless the page set a positive
+ * `window.tearlineClientTimeoutMs` before the app ran (browser tests shorten it so that a
+ * held request does not make a slow test). */
+export function clientTimeoutMs(): number {
+  const set = (globalThis as { tearlineClientTimeoutMs?: unknown }).tearlineClientTimeoutMs;
+  return typeof set === "number" && Number.isFinite(set) && set > 0 ? set : CLIENT_TIMEOUT_MS;
+}
+
 export const TIMEOUT_MESSAGE = "The server did not answer in time. Check the connection and try again; nothing was lost on this screen.";
 export const OFFLINE_MESSAGE = "The server could not be reached. Check the connection and try again.";
 export const CANCELLED_MESSAGE = "Cancelled.";

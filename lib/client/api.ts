@@ -1,6 +1,6 @@
 // The one way browser code calls Tearline's API: JSON or a form, a time limit, and every refusal
 // read the same way (see api-problem.ts). A weak signal ends in a message, never a spinner forever.
-import { ApiError, CLIENT_TIMEOUT_MS, UPLOAD_TIMEOUT_MS, noAnswerProblem, problemFrom, type ApiResult, type NoAnswer, type ProblemOptions } from "./api-problem";
+import { ApiError, clientTimeoutMs, UPLOAD_TIMEOUT_MS, noAnswerProblem, problemFrom, type ApiResult, type NoAnswer, type ProblemOptions } from "./api-problem";
 
 export * from "./api-problem";
 
@@ -10,7 +10,7 @@ export type CallOptions = ProblemOptions & {
   /** Sent as multipart; the time limit defaults to the upload one. */
   form?: FormData;
   headers?: Record<string, string>;
-  /** Milliseconds before giving up; 20 s, or 120 s for a form. */
+  /** Milliseconds before giving up; 20 s (see clientTimeoutMs), or 120 s for a form. */
   timeoutMs?: number;
   /** The caller's own cancel (a closed dialog). */
   signal?: AbortSignal;
@@ -19,7 +19,7 @@ export type CallOptions = ProblemOptions & {
 export async function callApi<T = unknown>(method: string, url: string, opts: CallOptions = {}): Promise<ApiResult<T>> {
   const controller = new AbortController();
   let why: NoAnswer | null = null;
-  const ms = opts.timeoutMs ?? (opts.form ? UPLOAD_TIMEOUT_MS : CLIENT_TIMEOUT_MS);
+  const ms = opts.timeoutMs ?? (opts.form ? UPLOAD_TIMEOUT_MS : clientTimeoutMs());
   const timer = setTimeout(() => {
     why = "timeout";
     controller.abort();

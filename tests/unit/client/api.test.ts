@@ -3,7 +3,7 @@
 import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { callApi, problemFrom, noAnswerProblem, stripPrefixes, TIMEOUT_MESSAGE, OFFLINE_MESSAGE, CANCELLED_MESSAGE } from "@/lib/client/api";
+import { callApi, clientTimeoutMs, CLIENT_TIMEOUT_MS, problemFrom, noAnswerProblem, stripPrefixes, TIMEOUT_MESSAGE, OFFLINE_MESSAGE, CANCELLED_MESSAGE } from "@/lib/client/api";
 
 describe("problemFrom reads every error shape the server sends (lib/http/handler.ts errorResponse)", () => {
   it("a zod refusal: message and field problems, prefixes removed when asked", () => {
@@ -112,6 +112,21 @@ describe("callApi against a real HTTP server", () => {
     const r = await callApi("GET", `${base}/silent`, { timeoutMs: 150 });
     expect(r).toMatchObject({ ok: false, status: 0, code: "timeout", message: TIMEOUT_MESSAGE });
     expect(Date.now() - started).toBeLessThan(5_000); // arithmetic: 150 ms limit, generous margin for a loaded machine
+  });
+
+  it("without a limit of its own a call uses the page's limit when one is set, else 20 s", async () => {
+    const g = globalThis as { tearlineClientTimeoutMs?: unknown };
+    expect(clientTimeoutMs()).toBe(CLIENT_TIMEOUT_MS);
+    for (const bad of [0, -5, Number.NaN, "100"]) {
+      g.tearlineClientTimeoutMs = bad;
+      expect(clientTimeoutMs()).toBe(CLIENT_TIMEOUT_MS);
+    }
+    g.tearlineClientTimeoutMs = 150;
+    try {
+      expect(await callApi("GET", `${base}/silent`)).toMatchObject({ ok: false, status: 0, code: "timeout", message: TIMEOUT_MESSAGE });
+    } finally {
+      delete g.tearlineClientTimeoutMs;
+    }
   });
 
   it("a caller's cancel is not reported as a timeout", async () => {
