@@ -6,7 +6,7 @@ import { Field, Input } from "@/components/ui/field";
 import { authClient } from "@/lib/auth/client";
 import { passwordSchema, PASSWORD_MIN } from "@/lib/validation/account";
 import { ErrorSummary } from "@/components/ui/error-summary";
-import { fetchWithTimeout } from "@/lib/http/client-fetch";
+import { sendJson } from "@/lib/client/api";
 
 /** Sets a password from a reset link or an invitation link. */
 export function SetPasswordForm({ mode, token }: { mode: "reset" | "invitation"; token: string }) {
@@ -28,13 +28,8 @@ export function SetPasswordForm({ mode, token }: { mode: "reset" | "invitation";
       const { error } = await authClient.resetPassword({ newPassword: password, token });
       if (error) problem = "This reset link is not valid any more. Ask for a new one from the sign-in page.";
     } else {
-      const { res, ...failed } = await fetchWithTimeout("/api/invitations/accept", {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ token, password }),
-      });
-      if (!res) problem = "message" in failed ? failed.message : "The invitation could not be accepted.";
-      else if (!res.ok) problem = ((await res.json().catch(() => ({}))) as { error?: string }).error ?? "The invitation could not be accepted.";
+      const res = await sendJson("POST", "/api/invitations/accept", { token, password });
+      if (!res.ok) problem = res.message;
     }
     setPending(false);
     if (problem) return setErrors({ form: problem });

@@ -8,7 +8,7 @@ import { FieldMessages } from "@/components/removal/field-messages";
 import { FieldCallPanel } from "@/components/removal/field-call-panel";
 import { TRIGGERS } from "@/lib/classification";
 import { Facts } from "./facts";
-import { triggerLabel } from "./labels";
+import { triggerLabel } from "@/lib/classification/labels";
 
 const feelTone: Record<string, string> = { smooth: "bg-ok-soft text-ok", stiff: "bg-warn-soft text-warn", rough: "bg-danger-soft text-danger", catch: "bg-danger-soft text-danger" };
 

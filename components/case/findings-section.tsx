@@ -9,7 +9,8 @@ import { COMPONENTS } from "@/lib/classification";
 import type { FindingInput } from "@/lib/cases/schemas";
 import { FindingForm } from "./finding-form";
 import type { PickerEntry } from "./code-picker";
-import { clockWords, componentLabel, damageLabel, zoneLabel } from "./labels";
+import { clockWords } from "@/lib/damage-map/geometry";
+import { componentLabel, damageLabel, zoneLabel } from "@/lib/classification/labels";
 import { ActionError, useCaseAction } from "./use-case-action";
 
 const sevTone = ["neutral", "neutral", "warn", "danger", "danger"] as const;

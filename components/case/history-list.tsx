@@ -1,5 +1,5 @@
 // The case's history: every change, who made it, when, and what it was before.
-import { componentLabel } from "./labels";
+import { componentLabel } from "@/lib/classification/labels";
 import { formatMoment } from "@/lib/dates";
 
 type Event = { id: string; at: Date; action: string; changes: { field: string; from: unknown; to: unknown }[]; reason: string | null; userName: string | null };

@@ -5,8 +5,9 @@ import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import type { SignedContent } from "@/lib/cases/signature-content";
-import { causeLabel, componentLabel, confidenceLabel, damageLabel, severityLabel, zoneLabel } from "@/lib/report/format";
+import { causeLabel, componentLabel, confidenceLabel, damageLabel, severityLabel, zoneLabel } from "@/lib/classification/labels";
 import { ActionError, useCaseAction } from "./use-case-action";
+import { callApi } from "@/lib/client/api";
 
 type View = { meaning: string; contentHash: string; content: SignedContent; version: number };
 
@@ -21,10 +22,10 @@ export function SignatureCeremony({ caseId, onCancel }: { caseId: string; onCanc
 
   useEffect(() => {
     let live = true;
-    fetch(`/api/cases/${caseId}/signature`).then(async (res) => {
+    void callApi<View>("GET", `/api/cases/${caseId}/signature`).then((res) => {
       if (!live) return;
-      if (res.ok) setView((await res.json()) as View);
-      else setLoadError("What is to be signed could not be loaded. Reload the page and try again.");
+      if (res.ok) setView(res.data);
+      else setLoadError(res.status === 0 ? res.message : "What is to be signed could not be loaded. Reload the page and try again.");
     });
     return () => { live = false; };
   }, [caseId]);

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Select, Textarea } from "@/components/ui/field";
 import { COMPONENTS, DISPOSITIONS, LUBRICANT_CONDITIONS } from "@/lib/classification";
 import { ActionError, useCaseAction } from "./use-case-action";
-import { dispositionLabel, lubricantLabel } from "./labels";
+import { componentLabel, dispositionLabel, lubricantLabel } from "@/lib/classification/labels";
 
 type Teardown = { lubricant: { conditions?: string[]; notes?: string }; dispositions: Record<string, string>; teardownNotes: string };
 const PARTS = COMPONENTS.filter((c) => !["lubricant", "journal"].includes(c.code));
@@ -23,12 +23,12 @@ export function TeardownForm({ caseId, version, value, editable }: { caseId: str
       <div className="grid gap-4 text-sm sm:grid-cols-2">
         <div>
           <p className="text-xs text-muted">Lubricant</p>
-          <p className="font-medium">{(t.lubricant.conditions ?? []).map(lubricantLabel).join(", ") || "—"}</p>
+          <p className="font-medium">{(t.lubricant.conditions ?? []).map((x) => lubricantLabel(x)).join(", ") || "—"}</p>
           {t.lubricant.notes ? <p className="mt-1 text-ink-2">{t.lubricant.notes}</p> : null}
         </div>
         <div>
           <p className="text-xs text-muted">Dispositions</p>
-          <p className="font-medium">{Object.entries(t.dispositions).map(([k, v]) => `${COMPONENTS.find((c) => c.code === k)?.label ?? k}: ${dispositionLabel(v)}`).join(" · ") || "—"}</p>
+          <p className="font-medium">{Object.entries(t.dispositions).map(([k, v]) => `${componentLabel(k)}: ${dispositionLabel(v)}`).join(" · ") || "—"}</p>
         </div>
         {t.teardownNotes ? <p className="whitespace-pre-wrap rounded-lg bg-surface-2 p-3 sm:col-span-2">{t.teardownNotes}</p> : null}
       </div>

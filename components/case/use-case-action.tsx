@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { ErrorSummary } from "@/components/ui/error-summary";
-import { fetchWithTimeout } from "@/lib/http/client-fetch";
+import { callApi } from "@/lib/client/api";
 
 export function useCaseAction() {
   const router = useRouter();
@@ -14,17 +14,10 @@ export function useCaseAction() {
   async function run(method: string, url: string, body?: unknown): Promise<boolean> {
     setBusy(true);
     setError(null);
-    const sent = await fetchWithTimeout(url, { method, headers: body ? { "content-type": "application/json" } : {}, body: body ? JSON.stringify(body) : undefined });
+    const res = await callApi(method, url, { json: body ?? undefined, fieldPrefixes: ["data", "finding"], fallback: "The change was not saved." });
     setBusy(false);
-    if (!sent.res) {
-      setError({ message: sent.message, conflict: false });
-      return false;
-    }
-    const res = sent.res;
     if (!res.ok) {
-      const b = (await res.json().catch(() => ({}))) as { error?: string; fields?: Record<string, string> };
-      const fields = Object.fromEntries(Object.entries(b.fields ?? {}).map(([k, v]) => [k.replace(/^(data|finding)\./, ""), v]));
-      setError({ message: b.error ?? `The change was not saved (${res.status}).`, conflict: res.status === 409, fields });
+      setError({ message: res.message, conflict: res.conflict, fields: res.fields });
       return false;
     }
     startTransition(() => router.refresh());

@@ -7,7 +7,7 @@ import { ChoiceChips } from "@/components/removal/choice-chips";
 import { CONFIDENCES, ROOT_CAUSES } from "@/lib/classification";
 import { ActionError, useCaseAction } from "./use-case-action";
 import { Facts } from "./facts";
-import { causeLabel, confidenceLabel } from "./labels";
+import { causeLabel, confidenceLabel } from "@/lib/classification/labels";
 
 type Verdict = { primaryCause: string | null; contributingCauses: string[]; confidence: "confirmed" | "probable" | "undetermined" | null; removalConfirmed: "confirmed" | "no-defect" | null; correctiveAction: string; verdictNotes: string };
 
@@ -26,7 +26,7 @@ export function VerdictForm({ caseId, version, value, editable, causes }: { case
         <Facts
           items={[
             ["Primary root cause", causeLabel(v.primaryCause)],
-            ["Contributing", v.contributingCauses.map(causeLabel).join(", ")],
+            ["Contributing", v.contributingCauses.map((x) => causeLabel(x)).join(", ")],
             ["Confidence", confidenceLabel(v.confidence)],
             ["Removal", v.removalConfirmed === "confirmed" ? "Confirmed by teardown" : v.removalConfirmed === "no-defect" ? "No defect found" : null],
           ]}

@@ -2,9 +2,10 @@
 // cup raceway as the outer band and the cone raceway as the inner band, 12 o'clock at the top,
 // the load zone marked on the cup. Give `findings` for one case (each finding its own arc), or
 // `sectors` for many cases summed (shaded by how many findings touch each clock sector).
-import { damageCodeInfo } from "@/lib/classification/damage-codes";
-import { annularSector, clockPoint, clockWords } from "@/lib/damage-map/geometry";
-import { RING_LABELS, ringsOf, type RingId, type SectorCell } from "@/lib/damage-map/rings";
+import { damageLabel } from "@/lib/classification/labels";
+import { bandPath, clockPoint, clockWords, HOUR_TICKS } from "@/lib/damage-map/geometry";
+import { arcOf, HEAT_COLOURS, heatColour, LOAD_ZONE_COLOUR, LOAD_ZONE_HALF_DEG, LOAD_ZONE_INK, offMapWords, RING_BANDS, RING_LABELS, RING_NAMES, ringKindOf, SEVERITY_COLOURS, SEVERITY_KEYS, severityColour, severityWord } from "@/lib/damage-map/look";
+import { ringsOf, type RingId, type SectorCell } from "@/lib/damage-map/rings";
 
 export type DamageMapFinding = {
   component: string;
@@ -25,12 +26,6 @@ export type DamageMapProps = {
   className?: string;
 };
 
-export const SEVERITY_COLOURS = ["#94a3b8", "#d6b370", "#e29a2d", "#d9601f", "#b91c1c"] as const;
-const SEVERITY_WORDS = ["none", "cosmetic", "minor", "part condemned", "bearing condemned"];
-const HEAT = ["#fef3c7", "#fcd34d", "#f59e0b", "#ea580c", "#b91c1c"] as const;
-/** Damage without an extent is drawn as a short mark, not a claim of its size. */
-const SPOT_DEG = 8;
-const LOAD_ZONE_HALF = 60;
 
 const R = 78;
 const DISCS = [
@@ -39,23 +34,20 @@ const DISCS = [
 ] as const;
 // Rounded so the server's and the browser's trigonometry draw identical markup.
 const at = (cx: number, r: number, deg: number) => clockPoint(cx, CY, r, deg).map((v) => Math.round(v * 100) / 100);
-const BANDS = { cup: [0.74, 0.96], cone: [0.42, 0.64] } as const;
+const BANDS = RING_BANDS;
 const CY = 112;
 
-function bandOf(ring: RingId): readonly [number, number] {
-  return ring.startsWith("cup") ? BANDS.cup : BANDS.cone;
-}
+const bandOf = (ring: RingId): readonly [number, number] => RING_BANDS[ringKindOf(ring)];
 function discOf(ring: RingId) {
   return DISCS.find((d) => d.cup === ring || d.cone === ring)!;
 }
 
-export const heatColour = (findings: number, max: number) => HEAT[Math.min(HEAT.length - 1, Math.floor((findings / Math.max(1, max)) * HEAT.length - 1e-9))];
 
 function Disc({ cx, row }: { cx: number; row: string }) {
-  const zone = annularSector(cx, CY, R * 0.985, R * 1.06, -LOAD_ZONE_HALF, LOAD_ZONE_HALF);
+  const zone = bandPath(cx, CY, R * 0.985, R * 1.06, -LOAD_ZONE_HALF_DEG, LOAD_ZONE_HALF_DEG);
   return (
     <g>
-      <path d={zone} fill="#f59e0b" fillOpacity={0.35} />
+      <path d={zone} fill={LOAD_ZONE_COLOUR} fillOpacity={0.35} />
       {(["cup", "cone"] as const).map((b) => (
         <g key={b}>
           <circle cx={cx} cy={CY} r={((BANDS[b][0] + BANDS[b][1]) / 2) * R} fill="none" stroke="var(--surface-2, #f1f5f9)" strokeWidth={(BANDS[b][1] - BANDS[b][0]) * R} />
@@ -63,14 +55,14 @@ function Disc({ cx, row }: { cx: number; row: string }) {
           <circle cx={cx} cy={CY} r={BANDS[b][0] * R} fill="none" stroke="var(--line-strong, #cbd5e1)" strokeWidth={0.8} />
         </g>
       ))}
-      {Array.from({ length: 12 }, (_, h) => {
-        const [x0, y0] = at(cx, R * 0.97, h * 30);
-        const [x1, y1] = at(cx, R * (h % 3 === 0 ? 1.09 : 1.04), h * 30);
-        const [lx, ly] = at(cx, R * 1.19, h * 30);
+      {HOUR_TICKS.map((t) => {
+        const [x0, y0] = at(cx, R * 0.97, t.deg);
+        const [x1, y1] = at(cx, R * (t.major ? 1.09 : 1.04), t.deg);
+        const [lx, ly] = at(cx, R * 1.19, t.deg);
         return (
-          <g key={h}>
+          <g key={t.deg}>
             <line x1={x0} y1={y0} x2={x1} y2={y1} stroke="var(--muted, #64748b)" strokeWidth={0.8} />
-            {h % 3 === 0 ? <text x={lx} y={ly + 4} textAnchor="middle" fontSize={11} fontWeight={700} fill="var(--ink-2, #334155)">{h === 0 ? 12 : h}</text> : null}
+            {t.major ? <text x={lx} y={ly + 4} textAnchor="middle" fontSize={11} fontWeight={700} fill="var(--ink-2, #334155)">{t.label}</text> : null}
           </g>
         );
       })}
@@ -85,21 +77,21 @@ function RingNames({ cx }: { cx: number }) {
   const halo = { stroke: "var(--surface, #ffffff)", strokeWidth: 2.5, paintOrder: "stroke" as const, strokeLinejoin: "round" as const };
   return (
     <g>
-      <text x={cx} y={CY + R * 0.85 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>CUP</text>
-      <text x={cx} y={CY + R * 0.53 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>CONE</text>
+      <text x={cx} y={CY + R * 0.85 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>{RING_NAMES.cup}</text>
+      <text x={cx} y={CY + R * 0.53 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>{RING_NAMES.cone}</text>
     </g>
   );
 }
 
-const LEGEND_WORDS = SEVERITY_WORDS.map((w, i) => `${i} ${w}`);
+const LEGEND_WORDS = SEVERITY_KEYS;
 // Each key as wide as its words (about 4.9 px a character at 9 px), so long words never overlap.
 const LEGEND_X = LEGEND_WORDS.reduce<number[]>((xs, w, i) => [...xs, i === 0 ? 0 : xs[i - 1] + 24 + LEGEND_WORDS[i - 1].length * 4.9], []);
 
 function describe(f: DamageMapFinding): string {
-  const code = f.damageCode ? (damageCodeInfo(f.damageCode)?.label ?? f.damageCode) : "Finding";
+  const code = f.damageCode ? damageLabel(f.damageCode) : "Finding";
   const at = f.clockDeg === null || f.clockDeg === undefined ? "" : ` at ${clockWords(f.clockDeg)}`;
   const arc = f.arcDeg ? `, ${f.arcDeg}° arc` : ", extent not recorded";
-  return `${code}${at}${arc} · severity ${f.severity} (${SEVERITY_WORDS[f.severity] ?? "?"})`;
+  return `${code}${at}${arc} · severity ${f.severity} (${severityWord(f.severity)})`;
 }
 
 export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, className = "" }: DamageMapProps) {
@@ -120,7 +112,7 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
               const d = discOf(s.ring);
               const [a, b] = bandOf(s.ring);
               return (
-                <path key={`${s.ring}-${s.sector}`} d={annularSector(d.cx, CY, a * R, b * R, s.sector * sectorDeg, (s.sector + 1) * sectorDeg)} fill={heatColour(s.findings, max)}>
+                <path key={`${s.ring}-${s.sector}`} d={bandPath(d.cx, CY, a * R, b * R, s.sector * sectorDeg, (s.sector + 1) * sectorDeg)} fill={heatColour(s.findings, max)}>
                   <title>{`${RING_LABELS[s.ring]}, ${clockWords(s.sector * sectorDeg)} to ${clockWords((s.sector + 1) * sectorDeg)}: ${s.findings} finding${s.findings === 1 ? "" : "s"}, worst severity ${s.maxSeverity}`}</title>
                 </path>
               );
@@ -131,10 +123,9 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
                 : ringsOf(f.component, f.row).map((ring) => {
                     const d = discOf(ring);
                     const [a, b] = bandOf(ring);
-                    const extent = Math.min(360, f.arcDeg && f.arcDeg > 0 ? f.arcDeg : SPOT_DEG);
-                    const start = f.clockDeg! - extent / 2;
+                    const { startDeg, endDeg } = arcOf(f.clockDeg!, f.arcDeg);
                     return (
-                      <path key={`${i}-${ring}`} d={annularSector(d.cx, CY, a * R + 1, b * R - 1, start, start + extent)} fill={SEVERITY_COLOURS[Math.max(0, Math.min(4, f.severity))]} fillOpacity={0.9} stroke="#ffffff" strokeWidth={0.6}>
+                      <path key={`${i}-${ring}`} d={bandPath(d.cx, CY, a * R + 1, b * R - 1, startDeg, endDeg)} fill={severityColour(f.severity)} fillOpacity={0.9} stroke="#ffffff" strokeWidth={0.6}>
                         <title>{describe(f)}</title>
                       </path>
                     );
@@ -142,14 +133,14 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
             )}
         {DISCS.map((d) => <RingNames key={d.row} cx={d.cx} />)}
         {DISCS.map((d) => (
-          <text key={d.row} x={Math.round(d.cx + R * 0.5)} y={Math.round(CY - R * 1.1)} fontSize={8} fill="#b45309">load zone</text>
+          <text key={d.row} x={Math.round(d.cx + R * 0.5)} y={Math.round(CY - R * 1.1)} fontSize={8} fill={LOAD_ZONE_INK}>load zone</text>
         ))}
         <g transform="translate(12 236)">
           {summed
             ? [
                 <text key="l" x={0} y={9} fontSize={9} fill="var(--muted, #64748b)">Fewer</text>,
-                ...HEAT.map((c, i) => <rect key={c} x={34 + i * 22} y={1} width={20} height={10} rx={2} fill={c} />),
-                <text key="r" x={34 + HEAT.length * 22 + 4} y={9} fontSize={9} fill="var(--muted, #64748b)">{`more findings (most: ${max})`}</text>,
+                ...HEAT_COLOURS.map((c, i) => <rect key={c} x={34 + i * 22} y={1} width={20} height={10} rx={2} fill={c} />),
+                <text key="r" x={34 + HEAT_COLOURS.length * 22 + 4} y={9} fontSize={9} fill="var(--muted, #64748b)">{`more findings (most: ${max})`}</text>,
               ]
             : SEVERITY_COLOURS.map((c, i) => (
                 <g key={c} transform={`translate(${Math.round(LEGEND_X[i])} 0)`}>
@@ -168,9 +159,3 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
   );
 }
 
-/** "1 finding is not drawn…" / "2 findings are not drawn…": the verb agrees with the count. */
-export function offMapWords(n: number): string {
-  return n === 1
-    ? "1 finding is not drawn: it is off the raceways or has no clock position."
-    : `${n} findings are not drawn: they are off the raceways or have no clock position.`;
-}

@@ -6,9 +6,8 @@ import { caseCards, stageCounts, type CaseCard } from "@/db/queries/home";
 import { ROLE_LABELS, can } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
 import { STAGES, STAGE_LABELS, type Stage } from "@/lib/cases/stages";
-import { TRIGGERS } from "@/lib/classification";
+import { triggerLabel } from "@/lib/classification/labels";
 
-const triggerLabel = (code: string) => TRIGGERS.find((t) => t.code === code)?.label ?? code;
 
 function CaseList({ rows, empty }: { rows: CaseCard[]; empty: string }) {
   if (!rows.length) return <EmptyState title={empty} />;

@@ -1,5 +1,6 @@
 "use client";
 import { useState } from "react";
+import { sendJson } from "@/lib/client/api";
 
 export type NoticeSwitch = { kind: string; label: string; description: string; on: boolean };
 
@@ -15,16 +16,11 @@ export function NoticeSwitches({ initial }: { initial: NoticeSwitch[] }) {
     setSaving(kind);
     setStatus(null);
     const label = items.find((i) => i.kind === kind)?.label ?? kind;
-    try {
-      const res = await fetch("/api/me/notices", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ [kind]: on }) });
-      if (!res.ok) throw new Error(((await res.json().catch(() => ({}))) as { error?: string }).error ?? `HTTP ${res.status}`);
-      setStatus({ tone: "ok", text: `${label}: ${on ? "you will get this e-mail" : "switched off"}.` });
-    } catch (err) {
-      setItems(before);
-      setStatus({ tone: "danger", text: `Not saved: ${err instanceof Error ? err.message : "try again"}.` });
-    } finally {
-      setSaving(null);
-    }
+    const res = await sendJson("PATCH", "/api/me/notices", { [kind]: on });
+    setSaving(null);
+    if (res.ok) return setStatus({ tone: "ok", text: `${label}: ${on ? "you will get this e-mail" : "switched off"}.` });
+    setItems(before);
+    setStatus({ tone: "danger", text: `Not saved: ${res.message.replace(/\.$/, "")}.` });
   }
 
   return (

@@ -1,4 +1,5 @@
 // Sends the outbox: each report once, with its Idempotency-Key, under a time limit so nothing hangs.
+import { callApi } from "@/lib/client/api";
 import { announce, deleteEntry, listEntries, putEntry, type OutboxEntry } from "./outbox-store";
 
 /** A filing that has not answered in this long is treated as no signal and retried later. */
@@ -10,28 +11,19 @@ export type SendResult =
   | { kind: "refused"; message: string; fields?: Record<string, string> };
 
 export async function sendReport(key: string, body: unknown): Promise<SendResult> {
-  let res: Response;
-  try {
-    res = await fetch("/api/cases", {
-      method: "POST",
-      headers: { "content-type": "application/json", "idempotency-key": key },
-      body: JSON.stringify(body),
-      signal: AbortSignal.timeout(SEND_TIMEOUT_MS),
-    });
-  } catch (e) {
-    const timedOut = (e as Error)?.name === "TimeoutError";
-    return { kind: "retry", reason: timedOut ? "The server did not answer in time." : "No connection." };
-  }
-  if (res.ok) {
-    const data = (await res.json()) as { case: { number: string } };
-    return { kind: "filed", number: data.case.number };
-  }
+  const res = await callApi<{ case: { number: string } }>("POST", "/api/cases", {
+    json: body,
+    headers: { "idempotency-key": key },
+    timeoutMs: SEND_TIMEOUT_MS,
+    fallback: "The server refused the report.",
+  });
+  if (res.ok) return { kind: "filed", number: res.data.case.number };
+  if (res.status === 0) return { kind: "retry", reason: res.code === "timeout" ? "The server did not answer in time." : "No connection." };
   // Signed out, busy or broken server: worth another try; anything else is the report itself.
   if (res.status === 401 || res.status === 408 || res.status === 429 || res.status >= 500) {
     return { kind: "retry", reason: res.status === 401 ? "Sign in again to send it." : `The server answered ${res.status}; it will try again.` };
   }
-  const data = (await res.json().catch(() => ({}))) as { error?: string; fields?: Record<string, string> };
-  return { kind: "refused", message: data.error ?? `The server refused the report (${res.status}).`, fields: data.fields };
+  return { kind: "refused", message: res.message, fields: res.fields };
 }
 
 let flushing: Promise<void> | null = null;

@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useCallback, useMemo, useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
+import { getOrThrow } from "@/lib/client/api";
 import { EmptyState } from "@/components/ui/card";
 import { displayOrder, groupByComponent } from "@/lib/photos/grouping";
 import { DEFAULT_MAX_BYTES } from "@/lib/photos/limits";
@@ -32,11 +33,7 @@ export type CasePhotosProps = {
 };
 
 type ListAnswer = { photos: PhotoView[] };
-const fetchList = async (url: string): Promise<ListAnswer> => {
-  const res = await fetch(url);
-  if (!res.ok) throw new Error(((await res.json().catch(() => ({}))) as { error?: string }).error ?? `Photos could not be loaded (${res.status}).`);
-  return res.json();
-};
+const fetchList = (url: string) => getOrThrow<ListAnswer>(url, { fallback: "Photos could not be loaded." });
 
 export function CasePhotos({ caseId, canUpload, canDelete, readOnly, findings, uploaderOpen = false, maxBytes = DEFAULT_MAX_BYTES, initialPhotos }: CasePhotosProps) {
   const url = `/api/cases/${caseId}/photos`;

@@ -1,5 +1,5 @@
 // What a photo is and shows, in words: used beside the lightbox and under each compared photo.
-import { clockLabel } from "@/lib/photos/clock";
+import { clockWords } from "@/lib/damage-map/geometry";
 import { componentLabel } from "@/lib/photos/grouping";
 import { formatBytes } from "@/lib/photos/limits";
 import type { PhotoView } from "@/lib/photos/view";
@@ -16,7 +16,7 @@ export function photoTitle(p: PhotoView): string {
 
 /** Words for a thumbnail's alt text: the part, row, clock position and caption. */
 export function photoAlt(p: PhotoView): string {
-  const at = p.clockDeg !== null ? ` at ${clockLabel(p.clockDeg)}` : "";
+  const at = p.clockDeg !== null ? ` at ${clockWords(p.clockDeg)}` : "";
   return `${photoTitle(p)}${at}${p.caption ? `: ${p.caption}` : ""}`;
 }
 
@@ -25,7 +25,7 @@ export function PhotoTagLine({ photo, findings }: { photo: PhotoView; findings: 
   return (
     <div className="flex flex-col gap-1">
       <p className="font-semibold text-ink">{photoTitle(photo)}</p>
-      {photo.clockDeg !== null ? <p className="text-sm text-ink-2">At {clockLabel(photo.clockDeg)}</p> : null}
+      {photo.clockDeg !== null ? <p className="text-sm text-ink-2">At {clockWords(photo.clockDeg)}</p> : null}
       {finding ? <p className="text-sm text-ink-2"><span className="text-muted">Finding: </span>{finding.label}</p> : photo.findingId ? <p className="text-sm text-muted">Linked to a finding</p> : null}
       {photo.caption ? <p className="text-sm leading-relaxed text-ink">{photo.caption}</p> : null}
     </div>

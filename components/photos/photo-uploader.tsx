@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useDropzone, type FileRejection } from "react-dropzone";
 import { Button, buttonClass } from "@/components/ui/button";
 import { componentLabel } from "@/lib/photos/grouping";
-import { clockLabel } from "@/lib/photos/clock";
+import { clockWords } from "@/lib/damage-map/geometry";
 import { formatBytes } from "@/lib/photos/limits";
 import { refuse } from "@/lib/photos/refusal";
 import type { PhotoView } from "@/lib/photos/view";
@@ -27,7 +27,7 @@ function defaultsSummary(t: TagValues, findings: FindingOption[]): string {
   const parts = [
     t.component && componentLabel(t.component),
     t.row && `${t.row} row`,
-    t.clockDeg !== "" && clockLabel(Number(t.clockDeg)),
+    t.clockDeg !== "" && clockWords(Number(t.clockDeg)),
     t.findingId && findings.find((f) => f.id === t.findingId)?.label,
   ].filter(Boolean);
   return parts.length ? parts.join(" · ") : "none — tag each photo later";

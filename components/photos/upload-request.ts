@@ -1,4 +1,6 @@
-// One upload over XMLHttpRequest, because fetch cannot report upload progress.
+// One upload over XMLHttpRequest, because fetch cannot report upload progress; its refusals are
+// read like every other API answer (lib/client/api-problem.ts).
+import { callApi, problemFrom, TIMEOUT_MESSAGE, UPLOAD_TIMEOUT_MS } from "@/lib/client/api";
 import type { PhotoView } from "@/lib/photos/view";
 
 export type UploadAnswer =
@@ -10,17 +12,19 @@ export function sendPhoto(url: string, form: FormData, onProgress: (fraction: nu
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);
     xhr.responseType = "json";
+    xhr.timeout = UPLOAD_TIMEOUT_MS;
     xhr.upload.onprogress = (e) => {
       if (e.lengthComputable) onProgress(e.loaded / e.total);
     };
     xhr.onload = () => {
-      const body = (xhr.response ?? {}) as { photo?: PhotoView; duplicate?: boolean; message?: string; error?: string };
+      const body = (xhr.response ?? {}) as { photo?: PhotoView; duplicate?: boolean; message?: string };
       if (xhr.status >= 200 && xhr.status < 300 && body.photo) {
         resolve({ ok: true, photo: body.photo, duplicate: Boolean(body.duplicate), message: body.message ?? "" });
       } else {
-        resolve({ ok: false, status: xhr.status, message: body.error ?? `The server answered ${xhr.status}; try again.` });
+        resolve({ ok: false, status: xhr.status, message: problemFrom(xhr.status, xhr.response, { fallback: `The server answered ${xhr.status}; try again.` }).message });
       }
     };
+    xhr.ontimeout = () => resolve({ ok: false, status: 0, message: TIMEOUT_MESSAGE });
     xhr.onerror = () => resolve({ ok: false, status: 0, message: "The connection dropped during the upload. Check the network and retry." });
     xhr.onabort = () => resolve({ ok: false, status: 0, message: "Upload cancelled." });
     signal?.addEventListener("abort", () => xhr.abort());
@@ -29,13 +33,12 @@ export function sendPhoto(url: string, form: FormData, onProgress: (fraction: nu
 }
 
 export async function patchPhoto(id: string, tags: Record<string, unknown>): Promise<{ ok: true; photo: PhotoView } | { ok: false; message: string }> {
-  const res = await fetch(`/api/photos/${id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(tags) });
-  const body = (await res.json().catch(() => ({}))) as { photo?: PhotoView; error?: string };
-  return res.ok && body.photo ? { ok: true, photo: body.photo } : { ok: false, message: body.error ?? `Could not save the tags (${res.status}).` };
+  const res = await callApi<{ photo?: PhotoView }>("PATCH", `/api/photos/${id}`, { json: tags, fallback: "Could not save the tags." });
+  if (!res.ok) return { ok: false, message: res.message };
+  return res.data?.photo ? { ok: true, photo: res.data.photo } : { ok: false, message: "Could not save the tags." };
 }
 
 export async function deletePhoto(id: string): Promise<{ ok: boolean; message: string }> {
-  const res = await fetch(`/api/photos/${id}`, { method: "DELETE" });
-  const body = (await res.json().catch(() => ({}))) as { message?: string; error?: string };
-  return { ok: res.ok, message: body.message ?? body.error ?? `The server answered ${res.status}.` };
+  const res = await callApi<{ message?: string }>("DELETE", `/api/photos/${id}`);
+  return res.ok ? { ok: true, message: res.data?.message ?? "" } : { ok: false, message: res.message };
 }

@@ -3,7 +3,7 @@
 // an existing case saves to the server a moment after typing stops, at the version it was loaded.
 import { useCallback, useEffect, useRef, useState } from "react";
 import { forSaving, type RemovalDraft } from "./form-state";
-import { fetchWithTimeout } from "@/lib/http/client-fetch";
+import { callApi, type ApiProblem } from "@/lib/client/api";
 
 export type SaveState = { kind: "idle" | "saving" | "saved" | "error" | "conflict"; message?: string; fields?: Record<string, string> };
 
@@ -19,13 +19,9 @@ export function loadLocalDraft(): RemovalDraft | null {
 }
 export const clearLocalDraft = () => localStorage.removeItem(DRAFT_KEY);
 
-function normaliseFields(fields: Record<string, string> | undefined) {
-  return Object.fromEntries(Object.entries(fields ?? {}).map(([k, v]) => [k.replace(/^data\./, ""), v]));
-}
-
-export async function readError(res: Response): Promise<SaveState> {
-  const body = (await res.json().catch(() => ({}))) as { error?: string; fields?: Record<string, string> };
-  return { kind: res.status === 409 ? "conflict" : "error", message: body.error ?? `Save failed (${res.status}).`, fields: normaliseFields(body.fields) };
+/** A refused save as the form shows it; field keys arrive without their `data.` prefix. */
+export function saveStateFrom(problem: ApiProblem): SaveState {
+  return { kind: problem.conflict ? "conflict" : "error", message: problem.message, fields: problem.fields };
 }
 
 export function useAutosave(draft: RemovalDraft, opts: { mode: "new" | "edit"; caseId?: string; version?: number; enabled: boolean }) {
@@ -40,23 +36,18 @@ export function useAutosave(draft: RemovalDraft, opts: { mode: "new" | "edit"; c
       return;
     }
     setState({ kind: "saving" });
-    const sent = await fetchWithTimeout(`/api/cases/${opts.caseId}`, {
-      method: "PATCH",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({ version: version.current, section: "field", data: forSaving(draft) }),
+    const res = await callApi<{ case: { version: number } }>("PATCH", `/api/cases/${opts.caseId}`, {
+      json: { version: version.current, section: "field", data: forSaving(draft) },
+      fieldPrefixes: ["data"],
+      fallback: "Save failed.",
     });
-    const res = sent.res;
-    if (!res) {
-      localStorage.setItem(`${DRAFT_KEY}:${opts.caseId}`, JSON.stringify(draft));
-      return setState({ kind: "error", message: `${"message" in sent ? sent.message : ""} Your edits are kept on this device.` });
-    }
     if (!res.ok) {
-      // Keep the unsaved edits on this device so a refused save never loses them.
+      // Keep the unsaved edits on this device so a refused or lost save never loses them.
       localStorage.setItem(`${DRAFT_KEY}:${opts.caseId}`, JSON.stringify(draft));
-      return setState(await readError(res));
+      if (res.status === 0) return setState({ kind: "error", message: `${res.message} Your edits are kept on this device.` });
+      return setState(saveStateFrom(res));
     }
-    const body = (await res.json()) as { case: { version: number } };
-    version.current = body.case.version;
+    version.current = res.data.case.version;
     setState({ kind: "saved", message: "Saved" });
   }, [draft, opts.mode, opts.caseId]);
 

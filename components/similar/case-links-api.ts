@@ -2,6 +2,7 @@
 // linking from one panel refreshes the other.
 import type { CaseLinkItem } from "@/db/queries/case-links";
 import type { SimilarCaseItem } from "@/db/queries/similar";
+import { ApiError, callApi, getOrThrow, type ApiResult } from "@/lib/client/api";
 
 export const similarKey = (caseId: string) => `/api/cases/${encodeURIComponent(caseId)}/similar`;
 export const linksKey = (caseId: string) => `/api/cases/${encodeURIComponent(caseId)}/links`;
@@ -9,22 +10,19 @@ export const linksKey = (caseId: string) => `/api/cases/${encodeURIComponent(cas
 export type SimilarAnswer = { caseId: string; number: string; similar: SimilarCaseItem[] };
 export type LinksAnswer = { caseId: string; links: CaseLinkItem[] };
 
-async function answer<T>(res: Response): Promise<T> {
-  const body = await res.json().catch(() => ({}));
-  if (!res.ok) throw new Error((body as { error?: string }).error ?? `The server answered ${res.status}.`);
-  return body as T;
+/** Throws an ApiError (a plain message) when refused, for the panels' try/catch and SWR. */
+async function orThrow<T>(pending: Promise<ApiResult<T>>): Promise<T> {
+  const r = await pending;
+  if (!r.ok) throw new ApiError(r);
+  return r.data;
 }
 
-export const getJson = <T,>(url: string) => fetch(url, { headers: { accept: "application/json" } }).then((r) => answer<T>(r));
+export const getJson = <T,>(url: string) => getOrThrow<T>(url);
 
 export function linkCase(caseId: string, relatedId: string, note: string) {
-  return fetch(linksKey(caseId), {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify({ relatedId, note }),
-  }).then((r) => answer<LinksAnswer>(r));
+  return orThrow(callApi<LinksAnswer>("POST", linksKey(caseId), { json: { relatedId, note } }));
 }
 
 export function unlinkCase(caseId: string, relatedId: string) {
-  return fetch(`${linksKey(caseId)}?relatedId=${encodeURIComponent(relatedId)}`, { method: "DELETE" }).then((r) => answer<LinksAnswer>(r));
+  return orThrow(callApi<LinksAnswer>("DELETE", `${linksKey(caseId)}?relatedId=${encodeURIComponent(relatedId)}`));
 }

@@ -1,7 +1,8 @@
 // Facet counts as the sidebar shows them: labelled, selected values kept even at zero,
 // most common first (stages in their own order, severity as "this bad or worse").
 import "server-only";
-import { COMPONENTS, SEVERITIES } from "@/lib/classification/components";
+import { bearingClassLabel, componentLabel } from "@/lib/classification/labels";
+import { SEVERITIES } from "@/lib/classification/components";
 import { STAGES, STAGE_LABELS } from "@/lib/cases/stages";
 import type { SearchParams } from "@/lib/search/query-schema";
 import type { SearchLookups } from "./search-lookups";
@@ -57,8 +58,8 @@ export function labelFacets(rows: readonly FacetRow[], p: SearchParams, lookups:
     trigger: byCount(list("trigger", (v) => lookups.labels.trigger.get(v) ?? v)),
     cause: byCount(list("cause", (v) => lookups.labels.cause.get(v) ?? v)),
     code: byCount(list("code", (v) => lookups.labels.damage.get(v) ?? v)),
-    component: byCount(list("component", (v) => COMPONENTS.find((c) => c.code === v)?.label ?? v)),
-    class: byCount(list("class", (v) => `Class ${v}`)),
+    component: byCount(list("component", (v) => componentLabel(v))),
+    class: byCount(list("class", (v) => bearingClassLabel(v))),
     site: byCount([...siteCounts].map(([value, count]) => ({ value, label: siteName(value), count, selected: p.site.includes(value) }))),
     severity: SEVERITIES.filter((s) => s.code > 0)
       .map((s) => ({ value: String(s.code), label: SEVERITY_SHORT[s.code] ?? `${s.code} or worse`, count: atLeast(s.code), selected: p.severity === s.code }))

@@ -2,11 +2,11 @@
 // findings (those the query named are flagged), and snippets of the narrative with the
 // matched words marked.
 import "server-only";
+import { componentLabel } from "@/lib/classification/labels";
 import { asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { cases, findings, sites } from "@/db/schema";
 import type { Stage } from "@/lib/cases/stages";
-import { COMPONENTS } from "@/lib/classification/components";
 import { compileTerms, highlightSubstrings, snippet, type Segment } from "@/lib/search/highlight";
 import type { SearchLookups } from "./search-lookups";
 import type { PreparedClause } from "./search-terms";
@@ -42,7 +42,6 @@ export interface SearchHit {
 
 const SNIPPETS_SHOWN = 2;
 const PLAIN_PREVIEW = 180;
-const componentLabel = (code: string) => COMPONENTS.find((c) => c.code === code)?.label ?? code;
 
 export async function loadHits(
   page: readonly { id: string; rank: number }[], clauses: readonly PreparedClause[], lookups: SearchLookups, hasQuery: boolean,

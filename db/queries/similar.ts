@@ -1,11 +1,11 @@
 // The most similar earlier cases to one case, each with its score, the reasons it matched,
 // whether it is already linked, and a pair of photos of the same part to compare.
 import "server-only";
+import { componentLabel } from "@/lib/classification/labels";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { caseLinks, cases, codeEntries, photos, sites } from "@/db/schema";
 import type { Stage } from "@/lib/cases/stages";
-import { COMPONENTS } from "@/lib/classification/components";
 import { pickPhotoPair, partsToCompare, type PhotoPair, type PhotoRef } from "@/lib/search/photo-pair";
 import { rankSimilar, type SimilarityReason } from "@/lib/similarity";
 import { candidateIds, similarityCases, targetKeys } from "./similar-candidates";
@@ -30,7 +30,6 @@ export interface SimilarCaseItem {
   readonly photoPair: (PhotoPair & { componentLabel: string }) | null;
 }
 
-const componentLabel = (code: string) => COMPONENTS.find((c) => c.code === code)?.label ?? code;
 
 export async function findSimilarCases(caseId: string, viewer: SearchViewer, limit = SIMILAR_SHOWN): Promise<SimilarCaseItem[]> {
   const keys = await targetKeys(caseId);

@@ -7,3 +7,4 @@ export * from "./root-causes";
 export * from "./code-search";
 export * from "./query-expansion";
 export * from "./text-tokens";
+export * from "./labels";

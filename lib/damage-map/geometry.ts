@@ -1,30 +1,52 @@
-// SVG geometry for clock-face drawings: 0° at 12 o'clock, angles growing clockwise.
+// The clock face's geometry, shared by every damage drawing (case page, tallies, printable
+// report, PDF): 0° at 12 o'clock, angles growing clockwise as seen from the outboard end, in
+// screen coordinates (y grows down). Paths are SVG path text, which browsers and pdfkit both draw.
 
+/** A point on a circle at a clock angle. */
 export function clockPoint(cx: number, cy: number, r: number, deg: number): [number, number] {
   const rad = (deg * Math.PI) / 180;
   return [cx + r * Math.sin(rad), cy - r * Math.cos(rad)];
 }
 
-const f = (n: number) => Number(n.toFixed(2));
+/** Rounded to 0.01 so the server's and the browser's trigonometry write identical markup. */
+const n = (v: number) => Number(v.toFixed(2));
 
-/** Path of an annular sector from `startDeg` clockwise to `endDeg` between two radii. */
-export function annularSector(cx: number, cy: number, rInner: number, rOuter: number, startDeg: number, endDeg: number): string {
-  let sweep = endDeg - startDeg;
-  if (sweep >= 360) sweep = 359.99;
-  if (sweep <= 0) sweep = 0.5;
-  const end = startDeg + sweep;
+/** Narrowest band drawn, so a zero-width finding still shows. */
+const MIN_SWEEP_DEG = 0.5;
+
+/** A band between two radii from `startDeg` clockwise to `endDeg`, as a closed SVG path. */
+export function bandPath(cx: number, cy: number, rInner: number, rOuter: number, startDeg: number, endDeg: number): string {
+  const sweep = Math.max(MIN_SWEEP_DEG, Math.min(360, endDeg - startDeg));
+  if (sweep >= 359.99) {
+    // A full ring: two half circles out, two back in (a single arc cannot close on itself).
+    const ring = (r: number, dir: 0 | 1) => {
+      const [x0, y0] = clockPoint(cx, cy, r, 0);
+      const [x1, y1] = clockPoint(cx, cy, r, 180);
+      return `M ${n(x0)} ${n(y0)} A ${n(r)} ${n(r)} 0 1 ${dir} ${n(x1)} ${n(y1)} A ${n(r)} ${n(r)} 0 1 ${dir} ${n(x0)} ${n(y0)} Z`;
+    };
+    return `${ring(rOuter, 1)} ${ring(rInner, 0)}`;
+  }
   const large = sweep > 180 ? 1 : 0;
-  const [x1, y1] = clockPoint(cx, cy, rOuter, startDeg);
-  const [x2, y2] = clockPoint(cx, cy, rOuter, end);
-  const [x3, y3] = clockPoint(cx, cy, rInner, end);
-  const [x4, y4] = clockPoint(cx, cy, rInner, startDeg);
-  return `M${f(x1)} ${f(y1)}A${f(rOuter)} ${f(rOuter)} 0 ${large} 1 ${f(x2)} ${f(y2)}L${f(x3)} ${f(y3)}A${f(rInner)} ${f(rInner)} 0 ${large} 0 ${f(x4)} ${f(y4)}Z`;
+  const [ox0, oy0] = clockPoint(cx, cy, rOuter, startDeg);
+  const [ox1, oy1] = clockPoint(cx, cy, rOuter, startDeg + sweep);
+  const [ix1, iy1] = clockPoint(cx, cy, rInner, startDeg + sweep);
+  const [ix0, iy0] = clockPoint(cx, cy, rInner, startDeg);
+  return [
+    `M ${n(ox0)} ${n(oy0)}`,
+    `A ${n(rOuter)} ${n(rOuter)} 0 ${large} 1 ${n(ox1)} ${n(oy1)}`,
+    `L ${n(ix1)} ${n(iy1)}`,
+    `A ${n(rInner)} ${n(rInner)} 0 ${large} 0 ${n(ix0)} ${n(iy0)}`,
+    "Z",
+  ].join(" ");
 }
 
-/** Clock-face hour for a position in degrees, e.g. 90 -> "3 o'clock", 45 -> "1:30". */
+/** Hour ticks 12, 1 … 11 as angles; the quarter hours (12, 3, 6, 9) are the labelled ones. */
+export const HOUR_TICKS = Array.from({ length: 12 }, (_, h) => ({ deg: h * 30, label: h === 0 ? "12" : String(h), major: h % 3 === 0 }));
+
+/** A clock position in the shop's words, to the nearest half hour with the degrees: 60° → "2 o'clock (60°)", 75° → "2:30 (75°)". */
 export function clockWords(deg: number): string {
-  const minutes = Math.round((((deg % 360) + 360) % 360) * 2) % 720; // 0.5° per minute of the hour hand
-  const hour = Math.floor(minutes / 60) || 12;
-  const min = minutes % 60;
-  return min === 0 ? `${hour} o'clock` : `${hour}:${String(min).padStart(2, "0")}`;
+  const d = ((Math.round(deg) % 360) + 360) % 360;
+  const halfHours = Math.round(d / 15) % 24;
+  const hour = Math.floor(halfHours / 2) || 12;
+  return halfHours % 2 === 0 ? `${hour} o'clock (${d}°)` : `${hour}:30 (${d}°)`;
 }

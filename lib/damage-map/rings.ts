@@ -5,12 +5,6 @@
 export const RINGS = ["cup-outboard", "cup-inboard", "cone-outboard", "cone-inboard"] as const;
 export type RingId = (typeof RINGS)[number];
 
-export const RING_LABELS: Record<RingId, string> = {
-  "cup-outboard": "Cup, outboard raceway",
-  "cup-inboard": "Cup, inboard raceway",
-  "cone-outboard": "Outboard cone raceway",
-  "cone-inboard": "Inboard cone raceway",
-};
 
 export type PlaceableFinding = {
   component: string;

@@ -2,8 +2,8 @@
 // the step and its mail are saved together or not at all; without one a notice never throws back to
 // its caller. The outbox sends (and retries) through the job queue.
 import "server-only";
+import { causeLabel as labelOfCause, confidenceLabel, triggerLabel as labelOfTrigger } from "@/lib/classification/labels";
 import { codeLabel, peopleByIds, peopleWithRoles } from "@/db/queries/notices";
-import { CONFIDENCES, ROOT_CAUSES, TRIGGERS } from "@/lib/classification";
 import { env } from "@/lib/env";
 import type { Tx } from "@/db";
 import { enqueueMail } from "@/lib/mail/outbox";
@@ -27,11 +27,11 @@ const caseUrl = (c: NoticeCase) => `${env().APP_URL}/cases/${encodeURIComponent(
 
 async function causeLabel(code: string | null): Promise<string> {
   if (!code) return "not given";
-  return (await codeLabel("cause", code)) ?? ROOT_CAUSES.find((r) => r.code === code)?.label ?? code;
+  return (await codeLabel("cause", code)) ?? labelOfCause(code);
 }
 
 async function triggerLabel(code: string): Promise<string> {
-  return (await codeLabel("trigger", code)) ?? TRIGGERS.find((t) => t.code === code)?.label ?? code;
+  return (await codeLabel("trigger", code)) ?? labelOfTrigger(code);
 }
 
 /** Runs a notice so that no failure reaches the caller; returns the outbox id, or null when nothing was queued. */
@@ -65,7 +65,7 @@ export function notifySignoffRequested(c: NoticeCase, proposer?: NoticeActor, in
 export function notifyVerdictSigned(c: NoticeCase, signer: NoticeActor, into?: Tx): Promise<string | null> {
   return safely("verdict-signed", c, async () => {
     const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy]), "verdict-signed", signer.id);
-    const confidence = CONFIDENCES.find((x) => x.code === c.confidence)?.label ?? "not given";
+    const confidence = c.confidence ? confidenceLabel(c.confidence) : "not given";
     const mail = verdictSigned({ caseNumber: c.number, url: caseUrl(c), signerName: signer.name, primaryCauseLabel: await causeLabel(c.primaryCause), confidence });
     return enqueueMail("verdict-signed", to, mail, into);
   }, into);

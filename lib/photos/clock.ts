@@ -1,4 +1,5 @@
 // Clock positions on a ring: 0° = 12 o'clock, clockwise seen from the outboard end (as findings use).
+// Their words are clockWords in lib/damage-map/geometry.ts.
 
 export function normaliseDeg(deg: number): number {
   return ((Math.round(deg) % 360) + 360) % 360;
@@ -14,13 +15,4 @@ export function oClockToDeg(hour: number): number {
 export function degToOClock(deg: number): number {
   const hour = Math.round(normaliseDeg(deg) / 30) % 12;
   return hour === 0 ? 12 : hour;
-}
-
-/** "3 o'clock (90°)"; off-hour angles say "near": "near 3 o'clock (95°)". */
-export function clockLabel(deg: number | null | undefined): string {
-  if (deg === null || deg === undefined) return "";
-  const d = normaliseDeg(deg);
-  const hour = degToOClock(d);
-  const exact = oClockToDeg(hour) === d;
-  return `${exact ? "" : "near "}${hour} o'clock (${d}°)`;
 }

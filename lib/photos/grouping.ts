@@ -1,7 +1,7 @@
 // How the case page orders photos: by part, in the order a bearing is taken apart, untagged last.
 import { COMPONENTS } from "@/lib/classification/components";
-import { damageCodeInfo } from "@/lib/classification/damage-codes";
-import { clockLabel } from "./clock";
+import { clockWords } from "@/lib/damage-map/geometry";
+import { componentLabel as labelOfComponent, damageLabel } from "@/lib/classification/labels";
 
 export const UNTAGGED = "untagged";
 
@@ -11,7 +11,7 @@ const ORDER = new Map<string, number>(COMPONENTS.map((c, i) => [c.code, i]));
 
 export function componentLabel(code: string | null | undefined): string {
   if (!code) return "Not tagged to a part";
-  return COMPONENTS.find((c) => c.code === code)?.label ?? code;
+  return labelOfComponent(code);
 }
 
 export function groupByComponent<P extends { component: string | null; takenAt: string | null; createdAt: string }>(photos: P[]): PhotoGroup<P>[] {
@@ -40,7 +40,7 @@ type FindingLike = { id: string; component: string; row: string | null; damageCo
 
 /** "Cup · Subsurface spall · severity 3 · 3 o'clock (90°)": how a finding is named in the photo tags. */
 export function findingLabel(f: FindingLike): string {
-  const damage = damageCodeInfo(f.damageCode)?.label ?? f.damageCode;
-  const parts = [componentLabel(f.component), f.row && !componentLabel(f.component).toLowerCase().includes(f.row) ? `${f.row} row` : null, damage, `severity ${f.severity}`, f.clockDeg !== null ? clockLabel(f.clockDeg) : null];
+  const damage = damageLabel(f.damageCode);
+  const parts = [componentLabel(f.component), f.row && !componentLabel(f.component).toLowerCase().includes(f.row) ? `${f.row} row` : null, damage, `severity ${f.severity}`, f.clockDeg !== null ? clockWords(f.clockDeg) : null];
   return parts.filter(Boolean).join(" · ");
 }

@@ -4,18 +4,8 @@ import { TRIGGERS as TRIGGER_LIST } from "@/lib/classification";
 import { componentSections, numberPhotos } from "./component-sections";
 import { damageArcs } from "./damage-map";
 import { buildFieldSection } from "./field-section";
-import {
-  causeLabel,
-  confidenceLabel,
-  DASH,
-  damageLabel,
-  formatDate,
-  formatDateTime,
-  lubricantLabel,
-  stageLabel,
-  text,
-  triggerLabel,
-} from "./format";
+import { causeLabel, confidenceLabel, damageLabel, lubricantLabel, triggerLabel } from "@/lib/classification/labels";
+import { DASH, formatDate, formatDateTime, stageLabel, text } from "./format";
 import { contentHash, groupedHash } from "@/lib/cases/signature-content";
 import type { CaseReport, ReportSource, Revision, Row } from "./types";
 
@@ -126,7 +116,7 @@ export function buildCaseReport(s: ReportSource): CaseReport {
       rows: [
         ["Lab", s.lab ? `${s.lab.name} (${s.lab.code})` : DASH],
         ["Received", c.receivedAt ? `${formatDateTime(c.receivedAt)}${s.people.receivedBy ? ` by ${s.people.receivedBy}` : ""}` : "Not received yet"],
-        ["Lubricant", c.lubricant?.conditions?.length ? c.lubricant.conditions.map(lubricantLabel).join(", ") : DASH],
+        ["Lubricant", c.lubricant?.conditions?.length ? c.lubricant.conditions.map((x) => lubricantLabel(x)).join(", ") : DASH],
         ["Lubricant notes", text(c.lubricant?.notes?.trim())],
       ],
       notes: c.teardownNotes.trim(),

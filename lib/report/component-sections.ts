@@ -1,6 +1,8 @@
 // Teardown findings grouped by part, in the order the bearing comes apart, each with its photos.
 import { COMPONENTS } from "@/lib/classification";
-import { clockWords, componentLabel, damageLabel, dispositionLabel, isoModeOf, severityLabel, sizeWords, zoneLabel } from "./format";
+import { clockWords } from "@/lib/damage-map/geometry";
+import { componentLabel, damageLabel, dispositionLabel, severityLabel, zoneLabel } from "@/lib/classification/labels";
+import { isoModeOf, sizeWords } from "./format";
 import type { ComponentSection, ReportPhoto, ReportSource } from "./types";
 
 const OTHER = "general";

@@ -2,7 +2,8 @@
 // on the findings' and cases' own fields: "spall cup outboard row" means a subsurface spall
 // recorded on the cup's outboard row, not four words somewhere in the notes. Shop words and
 // one slip of the keyboard are understood (common practice in the shop: "ob", "outbd").
-import { COMPONENTS, ROWS, TRIGGERS, ZONES } from "@/lib/classification";
+import { COMPONENTS, TRIGGERS } from "@/lib/classification";
+import { rowLabel, triggerLabel, zoneLabel } from "@/lib/classification/labels";
 import { BEARING_CLASSES } from "@/lib/cases/schemas";
 import { stem, words } from "@/lib/classification/text-tokens";
 
@@ -53,9 +54,9 @@ const NAMES: Name[] = [
 ];
 
 const LABELS: Record<StructuredRole, (code: string) => string> = {
-  row: (c) => `${ROWS.find((r) => r.code === c)?.label.toLowerCase() ?? c} row`,
-  zone: (c) => ZONES.find((z) => z.code === c)?.label.toLowerCase() ?? c,
-  trigger: (c) => `removed for: ${TRIGGERS.find((t) => t.code === c)?.label.toLowerCase() ?? c}`,
+  row: (c) => `${rowLabel(c).toLowerCase()} row`,
+  zone: (c) => zoneLabel(c).toLowerCase(),
+  trigger: (c) => `removed for: ${triggerLabel(c).toLowerCase()}`,
   class: (c) => `class ${c}`,
 };
 

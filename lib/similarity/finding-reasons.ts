@@ -5,7 +5,8 @@
 // reason instead of being listed again.
 import { familyOfCode } from "@/lib/classification/damage-families";
 import type { SimilarityFinding, SimilarityReason } from "./score";
-import { componentPhrase, damageLabel, familyLabel, onPart } from "./labels";
+import { componentPhrase, damageLabel, familyLabel } from "@/lib/classification/labels";
+import { onPart } from "./labels";
 import { maxBag, weightedJaccard } from "./weighted-jaccard";
 import { SIMILARITY_WEIGHTS as W, severityWeight } from "./weights";
 

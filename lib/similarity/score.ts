@@ -2,7 +2,7 @@
 // (findings, codes, families, cause, trigger, class, words), each one a reason a
 // person can read. Reason weights add up to the score.
 import { findingReasons } from "./finding-reasons";
-import { causeLabel, triggerLabel } from "./labels";
+import { causeLabel, triggerLabel } from "@/lib/classification/labels";
 import { sharedWords } from "./shared-words";
 import { SIMILARITY_WEIGHTS as W } from "./weights";
 

@@ -1,11 +1,8 @@
-// Words for codes on charts; codes an admin added later fall back to the code itself.
-import { ROOT_CAUSES } from "@/lib/classification/root-causes";
-import { TRIGGERS } from "@/lib/classification/triggers";
+// Words on charts. Code labels are the shared ones (lib/classification/labels.ts); a chart names
+// the bar of cases without a cause.
+import { causeLabel as labelOfCause } from "@/lib/classification/labels";
 
-export const causeLabel = (code: string | null): string =>
-  code === null ? "No cause recorded" : (ROOT_CAUSES.find((c) => c.code === code)?.label ?? code);
-
-export const triggerLabel = (code: string): string => TRIGGERS.find((t) => t.code === code)?.label ?? code;
+export const causeLabel = (code: string | null): string => (code === null ? "No cause recorded" : labelOfCause(code));
 
 /** "42%" style share; one decimal below 10%. */
 export function percent(share: number | null | undefined): string {

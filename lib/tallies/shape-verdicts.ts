@@ -1,6 +1,7 @@
 // Sums over the signed-verdict cube: totals, Pareto of causes, trigger x verdict.
 import { pareto, wilsonInterval } from "@/lib/stats";
-import { causeLabel, triggerLabel } from "./labels";
+import { triggerLabel } from "@/lib/classification/labels";
+import { causeLabel } from "./labels";
 import type { ParetoBar, Totals, TriggerVerdictRow, VerdictCell } from "./types";
 
 export function sumBy<K>(cells: readonly VerdictCell[], keyOf: (c: VerdictCell) => K): Map<K, VerdictCell[]> {

@@ -1,5 +1,5 @@
 // Each chart's numbers as a plain table: the "Table" view on screen and the CSV download.
-import { RING_LABELS } from "@/lib/damage-map/rings";
+import { RING_LABELS } from "@/lib/damage-map/look";
 import type { Cell } from "./csv";
 import { monthLabel } from "./labels";
 import type { LifeData } from "./life-data";

@@ -7,7 +7,7 @@ import { acousticLevels, detectorCounts, hotReadings, triggerCosts } from "@/db/
 import { keepCalls, peopleNames, removeCalls, type CallViewer } from "@/db/queries/tallies/yield-calls";
 import type { Role } from "@/lib/auth/permissions";
 import type { TallyFilters } from "./filters";
-import { triggerLabel } from "./labels";
+import { triggerLabel } from "@/lib/classification/labels";
 import { shapeYield } from "./shape-yield";
 import type { YieldData } from "./yield-data";
 

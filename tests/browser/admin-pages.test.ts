@@ -1,22 +1,13 @@
 // In Chromium: the admin pages and the code reference at phone and desk sizes. Each fits a phone screen,
-// shows its own content and works; screenshots go to /tmp/shots for review.
+// shows its own content and works; screenshots go to the shots folder for review.
 import { randomBytes } from "node:crypto";
-import { mkdirSync } from "node:fs";
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { expect, test } from "vitest";
+import type { Page } from "playwright-core";
 import { as } from "../support/api";
-import { DESK, launch, PHONE, signedInPage } from "../support/browser";
+import { DESK, PHONE } from "../support/browser";
+import { browserPerFile } from "../support/browser-fixture";
 
-const SHOTS = "/tmp/shots";
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const ui = browserPerFile();
 
 const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);
@@ -31,25 +22,25 @@ const PAGES = [
 
 for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
   test(`admin pages and the reference at ${label} size`, async () => {
-    const page = await signedInPage(browser, "admin", viewport);
+    const page = await ui.signIn("admin", viewport);
     for (const p of PAGES) {
       await page.goto(p.path);
       await poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe(p.heading);
       const text = await page.locator("main").innerText();
       expect(text.includes(p.shows), `${p.path} should show "${p.shows}"`).toBe(true);
       expect(await fitsWidth(page, viewport.width), `${p.path} is wider than the screen`).toBe(true);
-      await page.screenshot({ path: `${SHOTS}/admin${p.path.replace(/[/?=]/g, "_")}-${label}.png`, fullPage: true });
+      await ui.shot(page, `admin${p.path.replace(/[/?=]/g, "_")}-${label}`);
     }
     await page.context().close();
   }, 120_000);
 }
 
 test("the reference finds a code from a misspelt shop word, on a phone", async () => {
-  const page = await signedInPage(browser, "inspector", PHONE);
+  const page = await ui.signIn("inspector", PHONE);
   await page.goto("/reference");
   await page.fill("input[type=search]", "spaling");
   await poll(() => page.locator("[data-testid^=ref-damage-]").first().getAttribute("data-testid")).toBe("ref-damage-fatigue.subsurface");
-  await page.screenshot({ path: `${SHOTS}/reference-search-phone.png`, fullPage: true });
+  await ui.shot(page, `reference-search-phone`);
   await page.context().close();
 }, 60_000);
 
@@ -57,7 +48,7 @@ test("changing a site's limit in millimetres shows inches as you type, and refus
   const code = `B${randomBytes(3).toString("hex").toUpperCase()}`;
   const made = await (await as("admin")).json("POST", "/api/admin/sites", { code, name: `Browser yard ${code}`, kind: "wheel-shop", railway: "Sable River Rail" });
   expect(made.status).toBe(201);
-  const page = await signedInPage(browser, "admin", PHONE);
+  const page = await ui.signIn("admin", PHONE);
   await page.goto("/admin/sites");
   const card = page.getByTestId(`site-${code}`);
   await card.getByRole("button", { name: "Edit" }).click();
@@ -69,6 +60,6 @@ test("changing a site's limit in millimetres shows inches as you type, and refus
   await poll(() => card.getByTestId("endPlayMaxIn-other-unit").textContent()).toBe("= 0.27559 in"); // 7 / 25.4 (arithmetic)
   await card.getByRole("button", { name: "Save changes" }).click();
   await poll(() => card.textContent()).toContain("at most 0.25 in");
-  await page.screenshot({ path: `${SHOTS}/site-limit-refused-phone.png`, fullPage: true });
+  await ui.shot(page, `site-limit-refused-phone`);
   await page.context().close();
 }, 60_000);

@@ -1,25 +1,20 @@
 // In Chromium: an inspector files a case on a phone, an analyst records findings and a verdict,
 // an engineer signs it through the signature ceremony, and the case list shows it signed.
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser } from "playwright-core";
-import { launch, PHONE, DESK, signedInPage } from "../support/browser";
+import { expect, test } from "vitest";
+import { PHONE, DESK } from "../support/browser";
+import { browserPerFile } from "../support/browser-fixture";
+import { CaseListPage } from "../support/pages/case-list-page";
+import { CasePage } from "../support/pages/case-page";
+import { NewRemovalPage } from "../support/pages/new-removal-page";
 
-let browser: Browser;
+const ui = browserPerFile();
+
 let number = "";
 const car = String(300000 + Math.floor(Math.random() * 99999));
 
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
 test("inspector files a removal on a phone and sees the live field call", async () => {
-  const page = await signedInPage(browser, "inspector", PHONE);
-  await page.goto("/cases/new");
-  await page.evaluate(() => localStorage.clear());
-  await page.reload();
+  const page = await ui.signIn("inspector", PHONE);
+  const form = await new NewRemovalPage(page).goto();
   await page.fill("#carMark", "brwx");
   await page.fill("#carNumber", car);
   await page.click('[aria-label$="Axle 3 left"]');
@@ -27,26 +22,24 @@ test("inspector files a removal on a phone and sees the live field call", async 
   await page.fill("#detail-endPlayIn", "0.07");
   await page.fill("#serial", "BRW7781");
   await page.selectOption("#bearingClass", "F");
-  for (const pos of ["0", "120", "240"]) {
-    for (const dir of ["pull", "push"]) await page.locator(`[data-cell="${pos}-${dir}"] >> role=radio[name="Smooth"]`).click();
-  }
-  await page.fill('[aria-label="Trial 1 reading"]', "0.071");
+  await form.handRollAllSmooth();
+  await form.reading(1).fill("0.071");
   await page.click("text=Add trial");
-  await page.fill('[aria-label="Trial 2 reading"]', "0.069");
+  await form.reading(2).fill("0.069");
   // Mean 0.070 in is over the 1/16 in (0.0625 in) limit (common practice for interchange).
-  await expect.poll(() => page.textContent('[data-testid="end-play-result"]')).toContain("0.0700 in");
-  await expect.poll(() => page.getAttribute("[data-call]", "data-call")).toBe("remove");
-  await page.screenshot({ path: "/tmp/shots/e2e-new-removal-phone.png", fullPage: true });
-  await page.click("text=File removal report");
-  await page.waitForURL(/\/cases\/TL-\d{2}-\d{5}$/);
-  number = page.url().split("/").pop()!;
-  await expect.poll(() => page.textContent("h1")).toBe(number);
+  await expect.poll(() => form.endPlayResult()).toContain("0.0700 in");
+  await expect.poll(() => form.callValue()).toBe("remove");
+  await ui.shot(page, "e2e-new-removal-phone");
+  await form.file();
+  const casePage = new CasePage(page);
+  number = await casePage.waitForCase();
+  await expect.poll(() => casePage.heading()).toBe(number);
   await page.context().close();
 });
 
 test("analyst receives, records a finding with the code picker, writes the verdict and sends it for sign-off", async () => {
-  const page = await signedInPage(browser, "analyst", DESK);
-  await page.goto(`/cases/${number}`);
+  const page = await ui.signIn("analyst", DESK);
+  await new CasePage(page).goto(number);
   await page.click("text=Mark received at the lab");
   await page.waitForSelector("text=Add finding");
   await page.click("text=Add finding");
@@ -65,13 +58,13 @@ test("analyst receives, records a finding with the code picker, writes the verdi
   await page.waitForSelector('button:has-text("Send verdict for sign-off"):not([disabled])');
   await page.click("text=Send verdict for sign-off");
   await page.waitForSelector("text=Awaiting sign-off");
-  await page.screenshot({ path: "/tmp/shots/e2e-case-analyst-desk.png", fullPage: true });
+  await ui.shot(page, "e2e-case-analyst-desk");
   await page.context().close();
 });
 
 test("engineer signs through the ceremony: wrong password refused, right one signs, the report shows the hash check", async () => {
-  const page = await signedInPage(browser, "engineer", DESK);
-  await page.goto(`/cases/${number}`);
+  const page = await ui.signIn("engineer", DESK);
+  await new CasePage(page).goto(number);
   await page.click("text=Sign verdict");
   const ceremony = page.locator('[data-testid="signature-ceremony"]');
   await ceremony.waitFor();
@@ -79,7 +72,7 @@ test("engineer signs through the ceremony: wrong password refused, right one sig
   expect(await ceremony.textContent()).toContain("What your signature means");
   const shownHash = (await page.textContent('[data-testid="sign-hash"]'))!.trim();
   expect(shownHash).toMatch(/^[0-9a-f]{64}$/);
-  await page.screenshot({ path: "/tmp/shots/e2e-sign-ceremony-desk.png", fullPage: true });
+  await ui.shot(page, "e2e-sign-ceremony-desk");
   await page.check("text=I have reviewed this and sign it as my own judgement.");
   await page.fill("#sign-password", "not-my-password-9");
   await page.click("text=Sign this verdict");
@@ -90,17 +83,17 @@ test("engineer signs through the ceremony: wrong password refused, right one sig
   await page.click("text=Sign this verdict");
   await page.waitForSelector("text=This case is read-only");
   expect(await page.textContent('[data-testid="signature-check"]')).toContain("exactly as signed");
-  await page.goto(`/cases/${number}/report`);
+  await new CasePage(page).goto(number, "report");
   const report = (await page.textContent("main")) ?? "";
   expect(report.replace(/\s+/g, "")).toContain(shownHash);
   expect(report).toContain("Matches: the verdict, findings and photos are exactly as signed.");
-  await page.goto(`/cases/${number}`);
-  await page.goto(`/cases?q=${car}`);
+  await new CasePage(page).goto(number);
+  await new CaseListPage(page).goto(`q=${car}`);
   const row = page.locator(`text=${number}`).first();
   await row.waitFor();
   const listText = await page.textContent("main");
   expect(listText).toContain(number);
   expect(listText).toContain("Signed");
-  await page.screenshot({ path: "/tmp/shots/e2e-case-list-desk.png" });
+  await ui.shot(page, "e2e-case-list-desk", { fullPage: false });
   await page.context().close();
 });

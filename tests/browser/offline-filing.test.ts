@@ -1,23 +1,17 @@
 // In Chromium on a phone: the removal form opens with the network switched off, a report filed offline
 // waits in the device outbox, and when the connection returns it is filed exactly once.
 import { count, eq } from "drizzle-orm";
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser } from "playwright-core";
+import { expect, test } from "vitest";
 import { db, t } from "../support/db";
-import { launch, PHONE, signedInPage } from "../support/browser";
+import { PHONE } from "../support/browser";
+import { browserPerFile } from "../support/browser-fixture";
 
-let browser: Browser;
+const ui = browserPerFile();
+
 const car = String(400000 + Math.floor(Math.random() * 99999));
 
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
 test("file a report offline, reload offline, come back online and find it filed once", async () => {
-  const page = await signedInPage(browser, "inspector", PHONE);
+  const page = await ui.signIn("inspector", PHONE);
   const context = page.context();
   await page.goto("/cases/new");
   await page.evaluate(async () => {
@@ -47,13 +41,13 @@ test("file a report offline, reload offline, come back online and find it filed 
   await fileButton.dblclick();
   await page.waitForSelector('[data-testid="queued"]');
   await expect.poll(() => page.textContent('[data-testid="outbox"]')).toContain("1 report waiting to send");
-  await page.screenshot({ path: "/tmp/shots/e2e-offline-queued-phone.png", fullPage: true });
+  await ui.shot(page, "e2e-offline-queued-phone");
   expect(await filedFor(car)).toBe(0);
 
   await context.setOffline(false);
   await expect.poll(() => page.textContent('[data-testid="outbox"]'), { timeout: 20_000 }).toContain("is filed");
   await page.waitForSelector('[data-testid="queued-sent"]');
-  await page.screenshot({ path: "/tmp/shots/e2e-offline-sent-phone.png", fullPage: true });
+  await ui.shot(page, "e2e-offline-sent-phone");
   expect(await filedFor(car)).toBe(1);
 
   // A reload online finds nothing left to send, and nothing is filed twice.

@@ -1,25 +1,25 @@
 // In Chromium: an analyst drops several photos on a case, watches them upload, opens the lightbox,
 // steps through with the keyboard, and puts one beside a photo of another case; then the phone view.
-import { mkdirSync } from "node:fs";
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launch, PHONE, DESK, signedInPage } from "../support/browser";
+import { beforeAll, expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { PHONE, DESK } from "../support/browser";
 import { eq } from "drizzle-orm";
 import { as } from "../support/api";
 import { db, t } from "../support/db";
 import { createCase } from "../support/factories";
 import { racewayJpeg, textAsJpeg } from "../support/photo-files";
 import { upload } from "../api/photos/helpers";
+import { browserPerFile } from "../support/browser-fixture";
+import { CasePage } from "../support/pages/case-page";
 
-let browser: Browser;
+const ui = browserPerFile();
+
 let caseNumber = "";
 let caseId = "";
 let otherPhotoId = "";
 let otherNumber = "";
 
 beforeAll(async () => {
-  mkdirSync("/tmp/shots", { recursive: true });
-  browser = await launch();
   const c = await createCase({ status: "bench", findings: [{ component: "cup", row: "inboard", damageCode: "fatigue.subsurface", severity: 3, clockDeg: 90 }] });
   caseNumber = c.number;
   caseId = c.id;
@@ -30,17 +30,14 @@ beforeAll(async () => {
   otherNumber = other.number;
   await db.update(t.cases).set({ status: "signed", signedAt: new Date() }).where(eq(t.cases.id, other.id));
 });
-afterAll(async () => {
-  await browser?.close();
-});
 
 async function thumbsLoaded(page: Page) {
   return page.$$eval('[data-testid="photo-tile"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).complete && (i as HTMLImageElement).naturalWidth > 0));
 }
 
 test("drop several photos, see each one's progress and result, then open the lightbox", async () => {
-  const page = await signedInPage(browser, "analyst", DESK);
-  await page.goto(`/cases/${caseNumber}/photos`);
+  const page = await ui.signIn("analyst", DESK);
+  await new CasePage(page).goto(caseNumber, "photos");
   await expect.poll(() => page.textContent("h1")).toContain(`All photos of ${caseNumber}`);
 
   // Tags chosen before the drop go with every file of the batch.
@@ -58,7 +55,7 @@ test("drop several photos, see each one's progress and result, then open the lig
   await expect.poll(() => page.locator('[data-testid="photo-tile"]').count()).toBe(3);
   await expect.poll(() => thumbsLoaded(page)).toBe(true);
   expect(await page.locator('section[aria-label="Cup"]').count()).toBe(1);
-  await page.screenshot({ path: "/tmp/shots/photos-desk.png", fullPage: true });
+  await ui.shot(page, "photos-desk");
 
   // Retrying the refused file asks the server again and gets the same clear answer.
   await page.click('[aria-label="Retry notes.jpg"]');
@@ -70,7 +67,7 @@ test("drop several photos, see each one's progress and result, then open the lig
   const first = await page.getAttribute('[data-testid="lightbox-image"]', "src");
   await expect.poll(() => page.$eval('[data-testid="lightbox-image"]', (i) => (i as HTMLImageElement).naturalWidth)).toBe(1200);
   expect(await box.getAttribute("aria-label")).toMatch(/^Photo 1 of 3: Cup, inboard row/);
-  await page.screenshot({ path: "/tmp/shots/photos-lightbox-desk.png" });
+  await ui.shot(page, "photos-lightbox-desk", { fullPage: false });
 
   await page.keyboard.press("ArrowRight");
   await expect.poll(() => page.getAttribute('[data-testid="lightbox-image"]', "src")).not.toBe(first);
@@ -96,7 +93,7 @@ test("drop several photos, see each one's progress and result, then open the lig
 });
 
 test("compare a photo of this case with a similar case's photo", async () => {
-  const page = await signedInPage(browser, "engineer", DESK);
+  const page = await ui.signIn("engineer", DESK);
   const res = await (await as("engineer")).json<{ photos: { id: string }[] }>("GET", `/api/cases/${caseId}/photos`);
   const mine = res.body.photos[0].id;
   await page.goto(`/photos/compare?a=${mine}`);
@@ -105,28 +102,28 @@ test("compare a photo of this case with a similar case's photo", async () => {
   await page.fill('input[name="case"]', otherNumber);
   await page.click("text=Show photos");
   await page.waitForSelector('[data-testid="pick-photo"]');
-  await page.screenshot({ path: "/tmp/shots/photos-compare-pick-desk.png", fullPage: true });
+  await ui.shot(page, "photos-compare-pick-desk");
   await page.locator(`a[href$="b=${otherPhotoId}"]`).click();
   await page.waitForURL(/b=/);
   await page.waitForSelector('[data-testid="compare-B"]');
   expect(await page.textContent('[data-testid="compare-B"]')).toContain("Spall near the outboard rib");
   await expect.poll(() => page.$$eval('[data-testid^="compare-"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).naturalWidth > 0))).toBe(true);
-  await page.screenshot({ path: "/tmp/shots/photos-compare-desk.png", fullPage: true });
+  await ui.shot(page, "photos-compare-desk");
   await page.context().close();
 });
 
 test("on a phone: the camera button, the grid and the lightbox fit 390 px", async () => {
-  const page = await signedInPage(browser, "analyst", PHONE);
-  await page.goto(`/cases/${caseNumber}/photos`);
+  const page = await ui.signIn("analyst", PHONE);
+  await new CasePage(page).goto(caseNumber, "photos");
   await page.waitForSelector('[data-testid="photo-tile"]');
   expect(await page.isVisible("text=Take photo")).toBe(true);
   expect(await page.getAttribute('[data-testid="photo-camera-input"]', "capture")).toBe("environment");
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
   await expect.poll(() => thumbsLoaded(page)).toBe(true);
-  await page.screenshot({ path: "/tmp/shots/photos-phone.png", fullPage: true });
+  await ui.shot(page, "photos-phone");
   await page.locator('[data-testid="photo-tile"]').nth(1).click();
   await page.locator('[data-testid="lightbox"]').waitFor();
   await expect.poll(() => page.$eval('[data-testid="lightbox-image"]', (i) => (i as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
-  await page.screenshot({ path: "/tmp/shots/photos-lightbox-phone.png" });
+  await ui.shot(page, "photos-lightbox-phone", { fullPage: false });
   await page.context().close();
 });

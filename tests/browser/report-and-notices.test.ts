@@ -1,46 +1,39 @@
 // In Chromium: the printable report (draft mark, print layout), the Notices switches and the outbox,
 // at phone and desk sizes. Screenshots go to /tmp/shots for review.
 import { randomUUID } from "node:crypto";
-import { mkdirSync, writeFileSync } from "node:fs";
+import { writeFileSync } from "node:fs";
 import { hashPassword } from "better-auth/crypto";
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { expect, test } from "vitest";
+import type { Page } from "playwright-core";
 import { APP_URL } from "../support/env";
-import { DESK, launch, PHONE, signedInPage } from "../support/browser";
+import { DESK, PHONE } from "../support/browser";
 import { db, t } from "../support/db";
 import { createCase } from "../support/factories";
 import { pdfPageCount, pdfPages } from "../support/pdf-text";
+import { SHOTS, browserPerFile } from "../support/browser-fixture";
+import { CasePage } from "../support/pages/case-page";
 
-const SHOTS = "/tmp/shots";
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const ui = browserPerFile();
 
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);
 
 test("a draft report shows its mark on screen and prints with numbered pages and no app chrome", async () => {
   const c = await createCase({ status: "bench", findings: [{ component: "cup", damageCode: "corrosion.moisture", severity: 3, clockDeg: 30, arcDeg: 50 }] });
   for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
-    const page = await signedInPage(browser, "analyst", viewport);
-    await page.goto(`/cases/${c.number}/report`);
+    const page = await ui.signIn("analyst", viewport);
+    await new CasePage(page).goto(c.number, "report");
     await expect.poll(() => page.locator(".tl-watermark").innerText()).toBe("DRAFT — NOT SIGNED");
     expect(await page.locator("article.tl-report").getAttribute("data-revision")).toBe("draft");
     expect(await fitsWidth(page, viewport.width), "the report is wider than the screen").toBe(true);
-    await page.screenshot({ path: `${SHOTS}/report-draft-${label}.png`, fullPage: true });
+    await ui.shot(page, `report-draft-${label}`);
     // Scrolled well down, the mark is still in view.
     await page.evaluate(() => window.scrollTo(0, 1600));
     await expect.poll(async () => {
       const box = await page.locator(".tl-watermark").boundingBox();
       return box !== null && box.y > 0 && box.y < viewport.height;
     }).toBe(true);
-    await page.screenshot({ path: `${SHOTS}/report-draft-${label}-scrolled.png` });
+    await ui.shot(page, `report-draft-${label}-scrolled`, { fullPage: false });
     if (label === "desk") {
       const pdf = await page.pdf({ format: "Letter", printBackground: true });
       writeFileSync(`${SHOTS}/report-draft-print.pdf`, pdf);
@@ -61,7 +54,7 @@ test("a person switches a notice off on the Notices page and it stays off", asyn
   await db.insert(t.user).values({ id, name: "Hana Kowalczyk", email, emailVerified: true, role: "analyst" });
   await db.insert(t.account).values({ id: randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
 
-  const ctx = await browser.newContext({ viewport: PHONE, baseURL: APP_URL });
+  const ctx = await ui.browser.newContext({ viewport: PHONE, baseURL: APP_URL });
   const page = await ctx.newPage();
   await page.goto("/sign-in");
   await page.fill("#email", email);
@@ -72,7 +65,7 @@ test("a person switches a notice off on the Notices page and it stays off", asyn
   await expect.poll(() => toggle.getAttribute("aria-checked")).toBe("true");
   await toggle.click();
   await expect.poll(() => page.getByRole("status").innerText()).toContain("switched off");
-  await page.screenshot({ path: `${SHOTS}/profile-notices-phone.png`, fullPage: true });
+  await ui.shot(page, `profile-notices-phone`);
   const [row] = await db.select({ prefs: t.user.noticePrefs }).from(t.user).where(eq(t.user.id, id));
   expect(row.prefs).toEqual({ "verdict-returned": false });
   await page.reload();
@@ -84,12 +77,12 @@ test("a person switches a notice off on the Notices page and it stays off", asyn
 
 test("the outbox lists mail with its status and shows what the mail fake received", async () => {
   for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
-    const page = await signedInPage(browser, "admin", viewport);
+    const page = await ui.signIn("admin", viewport);
     await page.goto("/admin/outbox");
     await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Outbox");
     await expect.poll(() => page.getByText("Test mailbox: mail caught on this installation, never delivered").count()).toBe(1);
     expect(await fitsWidth(page, viewport.width), "the outbox is wider than the screen").toBe(true);
-    await page.screenshot({ path: `${SHOTS}/admin-outbox-${label}.png`, fullPage: true });
+    await ui.shot(page, `admin-outbox-${label}`);
     await page.context().close();
   }
 }, 60_000);

@@ -1,27 +1,21 @@
 // In Chromium: an incomplete removal shows what to fix and goes to it; a filing with unticked safety
 // confirmations carries a flag the engineer sees; the main screens pass axe-core's serious and critical rules.
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser } from "playwright-core";
+import { expect, test } from "vitest";
 import { as } from "../support/api";
 import { pool } from "../support/db";
 import { seriousAxeProblems } from "../support/axe";
-import { launch, DESK, PHONE, signedInPage } from "../support/browser";
+import { DESK, PHONE } from "../support/browser";
 import { APP_URL } from "../support/env";
 import { fieldReport } from "../api/cases/fixtures";
+import { browserPerFile } from "../support/browser-fixture";
+import { CasePage } from "../support/pages/case-page";
+import { NewRemovalPage } from "../support/pages/new-removal-page";
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const ui = browserPerFile();
 
 test("an incomplete removal shows a summary at the top with a link per field, and focus moves to the first", async () => {
-  const page = await signedInPage(browser, "inspector", PHONE);
-  await page.goto("/cases/new");
-  await page.evaluate(() => localStorage.clear());
-  await page.reload();
+  const page = await ui.signIn("inspector", PHONE);
+  await new NewRemovalPage(page).goto();
   await page.click("text=File removal report");
   const summary = page.locator('[data-testid="error-summary"]');
   await summary.waitFor();
@@ -30,7 +24,7 @@ test("an incomplete removal shows a summary at the top with a link per field, an
   expect(await summary.textContent()).not.toMatch(/trigger:/);
   await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe("trigger");
   expect(await page.getAttribute("#trigger", "aria-invalid")).toBe("true");
-  await page.screenshot({ path: "/tmp/shots/e2e-error-summary-phone.png", fullPage: false });
+  await ui.shot(page, "e2e-error-summary-phone", { fullPage: false });
   // Nothing was put in the outbox for a report that cannot be filed.
   expect(await page.locator('[data-testid="queued"]').count()).toBe(0);
   // The link in the summary goes back to the field after focus has moved on.
@@ -46,14 +40,14 @@ test("the inspector reopens a filed report for correction and the form loads wit
   const res = await inspector.request("POST", "/api/cases", base);
   expect(res.status).toBe(201);
   const { case: filed } = (await res.json()) as { case: { number: string } };
-  const page = await signedInPage(browser, "inspector", PHONE);
+  const page = await ui.signIn("inspector", PHONE);
   await page.goto(`/cases/${filed.number}`);
   await page.locator("h1").waitFor();
   // The case page itself carries no editor; it loads on demand for the correction.
   expect(await page.locator("#carMark").count()).toBe(0);
   await page.goto(`/cases/${filed.number}?edit=field`);
   await expect.poll(() => page.locator("#carNumber").inputValue(), { timeout: 15_000 }).toBe(base.carNumber);
-  await page.screenshot({ path: "/tmp/shots/e2e-field-edit-phone.png", fullPage: false });
+  await ui.shot(page, "e2e-field-edit-phone");
   await page.context().close();
 });
 
@@ -64,15 +58,15 @@ test("a report filed with safety confirmations unticked shows the flag to the en
   expect(res.status).toBe(201);
   const { case: filed } = (await res.json()) as { case: { number: string } };
   for (const viewport of [PHONE, DESK]) {
-    const page = await signedInPage(browser, "engineer", viewport);
-    await page.goto(`/cases/${filed.number}`);
+    const page = await ui.signIn("engineer", viewport);
+    await new CasePage(page).goto(filed.number);
     const flag = page.locator('[data-testid="safety-flag"]');
     await flag.waitFor();
     const text = (await flag.textContent()) ?? "";
     expect(text).toContain("Not confirmed: wheelset is out from under the car and secured against rolling");
     expect(text).not.toContain("blue-signal protection is in place");
     expect(text).toMatch(/employer's procedures, the applicable interchange rules and local codes/);
-    await page.screenshot({ path: `/tmp/shots/e2e-safety-flag-${viewport === PHONE ? "phone" : "desk"}.png`, fullPage: false });
+    await ui.shot(page, `e2e-safety-flag-${viewport === PHONE ? "phone" : "desk"}`, { fullPage: false });
     await page.context().close();
   }
   // The printed report carries it too.
@@ -82,12 +76,12 @@ test("a report filed with safety confirmations unticked shows the flag to the en
 });
 
 test("axe-core finds no serious or critical problem on sign-in, the list, a case and the removal form", async () => {
-  const anon = await browser.newContext({ viewport: PHONE, baseURL: APP_URL });
+  const anon = await ui.browser.newContext({ viewport: PHONE, baseURL: APP_URL });
   const signIn = await anon.newPage();
   await signIn.goto("/sign-in");
   const found: Record<string, unknown> = { "/sign-in": await seriousAxeProblems(signIn) };
   await anon.close();
-  const page = await signedInPage(browser, "analyst", PHONE);
+  const page = await ui.signIn("analyst", PHONE);
   await page.goto("/cases");
   await page.locator("main a[href^='/cases/TL-']:visible").first().waitFor();
   found["/cases"] = await seriousAxeProblems(page);
@@ -95,7 +89,7 @@ test("axe-core finds no serious or critical problem on sign-in, the list, a case
   await page.goto(first!);
   found[first!] = await seriousAxeProblems(page);
   await page.context().close();
-  const inspector = await signedInPage(browser, "inspector", PHONE);
+  const inspector = await ui.signIn("inspector", PHONE);
   await inspector.goto("/cases/new");
   found["/cases/new"] = await seriousAxeProblems(inspector);
   await inspector.context().close();
@@ -103,7 +97,7 @@ test("axe-core finds no serious or critical problem on sign-in, the list, a case
 }, 90_000);
 
 test("on a phone the menu shows every destination without sideways scrolling, each at least 44 px tall", async () => {
-  const page = await signedInPage(browser, "admin", PHONE);
+  const page = await ui.signIn("admin", PHONE);
   await page.goto("/");
   await page.getByRole("button", { name: "Menu" }).click();
   const links = page.locator('#phone-menu nav[aria-label="Main"] a');
@@ -115,7 +109,7 @@ test("on a phone the menu shows every destination without sideways scrolling, ea
     expect(box.left).toBeGreaterThanOrEqual(0);
   }
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
-  await page.screenshot({ path: "/tmp/shots/e2e-phone-menu.png", fullPage: false });
+  await ui.shot(page, "e2e-phone-menu", { fullPage: false });
   await page.getByRole("link", { name: "Sites & limits" }).click();
   await page.waitForURL((u) => u.pathname === "/admin/sites");
   expect(await page.locator("#phone-menu").count()).toBe(0);
@@ -129,7 +123,7 @@ test("axe-core finds no serious or critical problem on a signed case, the search
   const signed = `/cases/${rows[0].number}`;
   const found: Record<string, unknown> = {};
   for (const viewport of [PHONE, DESK]) {
-    const page = await signedInPage(browser, "engineer", viewport);
+    const page = await ui.signIn("engineer", viewport);
     for (const [path, ready] of [[signed, '[data-testid="photo-tile"]'], ["/search?q=spall+cup+outboard+row", '[data-testid="search-hit"]'], ["/tallies", "main h1"], ["/tallies/life", "[data-life-causes]"]] as const) {
       await page.goto(path);
       await page.locator(ready).first().waitFor();

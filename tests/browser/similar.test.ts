@@ -1,14 +1,15 @@
 // In Chromium: a case page lists its similar earlier cases with scores, reasons and the same
 // part's photos side by side; an engineer links one as related and both cases list the link.
-import { afterAll, beforeAll, expect, test } from "vitest";
-import { mkdirSync } from "node:fs";
-import type { Browser } from "playwright-core";
+import { beforeAll, expect, test } from "vitest";
 import { as } from "../support/api";
-import { launch, PHONE, DESK, signedInPage } from "../support/browser";
+import { PHONE, DESK } from "../support/browser";
 import { caseWith, markerWord, people } from "../api/search/casebook";
 import { racewayJpeg } from "./similar-photos";
+import { browserPerFile } from "../support/browser-fixture";
+import { CasePage } from "../support/pages/case-page";
 
-let browser: Browser;
+const ui = browserPerFile();
+
 const marker = markerWord();
 let target: { id: string; number: string }, twin: { id: string; number: string };
 const photoIds: string[] = [];
@@ -23,7 +24,6 @@ async function uploadCupPhoto(caseId: string, stain: string) {
 }
 
 beforeAll(async () => {
-  mkdirSync("/tmp/shots", { recursive: true });
   const p = await people();
   // Invented cases dated 1984-85, before any other test's, so the neighbours are known.
   const base = { siteId: p.mjc, bearingClass: "F", trigger: "wayside-hot", primaryCause: "water-ingress" };
@@ -37,15 +37,11 @@ beforeAll(async () => {
   target = await caseWith(marker, { ...base, removedOn: "1985-02-11", notes: "Milky grease behind the inboard seal; water etch on the cup at roller spacing.", findings: water });
   await uploadCupPhoto(target.id, "#5b3a1e");
   await uploadCupPhoto(twin.id, "#3f2a17");
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
 });
 
 test("an engineer sees the twin first with photos side by side, and links it as related", async () => {
-  const page = await signedInPage(browser, "engineer", DESK);
-  await page.goto(`/cases/${target.number}#similar`);
+  const page = await ui.signIn("engineer", DESK);
+  await new CasePage(page).goto(target.number, "", "similar");
   await page.waitForSelector('[data-testid="similar-case"]');
   const first = page.locator('[data-testid="similar-case"]').first();
   expect(await first.textContent()).toContain(twin.number);
@@ -64,11 +60,11 @@ test("an engineer sees the twin first with photos side by side, and links it as 
 });
 
 test("on a phone the twin's page lists the link back, and the target's list fits the screen", async () => {
-  const page = await signedInPage(browser, "engineer", PHONE);
-  await page.goto(`/cases/${twin.number}#similar`);
+  const page = await ui.signIn("engineer", PHONE);
+  await new CasePage(page).goto(twin.number, "", "similar");
   await page.waitForSelector(`[data-testid="related-case"]:has-text("${target.number}")`);
   expect(await page.textContent('[data-testid="related-cases"]')).toContain("Same spring water run");
-  await page.goto(`/cases/${target.number}#similar`);
+  await new CasePage(page).goto(target.number, "", "similar");
   await page.waitForSelector('[data-testid="similar-case"]');
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
   await page.locator("#similar").screenshot({ path: "/tmp/shots/similar-phone.png" });

@@ -1,23 +1,24 @@
 // In Chromium: a manager opens the tallies on the demo data and every chart draws; the table view,
 // CSV and PNG downloads work; the filters go into the URL; the life section draws its Weibull plot.
 // Screenshots at phone and desk sizes go to /tmp/shots for review.
-import { mkdirSync, readFileSync } from "node:fs";
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { DESK, launch, PHONE, signedInPage } from "../support/browser";
+import { readFileSync } from "node:fs";
+import { beforeAll, expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { DESK, PHONE } from "../support/browser";
 import { createCase } from "../support/factories";
 import { checkValues } from "../unit/stats/check-values";
 import { insertCasebook, makeSites, specs, tag } from "../api/tallies/casebook";
+import { browserPerFile } from "../support/browser-fixture";
+import { TalliesPage } from "../support/pages/tallies-page";
 
-const SHOTS = "/tmp/shots";
+const ui = browserPerFile();
+
 const CLASS = tag();
-let browser: Browser;
 
 // Cards whose chart is drawn by the chart library, and the two drawn as our own SVG.
 const RECHARTS_CARDS = ["Root causes", "Trigger and teardown verdict", "Confirmed share by trigger", "Confirmed share by shop", "Monthly trend with control limits", "Causes by site"];
 
 beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
   // The demo casebook is there already; a few more cases of our own make sure every chart has data.
   const sites = await makeSites(CLASS);
   await insertCasebook(CLASS, specs(30, 2024, 2025), sites);
@@ -26,21 +27,17 @@ beforeAll(async () => {
   for (const [i, time] of (nist.times as number[]).entries()) {
     await createCase({ bearingClass: `${CLASS}W`, status: "signed", primaryCause: nist.status[i] === 1 ? "water-ingress" : "seal", removalConfirmed: "confirmed", serviceMonths: time, removedOn: "1991-06-15" });
   }
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
 });
 
 const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 30_000, interval: 150 });
-const card = (page: Page, title: string) => page.locator("section[data-chart-card]", { has: page.getByRole("heading", { name: title, exact: true }) });
+const card = (page: Page, title: string) => new TalliesPage(page).card(title);
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);
 
 for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
   test(`every tally chart draws for a manager (${label})`, async () => {
-    const page = await signedInPage(browser, "manager", viewport);
-    await page.goto("/tallies");
-    await poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Tallies");
+    const page = await ui.signIn("manager", viewport);
+    const tallies = await new TalliesPage(page).goto();
+    await poll(() => tallies.heading()).toBe("Tallies");
     for (const title of RECHARTS_CARDS) {
       await poll(() => card(page, title).locator("svg.recharts-surface").count()).toBeGreaterThan(0);
       // something is drawn inside, not just an empty frame
@@ -50,14 +47,14 @@ for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
     await poll(() => card(page, "Recurring causes").locator("[data-clusters], p").count()).toBeGreaterThan(0);
     expect(await page.locator("[data-headline]").innerText()).toMatch(/removals\s+[\d,]+/i);
     expect(await fitsWidth(page, viewport.width), "the page is wider than the screen").toBe(true);
-    await page.screenshot({ path: `${SHOTS}/tallies-${label}.png`, fullPage: true });
+    await ui.shot(page, `tallies-${label}`);
     await page.context().close();
   }, 180_000);
 }
 
 test("a chart's numbers are one click away, and it downloads as CSV and PNG", async () => {
-  const page = await signedInPage(browser, "manager", DESK);
-  await page.goto(`/tallies?class=${CLASS}`);
+  const page = await ui.signIn("manager", DESK);
+  await new TalliesPage(page).goto("", `class=${CLASS}`);
   const pareto = card(page, "Root causes");
   await poll(() => pareto.locator("svg.recharts-surface").count()).toBe(1);
 
@@ -88,15 +85,15 @@ test("a chart's numbers are one click away, and it downloads as CSV and PNG", as
 
 for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
   test(`the life section draws the Weibull plot and its parameters (${label})`, async () => {
-    const page = await signedInPage(browser, "manager", viewport);
-    await page.goto(`/tallies/life?class=${CLASS}W&cause=water-ingress`);
+    const page = await ui.signIn("manager", viewport);
+    await new TalliesPage(page).goto("life", `class=${CLASS}W&cause=water-ingress`);
     await poll(() => page.locator("svg[data-weibull-plot] circle").count()).toBe(10);
     await poll(() => page.locator("svg[data-weibull-plot] polyline").count()).toBe(1);
     // NIST/SEMATECH 8.4.1.3 published shape 1.7208 (shown to two decimals)
     expect(await page.locator("[data-life-parameters]").innerText()).toMatch(/Shape β\s+1\.72/);
     expect(await page.locator("[data-fleet-upload]").count()).toBe(1);
     expect(await fitsWidth(page, viewport.width), "the page is wider than the screen").toBe(true);
-    await page.screenshot({ path: `${SHOTS}/tallies-life-${label}.png`, fullPage: true });
+    await ui.shot(page, `tallies-life-${label}`);
     await page.context().close();
   }, 120_000);
 }

@@ -1,27 +1,20 @@
 // On a phone every control on the main screens is big enough for a gloved finger: at least 44 x 44 CSS px
 // (WCAG 2.2, 2.5.5 Target Size (Enhanced); links inside a sentence are exempt as that criterion allows,
 // see tests/support/touch-targets.ts).
-import { afterAll, beforeAll, expect, test } from "vitest";
-import { mkdirSync } from "node:fs";
-import type { Browser, Page } from "playwright-core";
-import { launch, PHONE, signedInPage } from "../support/browser";
+import { expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { PHONE } from "../support/browser";
+import { browserPerFile } from "../support/browser-fixture";
 import { pool } from "../support/db";
 import { smallTouchTargets, type SmallTarget } from "../support/touch-targets";
 
-let browser: Browser;
-beforeAll(async () => {
-  mkdirSync("/tmp/shots", { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const ui = browserPerFile();
 
 async function check(page: Page, path: string, ready: string, found: Record<string, SmallTarget[]>) {
   await page.goto(path);
   await page.locator(ready).first().waitFor();
   found[path] = await smallTouchTargets(page);
-  await page.screenshot({ path: `/tmp/shots/targets${path.replace(/[/?=&+]/g, "_")}-phone.png`, fullPage: true });
+  await ui.shot(page, `targets${path.replace(/[/?=&+]/g, "_")}-phone`);
 }
 
 test("every control on the list, a case, search and tallies is at least 44 x 44 px on a phone", async () => {
@@ -32,7 +25,7 @@ test("every control on the list, a case, search and tallies is at least 44 x 44 
     "SELECT c.number FROM cases c WHERE c.status = 'bench' AND EXISTS (SELECT 1 FROM photos p WHERE p.case_id = c.id) ORDER BY c.number LIMIT 1",
   );
   const bench = `/cases/${rows[0].number}`;
-  const analyst = await signedInPage(browser, "analyst", PHONE);
+  const analyst = await ui.signIn("analyst", PHONE);
   await check(analyst, "/cases", "main a[href^='/cases/TL-']:visible", found);
   await check(analyst, bench, '[data-testid="photo-tile"]', found);
   await analyst.locator('[data-testid="photo-tile"]').first().click();
@@ -42,16 +35,16 @@ test("every control on the list, a case, search and tallies is at least 44 x 44 
   if (await details.count()) await details.first().click();
   await analyst.getByRole("button", { name: "Edit tags" }).click();
   found["photo tags"] = await smallTouchTargets(analyst, '[data-testid="lightbox"]');
-  await analyst.screenshot({ path: "/tmp/shots/targets-photo-tags-phone.png" });
+  await ui.shot(analyst, "targets-photo-tags-phone", { fullPage: false });
   await analyst.context().close();
 
-  const engineer = await signedInPage(browser, "engineer", PHONE);
+  const engineer = await ui.signIn("engineer", PHONE);
   await check(engineer, "/search?q=spall+cup", '[data-testid="search-hit"]', found);
   await check(engineer, "/tallies", "main h1", found);
   await check(engineer, "/tallies/life", "main h1", found);
   await engineer.context().close();
 
-  const inspector = await signedInPage(browser, "inspector", PHONE);
+  const inspector = await ui.signIn("inspector", PHONE);
   await check(inspector, "/cases/new", "#trigger", found);
   await inspector.context().close();
 

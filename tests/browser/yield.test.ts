@@ -1,12 +1,12 @@
 // In Chromium: a manager opens Tallies › Removal yield on the demo data and every figure draws;
 // the table view and the CSV download work. Screenshots at phone and desk sizes go to /tmp/shots.
-import { mkdirSync } from "node:fs";
-import { afterAll, beforeAll, expect, test } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { DESK, launch, PHONE, signedInPage } from "../support/browser";
+import { expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { DESK, PHONE } from "../support/browser";
+import { browserPerFile } from "../support/browser-fixture";
+import { TalliesPage } from "../support/pages/tallies-page";
 
-const SHOTS = "/tmp/shots";
-let browser: Browser;
+const ui = browserPerFile();
 
 const CARDS = [
   "Hot-bearing alarms: reading against outcome",
@@ -20,21 +20,13 @@ const CARDS = [
   "What no-defect removals cost, by detector",
 ];
 
-beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
 const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 30_000, interval: 150 });
 const card = (page: Page, title: string) => page.locator("section[data-chart-card]", { has: page.getByRole("heading", { name: title, exact: true }) });
 
 for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
   test(`every removal-yield figure draws on the demo (${label})`, async () => {
-    const page = await signedInPage(browser, "manager", viewport);
-    await page.goto("/tallies/yield");
+    const page = await ui.signIn("manager", viewport);
+    await new TalliesPage(page).goto("yield");
     await poll(() => page.getByRole("link", { name: "Removal yield" }).getAttribute("aria-current")).toBe("page");
     const summary = page.locator("[data-yield-summary]");
     await poll(() => summary.innerText()).toContain("over the owner's threshold");
@@ -46,7 +38,7 @@ for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
     }
     // the fitted curve and its band are drawn, and the funnel holds the over-alarming detector
     await poll(() => card(page, CARDS[0]).locator(".recharts-line-curve").count()).toBeGreaterThan(0);
-    await page.screenshot({ path: `${SHOTS}/yield-${label}.png`, fullPage: true });
+    await ui.shot(page, `yield-${label}`);
     // The plot names only detectors below the fleet's rate, which moves with whatever else the casebook holds;
     // the detector's own row is always in the figure's table.
     const funnel = card(page, "Detectors against the fleet");
@@ -58,8 +50,8 @@ for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
 }
 
 test("a figure's table view and CSV hold its numbers", async () => {
-  const page = await signedInPage(browser, "manager", DESK);
-  await page.goto("/tallies/yield");
+  const page = await ui.signIn("manager", DESK);
+  await new TalliesPage(page).goto("yield");
   const c = card(page, "Detectors against the fleet");
   await c.getByRole("button", { name: "Table" }).click();
   await poll(() => c.locator("table").innerText()).toContain("Fleet");

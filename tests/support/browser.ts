@@ -1,9 +1,8 @@
-// Debian's Chromium driven by playwright-core (no browser download), for page tests.
-import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+// Debian's Chromium driven by playwright-core (no browser download), for page tests. Test files
+// use it through tests/support/browser-fixture.ts (browserPerFile) and the page objects in tests/support/pages/.
+import { chromium, type Browser, type BrowserContext } from "playwright-core";
 import { afterEach } from "vitest";
-import { DEMO_PASSWORD } from "../../scripts/seed/demo-people";
-import { demoUser, type DemoRole } from "./api";
-import { APP_URL, CHROMIUM_PATH } from "./env";
+import { CHROMIUM_PATH } from "./env";
 
 // Every page runs under the app's content-security policy; any violation fails the test that caused it.
 const cspViolations: string[] = [];
@@ -51,13 +50,3 @@ function launchChromium(): Promise<Browser> {
 
 export const PHONE = { width: 390, height: 844 };
 export const DESK = { width: 1366, height: 900 };
-
-export async function signedInPage(browser: Browser, role: DemoRole, viewport = DESK): Promise<Page> {
-  const ctx = await browser.newContext({ viewport, baseURL: APP_URL });
-  const page = await ctx.newPage();
-  await page.goto("/sign-in");
-  await page.fill("#email", demoUser(role).email);
-  await page.fill("#password", DEMO_PASSWORD);
-  await Promise.all([page.waitForURL((u) => !u.pathname.startsWith("/sign-in")), page.click("button[type=submit]")]);
-  return page;
-}

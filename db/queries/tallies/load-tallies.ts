@@ -6,7 +6,7 @@ import { confirmationTable } from "@/lib/tallies/shape-confirmation";
 import { causeSiteTally } from "@/lib/tallies/shape-cause-site";
 import { monthlyTally } from "@/lib/tallies/shape-monthly";
 import { causePareto, triggerVerdictRows, verdictTotals } from "@/lib/tallies/shape-verdicts";
-import { triggerLabel } from "@/lib/tallies/labels";
+import { triggerLabel } from "@/lib/classification/labels";
 import type { TallyFilters } from "@/lib/tallies/filters";
 import type { TalliesData } from "@/lib/tallies/types";
 import { recurringClusters } from "./clusters";

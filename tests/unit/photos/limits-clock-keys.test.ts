@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { DEFAULT_MAX_BYTES, DEFAULT_MAX_PIXELS, formatBytes, formatMegapixels, photoLimits } from "@/lib/photos/limits";
-import { clockLabel, degToOClock, oClockToDeg } from "@/lib/photos/clock";
+import { degToOClock, oClockToDeg } from "@/lib/photos/clock";
 import { parsePhotoKey, photoKeys } from "@/lib/photos/keys";
 
 describe("photo limits", () => {
@@ -36,12 +36,6 @@ describe("clock positions", () => {
     expect(degToOClock(95)).toBe(3);
     expect(degToOClock(350)).toBe(12);
     expect(() => oClockToDeg(13)).toThrow(RangeError);
-  });
-
-  it("labels exact and nearby positions", () => {
-    expect(clockLabel(90)).toBe("3 o'clock (90°)");
-    expect(clockLabel(100)).toBe("near 3 o'clock (100°)");
-    expect(clockLabel(null)).toBe("");
   });
 });
 

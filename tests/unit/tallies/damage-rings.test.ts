@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
 import { binFindings, ringsOf, sectorsCovered, sectorSpan, sumSpanGroups } from "@/lib/damage-map/rings";
-import { annularSector, clockPoint, clockWords } from "@/lib/damage-map/geometry";
 
 describe("placing findings on the raceway rings", () => {
   it("puts cup findings on the named row, on both cup raceways when no row is given, and skips parts without a raceway", () => {
@@ -48,26 +47,5 @@ describe("placing findings on the raceway rings", () => {
       { ring: "cone-outboard", sector: 0, findings: 6, maxSeverity: 3 },
       { ring: "cone-outboard", sector: 35, findings: 5, maxSeverity: 2 },
     ]);
-  });
-});
-
-describe("clock-face geometry", () => {
-  it("puts 0 degrees at 12 o'clock and 90 degrees at 3 o'clock (clock convention, SVG y grows downward)", () => {
-    const [x0, y0] = clockPoint(100, 100, 50, 0);
-    const [x90, y90] = clockPoint(100, 100, 50, 90);
-    expect([Math.round(x0), Math.round(y0)]).toEqual([100, 50]);
-    expect([Math.round(x90), Math.round(y90)]).toEqual([150, 100]);
-  });
-
-  it("names clock positions in hours: 30 degrees per hour (clock arithmetic)", () => {
-    expect(clockWords(0)).toBe("12 o'clock");
-    expect(clockWords(90)).toBe("3 o'clock");
-    expect(clockWords(45)).toBe("1:30");
-    expect(clockWords(-30)).toBe("11 o'clock");
-  });
-
-  it("draws an annular sector as a closed path with the large-arc flag past 180 degrees (SVG 1.1 path arcs)", () => {
-    expect(annularSector(0, 0, 5, 10, 0, 90)).toMatch(/^M0 -10A10 10 0 0 1 10 0L5 0A5 5 0 0 0 0 -5Z$/);
-    expect(annularSector(0, 0, 5, 10, 0, 270)).toContain("A10 10 0 1 1");
   });
 });

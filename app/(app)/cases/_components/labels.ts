@@ -1,4 +1,5 @@
 // Display choices the list needs on the client beyond what lib/cases/list-columns formats.
 import { BEARING_CLASSES } from "@/lib/cases/schemas";
+import { bearingClassLabel } from "@/lib/classification/labels";
 
-export const BEARING_CLASS_OPTIONS = BEARING_CLASSES.map((c) => ({ code: c, label: c === "other" ? "Other class" : `Class ${c}` }));
+export const BEARING_CLASS_OPTIONS = BEARING_CLASSES.map((c) => ({ code: c, label: bearingClassLabel(c) }));

@@ -1,6 +1,5 @@
-import { COMPONENTS, SEVERITIES, ZONES } from "@/lib/classification/components";
-
-const zoneLabel = (code: string) => ZONES.find((z) => z.code === code)?.label ?? code;
+import { COMPONENTS, SEVERITIES } from "@/lib/classification/components";
+import { zoneLabel } from "@/lib/classification/labels";
 
 // Warmer as it gets worse; the same tokens as the rest of the app, so dark mode follows.
 const SEVERITY_TONE = ["bg-surface-2 text-ink-2", "bg-ok-soft text-ok", "bg-warn-soft text-warn", "bg-accent-soft text-accent", "bg-danger-soft text-danger"];
@@ -35,7 +34,7 @@ export function PartList() {
               <code className="font-mono text-xs text-muted">{c.code}</code>
               {c.hasRaceway ? <span className="rounded-full bg-accent-soft px-2 py-0.5 text-[11px] font-medium text-accent">raceway</span> : null}
             </p>
-            <p className="mt-0.5 text-xs text-muted">Where on it: {c.zones.map(zoneLabel).join(", ")}</p>
+            <p className="mt-0.5 text-xs text-muted">Where on it: {c.zones.map((z) => zoneLabel(z)).join(", ")}</p>
           </li>
         ))}
       </ul>

@@ -2,11 +2,12 @@
 import type { SiteInfo } from "@/lib/tallies/types";
 import { BEARING_CLASSES } from "@/lib/cases/schemas";
 import { TRIGGERS } from "@/lib/classification";
+import { bearingClassLabel } from "@/lib/classification/labels";
 
 export function filterOptions(sites: SiteInfo[]) {
   return {
     sites: sites.filter((s) => s.kind !== "lab").map((s) => ({ value: s.code, label: s.name })),
-    classes: BEARING_CLASSES.map((c) => ({ value: c, label: c === "other" ? "Other" : `Class ${c}` })),
+    classes: BEARING_CLASSES.map((c) => ({ value: c, label: bearingClassLabel(c, true) })),
     triggers: TRIGGERS.map((t) => ({ value: t.code, label: t.label })),
   };
 }

@@ -2,7 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
 import { quietDangerClass } from "@/components/admin/quiet-danger";
-import { sendJson } from "@/components/admin/send-json";
+import { sendJson } from "@/lib/client/api";
 import { StatusNote, type Note } from "@/components/admin/status-note";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
@@ -29,7 +29,7 @@ export function CodeRow({ entry }: { entry: CodeView }) {
     setBusy(false);
     if (!res.ok) {
       setErrors(res.fields);
-      setNote({ tone: "danger", text: res.error });
+      setNote({ tone: "danger", text: res.message });
       return false;
     }
     setNote({ tone: "ok", text: done });

@@ -2,6 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
+import { callApi } from "@/lib/client/api";
 
 /** Sends every unsent mail now and refreshes the table with the outcome. */
 export function RetryButton({ unsent }: { unsent: number }) {
@@ -13,18 +14,12 @@ export function RetryButton({ unsent }: { unsent: number }) {
   async function retry() {
     setBusy(true);
     setNote(null);
-    try {
-      const res = await fetch("/api/admin/outbox/retry", { method: "POST" });
-      const body = (await res.json().catch(() => ({}))) as { sent?: number; failed?: number; error?: string };
-      if (!res.ok) setNote(body.error ?? `Retry refused (HTTP ${res.status}).`);
-      else if (!body.sent && !body.failed) setNote("Nothing was waiting to be sent.");
-      else setNote(`${body.sent ?? 0} sent, ${body.failed ?? 0} still failing.`);
-    } catch {
-      setNote("The server could not be reached.");
-    } finally {
-      setBusy(false);
-      startTransition(() => router.refresh());
-    }
+    const res = await callApi<{ sent?: number; failed?: number }>("POST", "/api/admin/outbox/retry", { fallback: "The retry was refused." });
+    if (!res.ok) setNote(res.message);
+    else if (!res.data?.sent && !res.data?.failed) setNote("Nothing was waiting to be sent.");
+    else setNote(`${res.data.sent ?? 0} sent, ${res.data.failed ?? 0} still failing.`);
+    setBusy(false);
+    startTransition(() => router.refresh());
   }
 
   return (

@@ -2,7 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { quietDangerClass } from "@/components/admin/quiet-danger";
-import { sendJson } from "@/components/admin/send-json";
+import { sendJson } from "@/lib/client/api";
 import { StatusNote, type Note } from "@/components/admin/status-note";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
@@ -39,7 +39,7 @@ export function SiteCard({ site }: { site: SiteView }) {
     setBusy(true);
     const res = await sendJson("DELETE", `/api/admin/sites/${site.id}`);
     setBusy(false);
-    if (!res.ok) setNote({ tone: "danger", text: res.error });
+    if (!res.ok) setNote({ tone: "danger", text: res.message });
     else router.refresh();
   }
 

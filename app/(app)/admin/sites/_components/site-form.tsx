@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
-import { sendJson } from "@/components/admin/send-json";
+import { sendJson } from "@/lib/client/api";
 import { StatusNote, type Note } from "@/components/admin/status-note";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
@@ -68,7 +68,7 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
     setBusy(false);
     if (!res.ok) {
       setErrors(res.fields);
-      setNote({ tone: "danger", text: res.error });
+      setNote({ tone: "danger", text: res.message });
       return;
     }
     router.refresh();

@@ -2,7 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ROLE_SUMMARIES } from "@/components/admin/role-summaries";
-import { sendJson } from "@/components/admin/send-json";
+import { sendJson } from "@/lib/client/api";
 import { StatusNote, type Note } from "@/components/admin/status-note";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
@@ -41,7 +41,7 @@ export function InviteForm({ sites }: { sites: SiteChoice[] }) {
     setBusy(false);
     if (!res.ok) {
       setErrors(res.fields);
-      setNote({ tone: "danger", text: res.error });
+      setNote({ tone: "danger", text: res.message });
       return;
     }
     form.reset();

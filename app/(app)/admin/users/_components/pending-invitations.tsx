@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { sendJson } from "@/components/admin/send-json";
+import { sendJson } from "@/lib/client/api";
 import { StatusNote, type Note } from "@/components/admin/status-note";
 import { quietDangerClass } from "@/components/admin/quiet-danger";
 import { Button } from "@/components/ui/button";
@@ -33,7 +33,7 @@ export function PendingInvitations({ invitations, sites, now }: { invitations: P
     setNote(
       res.ok
         ? { tone: "ok", text: action === "withdraw" ? `Invitation to ${inv.email} withdrawn; its link no longer works.` : `A new link went to ${inv.email}; the old one no longer works.` }
-        : { tone: "danger", text: res.error },
+        : { tone: "danger", text: res.message },
     );
     if (res.ok) router.refresh();
   }

@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { sendJson } from "@/components/admin/send-json";
+import { sendJson } from "@/lib/client/api";
 import { StatusNote, type Note } from "@/components/admin/status-note";
 import { Badge } from "@/components/ui/badge";
 import { quietDangerClass } from "@/components/admin/quiet-danger";
@@ -25,7 +25,7 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
     setBusy(true);
     const res = await sendJson("POST", `/api/admin/users/${person.id}/unlock`, {});
     setBusy(false);
-    setNote(res.ok ? { tone: "ok", text: "Unlocked; they can sign in again now." } : { tone: "danger", text: res.error });
+    setNote(res.ok ? { tone: "ok", text: "Unlocked; they can sign in again now." } : { tone: "danger", text: res.message });
     if (res.ok) router.refresh();
   }
 
@@ -36,7 +36,7 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
     setBusy(false);
     if (!res.ok) {
       undo();
-      setNote({ tone: "danger", text: res.error });
+      setNote({ tone: "danger", text: res.message });
       return;
     }
     setNote({ tone: "ok", text: done });
@@ -48,7 +48,7 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
     setConfirming(false);
     const res = await sendJson(next ? "POST" : "DELETE", `/api/admin/users/${person.id}/suspend`, next ? {} : undefined);
     setBusy(false);
-    setNote(res.ok ? { tone: "ok", text: next ? "Suspended and signed out everywhere." : "Restored; they can sign in again." } : { tone: "danger", text: res.error });
+    setNote(res.ok ? { tone: "ok", text: next ? "Suspended and signed out everywhere." : "Restored; they can sign in again." } : { tone: "danger", text: res.message });
     if (res.ok) router.refresh();
   }
 

@@ -6,7 +6,7 @@ import { DamageMap } from "@/components/damage-map/damage-map";
 import { CasePhotos } from "@/components/photos/case-photos";
 import { RelatedCases } from "@/components/similar/related-cases";
 import { SimilarCases } from "@/components/similar/similar-cases";
-import { componentLabel, damageLabel } from "@/components/case/labels";
+import { componentLabel, damageLabel } from "@/lib/classification/labels";
 import type { CaseDetail } from "@/db/queries/case-read";
 import { can } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { StageBadge, Badge } from "@/components/ui/badge";
-import { triggerLabel } from "@/components/case/labels";
+import { triggerLabel } from "@/lib/classification/labels";
 import type { CaseDetail } from "@/db/queries/case-read";
 import { formatDay } from "@/lib/cases/list-columns";
 import { safetyFlagOf } from "@/lib/cases/safety-flag";

@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { callApi } from "@/lib/client/api";
 import { downloadBlob } from "@/components/charts/export-image";
 import { FLEET_COLUMNS, FLEET_TEMPLATE } from "@/lib/tallies/fleet-csv";
 import type { FleetBatch } from "@/lib/tallies/life-data";
@@ -22,24 +23,20 @@ export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
     if (!file) return;
     setBusy(true);
     setOutcome(null);
-    try {
-      const form = new FormData();
-      form.set("file", file);
-      const res = await fetch("/api/fleet", { method: "POST", body: form });
-      const body = (await res.json().catch(() => ({}))) as { units?: number; error?: string; rows?: RowError[]; errorCount?: number };
-      if (!res.ok) {
-        setOutcome({ tone: "danger", text: body.error ?? `Upload refused (HTTP ${res.status}).`, rows: body.rows, more: body.errorCount && body.rows ? body.errorCount - body.rows.length : 0 });
-        return;
-      }
-      setOutcome({ tone: "ok", text: `${(body.units ?? 0).toLocaleString("en-US")} units in service stored. Life analyses now use this list.` });
-      setFile(null);
-      if (input.current) input.current.value = "";
-      router.refresh();
-    } catch {
-      setOutcome({ tone: "danger", text: "The upload did not reach the server; nothing was stored. Try again." });
-    } finally {
-      setBusy(false);
+    const form = new FormData();
+    form.set("file", file);
+    const res = await callApi<{ units?: number }>("POST", "/api/fleet", { form, fallback: "The upload was refused; nothing was stored." });
+    setBusy(false);
+    if (!res.ok) {
+      const { rows, errorCount } = res.body as { rows?: RowError[]; errorCount?: number };
+      const text = res.status === 0 ? `${res.message} Nothing was stored.` : res.message;
+      setOutcome({ tone: "danger", text, rows, more: errorCount && rows ? errorCount - rows.length : 0 });
+      return;
     }
+    setOutcome({ tone: "ok", text: `${(res.data?.units ?? 0).toLocaleString("en-US")} units in service stored. Life analyses now use this list.` });
+    setFile(null);
+    if (input.current) input.current.value = "";
+    router.refresh();
   }
 
   return (
