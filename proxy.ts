@@ -1,8 +1,11 @@
-// Runs before every request: security headers with a fresh script nonce on every response, and the
-// origin check on state-changing API calls (the body type is checked in withRole).
+// Runs before every request: security headers with a fresh script nonce on every response, the
+// origin check on state-changing API calls (the body type is checked in withRole), and for a page
+// while the database is out of reach, Tearline's own "cannot be reached" page with 503 in its place.
 import { NextResponse, type NextRequest } from "next/server";
 import { HSTS, STATIC_SECURITY_HEADERS, contentSecurityPolicy } from "@/lib/security/headers";
 import { checkOrigin } from "@/lib/security/request-rules";
+import { RETRY_HEADER, UNAVAILABLE_PATH, isPageRequest } from "@/lib/http/page-outage";
+import { databaseReachable } from "@/db/reachable";
 
 const appUrl = process.env.APP_URL ?? process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
 const allowedOrigins = [new URL(appUrl).origin, new URL(appUrl.replace("127.0.0.1", "localhost")).origin];
@@ -20,7 +23,7 @@ function withHeaders(res: NextResponse, csp: string, https: boolean) {
   return res;
 }
 
-export function proxy(req: NextRequest) {
+export async function proxy(req: NextRequest) {
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const csp = contentSecurityPolicy(nonce, process.env.NODE_ENV === "development");
   const https = overHttps(req);
@@ -34,6 +37,22 @@ export function proxy(req: NextRequest) {
   const requestHeaders = new Headers(req.headers);
   requestHeaders.set("x-nonce", nonce);
   requestHeaders.set("Content-Security-Policy", csp);
+  requestHeaders.delete(RETRY_HEADER);
+
+  // Every page reads the database (the session at least); without it the render would fail with the
+  // framework's 500. Asked per page request (one tiny query, shared by requests arriving together).
+  const { pathname, search } = req.nextUrl;
+  if (isPageRequest(req.method, pathname)) {
+    if (!(await databaseReachable())) {
+      requestHeaders.set(RETRY_HEADER, pathname + search);
+      const res = NextResponse.rewrite(new URL(UNAVAILABLE_PATH, req.url), { status: 503, request: { headers: requestHeaders } });
+      res.headers.set("Retry-After", "30");
+      res.headers.set("Cache-Control", "no-store");
+      return withHeaders(res, csp, https);
+    }
+    // The page is for outages only: asked for directly while the database answers, go home.
+    if (pathname === UNAVAILABLE_PATH) return withHeaders(NextResponse.redirect(new URL("/", req.url)), csp, https);
+  }
   return withHeaders(NextResponse.next({ request: { headers: requestHeaders } }), csp, https);
 }
 
