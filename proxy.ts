@@ -23,6 +23,23 @@ function withHeaders(res: NextResponse, csp: string, https: boolean) {
   return res;
 }
 
+// A page's render cannot answer 503 itself (the framework makes a failed render a 500), so the outage
+// page is rendered by this same server as an ordinary page and sent on here with 503. Its headers
+// (the policy with its own nonce) travel with it.
+// `next start` records its own address in the environment at run time (read by name, not inlined by the build).
+const runtimeEnv: Record<string, string | undefined> = process.env;
+const selfOrigin = () => runtimeEnv["__NEXT_PRIVATE_ORIGIN"] ?? `http://127.0.0.1:${runtimeEnv["PORT"] ?? 3000}`;
+
+async function unavailablePage(asked: string, method: string): Promise<NextResponse> {
+  const page = await fetch(new URL(UNAVAILABLE_PATH, selfOrigin()), { method, headers: { [RETRY_HEADER]: asked }, signal: AbortSignal.timeout(10_000) });
+  const headers = new Headers(page.headers);
+  // fetch has already unpacked the body; the server packs the answer again itself.
+  for (const h of ["content-encoding", "content-length", "transfer-encoding"]) headers.delete(h);
+  headers.set("Retry-After", "30");
+  headers.set("Cache-Control", "no-store");
+  return new NextResponse(method === "HEAD" ? null : page.body, { status: 503, headers });
+}
+
 export async function proxy(req: NextRequest) {
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const csp = contentSecurityPolicy(nonce, process.env.NODE_ENV === "development");
@@ -37,21 +54,18 @@ export async function proxy(req: NextRequest) {
   const requestHeaders = new Headers(req.headers);
   requestHeaders.set("x-nonce", nonce);
   requestHeaders.set("Content-Security-Policy", csp);
-  requestHeaders.delete(RETRY_HEADER);
 
   // Every page reads the database (the session at least); without it the render would fail with the
   // framework's 500. Asked per page request (one tiny query, shared by requests arriving together).
   const { pathname, search } = req.nextUrl;
   if (isPageRequest(req.method, pathname)) {
-    if (!(await databaseReachable())) {
-      requestHeaders.set(RETRY_HEADER, pathname + search);
-      const res = NextResponse.rewrite(new URL(UNAVAILABLE_PATH, req.url), { status: 503, request: { headers: requestHeaders } });
-      res.headers.set("Retry-After", "30");
-      res.headers.set("Cache-Control", "no-store");
-      return withHeaders(res, csp, https);
+    const reachable = await databaseReachable();
+    if (pathname === UNAVAILABLE_PATH) {
+      // The page is for outages only: asked for directly while the database answers, go home.
+      if (reachable) return withHeaders(NextResponse.redirect(new URL("/", req.url)), csp, https);
+    } else if (!reachable) {
+      return unavailablePage(pathname + search, req.method);
     }
-    // The page is for outages only: asked for directly while the database answers, go home.
-    if (pathname === UNAVAILABLE_PATH) return withHeaders(NextResponse.redirect(new URL("/", req.url)), csp, https);
   }
   return withHeaders(NextResponse.next({ request: { headers: requestHeaders } }), csp, https);
 }

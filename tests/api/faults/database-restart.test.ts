@@ -77,7 +77,7 @@ describe.skipIf(!servicesRunning)("database restarted under the running app", ()
         const started = Date.now();
         const res = await client.get(path);
         const html = await res.text();
-        const where = `GET ${path} ${who}`;
+        const where = `GET ${path} ${who}: ${html.slice(0, 600)}`;
         expect(res.status, where).toBe(503);
         expect(Date.now() - started, where).toBeLessThan(15_000);
         expect(res.headers.get("content-type"), where).toMatch(/text\/html/);
