@@ -10,7 +10,9 @@ import { spawn, spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import pg from "pg";
 import sharp from "sharp";
+import { randomUUID } from "node:crypto";
 import { DEMO_PASSWORD, DEMO_USERS } from "../seed/demo-people";
+import { percentile } from "./support/figures";
 
 const num = (name: string, fallback: number) => Number(process.env[name] ?? fallback);
 const WANT_CASES = num("LOAD_CASES", Number(process.env.BENCH_CASES ?? 100_000));
@@ -24,10 +26,7 @@ const DIST = process.env.NEXT_DIST_DIR ?? ".next-bench";
 const db = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
 const q = async <R extends Record<string, unknown>>(text: string, values: unknown[] = []) => (await db.query<R>(text, values)).rows;
 
-function percentile(xs: number[], p: number): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length ? s[Math.max(0, Math.ceil((p / 100) * s.length) - 1)] : 0;
-}
+const percentileOr0 = (xs: number[], p: number) => (xs.length ? percentile(xs, p) : 0);
 
 async function ensureCases() {
   const have = Number((await q<{ n: string }>("select count(*) as n from cases"))[0].n);
@@ -94,13 +93,13 @@ async function writers(cookies: { inspector: string; analyst: string; engineer: 
   let photoSeed = Date.now() % 100_000;
 
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- loosely read JSON answers of many routes
-  async function call(route: string, cookie: string, method: string, path: string, body: unknown): Promise<Record<string, any> | null> {
+  async function call(route: string, cookie: string, method: string, path: string, body: unknown, extra: Record<string, string> = {}): Promise<Record<string, any> | null> {
     const t = times.get(route) ?? { ms: [], non2xx: 0, server5xx: 0, errors: 0 };
     times.set(route, t);
     const form = body instanceof FormData;
     const t0 = performance.now();
     try {
-      const res = await fetch(`${BASE}${path}`, { method, headers: { cookie, origin: BASE, ...(form ? {} : { "content-type": "application/json" }) }, body: form ? body : JSON.stringify(body), signal: AbortSignal.timeout(30_000) });
+      const res = await fetch(`${BASE}${path}`, { method, headers: { cookie, origin: BASE, ...(form ? {} : { "content-type": "application/json" }), ...extra }, body: method === "GET" ? undefined : form ? body : JSON.stringify(body), signal: AbortSignal.timeout(30_000) });
       // eslint-disable-next-line @typescript-eslint/no-explicit-any -- as above
       const json = (await res.json().catch(() => ({}))) as Record<string, any>;
       t.ms.push(performance.now() - t0);
@@ -118,7 +117,8 @@ async function writers(cookies: { inspector: string; analyst: string; engineer: 
   }
 
   async function oneCase() {
-    const filed = await call("POST /api/cases", cookies.inspector, "POST", "/api/cases", fieldReport(siteId));
+    // The Idempotency-Key a device sends with a filing, so a retried filing is one case.
+    const filed = await call("POST /api/cases", cookies.inspector, "POST", "/api/cases", fieldReport(siteId), { "idempotency-key": randomUUID() });
     if (!filed) return;
     const id = filed.case.id as string;
     acks.push({ kind: "case", id, caseId: id });
@@ -142,7 +142,11 @@ async function writers(cookies: { inspector: string; analyst: string; engineer: 
     if (!(await step("PATCH verdict", cookies.analyst, "PATCH", `/api/cases/${id}`, { section: "verdict", data: { primaryCause: "end-of-life", contributingCauses: [], confidence: "probable", removalConfirmed: "confirmed", correctiveAction: "None." } }))) return;
     if (!(await step("POST transitions (propose)", cookies.analyst, "POST", `/api/cases/${id}/transitions`, { action: "propose" }))) return;
     acks.push({ kind: "step", id, caseId: id, action: "propose" });
-    if (!(await step("POST transitions (sign)", cookies.engineer, "POST", `/api/cases/${id}/transitions`, { action: "sign" }))) return;
+    // The signature ceremony, as the signer's screen does it: read what is signed, then send its hash
+    // with the password again (the version sent is the step's idempotency key).
+    const view = await call("GET signature", cookies.engineer, "GET", `/api/cases/${id}/signature`, undefined);
+    if (!view) return;
+    if (!(await step("POST signature", cookies.engineer, "POST", `/api/cases/${id}/signature`, { version: view.version, password: DEMO_PASSWORD, contentHash: view.contentHash, meaningAccepted: true }))) return;
     acks.push({ kind: "step", id, caseId: id, action: "sign" });
   }
 
@@ -216,7 +220,7 @@ try {
     readers([engineer, manager, analyst], readerRoutes),
     writers({ inspector, analyst, engineer }, siteId),
   ]);
-  const writeStats: RouteStats[] = [...writeRun.times.entries()].map(([route, t]) => ({ route, requests: t.ms.length + t.errors, seconds: SECONDS, p50: percentile(t.ms, 50), p99: percentile(t.ms, 99), non2xx: t.non2xx, server5xx: t.server5xx, errors: t.errors }));
+  const writeStats: RouteStats[] = [...writeRun.times.entries()].map(([route, t]) => ({ route, requests: t.ms.length + t.errors, seconds: SECONDS, p50: percentileOr0(t.ms, 50), p99: percentileOr0(t.ms, 99), non2xx: t.non2xx, server5xx: t.server5xx, errors: t.errors }));
 
   console.log("readers:");
   readStats.forEach((s) => console.log(row(s)));

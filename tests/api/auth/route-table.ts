@@ -263,6 +263,8 @@ export const PAGE_RULES: Record<string, { gate: Gate | "anonymous-only"; reach: 
   "/admin/outbox": { gate: "admin:outbox", reach: "none" },
   "/admin/audit": { gate: "admin:audit", reach: "none" },
   "/forbidden": { gate: "public", reach: "none" },
+  // Served by proxy.ts with 503 in place of any page while the database is away; asked for directly, it sends home.
+  "/unavailable": { gate: "public", reach: "none" },
   "/sign-in": { gate: "public", reach: "none" },
   "/forgot-password": { gate: "public", reach: "none" },
   "/reset-password": { gate: "public", reach: "none" },
