@@ -60,10 +60,19 @@ export async function detectorCounts(filters: TallyFilters, viewer: TallyViewer)
 }
 
 export async function triggerCosts(filters: TallyFilters, viewer: TallyViewer): Promise<OutcomeCell[]> {
+  // Summed per trigger, shop and outcome first, then priced at each shop's cost.
   const { rows } = await db.execute<OutcomeRow>(sql`
-    select ${c.trigger} as key, ${outcomeColumns(c)}
-    from ${c} left join ${sites} on ${sites.id} = ${c.siteId}
-    where ${cellWhere(c, filters, viewer)}
+    with t as (
+      select ${c.trigger} as key, ${c.siteId} as site_id, ${c.outcome} as outcome, sum(${c.n})::int as n
+      from ${c} where ${cellWhere(c, filters, viewer)} group by 1, 2, 3
+    )
+    select t.key,
+      sum(t.n)::int as n,
+      coalesce(sum(t.n) filter (where t.outcome = 'confirmed'), 0)::int as confirmed,
+      coalesce(sum(t.n) filter (where t.outcome = 'no-defect'), 0)::int as no_defect,
+      coalesce(sum(t.n * ${sites.removalCostUsd}) filter (where t.outcome = 'no-defect'), 0)::float8 as cost_usd,
+      coalesce(sum(t.n) filter (where t.outcome = 'no-defect' and ${sites.removalCostUsd} is null), 0)::int as uncosted
+    from t left join ${sites} on ${sites.id} = t.site_id
     group by 1`);
   return rows.map(toCell);
 }

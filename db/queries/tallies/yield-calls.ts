@@ -17,19 +17,24 @@ type Row = { by: "shop" | "person" | "quarter"; site_id: string | null; person: 
 /** Remove calls, summed from the signed-outcome roll-up (db/schema/yield-cells.ts). */
 export async function removeCalls(filters: TallyFilters, viewer: CallViewer): Promise<{ byShop: OutcomeCell[]; byInspector: OutcomeCell[]; byQuarter: CallCell[] }> {
   const c = yieldCells;
-  const quarter = sql`to_char(${c.month}, 'YYYY-"Q"Q')`;
   const own = viewerSiteLimit(viewer).limited ? eq(c.createdBy, viewer.id) : undefined;
+  // Summed per shop, person and month first; the quarter and the money are worked out on those few rows.
   const { rows } = await db.execute<Row>(sql`
-    select case when grouping(${c.createdBy}) = 0 then 'person' when grouping(${quarter}) = 0 then 'quarter' else 'shop' end as by,
-      ${c.siteId} as site_id, ${c.createdBy} as person, ${quarter} as quarter,
-      sum(${c.n})::int as n,
-      coalesce(sum(${c.n}) filter (where ${c.outcome} = 'confirmed'), 0)::int as confirmed,
-      coalesce(sum(${c.n}) filter (where ${c.outcome} = 'no-defect'), 0)::int as no_defect,
-      coalesce(sum(${c.n} * ${sites.removalCostUsd}) filter (where ${c.outcome} = 'no-defect'), 0)::float8 as cost_usd,
-      coalesce(sum(${c.n}) filter (where ${c.outcome} = 'no-defect' and ${sites.removalCostUsd} is null), 0)::int as uncosted
-    from ${c} left join ${sites} on ${sites.id} = ${c.siteId}
-    where ${and(cellWhere(c, filters, viewer), own)} and ${c.removeCall}
-    group by grouping sets ((${c.siteId}), (${c.createdBy}), (${c.siteId}, ${quarter}))`);
+    with m as (
+      select ${c.siteId} as site_id, ${c.createdBy} as person, ${c.month} as month, ${c.outcome} as outcome, sum(${c.n})::int as n
+      from ${c}
+      where ${and(cellWhere(c, filters, viewer), own)} and ${c.removeCall}
+      group by 1, 2, 3, 4
+    )
+    select case when grouping(m.person) = 0 then 'person' when grouping(to_char(m.month, 'YYYY-"Q"Q')) = 0 then 'quarter' else 'shop' end as by,
+      m.site_id, m.person, to_char(m.month, 'YYYY-"Q"Q') as quarter,
+      sum(m.n)::int as n,
+      coalesce(sum(m.n) filter (where m.outcome = 'confirmed'), 0)::int as confirmed,
+      coalesce(sum(m.n) filter (where m.outcome = 'no-defect'), 0)::int as no_defect,
+      coalesce(sum(m.n * ${sites.removalCostUsd}) filter (where m.outcome = 'no-defect'), 0)::float8 as cost_usd,
+      coalesce(sum(m.n) filter (where m.outcome = 'no-defect' and ${sites.removalCostUsd} is null), 0)::int as uncosted
+    from m left join ${sites} on ${sites.id} = m.site_id
+    group by grouping sets ((m.site_id), (m.person), (m.site_id, to_char(m.month, 'YYYY-"Q"Q')))`);
   const cell = (key: string, r: Row): OutcomeCell => ({ key, n: r.n, confirmed: r.confirmed, noDefect: r.no_defect, costUsd: r.cost_usd, uncosted: r.uncosted });
   return {
     byShop: rows.filter((r) => r.by === "shop" && r.site_id).map((r) => cell(r.site_id!, r)),
