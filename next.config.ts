@@ -1,4 +1,6 @@
 import type { NextConfig } from "next";
+import { PHASE_DEVELOPMENT_SERVER, PHASE_PRODUCTION_BUILD } from "next/constants";
+import { buildServiceWorker } from "./lib/offline/build-worker";
 
 const config: NextConfig = {
   // The test command builds into its own folder so it never disturbs a running demo.
@@ -13,4 +15,8 @@ const config: NextConfig = {
   experimental: { serverActions: { bodySizeLimit: "30mb" }, proxyClientMaxBodySize: "40mb" },
 };
 
-export default config;
+export default function nextConfig(phase: string): NextConfig {
+  // The offline worker is built beside the app, so a build never ships a worker from older source.
+  if (phase === PHASE_PRODUCTION_BUILD || phase === PHASE_DEVELOPMENT_SERVER) buildServiceWorker(process.cwd(), phase === PHASE_PRODUCTION_BUILD);
+  return config;
+}

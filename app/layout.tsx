@@ -1,6 +1,5 @@
 import type { Metadata, Viewport } from "next";
 import { headers } from "next/headers";
-import { ZodJitless } from "@/components/zod-jitless";
 import "./globals.css";
 
 export const metadata: Metadata = {
@@ -23,7 +22,6 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   return (
     <html lang="en">
       <body className="min-h-dvh bg-bg font-sans text-ink antialiased">
-        <ZodJitless />
         {children}
       </body>
     </html>

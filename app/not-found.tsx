@@ -10,8 +10,8 @@ export default function NotFound() {
       <h1 className="mt-2 text-2xl font-semibold">There is no page at this address</h1>
       <p className="mt-2 text-muted">The link may be mistyped, or the case number may not exist or not be open to you.</p>
       <div className="mt-6 flex flex-col gap-3 sm:flex-row">
-        <Link href="/" className="inline-flex min-h-11 items-center justify-center rounded-lg bg-accent px-4 font-medium text-accent-ink">Back to your home page</Link>
-        <Link href="/cases" className="inline-flex min-h-11 items-center justify-center rounded-lg border border-line px-4 font-medium text-ink">Open the case list</Link>
+        <Link href="/" className="inline-flex min-h-11 items-center justify-center whitespace-nowrap rounded-lg bg-accent px-4 font-medium text-accent-ink">Back to your home page</Link>
+        <Link href="/cases" className="inline-flex min-h-11 items-center justify-center whitespace-nowrap rounded-lg border border-line px-4 font-medium text-ink">Open the case list</Link>
       </div>
     </main>
   );

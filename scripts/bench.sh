@@ -92,15 +92,7 @@ run_benches "$CASES" full
 
 if [ "$HTTP" = 1 ]; then
   say "Building the production app for the HTTP figures…"
-  export NEXT_DIST_DIR=.next-bench
-  if [ "${REUSE_BUILD:-0}" = 1 ] && [ -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
-    say "Reusing the build in $NEXT_DIST_DIR"
-  else
-    node_modules/.bin/next build >"$DATA_DIR/logs/build.log" 2>&1 || { tail -60 "$DATA_DIR/logs/build.log"; fail "next build failed"; }
-  fi
-  node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/logs/app.log" 2>&1 &
-  PIDS+=($!)
-  wait_port "$APP_PORT" app 60
+  build_and_start_app .next-bench
   export BENCH_CASES="$CASES" CHROMIUM_PATH="${CHROMIUM_PATH:-$(command -v chromium)}"
   say "bench: HTTP at $CASES cases"
   node_modules/.bin/tsx --conditions=react-server scripts/bench/http/routes.ts || failed=$((failed + 1))

@@ -38,16 +38,8 @@ node_modules/.bin/tsx scripts/migrate.ts >"$DATA_DIR/logs/migrate.log" 2>&1 || {
 node_modules/.bin/tsx --conditions=react-server scripts/seed-demo.ts --quiet >"$DATA_DIR/logs/seed.log" 2>&1 || { tail -30 "$DATA_DIR/logs/seed.log"; fail "demo seed failed"; }
 
 say "Building the app for the browser and API tests…"
-export NEXT_DIST_DIR="${TEST_DIST_DIR:-.next-test}"
 # REUSE_BUILD=1 skips the build when the dist folder exists (quick reruns while working on tests only).
-if [ "${REUSE_BUILD:-0}" = 1 ] && [ -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
-  say "Reusing the build in $NEXT_DIST_DIR"
-else
-  node_modules/.bin/next build >"$DATA_DIR/logs/build.log" 2>&1 || { tail -60 "$DATA_DIR/logs/build.log"; fail "next build failed"; }
-fi
-node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/logs/app.log" 2>&1 &
-PIDS+=($!)
-wait_port "$APP_PORT" app 60
+build_and_start_app "${TEST_DIST_DIR:-.next-test}"
 
 set +e
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$DATA_DIR/results.json" "$@"

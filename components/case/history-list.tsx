@@ -1,5 +1,6 @@
 // The case's history: every change, who made it, when, and what it was before.
 import { componentLabel } from "./labels";
+import { formatMoment } from "@/lib/dates";
 
 type Event = { id: string; at: Date; action: string; changes: { field: string; from: unknown; to: unknown }[]; reason: string | null; userName: string | null };
 
@@ -61,12 +62,12 @@ export function HistoryList({ events }: { events: Event[] }) {
           <span className="absolute -left-[25px] top-1.5 h-2.5 w-2.5 rounded-full border-2 border-surface bg-accent" aria-hidden />
           <p className="text-sm">
             <strong>{e.userName ?? "Someone"}</strong> {actionWords(e.action)}
-            <time className="ml-2 text-xs text-muted" dateTime={new Date(e.at).toISOString()}>{new Date(e.at).toISOString().slice(0, 16).replace("T", " ")} UTC</time>
+            <time className="ml-2 inline-block whitespace-nowrap text-xs text-muted" dateTime={new Date(e.at).toISOString()}>{formatMoment(e.at)}</time>
           </p>
           {e.reason ? <p className="mt-1 rounded bg-surface-2 px-2 py-1 text-sm italic text-ink-2">“{e.reason}”</p> : null}
           {e.changes.filter((c) => !HIDDEN.has(c.field)).length ? (
             <details className="mt-1 text-xs text-muted">
-              <summary className="cursor-pointer">{changeCount(e.changes.filter((c) => !HIDDEN.has(c.field)).length)}</summary>
+              <summary className="flex min-h-11 cursor-pointer items-center lg:min-h-0">{changeCount(e.changes.filter((c) => !HIDDEN.has(c.field)).length)}</summary>
               <ul className="mt-1 flex flex-col gap-0.5">
                 {e.changes.filter((c) => !HIDDEN.has(c.field)).map((c, i) => (
                   <li key={i} className="break-words">

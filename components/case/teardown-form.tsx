@@ -43,7 +43,7 @@ export function TeardownForm({ caseId, version, value, editable }: { caseId: str
           {LUBRICANT_CONDITIONS.map((l) => {
             const on = conds.includes(l.code);
             return (
-              <button key={l.code} type="button" aria-pressed={on} onClick={() => set({ lubricant: { ...t.lubricant, conditions: on ? conds.filter((c) => c !== l.code) : [...conds, l.code] } })} className={`min-h-10 rounded-lg border px-3 text-sm ${on ? "border-accent bg-accent-soft font-medium" : "border-line-strong"}`}>
+              <button key={l.code} type="button" aria-pressed={on} onClick={() => set({ lubricant: { ...t.lubricant, conditions: on ? conds.filter((c) => c !== l.code) : [...conds, l.code] } })} className={`min-h-11 rounded-lg border px-3 text-sm lg:min-h-10 ${on ? "border-accent bg-accent-soft font-medium" : "border-line-strong"}`}>
                 {l.label}
               </button>
             );

@@ -61,7 +61,7 @@ export function VerdictForm({ caseId, version, value, editable, causes }: { case
           {list.filter((c) => c.code !== v.primaryCause && c.code !== "no-defect" && c.code !== "undetermined").map((c) => {
             const on = v.contributingCauses.includes(c.code);
             return (
-              <button key={c.code} type="button" aria-pressed={on} onClick={() => set({ contributingCauses: on ? v.contributingCauses.filter((x) => x !== c.code) : [...v.contributingCauses, c.code] })} className={`min-h-9 rounded-lg border px-3 text-sm ${on ? "border-accent bg-accent-soft font-medium" : "border-line-strong"}`}>
+              <button key={c.code} type="button" aria-pressed={on} onClick={() => set({ contributingCauses: on ? v.contributingCauses.filter((x) => x !== c.code) : [...v.contributingCauses, c.code] })} className={`min-h-11 rounded-lg border px-3 text-sm lg:min-h-9 ${on ? "border-accent bg-accent-soft font-medium" : "border-line-strong"}`}>
                 {c.label}
               </button>
             );

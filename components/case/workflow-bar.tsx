@@ -13,9 +13,9 @@ export function WorkflowBar({ caseId, version, actions, verdictProblems }: Props
   const { run, error, busy } = useCaseAction();
   const [asking, setAsking] = useState<WorkflowAction | null>(null);
   const [reason, setReason] = useState("");
+  const [signing, setSigning] = useState(false);
   if (!actions.length) return null;
 
-  const [signing, setSigning] = useState(false);
   const go = async (action: WorkflowAction) => {
     // a signature is never one click: it opens the ceremony
     if (action === "sign") return setSigning(true);

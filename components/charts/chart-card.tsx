@@ -28,7 +28,7 @@ type Props = {
 };
 
 const toggleClass = (on: boolean) =>
-  `h-8 rounded-md px-3 text-sm font-medium transition ${on ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`;
+  `h-11 rounded-md px-3 text-sm lg:h-8 font-medium transition ${on ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`;
 
 export function ChartCard({ title, subtitle, imageSubtitle, table, legend, controls, footer, empty, children, tableView, id, noImage, chartLabel = "Chart" }: Props) {
   const [view, setView] = useState<"chart" | "table">("chart");
@@ -75,8 +75,8 @@ export function ChartCard({ title, subtitle, imageSubtitle, table, legend, contr
             <button type="button" aria-pressed={view === "table"} className={toggleClass(view === "table")} onClick={() => setView("table")}>Table</button>
           </div>
           <div className="inline-flex">
-            <button type="button" onClick={downloadCsv} disabled={table.rows.length === 0} className={`h-9 border ${noImage ? "rounded-lg" : "rounded-l-lg"} border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40`} title={`Download ${title} as CSV`}>CSV</button>
-            {noImage ? null : <button type="button" onClick={downloadPng} disabled={busy || Boolean(empty)} className="-ml-px h-9 rounded-r-lg border border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40" title={`Download ${title} as an image`}>{busy ? "…" : "PNG"}</button>}
+            <button type="button" onClick={downloadCsv} disabled={table.rows.length === 0} className={`h-11 min-w-11 border lg:h-9 lg:min-w-0 ${noImage ? "rounded-lg" : "rounded-l-lg"} border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40`} title={`Download ${title} as CSV`}>CSV</button>
+            {noImage ? null : <button type="button" onClick={downloadPng} disabled={busy || Boolean(empty)} className="-ml-px h-11 min-w-11 rounded-r-lg lg:h-9 lg:min-w-0 border border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40" title={`Download ${title} as an image`}>{busy ? "…" : "PNG"}</button>}
           </div>
         </div>
       </header>

@@ -4,10 +4,9 @@ import { componentLabel } from "@/lib/photos/grouping";
 import { formatBytes } from "@/lib/photos/limits";
 import type { PhotoView } from "@/lib/photos/view";
 import type { FindingOption } from "./tag-values";
+import { formatDay, formatMoment } from "@/lib/dates";
 
 // EXIF time is the camera's wall clock stored as UTC; showing it in UTC shows what the camera showed.
-const cameraTime = new Intl.DateTimeFormat("en-GB", { timeZone: "UTC", day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
-const uploadDay = new Intl.DateTimeFormat("en-GB", { timeZone: "UTC", day: "numeric", month: "short", year: "numeric" });
 
 export function photoTitle(p: PhotoView): string {
   const part = p.component ? componentLabel(p.component) : "Photo";
@@ -35,8 +34,8 @@ export function PhotoTagLine({ photo, findings }: { photo: PhotoView; findings: 
 
 export function PhotoFactList({ photo }: { photo: PhotoView }) {
   const rows: [string, string][] = [
-    ["Taken", photo.takenAt ? `${cameraTime.format(new Date(photo.takenAt))} (camera clock)` : "Not recorded by the camera"],
-    ["Uploaded", uploadDay.format(new Date(photo.createdAt))],
+    ["Taken", photo.takenAt ? `${formatMoment(photo.takenAt)} (camera clock)` : "Not recorded by the camera"],
+    ["Uploaded", formatDay(photo.createdAt)],
     ["Original", `${photo.width} × ${photo.height} px · ${formatBytes(photo.bytes)} · ${photo.contentType.replace("image/", "").toUpperCase()}`],
     ["File", photo.fileName || "—"],
   ];

@@ -22,9 +22,10 @@ export function PhotoGrid({ groups, onOpen }: Props) {
                   type="button"
                   onClick={() => onOpen(p)}
                   className="group relative block aspect-square w-full overflow-hidden rounded-lg bg-surface-2 ring-1 ring-line transition hover:ring-2 hover:ring-accent focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent"
-                  aria-label={`Open ${p.caption || p.fileName || "photo"}`}
                   data-testid="photo-tile"
                 >
+                  {/* Named by what it shows (the picture's alt text and the words on it), so the name holds every visible word. */}
+                  <span className="sr-only">Open photo: </span>
                   {/* eslint-disable-next-line @next/next/no-img-element */}
                   <img src={p.urls.thumb} alt={photoAlt(p)} loading="lazy" decoding="async" className="h-full w-full object-cover transition duration-300 group-hover:scale-[1.03]" />
                   {p.clockDeg !== null || p.findingId || p.caption ? (

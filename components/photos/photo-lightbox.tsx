@@ -121,7 +121,7 @@ export function PhotoLightbox({ photos, index, findings, canTag, canDelete, onIn
             <button type="button" onClick={() => zoom.zoomBy(1 / 1.5)} className="hidden h-10 w-10 place-items-center rounded-full hover:bg-white/10 sm:grid" aria-label="Zoom out"><ZoomIcon out /></button>
             <span className="hidden w-12 text-center text-xs tabular text-white/70 sm:inline">{Math.round(zoom.view.scale * 100)}%</span>
             <button type="button" onClick={() => zoom.zoomBy(1.5)} className="hidden h-10 w-10 place-items-center rounded-full hover:bg-white/10 sm:grid" aria-label="Zoom in"><ZoomIcon /></button>
-            <button type="button" onClick={onClose} className="grid h-10 w-10 place-items-center rounded-full hover:bg-white/10" aria-label="Close (Esc)" data-testid="lightbox-close"><CloseIcon /></button>
+            <button type="button" onClick={onClose} className="grid h-11 w-11 place-items-center rounded-full hover:bg-white/10" aria-label="Close (Esc)" data-testid="lightbox-close"><CloseIcon /></button>
           </div>
         </div>
         <div ref={zoom.ref} {...zoom.handlers} className={`relative min-h-0 flex-1 touch-none select-none overflow-hidden ${zoom.view.scale > 1 ? "cursor-grab active:cursor-grabbing" : "cursor-zoom-in"}`}>
@@ -163,7 +163,7 @@ export function PhotoLightbox({ photos, index, findings, canTag, canDelete, onIn
           ) : (
             <>
               <PhotoTagLine photo={photo} findings={findings} />
-              <button type="button" className="self-start text-sm text-accent hover:underline lg:hidden" onClick={() => setDetails((v) => !v)} aria-expanded={details}>
+              <button type="button" className="inline-flex min-h-11 items-center self-start text-sm text-accent hover:underline lg:hidden" onClick={() => setDetails((v) => !v)} aria-expanded={details}>
                 {details ? "Hide details" : "Details and actions"}
               </button>
               <div className={`${details ? "flex" : "hidden"} flex-col gap-4 lg:flex`}>

@@ -37,6 +37,7 @@ export function UploadItem({ item, findings, onRetry, onRemove, onTags }: Props)
     <li className="rounded-lg border border-line bg-surface p-2.5" data-testid="upload-item" data-status={item.status}>
       <div className="flex items-center gap-3">
         <div className="grid h-12 w-12 shrink-0 place-items-center overflow-hidden rounded-md bg-surface-2 text-muted">
+          {/* eslint-disable-next-line @next/next/no-img-element -- a local blob: preview, nothing to optimise */}
           {item.preview && !previewFailed ? <img src={item.preview} alt="" className="h-full w-full object-cover" onError={() => setPreviewFailed(true)} /> : <PhotoIcon />}
         </div>
         <div className="min-w-0 flex-1">

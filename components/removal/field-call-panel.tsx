@@ -20,7 +20,7 @@ export function FieldCallPanel({ call, sticky = true }: { call: FieldCall; stick
           <span className="text-xs font-semibold uppercase tracking-widest text-muted">Field call</span>
           <span className={`rounded-md px-2.5 py-1 text-sm font-bold ${look.cls}`} data-call={call.call}>{look.label}</span>
         </div>
-        <button type="button" className="text-sm text-accent" onClick={() => setOpen(!open)} aria-expanded={open}>
+        <button type="button" className="-mr-2 inline-flex min-h-11 min-w-11 items-center justify-center px-2 text-sm text-accent" onClick={() => setOpen(!open)} aria-expanded={open}>
           {open ? "Hide reasons" : `Reasons (${call.reasons.length})`}
         </button>
       </div>

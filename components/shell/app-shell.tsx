@@ -32,7 +32,7 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
       <div className="min-w-0">
         <header className="no-print sticky top-0 z-20 border-b border-line bg-surface/95 backdrop-blur lg:hidden">
           <div className="flex items-center justify-between px-4 py-2.5">
-            <Link href="/" className="flex items-center gap-2 text-accent">
+            <Link href="/" className="flex min-h-11 items-center gap-2 text-accent">
               <BrandMark className="h-6 w-6" />
               <span className="font-semibold text-ink">Tearline</span>
             </Link>

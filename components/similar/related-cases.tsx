@@ -8,16 +8,17 @@ import useSWR, { useSWRConfig } from "swr";
 import { StageBadge } from "@/components/ui/badge";
 import { getJson, linkCase, linksKey, similarKey, unlinkCase, type LinksAnswer } from "./case-links-api";
 import type { CaseLinkItem } from "@/db/queries/case-links";
+import { formatDay } from "@/lib/dates";
 
 function Unlink({ caseId, link, onDone }: { caseId: string; link: CaseLinkItem; onDone: () => void }) {
   const [confirm, setConfirm] = useState(false);
   const [error, setError] = useState<string | null>(null);
-  if (!confirm) return <button type="button" onClick={() => setConfirm(true)} className="h-9 self-start rounded-lg border border-line px-2.5 text-xs font-medium text-muted hover:bg-surface-2 hover:text-danger" data-testid="unlink">Unlink</button>;
+  if (!confirm) return <button type="button" onClick={() => setConfirm(true)} className="h-11 lg:h-9 self-start rounded-lg border border-line px-2.5 text-xs font-medium text-muted hover:bg-surface-2 hover:text-danger" data-testid="unlink">Unlink</button>;
   return (
     <span className="flex flex-wrap items-center gap-1 self-start">
-      <button type="button" className="h-9 rounded-lg bg-danger px-2.5 text-xs font-semibold text-white" data-testid="confirm-unlink"
+      <button type="button" className="h-11 lg:h-9 rounded-lg bg-danger px-2.5 text-xs font-semibold text-white" data-testid="confirm-unlink"
         onClick={() => unlinkCase(caseId, link.id).then(onDone, (e: Error) => setError(e.message))}>Unlink {link.number}</button>
-      <button type="button" onClick={() => setConfirm(false)} className="h-9 rounded-lg px-2 text-xs text-muted hover:bg-surface-2">Keep</button>
+      <button type="button" onClick={() => setConfirm(false)} className="h-11 lg:h-9 rounded-lg px-2 text-xs text-muted hover:bg-surface-2">Keep</button>
       {error ? <span role="alert" className="text-xs text-danger">{error}</span> : null}
     </span>
   );
@@ -42,12 +43,12 @@ function AddLink({ caseId, onDone }: { caseId: string; onDone: () => void }) {
       setBusy(false);
     }
   };
-  const input = "h-10 min-w-0 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent";
+  const input = "h-11 lg:h-10 min-w-0 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent";
   return (
     <form className="mt-4 flex flex-col gap-2 border-t border-line pt-4 sm:flex-row" onSubmit={(e) => { e.preventDefault(); if (number.trim()) void submit(); }}>
       <input value={number} onChange={(e) => setNumber(e.target.value)} placeholder="Case number, e.g. TL-26-00042" aria-label="Case number to link" className={`${input} sm:w-56`} />
       <input value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} placeholder="Note (optional)" aria-label="Note on the link" className={`${input} w-full sm:flex-1`} />
-      <button type="submit" disabled={busy || !number.trim()} className="h-10 rounded-lg border border-line-strong bg-surface px-4 text-sm font-medium text-ink-2 hover:bg-surface-2 disabled:opacity-50">Link case</button>
+      <button type="submit" disabled={busy || !number.trim()} className="h-11 lg:h-10 rounded-lg border border-line-strong bg-surface px-4 text-sm font-medium text-ink-2 hover:bg-surface-2 disabled:opacity-50">Link case</button>
       {error ? <p role="alert" className="text-sm text-danger sm:basis-full">{error}</p> : null}
     </form>
   );
@@ -75,12 +76,12 @@ export function RelatedCases({ caseId, canLink }: { caseId: string; canLink: boo
             <li key={l.id} className="flex flex-col gap-2 py-3 first:pt-0 last:pb-0 sm:flex-row sm:items-start sm:justify-between" data-testid="related-case">
               <div className="min-w-0">
                 <div className="flex flex-wrap items-center gap-2">
-                  <Link href={`/cases/${l.number}`} className="font-semibold tabular text-ink hover:text-accent">{l.number}</Link>
+                  <Link href={`/cases/${l.number}`} className="inline-flex min-h-11 items-center font-semibold tabular text-ink hover:text-accent lg:min-h-0">{l.number}</Link>
                   <StageBadge stage={l.status} />
                 </div>
                 <p className="mt-0.5 text-xs text-muted">{[l.triggerLabel, l.causeLabel ? `Cause: ${l.causeLabel}` : "No verdict yet", l.removedOn ? `removed ${l.removedOn}` : null].filter(Boolean).join(" · ")}</p>
                 {l.note ? <p className="mt-1 text-sm text-ink-2">“{l.note}”</p> : null}
-                <p className="mt-0.5 text-xs text-muted">Linked{l.linkedBy ? ` by ${l.linkedBy}` : ""} on {l.linkedAt.slice(0, 10)}</p>
+                <p className="mt-0.5 text-xs text-muted">Linked{l.linkedBy ? ` by ${l.linkedBy}` : ""} on {formatDay(l.linkedAt)}</p>
               </div>
               {canLink ? <Unlink caseId={caseId} link={l} onDone={changed} /> : null}
             </li>

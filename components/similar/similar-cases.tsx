@@ -21,7 +21,7 @@ function LinkControl({ caseId, item, onLinked }: { caseId: string; item: Similar
   }
   if (!open) {
     return (
-      <button type="button" onClick={() => setOpen(true)} className="h-9 rounded-lg border border-line-strong bg-surface px-3 text-xs font-medium text-ink-2 hover:bg-surface-2" data-testid="link-related">
+      <button type="button" onClick={() => setOpen(true)} className="h-11 lg:h-9 rounded-lg border border-line-strong bg-surface px-3 text-xs font-medium text-ink-2 hover:bg-surface-2" data-testid="link-related">
         Link as related
       </button>
     );
@@ -41,10 +41,10 @@ function LinkControl({ caseId, item, onLinked }: { caseId: string; item: Similar
   return (
     <form className="flex w-full flex-col gap-1.5 sm:flex-row sm:items-center" onSubmit={(e) => { e.preventDefault(); void submit(); }}>
       <input value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} autoFocus placeholder="Why are they related? (optional)" aria-label="Note on the link"
-        className="h-9 w-full min-w-0 sm:flex-1 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent" />
+        className="h-11 lg:h-9 w-full min-w-0 sm:flex-1 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent" />
       <div className="flex gap-1.5">
-        <button type="submit" disabled={busy} className="h-9 rounded-lg bg-accent px-3 text-xs font-semibold text-accent-ink disabled:opacity-50">{busy ? "Linking…" : "Link"}</button>
-        <button type="button" onClick={() => setOpen(false)} className="h-9 rounded-lg px-3 text-xs text-muted hover:bg-surface-2">Cancel</button>
+        <button type="submit" disabled={busy} className="h-11 lg:h-9 rounded-lg bg-accent px-3 text-xs font-semibold text-accent-ink disabled:opacity-50">{busy ? "Linking…" : "Link"}</button>
+        <button type="button" onClick={() => setOpen(false)} className="h-11 lg:h-9 rounded-lg px-3 text-xs text-muted hover:bg-surface-2">Cancel</button>
       </div>
       {error ? <p role="alert" className="text-xs text-danger sm:basis-full">{error}</p> : null}
     </form>
@@ -57,7 +57,7 @@ function Row({ item, caseId, thisNumber, canLink, onLinked }: { item: SimilarCas
       <ScoreBar score={item.score} />
       <div className="min-w-0 flex-1">
         <div className="flex flex-wrap items-center gap-2">
-          <Link href={`/cases/${item.number}`} className="font-semibold tabular text-ink hover:text-accent">{item.number}</Link>
+          <Link href={`/cases/${item.number}`} className="inline-flex min-h-11 items-center font-semibold tabular text-ink hover:text-accent lg:min-h-0">{item.number}</Link>
           <StageBadge stage={item.status} />
         </div>
         <p className="mt-0.5 text-xs text-muted">

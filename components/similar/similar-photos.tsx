@@ -9,6 +9,7 @@ function Thumb({ id, caption }: { id: string; caption: string }) {
   return (
     <figure className="min-w-0">
       {/* A plain img: the bytes come from the session-checked photo route, not a static asset. */}
+      {/* eslint-disable-next-line @next/next/no-img-element -- see above */}
       <img src={thumb(id)} alt={caption} loading="lazy" className="aspect-[4/3] w-full rounded-md border border-line bg-surface-2 object-cover" />
       <figcaption className="mt-0.5 truncate text-[11px] text-muted">{caption}</figcaption>
     </figure>

@@ -6,7 +6,7 @@ import { alias } from "drizzle-orm/pg-core";
 import { db, type Tx } from "@/db";
 import { caseEvents, caseLinks, cases, codeEntries, user } from "@/db/schema";
 import type { Stage } from "@/lib/cases/stages";
-import { conflict, notFound } from "@/lib/http/errors";
+import { RowMissing, WriteRefused } from "@/db/refusals";
 import { readableCases, type CaseViewer } from "./case-scope";
 
 export interface CaseLinkItem {
@@ -58,7 +58,7 @@ const isUniqueViolation = (e: unknown) => {
 async function touchBothOpen(tx: Tx, a: CaseRef, b: CaseRef, actor: Actor) {
   const rows = await tx.select({ id: cases.id, number: cases.number, status: cases.status }).from(cases).where(inArray(cases.id, [a.id, b.id])).orderBy(asc(cases.id)).for("update");
   const signed = rows.find((r) => r.status === "signed");
-  if (signed) throw conflict(`${signed.number} is signed and read-only, so its links cannot change. An engineer can reopen it with a reason.`);
+  if (signed) throw new WriteRefused(`${signed.number} is signed and read-only, so its links cannot change. An engineer can reopen it with a reason.`);
   await tx.update(cases).set({ version: sql`${cases.version} + 1`, updatedBy: actor.id, updatedAt: new Date() }).where(inArray(cases.id, [a.id, b.id]));
 }
 
@@ -66,7 +66,7 @@ export async function addCaseLink(a: CaseRef, b: CaseRef, note: string, actor: A
   try {
     await db.transaction(async (tx) => {
       const existing = await tx.select({ n: sql<number>`1` }).from(caseLinks).where(and(eq(caseLinks.caseId, a.id), eq(caseLinks.relatedId, b.id)));
-      if (existing.length) throw conflict(`${a.number} and ${b.number} are already linked.`);
+      if (existing.length) throw new WriteRefused(`${a.number} and ${b.number} are already linked.`);
       await touchBothOpen(tx, a, b, actor);
       await tx.insert(caseLinks).values([
         { caseId: a.id, relatedId: b.id, note, createdBy: actor.id },
@@ -79,7 +79,7 @@ export async function addCaseLink(a: CaseRef, b: CaseRef, note: string, actor: A
     });
   } catch (e) {
     // Two people linking the same pair at once: the unique index lets only one through.
-    if (isUniqueViolation(e)) throw conflict(`${a.number} and ${b.number} are already linked.`);
+    if (isUniqueViolation(e)) throw new WriteRefused(`${a.number} and ${b.number} are already linked.`);
     throw e;
   }
 }
@@ -90,7 +90,7 @@ export async function removeCaseLink(a: CaseRef, b: CaseRef, actor: Actor): Prom
       .delete(caseLinks)
       .where(or(and(eq(caseLinks.caseId, a.id), eq(caseLinks.relatedId, b.id)), and(eq(caseLinks.caseId, b.id), eq(caseLinks.relatedId, a.id))))
       .returning({ caseId: caseLinks.caseId });
-    if (removed.length === 0) throw notFound(`A link between ${a.number} and ${b.number}`);
+    if (removed.length === 0) throw new RowMissing(`A link between ${a.number} and ${b.number}`);
     await touchBothOpen(tx, a, b, actor);
     await tx.insert(caseEvents).values([
       { caseId: a.id, userId: actor.id, action: "unlinked", changes: [{ field: "related", from: b.number, to: null }] },

@@ -5,12 +5,10 @@ import { and, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db";
 import { cases, codeEntries, sites } from "@/db/schema";
-import { can } from "@/lib/auth/permissions";
 import type { CaseColumnId, CaseListRow } from "@/lib/cases/list-columns";
 import { CSV_HEADER, csvValues, EXPORT_CAP } from "@/lib/cases/list-csv";
 import type { CaseFilters, CaseSort } from "@/lib/cases/list-params";
 import { csvRow } from "@/lib/csv";
-import { badRequest } from "@/lib/http/errors";
 import { readableCases } from "./case-scope";
 
 export type CaseListViewer = { id: string; role: string; siteId: string | null };
@@ -87,8 +85,8 @@ const totalOver = sql<number>`count(*) over()`.mapWith(Number);
 type RawRow = Omit<CaseListRow, "updatedAt"> & { updatedAt: Date };
 const toRow = ({ updatedAt, ...r }: RawRow): CaseListRow => ({ ...r, updatedAt: updatedAt.toISOString() });
 
-/** Site, trigger and cause codes in a filter must exist: a typo gets a 400, not an empty list. */
-export async function assertKnownCodes(f: CaseFilters): Promise<void> {
+/** The site, trigger and cause codes of a filter that do not exist, in words ("site \"XX\""). */
+export async function unknownFilterCodes(f: CaseFilters): Promise<string[]> {
   const missing = (asked: string[] | undefined, found: { code: string }[]) => (asked ?? []).filter((c) => !found.some((x) => x.code === c));
   const listCodes = (list: "trigger" | "cause", asked?: string[]) =>
     asked?.length ? db.select({ code: codeEntries.code }).from(codeEntries).where(and(eq(codeEntries.list, list), inArray(codeEntries.code, asked))) : [];
@@ -102,13 +100,12 @@ export async function assertKnownCodes(f: CaseFilters): Promise<void> {
     ...missing(f.trigger, foundTriggers).map((c) => `trigger "${c}"`),
     ...missing(f.cause, foundCauses).map((c) => `cause "${c}"`),
   ];
-  if (problems.length) throw badRequest(`Unknown ${problems.join(", ")}.`, { unknown: problems });
+  return problems;
 }
 
 export async function listCases(
   filters: CaseFilters, sort: CaseSort, page: number, pageSize: number, viewer: CaseListViewer,
 ): Promise<{ rows: CaseListRow[]; total: number }> {
-  await assertKnownCodes(filters);
   const where = caseListWhere(filters, viewer);
   // The page and the total side by side: a window count would make PostgreSQL read and sort every
   // matching row for 25 of them, where the page alone walks an index (cases_list_*_idx) and stops.
@@ -141,7 +138,6 @@ export async function exportCases(
 ): Promise<CaseExport> {
   const cap = opts.cap ?? EXPORT_CAP;
   const batchSize = opts.batchSize ?? 1000;
-  await assertKnownCodes(filters);
   const picked = await db
     .select({ id: cases.id, total: totalOver })
     .from(cases)

@@ -38,7 +38,7 @@ export async function getCaseDetail(key: string, viewer: CaseViewer) {
     .select({
       c: cases,
       siteName: removalSite.name,
-      sitePolicy: { endPlayMaxIn: removalSite.endPlayMaxIn, dialSpreadIn: removalSite.dialSpreadIn, tapeSpreadIn: removalSite.tapeSpreadIn },
+      sitePolicy: { endPlayMaxIn: removalSite.endPlayMaxIn, dialSpreadIn: removalSite.dialSpreadIn, tapeSpreadIn: removalSite.tapeSpreadIn, plausibleMaxIn: removalSite.plausibleMaxIn },
       labName: labSite.name,
       createdByName: creator.name,
       proposedByName: proposer.name,
@@ -71,6 +71,6 @@ export async function listCaseHistory(caseId: string) {
 
 export async function sitePolicy(siteId: string | null | undefined) {
   if (!siteId) return null;
-  const [s] = await db.select({ maxIn: sites.endPlayMaxIn, dialSpreadIn: sites.dialSpreadIn, tapeSpreadIn: sites.tapeSpreadIn, kind: sites.kind }).from(sites).where(eq(sites.id, siteId));
+  const [s] = await db.select({ maxIn: sites.endPlayMaxIn, dialSpreadIn: sites.dialSpreadIn, tapeSpreadIn: sites.tapeSpreadIn, plausibleMaxIn: sites.plausibleMaxIn, kind: sites.kind }).from(sites).where(eq(sites.id, siteId));
   return s ?? null;
 }

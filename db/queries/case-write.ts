@@ -5,7 +5,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db";
 import { caseEvents, cases, findings, type Case, type FieldChange } from "@/db/schema";
 import { diffFields } from "@/lib/cases/diff";
-import { conflict, notFound } from "@/lib/http/errors";
+import { RowMissing, WriteRefused } from "@/db/refusals";
 import { nextCaseNumber } from "./case-number";
 
 type Actor = { id: string; name: string };
@@ -54,13 +54,13 @@ export async function insertCaseOnce(values: CaseValues, actor: Actor, key: stri
 /** Locks the case and refuses when someone saved since `version`: the second save never overwrites. */
 async function lockAtVersion(tx: Tx, caseId: string, version: number, attempted: string[]) {
   const [current] = await tx.select().from(cases).where(eq(cases.id, caseId)).for("update");
-  if (!current) throw notFound("That case");
+  if (!current) throw new RowMissing("That case");
   if (current.version !== version) {
     // A case imported or seeded without an editor has no updatedBy; the refusal must still be a 409.
     const [who] = (await tx.execute(sql`select name from "user" where id = ${current.updatedBy}`)).rows as { name: string }[];
     const name = who?.name ?? null;
     const theirs = Object.fromEntries(attempted.map((k) => [k, (current as Record<string, unknown>)[k]]));
-    throw conflict(
+    throw new WriteRefused(
       `${name ?? "Someone"} saved this case at ${current.updatedAt.toISOString().slice(11, 16)} UTC while you were editing. Your changes were not saved; reload to see theirs, then apply yours again.`,
       { currentVersion: current.version, updatedBy: name, updatedAt: current.updatedAt, current: theirs },
     );
@@ -101,7 +101,7 @@ export async function changeFinding(caseId: string, findingId: string, version: 
   return db.transaction(async (tx) => {
     const current = await lockAtVersion(tx, caseId, version, []);
     const [before] = await tx.select().from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
-    if (!before) throw notFound("That finding");
+    if (!before) throw new RowMissing("That finding");
     let changes: FieldChange[];
     let after = null;
     if (values === null) {

@@ -4,7 +4,7 @@ import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "@/db";
 import { caseEvents, cases, findings, photos, type Photo } from "@/db/schema";
-import { conflict, notFound } from "@/lib/http/errors";
+import { RowMissing, WriteRefused } from "@/db/refusals";
 import type { NewPhotoRow, PhotoRowStore } from "@/lib/photos/ingest";
 import type { PhotoTags } from "@/lib/photos/tags";
 import { diffFields } from "@/lib/cases/diff";
@@ -17,8 +17,8 @@ export const SIGNED_REFUSAL = "This case is signed and read-only, so its photos 
  * at the version the engineer saw before this change is refused as stale. */
 async function touchOpenCase(tx: Tx, caseId: string, actorId: string) {
   const [c] = await tx.select({ status: cases.status }).from(cases).where(eq(cases.id, caseId)).for("update");
-  if (!c) throw notFound("That case");
-  if (c.status === "signed") throw conflict(SIGNED_REFUSAL);
+  if (!c) throw new RowMissing("That case");
+  if (c.status === "signed") throw new WriteRefused(SIGNED_REFUSAL);
   await tx.update(cases).set({ version: sql`${cases.version} + 1`, updatedBy: actorId, updatedAt: new Date() }).where(eq(cases.id, caseId));
 }
 
@@ -68,7 +68,7 @@ export async function findingInCase(findingId: string, caseId: string): Promise<
 export async function updatePhotoTags(photoId: string, tags: PhotoTags, actorId: string): Promise<Photo> {
   return db.transaction(async (tx) => {
     const [before] = await tx.select().from(photos).where(eq(photos.id, photoId)).for("update");
-    if (!before) throw notFound("That photo");
+    if (!before) throw new RowMissing("That photo");
     const changes = diffFields(before as Record<string, unknown>, tags as Record<string, unknown>).map((c) => ({ ...c, field: `photo ${photoLabel(before)}: ${c.field}` }));
     if (!changes.length) return before;
     await touchOpenCase(tx, before.caseId, actorId);
@@ -82,7 +82,7 @@ export async function updatePhotoTags(photoId: string, tags: PhotoTags, actorId:
 export async function deletePhotoRow(photoId: string, actorId: string): Promise<Photo> {
   return db.transaction(async (tx) => {
     const [before] = await tx.select().from(photos).where(eq(photos.id, photoId)).for("update");
-    if (!before) throw notFound("That photo");
+    if (!before) throw new RowMissing("That photo");
     await touchOpenCase(tx, before.caseId, actorId);
     await tx.delete(photos).where(eq(photos.id, photoId));
     await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-removed", changes: [{ field: "photo", from: photoLabel(before), to: null }] });

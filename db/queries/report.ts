@@ -50,7 +50,7 @@ export async function loadCaseReport(key: { id: string } | { number: string }, v
   return {
     source: {
       case: c,
-      site: site ? { code: site.code, name: site.name, endPlayMaxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn } : null,
+      site: site ? { code: site.code, name: site.name, endPlayMaxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn, plausibleMaxIn: site.plausibleMaxIn } : null,
       lab: labRows[0] ?? null,
       people: { createdBy: name(c.createdBy), receivedBy: name(c.receivedBy), proposedBy: name(c.proposedBy), signedBy: name(c.signedBy) },
       findings: findingRows,

@@ -15,6 +15,8 @@ export const sites = pgTable("sites", {
   endPlayMaxIn: numeric("end_play_max_in", { precision: 8, scale: 5, mode: "number" }).notNull().default(0.0625),
   dialSpreadIn: numeric("dial_spread_in", { precision: 8, scale: 5, mode: "number" }).notNull().default(0.002),
   tapeSpreadIn: numeric("tape_spread_in", { precision: 8, scale: 5, mode: "number" }).notNull().default(0.015625),
+  // Above this a reading is refused until confirmed as typed (a slip of the hand, not end play); lib/field/plausibility.ts.
+  plausibleMaxIn: numeric("plausible_max_in", { precision: 8, scale: 5, mode: "number" }).notNull().default(0.25),
   // What one removal costs the owner here (wheelset change, car out of service, lab time), in US dollars; set by an admin.
   removalCostUsd: numeric("removal_cost_usd", { precision: 12, scale: 2, mode: "number" }),
   active: boolean("active").notNull().default(true),

@@ -2,6 +2,7 @@
 // by default, and how each value reads on screen and in the CSV. No framework code: the table,
 // the phone cards and the CSV export all format through here.
 import type { Stage } from "./stages";
+import { formatDay as formatDayEverywhere } from "@/lib/dates";
 
 export type FieldCall = "keep" | "remove" | "undecided";
 export type RemovalOutcome = "confirmed" | "no-defect";
@@ -64,7 +65,6 @@ export function defaultColumnVisibility(): Record<CaseColumnId, boolean> {
 
 const FIELD_CALL_LABELS: Record<FieldCall, string> = { keep: "Keep", remove: "Remove", undecided: "Undecided" };
 const OUTCOME_LABELS: Record<RemovalOutcome, string> = { confirmed: "Removal confirmed", "no-defect": "No defect found" };
-const MONTHS = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
 
 export const fieldCallLabel = (c: FieldCall | null) => (c ? FIELD_CALL_LABELS[c] : "");
 export const outcomeLabel = (o: RemovalOutcome | null) => (o ? OUTCOME_LABELS[o] : "");
@@ -88,10 +88,7 @@ export const formatMonths = (m: number | null) => (m === null ? "" : String(Numb
 
 /** "2026-06-15" → "15 Jun 2026": one spelling everywhere, whatever the reader's locale. */
 export function formatDay(iso: string | null): string {
-  if (!iso) return "";
-  const [y, m, d] = iso.slice(0, 10).split("-").map(Number);
-  if (!y || !m || !d) return iso;
-  return `${d} ${MONTHS[m - 1]} ${y}`;
+  return formatDayEverywhere(iso);
 }
 
 /** How long ago, in the short words a list uses: "just now", "12 min ago", "5 h ago", "3 d ago", "6 wk ago", "4 mo ago", "2 yr ago". */

@@ -55,7 +55,7 @@ export async function readableHistory(caseId: string, user: CurrentUser) {
 
 async function policyFor(siteId: string | null | undefined): Promise<EndPlayPolicy> {
   const s = await sitePolicy(siteId);
-  return s ? { maxIn: s.maxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn } : DEFAULT_END_PLAY_POLICY;
+  return s ? { maxIn: s.maxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn, plausibleMaxIn: s.plausibleMaxIn } : DEFAULT_END_PLAY_POLICY;
 }
 
 /** Field-report values plus what Tearline computes from them. */

@@ -5,7 +5,7 @@ import "server-only";
 import { stepAlreadyTaken, updateCase } from "@/db/queries/case-write";
 import type { Case } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
-import { HttpError } from "@/lib/http/errors";
+import { WriteRefused } from "@/db/refusals";
 import { nudgeMail } from "@/lib/jobs/nudge";
 import { queueStepNotice } from "./notices";
 import type { WorkflowAction } from "./workflow";
@@ -21,7 +21,7 @@ export async function writeStep(c: Case, version: number, action: WorkflowAction
     nudgeMail();
     return row;
   } catch (err) {
-    const done = err instanceof HttpError && err.status === 409 ? await stepAlreadyTaken(c.id, version, action, user.id) : null;
+    const done = err instanceof WriteRefused ? await stepAlreadyTaken(c.id, version, action, user.id) : null;
     if (done) return done;
     throw err;
   }

@@ -5,6 +5,7 @@ import { z, type ZodType } from "zod";
 import { requireApiUser, type CurrentUser } from "@/lib/auth/session";
 import type { Permission } from "@/lib/auth/permissions";
 import { JSON_MAX_BYTES, readTextLimited } from "./body";
+import { RowMissing, WriteRefused } from "@/db/refusals";
 import { HttpError } from "./errors";
 import { UNAVAILABLE_MESSAGES, unavailableService } from "./unavailable";
 import { checkBodyType, requestHasBody } from "@/lib/security/request-rules";
@@ -27,6 +28,8 @@ export function errorResponse(err: unknown): NextResponse {
   if (err instanceof HttpError) {
     return NextResponse.json({ error: err.message, code: err.code, details: err.details }, { status: err.status });
   }
+  if (err instanceof RowMissing) return NextResponse.json({ error: err.message, code: "not-found" }, { status: 404 });
+  if (err instanceof WriteRefused) return NextResponse.json({ error: err.message, code: "conflict", details: err.details }, { status: 409 });
   if (err instanceof z.ZodError) {
     const { message, fields } = zodMessage(err);
     return NextResponse.json({ error: message, code: "bad-request", fields }, { status: 400 });

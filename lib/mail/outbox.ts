@@ -73,7 +73,10 @@ export async function deliverDue(force = false): Promise<{ sent: number; failed:
     .limit(50);
   let sent = 0;
   let failed = 0;
-  for (const { id } of due) (await deliver(id)) ? sent++ : failed++;
+  for (const { id } of due) {
+    if (await deliver(id)) sent++;
+    else failed++;
+  }
   // The next attempt is a job of its own, due when the earliest waiting mail is.
   const [next] = await db
     .select({ at: mailOutbox.nextAttemptAt })

@@ -113,7 +113,7 @@ export function buildFieldSection(
   stored: { fieldCall: string | null; fieldNotes: string; trigger?: string | null },
 ): FieldSection {
   const checks = raw as Checks;
-  const policy: EndPlayPolicy = site ? { maxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn } : DEFAULT_END_PLAY_POLICY;
+  const policy: EndPlayPolicy = site ? { maxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn, plausibleMaxIn: site.plausibleMaxIn } : DEFAULT_END_PLAY_POLICY;
   const handRoll = checks.handRoll ? evaluateHandRoll(checks.handRoll.grid ?? {}, checks.handRoll.procedure ?? {}) : undefined;
   const hasTrials = Array.isArray(checks.endPlay?.trials) && checks.endPlay.trials.length > 0;
   const endPlay = checks.endPlay && hasTrials ? evaluateEndPlay(checks.endPlay, policy) : undefined;

@@ -1,23 +1,19 @@
 // Wording the report shares between the PDF and the printable page: dates, clock positions, labels.
 import { COMPONENTS, CONFIDENCES, DAMAGE_CODES, DISPOSITIONS, LUBRICANT_CONDITIONS, ROOT_CAUSES, SEVERITIES, TRIGGERS, ZONES } from "@/lib/classification";
 import { STAGE_LABELS, type Stage } from "@/lib/cases/stages";
+import { formatDay, formatMoment } from "@/lib/dates";
 
 export const DASH = "—";
 
-/** "2026-06-15" stays as written; a timestamp becomes "2026-06-20 14:05 UTC". */
+/** Dates as everywhere in the app (lib/dates.ts): "15 Jun 2026"; a timestamp "20 Jun 2026, 14:05 UTC". */
 export function formatDate(value: Date | string | null | undefined): string {
   if (value === null || value === undefined || value === "") return DASH;
-  if (typeof value === "string" && /^\d{4}-\d{2}-\d{2}$/.test(value)) return value;
-  const d = new Date(value);
-  if (Number.isNaN(d.getTime())) return String(value);
-  return d.toISOString().slice(0, 10);
+  return formatDay(value) || DASH;
 }
 
 export function formatDateTime(value: Date | string | null | undefined): string {
   if (value === null || value === undefined || value === "") return DASH;
-  const d = new Date(value);
-  if (Number.isNaN(d.getTime())) return String(value);
-  return `${d.toISOString().slice(0, 10)} ${d.toISOString().slice(11, 16)} UTC`;
+  return formatMoment(value) || DASH;
 }
 
 /** 60° → "2 o'clock (60°)"; 75° → "2:30 (75°)": the nearest half hour, as the shop reads a clock. */

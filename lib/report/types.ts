@@ -79,7 +79,7 @@ export type ReportSourcePhoto = {
   takenAt: DateLike;
 };
 
-export type ReportSourceSite = { code: string; name: string; endPlayMaxIn: number; dialSpreadIn: number; tapeSpreadIn: number };
+export type ReportSourceSite = { code: string; name: string; endPlayMaxIn: number; dialSpreadIn: number; tapeSpreadIn: number; plausibleMaxIn?: number };
 
 export type ReportSource = {
   case: ReportSourceCase;

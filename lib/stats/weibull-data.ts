@@ -22,16 +22,15 @@ export function assertFittable(units: readonly LifeUnit[]): void {
     if (u.time <= 0) throw new WeibullInputError(`Times must be greater than zero (got ${u.time}).`);
   }
   const failureTimes = units.filter((u) => u.failed).map((u) => u.time);
-  if (failureTimes.length < 2) {
-    throw new WeibullInputError(
-      `At least two failures are needed to fit a Weibull distribution (got ${failureTimes.length}).`,
-    );
-  }
-  if (failureTimes.every((t) => t === failureTimes[0])) {
-    throw new WeibullInputError(
-      "All failure times are equal, so the spread of lives (the Weibull shape) cannot be estimated.",
-    );
-  }
+  const reason = unfittableReason(failureTimes.length, failureTimes.every((t) => t === failureTimes[0]));
+  if (reason) throw new WeibullInputError(reason);
+}
+
+/** Why failures counted this way cannot support a two-parameter fit, in words; null when they can. */
+export function unfittableReason(failures: number, allTimesEqual: boolean): string | null {
+  if (failures < 2) return `At least two failures are needed to fit a Weibull distribution (got ${failures}).`;
+  if (allTimesEqual) return "All failure times are equal, so the spread of lives (the Weibull shape) cannot be estimated.";
+  return null;
 }
 
 /** Life by which a fraction p of the population has failed; p = 0.1 gives B10. */

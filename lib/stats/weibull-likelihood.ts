@@ -63,10 +63,10 @@ export function profileLogLikBeta(d: LikelihoodData, beta: number): number {
 }
 
 /**
- * Profile score for beta, increasing in beta, zero at the MLE:
- * sum(t^b ln t)/sum(t^b) - 1/b - mean(ln t over failures). Also returns its derivative.
+ * Sums of w, w x and w x^2 with x = ln t - max ln t and w = count * e^(beta x): t^beta and its
+ * derivatives in beta, scaled by e^(-beta max ln t) so nothing overflows.
  */
-export function betaProfileScore(d: LikelihoodData, beta: number): { value: number; slope: number } {
+export function shiftedSums(d: LikelihoodData, beta: number): { s0: number; s1: number; s2: number } {
   let s0 = 0;
   let s1 = 0;
   let s2 = 0;
@@ -77,6 +77,15 @@ export function betaProfileScore(d: LikelihoodData, beta: number): { value: numb
     s1 += w * x;
     s2 += w * x * x;
   }
+  return { s0, s1, s2 };
+}
+
+/**
+ * Profile score for beta, increasing in beta, zero at the MLE:
+ * sum(t^b ln t)/sum(t^b) - 1/b - mean(ln t over failures). Also returns its derivative.
+ */
+export function betaProfileScore(d: LikelihoodData, beta: number): { value: number; slope: number } {
+  const { s0, s1, s2 } = shiftedSums(d, beta);
   const meanX = s1 / s0;
   const meanFailX = d.sumLogFailureTimes / d.failures - d.maxLogTime;
   return {

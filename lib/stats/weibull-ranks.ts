@@ -8,6 +8,9 @@ export interface RankedFailure {
   medianRank: number;
 }
 
+/** Units sharing one life and outcome, with how many there are (as the database groups them). */
+export type CountedUnit = LifeUnit & { count: number };
+
 /** Benard's approximation to the median rank: (i - 0.3) / (n + 0.4). */
 export function benardMedianRank(rank: number, n: number): number {
   return (rank - 0.3) / (n + 0.4);
@@ -23,15 +26,26 @@ export function sortForRanking<T extends LifeUnit>(units: readonly T[]): T[] {
  * increment = (n + 1 - previous adjusted rank) / (1 + units at or after this one).
  */
 export function johnsonAdjustedRanks(units: readonly LifeUnit[]): RankedFailure[] {
-  const sorted = sortForRanking(units);
-  const n = sorted.length;
+  return johnsonAdjustedRanksCounted(units.map((u) => ({ time: u.time, failed: u.failed, count: 1 })));
+}
+
+/** The same from counted units: sorting costs the distinct lives, not every unit. */
+export function johnsonAdjustedRanksCounted(groups: readonly CountedUnit[]): RankedFailure[] {
+  const sorted = sortForRanking(groups);
+  const n = sorted.reduce((s, g) => s + g.count, 0);
   const out: RankedFailure[] = [];
   let previous = 0;
-  sorted.forEach((u, index) => {
-    if (!u.failed) return;
-    const atOrAfter = n - index;
-    previous += (n + 1 - previous) / (1 + atOrAfter);
-    out.push({ time: u.time, adjustedRank: previous, medianRank: benardMedianRank(previous, n) });
-  });
+  let before = 0;
+  for (const g of sorted) {
+    if (g.failed) {
+      // each failure of the group has its own place in the order
+      for (let k = 0; k < g.count; k++) {
+        const atOrAfter = n - before - k;
+        previous += (n + 1 - previous) / (1 + atOrAfter);
+        out.push({ time: g.time, adjustedRank: previous, medianRank: benardMedianRank(previous, n) });
+      }
+    }
+    before += g.count;
+  }
   return out;
 }

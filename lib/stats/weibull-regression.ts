@@ -1,5 +1,5 @@
 import { assertFittable, weibullBLife, weibullPlotY, type LifeUnit } from "./weibull-data";
-import { johnsonAdjustedRanks } from "./weibull-ranks";
+import { johnsonAdjustedRanksCounted, type CountedUnit, type RankedFailure } from "./weibull-ranks";
 
 export interface RegressionFit {
   beta: number;
@@ -19,7 +19,16 @@ export interface RankRegressionResult {
 /** Median-rank regression (Benard ranks, Johnson adjustment for suspensions), both ways. */
 export function weibullRankRegression(units: readonly LifeUnit[]): RankRegressionResult {
   assertFittable(units);
-  const points = johnsonAdjustedRanks(units);
+  return rankRegressionOf(johnsonAdjustedRanksCounted(units.map((u) => ({ ...u, count: 1 }))));
+}
+
+/** The same from counted units (the caller has checked they can be fitted). */
+export function weibullRankRegressionCounted(groups: readonly CountedUnit[]): RankRegressionResult {
+  return rankRegressionOf(johnsonAdjustedRanksCounted(groups));
+}
+
+/** Least squares both ways through already ranked failures. */
+export function rankRegressionOf(points: readonly RankedFailure[]): RankRegressionResult {
   const xs = points.map((p) => Math.log(p.time));
   const ys = points.map((p) => weibullPlotY(p.medianRank));
   const m = xs.length;

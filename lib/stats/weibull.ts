@@ -1,10 +1,10 @@
 // One call that gives the screens everything a Weibull life analysis shows.
 import { assertFittable, weibullCdf, weibullPlotY, type LifeUnit } from "./weibull-data";
-import { johnsonAdjustedRanks } from "./weibull-ranks";
-import { weibullRankRegression, type RankRegressionResult } from "./weibull-regression";
+import { johnsonAdjustedRanksCounted, type CountedUnit } from "./weibull-ranks";
+import { rankRegressionOf, type RankRegressionResult } from "./weibull-regression";
 import { fisherBounds, weibullMleFromData, type FisherBounds, type Interval, type WeibullMle } from "./weibull-mle";
 import { likelihoodRatioBounds, type LikelihoodRatioBounds } from "./weibull-lr-bounds";
-import { prepareLikelihoodData } from "./weibull-likelihood";
+import { prepareLikelihoodCounts } from "./weibull-likelihood";
 import { readShape, type ShapeReading } from "./weibull-shape";
 
 export interface WeibullOptions {
@@ -45,15 +45,18 @@ export interface WeibullAnalysis {
 export function fitWeibull(units: readonly LifeUnit[], opts: WeibullOptions = {}): WeibullAnalysis {
   const confidence = opts.confidence ?? 0.95;
   assertFittable(units);
-  const data = prepareLikelihoodData(units);
+  // Units sharing a life and outcome are counted once: the sort and every likelihood pass cost the distinct lives.
+  const groups = countUnits(units);
+  const data = prepareLikelihoodCounts(groups);
   const fit = weibullMleFromData(data);
   const fisher = fisherBounds(data, fit, confidence);
   const likelihoodRatio = likelihoodRatioBounds(data, fit, confidence);
-  const rankRegression = weibullRankRegression(units);
+  const ranked = johnsonAdjustedRanksCounted(groups);
+  const rankRegression = rankRegressionOf(ranked);
   const shape = readShape(fit.beta, likelihoodRatio.beta);
   const failures = data.failures;
 
-  const plotPoints = johnsonAdjustedRanks(units).map((p) => ({ ...p, y: weibullPlotY(p.medianRank) }));
+  const plotPoints = ranked.map((p) => ({ ...p, y: weibullPlotY(p.medianRank) }));
 
   const fittedLine = (tMin: number, tMax: number, steps = 20): LinePoint[] => {
     if (!(tMin > 0 && tMax > tMin)) throw new RangeError("fittedLine needs 0 < tMin < tMax");
@@ -88,4 +91,16 @@ export function fitWeibull(units: readonly LifeUnit[], opts: WeibullOptions = {}
     plotPoints,
     fittedLine,
   };
+}
+
+/** Units counted by life and outcome. */
+export function countUnits(units: readonly LifeUnit[]): CountedUnit[] {
+  const byKey = new Map<string, CountedUnit>();
+  for (const u of units) {
+    const key = `${u.time}|${u.failed ? 1 : 0}`;
+    const g = byKey.get(key);
+    if (g) g.count++;
+    else byKey.set(key, { time: u.time, failed: u.failed, count: 1 });
+  }
+  return [...byKey.values()];
 }

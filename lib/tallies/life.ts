@@ -4,14 +4,15 @@ import {
   assertFittable,
   fisherBounds,
   fitWeibull,
-  johnsonAdjustedRanks,
-  prepareLikelihoodCounts,
+  johnsonAdjustedRanksCounted,
   prepareLikelihoodData,
+  rankRegressionOf,
   readShape,
   weibullMleFromData,
   weibullPlotY,
-  weibullRankRegression,
   WeibullInputError,
+  unfittableReason,
+  type CountedUnit,
   type LifeUnit,
   type LikelihoodData,
   type ShapeReading,
@@ -60,17 +61,23 @@ export type LifeDetail = LifeSummary & {
 /** Causes that fail a bearing; "no defect found" removals are always suspensions. */
 export const NOT_A_FAILURE = new Set(["no-defect"]);
 
+/** One cause's lives as counted groups: its removals are failures, every other life a suspension. */
+export function countedFor(cause: string, rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[]): CountedUnit[] {
+  const failed = new Map<number, number>();
+  const running = new Map<number, number>();
+  const add = (m: Map<number, number>, t: number, n: number) => m.set(t, (m.get(t) ?? 0) + n);
+  for (const r of rows) if (r.time > 0) add(r.cause === cause ? failed : running, r.time, r.count);
+  for (const f of fleet) if (f.time > 0) add(running, f.time, f.count);
+  return [
+    ...[...failed].map(([time, count]) => ({ time, failed: true, count })),
+    ...[...running].map(([time, count]) => ({ time, failed: false, count })),
+  ];
+}
+
+/** The same, one unit per bearing. */
 export function unitsFor(cause: string, rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[]): LifeUnit[] {
   const units: LifeUnit[] = [];
-  for (const r of rows) {
-    if (!(r.time > 0)) continue;
-    const failed = r.cause === cause;
-    for (let i = 0; i < r.count; i++) units.push({ time: r.time, failed });
-  }
-  for (const f of fleet) {
-    if (!(f.time > 0)) continue;
-    for (let i = 0; i < f.count; i++) units.push({ time: f.time, failed: false });
-  }
+  for (const g of countedFor(cause, rows, fleet)) for (let i = 0; i < g.count; i++) units.push({ time: g.time, failed: g.failed });
   return units;
 }
 
@@ -95,27 +102,52 @@ export function summariseCause(cause: string, units: readonly LifeUnit[], confid
 }
 
 /**
- * summariseCause from the counted rows, without one object per unit: the summary for every cause
- * then costs the distinct lives, not the casebook. Same checks and the same fit.
+ * summariseCause for every cause at once, from the counted rows. Each cause sees the same lives
+ * (its removals failed, the rest suspended), so one table of distinct lives serves them all and a
+ * cause costs only its failure count and sum of log lives: the casebook is read once, not per cause.
  */
-export function summariseCauseCounts(cause: string, rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary {
-  const groups = [
-    ...rows.filter((r) => r.time > 0).map((r) => ({ time: r.time, failed: r.cause === cause, count: r.count })),
-    ...fleet.filter((f) => f.time > 0).map((f) => ({ time: f.time, failed: false, count: f.count })),
-  ];
-  const total = groups.reduce((s, g) => s + g.count, 0);
-  const longestLife = groups.reduce((m, g) => Math.max(m, g.time), 0);
-  const failing = groups.filter((g) => g.failed);
-  const failures = failing.reduce((s, g) => s + g.count, 0);
-  // The rules of assertFittable, on counts.
-  const note =
-    failures < 2
-      ? `At least two failures are needed to fit a Weibull distribution (got ${failures}).`
-      : failing.every((g) => g.time === failing[0].time)
-        ? "All failure times are equal, so the spread of lives (the Weibull shape) cannot be estimated."
-        : null;
-  if (note) return { cause, label: causeLabel(cause), failures, suspensions: total - failures, longestLife, fit: null, note, cautions: [] };
-  return summariseData(cause, prepareLikelihoodCounts(groups), { total, longestLife, confidence, unit });
+export function summariseEveryCause(rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary[] {
+  const causes = lifeCauses(rows);
+  const byTime = new Map<number, number>();
+  const own = new Map(causes.map((c) => [c.cause, { failures: 0, sumLog: 0, first: Infinity, last: -Infinity }]));
+  for (const r of rows) {
+    if (!(r.time > 0)) continue;
+    byTime.set(r.time, (byTime.get(r.time) ?? 0) + r.count);
+    const c = r.cause ? own.get(r.cause) : undefined;
+    if (!c) continue;
+    c.failures += r.count;
+    c.sumLog += r.count * Math.log(r.time);
+    c.first = Math.min(c.first, r.time);
+    c.last = Math.max(c.last, r.time);
+  }
+  for (const f of fleet) if (f.time > 0) byTime.set(f.time, (byTime.get(f.time) ?? 0) + f.count);
+  const logTimes: number[] = [];
+  const counts: number[] = [];
+  let total = 0;
+  let longestLife = 0;
+  for (const [t, n] of byTime) {
+    logTimes.push(Math.log(t));
+    counts.push(n);
+    total += n;
+    longestLife = Math.max(longestLife, t);
+  }
+  const maxLogTime = Math.log(longestLife);
+  return causes.map(({ cause }) => {
+    const c = own.get(cause)!;
+    // The rules of assertFittable, on counts.
+    const note = unfittableReason(c.failures, c.first === c.last);
+    if (note) return { cause, label: causeLabel(cause), failures: c.failures, suspensions: total - c.failures, longestLife, fit: null, note, cautions: [] };
+    const data: LikelihoodData = { logTimes, counts, maxLogTime, failures: c.failures, sumLogFailureTimes: c.sumLog };
+    return summariseData(cause, data, { total, longestLife, confidence, unit });
+  });
+}
+
+function summariseCounted(cause: string, groups: readonly CountedUnit[], total: number, confidence: number, unit: LifeMeasure): LifeSummary {
+  const rows = groups.map((g) => ({ cause: g.failed ? cause : null, time: g.time, count: g.count }));
+  return summariseEveryCause(rows, [], confidence, unit).find((s) => s.cause === cause) ?? {
+    cause, label: causeLabel(cause), failures: 0, suspensions: total, longestLife: groups.reduce((m, g) => Math.max(m, g.time), 0), fit: null,
+    note: unfittableReason(0, false), cautions: [],
+  };
 }
 
 function summariseData(cause: string, data: LikelihoodData, o: { total: number; longestLife: number; confidence: number; unit: LifeMeasure }): LifeSummary {
@@ -151,22 +183,29 @@ function line(beta: number, eta: number, tMin: number, tMax: number, steps = 24)
 }
 
 /**
- * Everything the life section shows for one cause. Likelihood-ratio bounds profile the
- * likelihood hundreds of times, so above `lrLimit` units only the Fisher bounds are given.
+ * Everything the life section shows for one cause, from its counted lives. Likelihood-ratio bounds
+ * profile the likelihood hundreds of times, so above `lrLimit` units only the Fisher bounds are given.
  */
-export function analyseCause(cause: string, units: readonly LifeUnit[], opts: { confidence?: number; lrLimit?: number; maxPlotPoints?: number; unit?: LifeMeasure } = {}): LifeDetail {
+export function analyseCause(
+  cause: string,
+  groups: readonly CountedUnit[],
+  opts: { confidence?: number; lrLimit?: number; maxPlotPoints?: number; unit?: LifeMeasure; summary?: LifeSummary } = {},
+): LifeDetail {
   const confidence = opts.confidence ?? 0.95;
-  const summary = summariseCause(cause, units, confidence, opts.unit);
+  const total = groups.reduce((s, g) => s + g.count, 0);
+  const small = total <= (opts.lrLimit ?? LR_LIMIT);
+  const units = small ? groups.flatMap((g) => Array.from({ length: g.count }, () => ({ time: g.time, failed: g.failed }))) : null;
+  // a large set's summary is the one the cause table already made, when the caller has it
+  const summary = units ? summariseCause(cause, units, confidence, opts.unit) : (opts.summary ?? summariseCounted(cause, groups, total, confidence, opts.unit ?? "months"));
   const empty = { rankRegression: null, mle: null, likelihoodRatio: null, shapeExplanation: "", plotPoints: [], fittedLine: [], thinnedFrom: null };
   if (!summary.fit) return { ...summary, ...empty };
-  const small = units.length <= (opts.lrLimit ?? LR_LIMIT);
-  const full = small ? fitWeibull(units, { confidence }) : null;
-  const rr = full?.rankRegression.xOnY ?? weibullRankRegression(units).xOnY;
+  const full = units ? fitWeibull(units, { confidence }) : null;
+  const ranked = full?.plotPoints ?? johnsonAdjustedRanksCounted(groups).map((p) => ({ ...p, y: weibullPlotY(p.medianRank) }));
+  const rr = full?.rankRegression.xOnY ?? rankRegressionOf(ranked).xOnY;
   const beta = full?.mle.beta ?? summary.fit.beta;
   const eta = full?.mle.eta ?? summary.fit.eta;
-  const ranked = full?.plotPoints ?? johnsonAdjustedRanks(units).map((p) => ({ ...p, y: weibullPlotY(p.medianRank) }));
   const tMin = ranked.reduce((m, p) => Math.min(m, p.time), eta / 10);
-  const tMax = units.reduce((m, u) => Math.max(m, u.time), eta * 1.5);
+  const tMax = groups.reduce((m, u) => Math.max(m, u.time), eta * 1.5);
   const maxPoints = opts.maxPlotPoints ?? 300;
   // the same reading as the cause table: from the Fisher bounds, never the likelihood-ratio ones
   const shape = readShape(summary.fit.beta, summary.fit.betaBounds);

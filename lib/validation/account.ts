@@ -1,5 +1,5 @@
 // Input rules for sign-in, invitations, password setting and role changes (server and client alike).
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { ROLES } from "@/lib/auth/permissions";
 
 export const PASSWORD_MIN = 10;

@@ -1,5 +1,5 @@
 // Input rules for the classification lists that admins keep (damage codes, root causes, triggers).
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import type { CodeListName } from "@/db/schema/code-lists";
 import { DAMAGE_FAMILIES } from "@/lib/classification/damage-families";
 

@@ -1,6 +1,6 @@
 // Input rules for sites and their end-play limit policy (server and client alike).
 // Limits are stored in inches; the screens let people type either unit.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import type { SiteKind } from "@/db/schema/sites";
 
 /** The largest end-play limit a site may set: 1/4 in. Anything above is a typing slip, not a policy. */
@@ -30,11 +30,36 @@ const inches = (what: string) =>
     .transform(toStoredInches)
     .refine((v) => v > 0, `${what} is too small to keep (under 0.00001 in).`);
 
+/**
+ * The largest plausibility limit a site may set: 1 in (25.4 mm). Mounted end play is thousandths of an
+ * inch; a limit above an inch would let a reading typed in the wrong unit through (common practice).
+ */
+export const PLAUSIBLE_MAX_CEILING_IN = 1;
+
+const plausibleLimit = z
+  .number({ message: "The largest believable reading must be a number of inches." })
+  .finite("The largest believable reading must be a number of inches.")
+  .positive("The largest believable reading must be more than zero.")
+  .max(PLAUSIBLE_MAX_CEILING_IN, `The largest believable reading must be at most ${PLAUSIBLE_MAX_CEILING_IN} in (25.4 mm).`)
+  .transform(toStoredInches);
+
 export const sitePolicySchema = z.object({
   endPlayMaxIn: inches("The end-play limit"),
   dialSpreadIn: inches("The dial-indicator spread"),
   tapeSpreadIn: inches("The tape spread"),
+  plausibleMaxIn: plausibleLimit,
 });
+
+/**
+ * Limits that only make sense together: the largest believable reading must not fall below the removal
+ * limit, or a true over-limit reading would be refused as a slip. Field messages, empty when fine.
+ */
+export function policyOrderProblems(policy: { endPlayMaxIn: number; plausibleMaxIn: number }): Record<string, string> {
+  if (policy.plausibleMaxIn >= policy.endPlayMaxIn) return {};
+  return {
+    plausibleMaxIn: `The largest believable reading must be at least the end-play limit (${policy.endPlayMaxIn} in), or real removals would be refused as slips.`,
+  };
+}
 
 /** Cost of one removal at the site (USD), for the money on removals teardown did not confirm; null clears it. */
 export const removalCost = z
@@ -64,6 +89,7 @@ export const siteCreateSchema = z.object({
   endPlayMaxIn: sitePolicySchema.shape.endPlayMaxIn.optional(),
   dialSpreadIn: sitePolicySchema.shape.dialSpreadIn.optional(),
   tapeSpreadIn: sitePolicySchema.shape.tapeSpreadIn.optional(),
+  plausibleMaxIn: sitePolicySchema.shape.plausibleMaxIn.optional(),
   removalCostUsd: removalCost.optional(),
 });
 
@@ -79,6 +105,7 @@ export const sitePatchSchema = z
       endPlayMaxIn: sitePolicySchema.shape.endPlayMaxIn.optional(),
       dialSpreadIn: sitePolicySchema.shape.dialSpreadIn.optional(),
       tapeSpreadIn: sitePolicySchema.shape.tapeSpreadIn.optional(),
+      plausibleMaxIn: sitePolicySchema.shape.plausibleMaxIn.optional(),
       removalCostUsd: removalCost.optional(),
     },
     "Unknown field for a site.",

@@ -1,17 +1,17 @@
 // p50 / p95 of the case list (first page; filtered and sorted; a deep page) and of the case page's
 // data, through the query functions the app uses, each beside its raw-SQL floor.
 import { sql } from "drizzle-orm";
-import { db, pool } from "@/db";
+import { db } from "@/db";
 import { findReadableCase, getCaseDetail } from "@/db/queries/case-read";
 import { listCases } from "@/db/queries/case-list";
 import { parseListParams } from "@/lib/cases/list-params";
-import { BENCH_CASES, endFloor, measure, type Call } from "./support/figures";
+import { BENCH_CASES, runBench, measure, type Call } from "./support/figures";
 import { benchViewers } from "./support/viewers";
 
 const TARGET_MS = 50;
 const REPEATS = 6;
 
-try {
+await runBench(async () => {
   const who = await benchViewers();
   const list = (label: string, query: string, as: "manager" | "inspector" = "manager"): Call => ({
     label: `${as} ${label}`,
@@ -51,10 +51,4 @@ try {
     picks.map((p) => ({ label: p.number, run: async () => getCaseDetail((await findReadableCase(p.number, who.manager))!.id, who.manager) })),
     { repeats: 2, target: TARGET_MS },
   );
-} catch (err) {
-  console.error(err);
-  process.exitCode = 1;
-} finally {
-  await endFloor();
-  await pool.end();
-}
+});

@@ -93,6 +93,7 @@ async function writers(cookies: { inspector: string; analyst: string; engineer: 
   const deadline = Date.now() + SECONDS * 1000;
   let photoSeed = Date.now() % 100_000;
 
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- loosely read JSON answers of many routes
   async function call(route: string, cookie: string, method: string, path: string, body: unknown): Promise<Record<string, any> | null> {
     const t = times.get(route) ?? { ms: [], non2xx: 0, server5xx: 0, errors: 0 };
     times.set(route, t);
@@ -100,6 +101,7 @@ async function writers(cookies: { inspector: string; analyst: string; engineer: 
     const t0 = performance.now();
     try {
       const res = await fetch(`${BASE}${path}`, { method, headers: { cookie, origin: BASE, ...(form ? {} : { "content-type": "application/json" }) }, body: form ? body : JSON.stringify(body), signal: AbortSignal.timeout(30_000) });
+      // eslint-disable-next-line @typescript-eslint/no-explicit-any -- as above
       const json = (await res.json().catch(() => ({}))) as Record<string, any>;
       t.ms.push(performance.now() - t0);
       if (res.status >= 500) t.server5xx++;

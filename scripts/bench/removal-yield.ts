@@ -1,10 +1,10 @@
 // p50 / p95 of the removal-yield page's data (every figure, one call of loadYield) for a mix of
 // filters and missed-call windows, as a manager and as an inspector, beside its raw-SQL floor.
 import { sql } from "drizzle-orm";
-import { db, pool } from "@/db";
+import { db } from "@/db";
 import { addMonths, parseTallyFilters } from "@/lib/tallies/filters";
 import { loadYield } from "@/lib/tallies/yield-service";
-import { endFloor, measure } from "./support/figures";
+import { runBench, measure } from "./support/figures";
 import { benchViewers } from "./support/viewers";
 
 const TARGET_MS = 150;
@@ -27,14 +27,8 @@ async function workload() {
   ];
 }
 
-try {
+await runBench(async () => {
   const who = await benchViewers();
   const calls = (await workload()).map((r) => ({ label: `${r.as} ${r.label}`, run: () => loadYield(parseTallyFilters(r.query), who[r.as], r.miss) }));
   await measure("removal-yield page data", calls, { repeats: REPEATS, target: TARGET_MS });
-} catch (err) {
-  console.error(err);
-  process.exitCode = 1;
-} finally {
-  await endFloor();
-  await pool.end();
-}
+});

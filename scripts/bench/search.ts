@@ -1,11 +1,11 @@
 // p50 / p95 of case search (words, codes, identifiers, the first view) and of similar-case
 // lookups, calling the query functions the app uses, each beside its raw-SQL floor.
 import { sql } from "drizzle-orm";
-import { db, pool } from "@/db";
+import { db } from "@/db";
 import { searchCases } from "@/db/queries/search";
 import { findSimilarCases } from "@/db/queries/similar";
 import { parseSearchParams } from "@/lib/search/query-schema";
-import { endFloor, measure } from "./support/figures";
+import { runBench, measure } from "./support/figures";
 import { benchQueries } from "./support/search-workload";
 import { benchViewers } from "./support/viewers";
 
@@ -14,7 +14,7 @@ const SIMILAR_RUNS = 40;
 // Search ranks words in code, not only in SQL: its floor is looser than a plain read's.
 const SEARCH_RATIO = 3;
 
-try {
+await runBench(async () => {
   const who = await benchViewers();
   const kinds = await benchQueries(db);
   for (const [kind, queries] of Object.entries(kinds)) {
@@ -31,10 +31,4 @@ try {
     targets.map((t, i) => ({ label: t.id.slice(0, 8), run: () => findSimilarCases(t.id, i % 10 === 9 ? who.inspector : who.engineer) })),
     { repeats: 1, target: TARGET_MS, maxRatio: SEARCH_RATIO },
   );
-} catch (err) {
-  console.error(err);
-  process.exitCode = 1;
-} finally {
-  await endFloor();
-  await pool.end();
-}
+});

@@ -2,13 +2,13 @@
 // filters as a manager and an inspector, of the life section (all time and one cause), each beside
 // its raw-SQL floor, and of a Weibull fit of 10,000 lives with half of them suspensions.
 import { sql } from "drizzle-orm";
-import { db, pool } from "@/db";
+import { db } from "@/db";
 import { loadLife } from "@/db/queries/tallies/load-life";
 import { loadTallies } from "@/db/queries/tallies/load-tallies";
 import { fitWeibull } from "@/lib/stats/weibull";
 import { addMonths, parseTallyFilters } from "@/lib/tallies/filters";
 import { createRng } from "../seed/prng";
-import { endFloor, GROWTH_PASS, measure, percentile, record, timed } from "./support/figures";
+import { runBench, GROWTH_PASS, measure, percentile, record, timed } from "./support/figures";
 import { benchViewers } from "./support/viewers";
 
 const TARGET_MS = 150;
@@ -43,7 +43,7 @@ function tenThousandLives() {
   });
 }
 
-try {
+await runBench(async () => {
   const who = await benchViewers();
   const runs = await workload();
   const tally = runs.map((r) => ({ label: `${r.as} ${r.label}`, run: () => loadTallies(parseTallyFilters(r.query), who[r.as]) }));
@@ -73,10 +73,4 @@ try {
     for (let i = 0; i < 20; i++) ms.push(await timed(async () => fitWeibull(lives)));
     record({ name: "Weibull fit, 10,000 lives (half suspended)", runs: ms.length, p50: percentile(ms, 50), p95: percentile(ms, 95), unit: "ms", target: 50 });
   }
-} catch (err) {
-  console.error(err);
-  process.exitCode = 1;
-} finally {
-  await endFloor();
-  await pool.end();
-}
+});

@@ -194,3 +194,15 @@ export_env() { # the environment the app, scripts and tests read (lib/env.ts val
   if [ ! -f "$DATA_DIR/auth-secret" ]; then head -c 48 /dev/urandom | base64 | tr -d '\n/+=' >"$DATA_DIR/auth-secret"; fi
   export BETTER_AUTH_SECRET="$(cat "$DATA_DIR/auth-secret")"
 }
+
+build_and_start_app() { # dist-folder: a production build there (REUSE_BUILD=1 keeps an earlier one), then next start on $APP_PORT
+  export NEXT_DIST_DIR="$1"
+  if [ "${REUSE_BUILD:-0}" = 1 ] && [ -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
+    say "Reusing the build in $NEXT_DIST_DIR"
+  else
+    node_modules/.bin/next build >"$DATA_DIR/logs/build.log" 2>&1 || { tail -60 "$DATA_DIR/logs/build.log"; fail "next build failed"; }
+  fi
+  node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/logs/app.log" 2>&1 &
+  PIDS+=($!)
+  wait_port "$APP_PORT" app 60
+}

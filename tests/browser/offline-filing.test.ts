@@ -32,6 +32,8 @@ test("file a report offline, reload offline, come back online and find it filed 
   await page.reload();
   await page.waitForSelector("#carMark");
   await expect.poll(() => page.getAttribute('[data-testid="outbox"]', "data-online")).toBe("false");
+  // The worker built from lib/offline/service-worker.ts keeps pages and built assets in their own caches.
+  expect(await page.evaluate(() => caches.keys())).toEqual(expect.arrayContaining(["tearline-pages-v2", "tearline-assets-v2"]));
 
   await page.fill("#carMark", "brwx");
   await page.fill("#carNumber", car);

@@ -3,6 +3,7 @@
 import { afterAll, beforeAll, expect, test } from "vitest";
 import type { Browser } from "playwright-core";
 import { as } from "../support/api";
+import { pool } from "../support/db";
 import { seriousAxeProblems } from "../support/axe";
 import { launch, DESK, PHONE, signedInPage } from "../support/browser";
 import { APP_URL } from "../support/env";
@@ -103,3 +104,21 @@ test("on a phone the menu shows every destination without sideways scrolling, ea
   expect(await page.locator("#phone-menu").count()).toBe(0);
   await page.context().close();
 });
+
+test("axe-core finds no serious or critical problem on a signed case, the search results and the tallies", async () => {
+  const { rows } = await pool.query<{ number: string }>(
+    "SELECT c.number FROM cases c WHERE c.status = 'signed' AND EXISTS (SELECT 1 FROM photos p WHERE p.case_id = c.id) ORDER BY c.number LIMIT 1",
+  );
+  const signed = `/cases/${rows[0].number}`;
+  const found: Record<string, unknown> = {};
+  for (const viewport of [PHONE, DESK]) {
+    const page = await signedInPage(browser, "engineer", viewport);
+    for (const [path, ready] of [[signed, '[data-testid="photo-tile"]'], ["/search?q=spall+cup+outboard+row", '[data-testid="search-hit"]'], ["/tallies", "main h1"], ["/tallies/life", "[data-life-causes]"]] as const) {
+      await page.goto(path);
+      await page.locator(ready).first().waitFor();
+      found[`${path} (${viewport.width} px)`] = await seriousAxeProblems(page);
+    }
+    await page.context().close();
+  }
+  expect(found).toEqual(Object.fromEntries(Object.keys(found).map((k) => [k, []])));
+}, 120_000);

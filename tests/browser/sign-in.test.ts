@@ -39,6 +39,13 @@ test("sign-in on a phone: wrong password refused with a message, right password 
   await Promise.all([page.waitForURL((u) => u.pathname === "/", { timeout: 30_000 }), page.click("button[type=submit]")]);
   await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent(), { timeout: 15_000 }).toContain(person.name.split(" ")[0]);
   await page.screenshot({ path: `${SHOTS}/sign-in-home-phone.png`, fullPage: true });
+
+  // Signing out from the phone menu ends the session: the casebook asks for a sign-in again.
+  await page.getByRole("button", { name: /menu/i }).first().click();
+  await Promise.all([page.waitForURL((u) => u.pathname === "/sign-in", { timeout: 30_000 }), page.getByRole("button", { name: "Sign out" }).last().click()]);
+  await page.goto("/cases");
+  expect(new URL(page.url()).pathname).toBe("/sign-in");
+  expect((await ctx.cookies()).some((c) => c.name.includes("session_token") && c.value)).toBe(false);
   await ctx.close();
 }, 60_000);
 

@@ -91,8 +91,13 @@ describe.skipIf(!servicesRunning)("backup and restore", () => {
     expect(tables).toContain("public.cases");
     expect(manifest.database.tables["public.cases"]).toBeGreaterThan(0);
     expect(manifest.objects.length).toBeGreaterThan(0);
-    // The manifest tells the truth about the source (the suite runs one file at a time, so it is quiet).
-    expect(manifest.database.tables).toEqual(await countsOf(process.env.DATABASE_URL!, tables));
+    // The manifest tells the truth about the source. The job queue's tables (schema pgboss) are left
+    // out of this one comparison: the suite's running server keeps completing and archiving jobs
+    // between the dump and the recount. The restored copy below is compared on every table.
+    const quiet = tables.filter((t) => !t.startsWith("pgboss."));
+    const pick = (counts: Record<string, number>) => Object.fromEntries(quiet.map((t) => [t, counts[t]]));
+    expect(quiet).toContain("public.cases");
+    expect(pick(manifest.database.tables)).toEqual(await countsOf(process.env.DATABASE_URL!, quiet));
 
     const restore = await run("bash", ["scripts/restore.sh", backupDir], { cwd: project, env: restoredEnv });
     expect(restore.stdout).toMatch(/all matching the manifest/);

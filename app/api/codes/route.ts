@@ -1,6 +1,6 @@
 // GET /api/codes?list=damage[&includeRetired=1] - a classification list for pickers (any signed-in person)
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { listCodeEntries } from "@/db/queries/code-entries";
 import { parseQuery, withRole } from "@/lib/http/handler";
 import { listSchema } from "@/lib/validation/code-entry";

@@ -1,6 +1,6 @@
 // POST /api/digest - send the weekly digest to managers now (admins only)
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { badRequest } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";
 import { JSON_MAX_BYTES, readTextLimited } from "@/lib/http/body";

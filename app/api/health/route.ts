@@ -23,7 +23,8 @@ function smtpGreets(host: string, port: number) {
     const socket = net.connect(port, host);
     socket.once("data", (d) => {
       socket.end("QUIT\r\n");
-      d.toString().startsWith("220") ? resolve() : reject(new Error("unexpected SMTP greeting"));
+      if (d.toString().startsWith("220")) resolve();
+      else reject(new Error("unexpected SMTP greeting"));
     });
     socket.once("error", reject);
   });

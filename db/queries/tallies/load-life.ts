@@ -1,6 +1,6 @@
 // The life section's data: a quick fit for every cause and the full analysis for the chosen one.
 import "server-only";
-import { analyseCause, lifeCauses, summariseCauseCounts, unitsFor, type LifeMeasure } from "@/lib/tallies/life";
+import { analyseCause, countedFor, summariseEveryCause, type LifeMeasure } from "@/lib/tallies/life";
 import type { TallyFilters } from "@/lib/tallies/filters";
 import type { LifeData } from "@/lib/tallies/life-data";
 import { fleetCounts, latestFleetBatch, lifeCounts } from "./life-counts";
@@ -14,9 +14,9 @@ export async function loadLife(filters: TallyFilters, viewer: TallyViewer, measu
   const used = fleet.reduce((s, f) => s + f.count, 0);
   const why = !batch ? "No fleet list uploaded yet." : siteBound ? "Fleet list not used while one site is in view: it covers the whole fleet." : null;
 
-  // Every cause from the counts; only the chosen one is spread into units for its plot and ranks.
-  const causes = lifeCauses(rows).map((c) => summariseCauseCounts(c.cause, rows, fleet, 0.95, measure));
+  // Every cause from the counts; the chosen one also gets its plot, ranks and bounds.
+  const causes = summariseEveryCause(rows, fleet, 0.95, measure);
   const chosen = cause && causes.some((c) => c.cause === cause) ? cause : causes.find((c) => c.fit)?.cause;
-  const selected = chosen ? analyseCause(chosen, unitsFor(chosen, rows, fleet), { unit: measure }) : null;
+  const selected = chosen ? analyseCause(chosen, countedFor(chosen, rows, fleet), { unit: measure, summary: causes.find((c) => c.cause === chosen) }) : null;
   return { measure, causes, selected, withoutLife, fleet: { batch, used, why } };
 }

@@ -14,11 +14,12 @@ await pg.connect();
 const number = (await pg.query<{ number: string }>("select number from cases where status = 'signed' order by number limit 1")).rows[0].number;
 await pg.end();
 
-const pages: { path: string; target: number; signedIn: boolean }[] = [
+type Role = Parameters<typeof signedInCookie>[0];
+const pages: { path: string; target: number; signedIn: boolean; role?: Role }[] = [
   { path: "/sign-in", target: ROUTE_KB, signedIn: false },
   { path: "/", target: ROUTE_KB, signedIn: true },
   { path: "/cases", target: ROUTE_KB, signedIn: true },
-  { path: "/cases/new", target: FORM_KB, signedIn: true },
+  { path: "/cases/new", target: FORM_KB, signedIn: true, role: "inspector" },
   { path: `/cases/${number}`, target: ROUTE_KB, signedIn: true },
   { path: `/cases/${number}/photos`, target: ROUTE_KB, signedIn: true },
   { path: "/search", target: ROUTE_KB, signedIn: true },
@@ -30,11 +31,13 @@ const pages: { path: string; target: number; signedIn: boolean }[] = [
 
 const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH, args: ["--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run"] });
 try {
-  const cookie = await signedInCookie("manager");
+  const cookies = new Map<Role, string>();
+  const cookieFor = async (role: Role) => cookies.get(role) ?? cookies.set(role, await signedInCookie(role)).get(role)!;
   const host = new URL(APP_URL).hostname;
   for (const p of pages) {
     const ctx = await browser.newContext({ baseURL: APP_URL });
     if (p.signedIn) {
+      const cookie = await cookieFor(p.role ?? "manager");
       await ctx.addCookies(cookie.split("; ").map((pair) => {
         const at = pair.indexOf("=");
         return { name: pair.slice(0, at), value: pair.slice(at + 1), domain: host, path: "/" };
@@ -47,6 +50,7 @@ try {
     });
     const res = await page.goto(p.path, { waitUntil: "networkidle" });
     if (!res || res.status() !== 200) throw new Error(`${p.path} answered ${res?.status()}`);
+    if (new URL(page.url()).pathname !== p.path) throw new Error(`${p.path} was sent on to ${page.url()}`);
     // What the served HTML itself asks for (script tags and script preloads), not what the page adds later.
     const html = await res.text();
     const refs = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*as="script"[^>]*\shref|link[^>]*\shref)="([^"]+\.js[^"]*)"/g)].map((m) => new URL(m[1].replace(/&amp;/g, "&"), APP_URL).href);

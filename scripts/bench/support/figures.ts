@@ -117,3 +117,16 @@ export async function measure(name: string, calls: Call[], opts: { repeats: numb
     floorP95: floor.length ? percentile(floor, 95) : undefined, maxRatio: floor.length ? (opts.maxRatio ?? 1.5) : undefined, note: `slowest ${worst}`,
   });
 }
+
+/** Runs one bench: a thrown error fails it, and the floor's and the app's pools are closed either way. */
+export async function runBench(body: () => Promise<void>): Promise<void> {
+  try {
+    await body();
+  } catch (err) {
+    console.error(err);
+    process.exitCode = 1;
+  } finally {
+    await endFloor();
+    await pool.end();
+  }
+}

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { stopBoss } from "@/lib/jobs/boss";
 import { notifyCaseReopened, notifySignoffRequested, notifyVerdictReturned, notifyVerdictSigned } from "@/lib/notify/case-notices";
-import { ApiClient, as, demoUser } from "../../support/api";
+import { ApiClient, demoUser } from "../../support/api";
 import { db, t } from "../../support/db";
 import { createCase, userId } from "../../support/factories";
 import { linkIn, mailbox, waitForMail } from "../../support/mail";

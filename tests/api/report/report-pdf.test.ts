@@ -31,7 +31,7 @@ describe("GET /api/cases/:id/report.pdf", () => {
     for (const section of ["Bearing and removal", "Field checks", "Teardown", "Findings by part", "Damage map", "Verdict", "Related cases", "Photo register"]) {
       expect(text).toContain(section);
     }
-    expect(text).toContain("Signed revision — signed by Tomasz Wielgus on 2026-06-22 09:30 UTC");
+    expect(text).toContain("Signed revision — signed by Tomasz Wielgus on 22 Jun 2026, 09:30 UTC");
     // Dial trials 0.020, 0.021, 0.019 in: mean 0.020 in = 0.508 mm (1 in = 25.4 mm exactly, NIST SP 811).
     expect(text).toContain("0.0200 in = 0.508 mm (3 trials)");
     // The limit: 1/16 in = 0.0625 in (common practice for North American freight interchange).

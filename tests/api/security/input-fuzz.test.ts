@@ -4,7 +4,7 @@
 // API writes are equal before and after). Runs are seeded: FC_SEED=<n> repeats a run, and a failure
 // prints the seed and the shrunk request.
 import fc from "fast-check";
-import { beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, it } from "vitest";
 import { ApiClient, as } from "../../support/api";
 import { changedTables, tableState } from "../../support/db";
 import { createCase } from "../../support/factories";

@@ -127,7 +127,10 @@ describe("removal yield counts", () => {
       expect([b.n, b.confirmed]).toEqual([mine.length, yes]);
       // Wilson (1927) closed form written out in casebook.ts
       const [lo, hi] = wilson(yes, mine.length);
-      if (yes > 0 && yes < mine.length) expect(b.rate.lower).toBeCloseTo(lo, 9), expect(b.rate.upper).toBeCloseTo(hi, 9);
+      if (yes > 0 && yes < mine.length) {
+        expect(b.rate.lower).toBeCloseTo(lo, 9);
+        expect(b.rate.upper).toBeCloseTo(hi, 9);
+      }
     }
     const readings = d.hot.reading.bins.reduce((a, b) => a + b.n, 0);
     expect(readings).toBe(hot.length);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { bothUnits, formatIn, formatMmFromIn, limitText, readLimit, tapeFraction } from "@/lib/admin/policy-units";
-import { sitePolicySchema } from "@/lib/validation/site";
+import { PLAUSIBLE_MAX_CEILING_IN, policyOrderProblems, sitePolicySchema } from "@/lib/validation/site";
 import checks from "../../fixtures/field-check-values.json";
 
 // 1 in = 25.4 mm exactly (NIST SP 811; from memory), cases copied into tests/fixtures/field-check-values.json.
@@ -44,11 +44,12 @@ describe("end-play limits in either unit", () => {
 });
 
 describe("site policy validation", () => {
-  const good = { endPlayMaxIn: 0.0625, dialSpreadIn: 0.002, tapeSpreadIn: 0.015625 };
+  // 1/16 in removal limit, 0.002 in dial spread, 1/64 in tape spread, 1/4 in believable ceiling (common practice)
+  const good = { endPlayMaxIn: 0.0625, dialSpreadIn: 0.002, tapeSpreadIn: 0.015625, plausibleMaxIn: 0.25 };
 
   it("accepts the common defaults and keeps 5 decimal places", () => {
     // 0.015625 rounds half away from zero to 0.01563 at the column's 5 decimals (arithmetic)
-    expect(sitePolicySchema.parse(good)).toEqual({ endPlayMaxIn: 0.0625, dialSpreadIn: 0.002, tapeSpreadIn: 0.01563 });
+    expect(sitePolicySchema.parse(good)).toEqual({ endPlayMaxIn: 0.0625, dialSpreadIn: 0.002, tapeSpreadIn: 0.01563, plausibleMaxIn: 0.25 });
   });
 
   it("accepts the 1/4 in ceiling and refuses anything above it, zero or below", () => {
@@ -61,5 +62,20 @@ describe("site policy validation", () => {
   it("refuses spreads of zero and limits too small to keep", () => {
     expect(sitePolicySchema.safeParse({ ...good, dialSpreadIn: 0 }).success).toBe(false);
     expect(sitePolicySchema.safeParse({ ...good, tapeSpreadIn: 0.000001 }).success).toBe(false);
+  });
+
+  it("keeps the believable-reading limit between zero and 1 in", () => {
+    expect(PLAUSIBLE_MAX_CEILING_IN).toBe(1);
+    expect(sitePolicySchema.safeParse({ ...good, plausibleMaxIn: 1 }).success).toBe(true);
+    for (const bad of [1.0001, 0, -0.25, Number.NaN]) {
+      expect(sitePolicySchema.safeParse({ ...good, plausibleMaxIn: bad }).success).toBe(false);
+    }
+  });
+
+  it("refuses a believable-reading limit below the removal limit, naming the field", () => {
+    // 0.05 in < 1/16 in (0.0625 in): a true over-limit reading would be refused as a slip (arithmetic)
+    expect(policyOrderProblems({ endPlayMaxIn: 0.0625, plausibleMaxIn: 0.05 })).toHaveProperty("plausibleMaxIn");
+    expect(policyOrderProblems({ endPlayMaxIn: 0.0625, plausibleMaxIn: 0.0625 })).toEqual({});
+    expect(policyOrderProblems({ endPlayMaxIn: 0.0625, plausibleMaxIn: 0.25 })).toEqual({});
   });
 });

@@ -51,7 +51,7 @@ describe("ingestPhoto", () => {
     const bucket = new MemoryBucket();
     const rows = new MemoryRows();
     const order: string[] = [];
-    const spy: PhotoObjectStore = { put: async (k, b, t) => (order.push(k.split("/").pop()!), bucket.put(k, b)), remove: (k) => bucket.remove(k) };
+    const spy: PhotoObjectStore = { put: async (k, b) => (order.push(k.split("/").pop()!), bucket.put(k, b)), remove: (k) => bucket.remove(k) };
     const res = await ingestPhoto(await input(), { store: spy, rows });
     expect(res.duplicate).toBe(false);
     expect(order[0]).toBe("original");

@@ -5,8 +5,8 @@ import { demoReportSource } from "../../fixtures/report-demo-case";
 describe("case report model", () => {
   it("states a signed revision with who signed and when", () => {
     const r = buildCaseReport(demoReportSource());
-    expect(r.revision).toMatchObject({ kind: "signed", signedBy: "Tomasz Wielgus", signedAt: "2026-04-02 09:30 UTC" });
-    expect(r.revision.title).toBe("Signed revision — signed by Tomasz Wielgus on 2026-04-02 09:30 UTC");
+    expect(r.revision).toMatchObject({ kind: "signed", signedBy: "Tomasz Wielgus", signedAt: "2 Apr 2026, 09:30 UTC" });
+    expect(r.revision.title).toBe("Signed revision — signed by Tomasz Wielgus on 2 Apr 2026, 09:30 UTC");
   });
 
   it("is a draft until the case is signed, whatever signedAt says", () => {

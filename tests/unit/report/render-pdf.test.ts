@@ -15,7 +15,7 @@ describe.skipIf(!hasPoppler())("case report PDF", () => {
     const all = pages.join("\n");
     expect(all).toContain("TEARLINE CASE REPORT");
     for (const s of ["Bearing and removal", "Field checks", "Teardown", "Findings by part", "Damage map", "Verdict", "Related cases", "Photo register"]) expect(all).toContain(s);
-    expect(all).toContain("Signed revision — signed by Tomasz Wielgus on 2026-04-02 09:30 UTC");
+    expect(all).toContain("Signed revision — signed by Tomasz Wielgus on 2 Apr 2026, 09:30 UTC");
     // The end-play arithmetic as printed: mean 0.020 in = 0.508 mm (1 in = 25.4 mm, NIST SP 811).
     expect(all).toContain("0.0200 in = 0.508 mm (3 trials)");
     pages.forEach((text, i) => expect(text).toContain(`TL-26-00042 · page ${i + 1} of ${count}`));

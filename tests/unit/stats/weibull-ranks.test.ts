@@ -52,3 +52,25 @@ describe("Johnson adjusted ranks and Benard median ranks", () => {
     expect(benardMedianRank(1, 10)).toBeCloseTo(0.7 / 10.4, 15);
   });
 });
+
+describe("Johnson's ranks from counted units", () => {
+  it("equal the unit-by-unit ranks when lives repeat, failures and suspensions alike (arithmetic)", async () => {
+    const { johnsonAdjustedRanksCounted } = await import("@/lib/stats/weibull-ranks");
+    const groups = [
+      { time: 10, failed: true, count: 3 },
+      { time: 10, failed: false, count: 2 },
+      { time: 14, failed: false, count: 4 },
+      { time: 20, failed: true, count: 1 },
+      { time: 25, failed: true, count: 5 },
+      { time: 25, failed: false, count: 1 },
+    ];
+    const units = groups.flatMap((g) => Array.from({ length: g.count }, () => ({ time: g.time, failed: g.failed })));
+    const a = johnsonAdjustedRanksCounted([...groups].reverse());
+    const b = johnsonAdjustedRanks(units);
+    expect(a).toHaveLength(9);
+    a.forEach((p, i) => {
+      expect(p.time).toBe(b[i].time);
+      expect(p.adjustedRank).toBeCloseTo(b[i].adjustedRank, 12);
+    });
+  });
+});

@@ -1,7 +1,7 @@
 // The life section summarises every cause from the counted rows; it must give what the same fit
 // over one unit per removal gives (the two paths share the Weibull MLE and Fisher bounds).
 import { describe, expect, it } from "vitest";
-import { summariseCause, summariseCauseCounts, unitsFor, type FleetCountRow, type LifeCountRow } from "@/lib/tallies/life";
+import { summariseCause, summariseEveryCause, unitsFor, type FleetCountRow, type LifeCountRow } from "@/lib/tallies/life";
 
 // Invented counts: two causes over 1..60 months, some lives without a cause, and fleet survivors.
 const rows: LifeCountRow[] = [];
@@ -12,10 +12,10 @@ for (let t = 1; t <= 60; t++) {
 }
 const fleet: FleetCountRow[] = [{ time: 30, count: 40 }, { time: 72, count: 25 }];
 
-describe("summariseCauseCounts", () => {
+describe("summariseEveryCause", () => {
   it("matches the unit-by-unit summary for every cause", () => {
     for (const cause of ["water-ingress", "fatigue"]) {
-      const a = summariseCauseCounts(cause, rows, fleet);
+      const a = summariseEveryCause(rows, fleet).find((s) => s.cause === cause)!;
       const b = summariseCause(cause, unitsFor(cause, rows, fleet));
       expect(a.failures).toBe(b.failures);
       expect(a.suspensions).toBe(b.suspensions);
@@ -27,8 +27,8 @@ describe("summariseCauseCounts", () => {
 
   it("refuses the same data the unit path refuses, in the same words", () => {
     const one: LifeCountRow[] = [{ cause: "seal", time: 12, count: 1 }, { cause: "other", time: 20, count: 5 }];
-    expect(summariseCauseCounts("seal", one, []).note).toBe(summariseCause("seal", unitsFor("seal", one, [])).note);
+    expect(summariseEveryCause(one, []).find((s) => s.cause === "seal")!.note).toBe(summariseCause("seal", unitsFor("seal", one, [])).note);
     const same: LifeCountRow[] = [{ cause: "seal", time: 12, count: 3 }, { cause: "other", time: 20, count: 5 }];
-    expect(summariseCauseCounts("seal", same, []).note).toBe(summariseCause("seal", unitsFor("seal", same, [])).note);
+    expect(summariseEveryCause(same, []).find((s) => s.cause === "seal")!.note).toBe(summariseCause("seal", unitsFor("seal", same, [])).note);
   });
 });

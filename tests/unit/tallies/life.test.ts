@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { analyseCause, lifeCauses, summariseCause, unitsFor, type LifeCountRow } from "@/lib/tallies/life";
+import { analyseCause, countedFor, lifeCauses, summariseCause, unitsFor, type LifeCountRow } from "@/lib/tallies/life";
 import { cautionTags, lifeFigure } from "@/lib/tallies/life-cautions";
 import { checkValues, expectAbs } from "../stats/check-values";
 
@@ -39,8 +39,8 @@ describe("life analysis per root cause", () => {
   });
 
   it("gives the full analysis for small sets and Fisher bounds only above the profiling limit", () => {
-    const units = unitsFor("water-ingress", rows, fleet);
-    const full = analyseCause("water-ingress", units);
+    const groups = countedFor("water-ingress", rows, fleet);
+    const full = analyseCause("water-ingress", groups);
     expect(full.likelihoodRatio).not.toBeNull();
     expect(full.plotPoints).toHaveLength(10);
     expect(full.rankRegression!.beta).toBeGreaterThan(0);
@@ -48,15 +48,19 @@ describe("life analysis per root cause", () => {
     const line = full.fittedLine;
     expect(line[0].y).toBeLessThan(0);
     expect(line[line.length - 1].y).toBeGreaterThan(0);
-    const quick = analyseCause("water-ingress", units, { lrLimit: 5 });
+    // above the limit the counted path: same fit, same ranks and regression, no profiling
+    const quick = analyseCause("water-ingress", groups, { lrLimit: 5 });
     expect(quick.likelihoodRatio).toBeNull();
     expectAbs(quick.mle!.beta, full.mle!.beta, 1e-9);
-    expect(quick.plotPoints).toEqual(full.plotPoints);
+    expectAbs(quick.mle!.fisher.eta[1], full.mle!.fisher.eta[1], 1e-6);
+    expectAbs(quick.rankRegression!.beta, full.rankRegression!.beta, 1e-9);
+    expect(quick.plotPoints.map((p) => p.time)).toEqual(full.plotPoints.map((p) => p.time));
+    quick.plotPoints.forEach((p, i) => expectAbs(p.medianRank, full.plotPoints[i].medianRank, 1e-12));
   });
 
   it("thins a crowded probability plot to evenly spaced ranks", () => {
     const many = Array.from({ length: 50 }, (_, i) => ({ cause: "seal", time: 10 + i, count: 1 }));
-    const d = analyseCause("seal", unitsFor("seal", many, []), { maxPlotPoints: 11 });
+    const d = analyseCause("seal", countedFor("seal", many, []), { maxPlotPoints: 11 });
     expect(d.plotPoints).toHaveLength(11);
     expect(d.thinnedFrom).toBe(50);
     expect(d.plotPoints[0].time).toBe(10);
@@ -76,7 +80,7 @@ describe("life analysis per root cause", () => {
     const susp = [46, 33, 60, 53, 12, 36];
     const units = [...fails.map((time) => ({ time, failed: true })), ...susp.map((time) => ({ time, failed: false }))];
     const quick = summariseCause("seal", units);
-    const full = analyseCause("seal", units);
+    const full = analyseCause("seal", units.map((u) => ({ ...u, count: 1 })));
     expect(full.likelihoodRatio!.beta[0]).toBeLessThan(1);
     expect(quick.fit!.betaBounds[0]).toBeGreaterThan(1);
     expect(quick.fit!.shapeReading).toBe("wear-out");

@@ -7,6 +7,7 @@ import { listAudit } from "@/db/queries/audit";
 import { requirePageUser } from "@/lib/auth/session";
 import { AUDIT_KINDS, type AuditKind } from "@/lib/security/audit-kinds";
 import { auditFilterOf, auditQuerySchema } from "@/lib/security/audit-query";
+import { formatMoment } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Audit log" };
 export const dynamic = "force-dynamic";
@@ -60,7 +61,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
             <ul className="divide-y divide-line" data-testid="audit-entries">
               {rows.map((r) => (
                 <li key={r.id} className="grid gap-1 py-3 text-sm md:grid-cols-[11rem_10rem_1fr_1fr] md:gap-4">
-                  <time className="tabular text-muted" dateTime={r.at.toISOString()}>{r.at.toISOString().slice(0, 16).replace("T", " ")} UTC</time>
+                  <time className="tabular text-muted" dateTime={r.at.toISOString()}>{formatMoment(r.at)}</time>
                   <span>
                     <Badge tone={DANGER.includes(r.kind) ? "danger" : "neutral"}>{AUDIT_KINDS[r.kind as AuditKind] ?? r.kind}</Badge>
                   </span>

@@ -13,7 +13,7 @@ export default async function SitesPage() {
   const [sites, usage] = await Promise.all([listSites(), siteUsageCounts()]);
   const views = sites.map((s) => ({
     id: s.id, code: s.code, name: s.name, kind: s.kind, railway: s.railway, location: s.location, active: s.active,
-    endPlayMaxIn: s.endPlayMaxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn, removalCostUsd: s.removalCostUsd,
+    endPlayMaxIn: s.endPlayMaxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn, plausibleMaxIn: s.plausibleMaxIn, removalCostUsd: s.removalCostUsd,
     usage: usage.get(s.id) ?? { cases: 0, users: 0 },
   }));
 

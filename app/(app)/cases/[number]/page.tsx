@@ -7,7 +7,7 @@ import { HistoryList } from "@/components/case/history-list";
 import { TeardownForm } from "@/components/case/teardown-form";
 import { VerdictForm } from "@/components/case/verdict-form";
 import { WorkflowBar } from "@/components/case/workflow-bar";
-import { RemovalForm } from "@/components/removal/removal-form";
+import lazyComponent from "next/dynamic";
 import { getCaseDetail } from "@/db/queries/case-read";
 import { readableHistory } from "@/lib/cases/service";
 import { listCodeEntries } from "@/db/queries/code-entries";
@@ -24,6 +24,10 @@ import { CaseExtras } from "./_components/case-extras";
 import { toDraft } from "./_components/to-draft";
 import { SafetyFlagNote } from "./_components/safety-flag-note";
 import { safetyFlagOf } from "@/lib/cases/safety-flag";
+import { formatDay } from "@/lib/dates";
+
+// The field-report editor (and the validation it carries) loads only on a draft someone may edit.
+const RemovalForm = lazyComponent(() => import("@/components/removal/removal-form").then((m) => m.RemovalForm));
 
 export const dynamic = "force-dynamic";
 
@@ -37,7 +41,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
   const c = await getCaseDetail(number, user);
   if (!c) notFound();
   const [events, damage, causes, sites] = await Promise.all([readableHistory(c.id, user), listCodeEntries("damage"), listCodeEntries("cause"), siteOptions()]);
-  const policy = c.sitePolicy?.endPlayMaxIn ? { maxIn: c.sitePolicy.endPlayMaxIn, dialSpreadIn: c.sitePolicy.dialSpreadIn!, tapeSpreadIn: c.sitePolicy.tapeSpreadIn! } : DEFAULT_END_PLAY_POLICY;
+  const policy = c.sitePolicy?.endPlayMaxIn ? { maxIn: c.sitePolicy.endPlayMaxIn, dialSpreadIn: c.sitePolicy.dialSpreadIn!, tapeSpreadIn: c.sitePolicy.tapeSpreadIn!, plausibleMaxIn: c.sitePolicy.plausibleMaxIn ?? undefined } : DEFAULT_END_PLAY_POLICY;
   const editField = canEditSection("field", c.status, user.role);
   const editTeardown = canEditSection("teardown", c.status, user.role);
   const editVerdict = canEditSection("verdict", c.status, user.role);
@@ -59,12 +63,12 @@ export default async function CasePage({ params, searchParams }: { params: Promi
       ) : null}
       <nav className="no-print mb-5 flex gap-2 overflow-x-auto text-sm [scrollbar-width:none]" aria-label="Sections">
         {[["field", "Field report"], ["teardown", "Teardown"], ["verdict", "Verdict"], ["photos", "Photos"], ["similar", "Similar"], ["history", "History"]].map(([id, label]) => (
-          <a key={id} href={`#${id}`} className="shrink-0 rounded-full border border-line bg-surface px-3 py-1.5 text-ink-2 hover:border-accent">{label}</a>
+          <a key={id} href={`#${id}`} className="inline-flex min-h-11 shrink-0 items-center rounded-full border border-line bg-surface px-3 text-ink-2 hover:border-accent lg:min-h-0 lg:py-1.5">{label}</a>
         ))}
       </nav>
       <div className="flex flex-col gap-5">
         <section id="field" className="scroll-mt-24">
-          <Card title="Field report" action={editField && !editing ? <a href="?edit=field#field" className="text-sm font-medium text-accent hover:underline">Edit</a> : editing ? <a href="?#field" className="text-sm text-muted hover:underline">Done</a> : null}>
+          <Card title="Field report" action={editField && !editing ? <a href="?edit=field#field" className="inline-flex min-h-11 min-w-11 items-center justify-center text-sm font-medium text-accent hover:underline lg:min-h-0 lg:min-w-0">Edit</a> : editing ? <a href="?#field" className="inline-flex min-h-11 min-w-11 items-center justify-center text-sm text-muted hover:underline lg:min-h-0 lg:min-w-0">Done</a> : null}>
             {editing ? <RemovalForm mode="edit" sites={sites} initial={toDraft(c)} caseId={c.id} version={c.version} defaultSiteId={c.siteId} /> : <FieldSummary c={c} policy={policy} />}
           </Card>
         </section>
@@ -93,7 +97,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
                 value={{ primaryCause: c.primaryCause, contributingCauses: c.contributingCauses, confidence: c.confidence, removalConfirmed: c.removalConfirmed, correctiveAction: c.correctiveAction, verdictNotes: c.verdictNotes }}
               />
             )}
-            {c.proposedByName ? <p className="mt-4 text-xs text-muted">Proposed by {c.proposedByName} on {c.proposedAt?.toISOString().slice(0, 10)}{c.signedByName ? ` · signed by ${c.signedByName} on ${c.signedAt?.toISOString().slice(0, 10)}` : ""}</p> : null}
+            {c.proposedByName ? <p className="mt-4 text-xs text-muted">Proposed by {c.proposedByName} on {formatDay(c.proposedAt)}{c.signedByName ? ` · signed by ${c.signedByName} on ${formatDay(c.signedAt)}` : ""}</p> : null}
           </Card>
         </section>
         <CaseExtras c={c} user={user} />

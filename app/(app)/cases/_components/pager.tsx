@@ -6,7 +6,7 @@ import { Icon } from "./icons";
 type Props = { page: number; pageSize: number; total: number; onPage: (p: number) => void; onPageSize: (n: number) => void };
 
 const stepClass =
-  "inline-flex h-11 items-center gap-1 rounded-lg border border-line-strong bg-surface px-3 text-sm font-medium text-ink-2 hover:bg-surface-2 disabled:pointer-events-none disabled:opacity-40 sm:h-9";
+  "inline-flex h-11 min-w-11 items-center justify-center gap-1 rounded-lg border border-line-strong bg-surface px-3 text-sm font-medium text-ink-2 hover:bg-surface-2 disabled:pointer-events-none disabled:opacity-40 sm:h-9";
 
 export function Pager({ page, pageSize, total, onPage, onPageSize }: Props) {
   const pageCount = Math.max(1, Math.ceil(total / pageSize));

@@ -14,7 +14,7 @@ function pagesAround(page: number, count: number): (number | "…")[] {
 export function Pagination({ params, total, pageSize }: { params: SearchParams; total: number; pageSize: number }) {
   const count = Math.min(MAX_PAGE, Math.ceil(total / pageSize));
   if (count <= 1) return null;
-  const step = "inline-flex h-10 min-w-10 items-center justify-center rounded-lg border px-3 text-sm tabular";
+  const step = "inline-flex h-11 min-w-11 items-center lg:h-10 lg:min-w-10 justify-center rounded-lg border px-3 text-sm tabular";
   const to = (p: number) => searchHref({ ...params, page: p });
   return (
     <nav aria-label="Pages" className="mt-5 flex flex-wrap items-center justify-center gap-1.5">

@@ -28,7 +28,7 @@ export function ResultsHeader({ params, result }: { params: SearchParams; result
             const on = params.sort === s || (s === "newest" && !params.q && params.sort === "relevance");
             return (
               <Link key={s} href={searchHref(withChange(params, { sort: s }))} scroll={false} aria-current={on ? "true" : undefined}
-                className={`rounded-md px-2.5 py-1.5 sm:py-1 ${on ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}>
+                className={`inline-flex min-h-11 items-center rounded-md px-2.5 lg:min-h-0 lg:py-1 ${on ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}>
                 {SORT_LABELS[s]}
               </Link>
             );
@@ -65,7 +65,7 @@ function ReadAs({ params, result }: { params: SearchParams; result: SearchResult
           <span className={`inline-flex items-center gap-1 rounded-full py-0.5 pl-2.5 pr-1 ring-1 ${STRUCTURED.has(u.role) ? "bg-accent-soft text-ink ring-accent/30" : "bg-surface-2 text-ink-2 ring-line"}`}>
             {u.reading}
             <Link href={searchHref(withChange(params, { q: u.without }))} scroll={false} aria-label={`Search without “${u.reading}”`}
-              className="inline-flex h-6 w-6 items-center justify-center rounded-full text-muted hover:bg-surface hover:text-ink">
+              className="inline-flex h-11 w-11 items-center justify-center rounded-full text-muted lg:h-6 lg:w-6 hover:bg-surface hover:text-ink">
               <span aria-hidden>×</span>
             </Link>
           </span>

@@ -5,6 +5,7 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useTransition } from "react";
 import type { ClusterTally } from "@/lib/tallies/types";
+import { formatDay } from "@/lib/dates";
 
 const KINDS = [
   { id: "site", label: "Same site" },
@@ -13,7 +14,7 @@ const KINDS = [
 ] as const;
 const WINDOWS = [7, 14, 30, 60, 90, 180];
 
-const fmt = (d: string) => new Date(`${d}T00:00:00Z`).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const fmt = (d: string) => formatDay(d);
 
 export function ClusterControls({ tally }: { tally: ClusterTally }) {
   const router = useRouter();
@@ -31,14 +32,14 @@ export function ClusterControls({ tally }: { tally: ClusterTally }) {
     <>
       <div role="group" aria-label="Group by" className="inline-flex rounded-lg bg-surface-2 p-0.5 ring-1 ring-line">
         {KINDS.map((k) => (
-          <button key={k.id} type="button" aria-pressed={tally.keyKind === k.id} onClick={() => set("cluster", k.id)} className={`h-8 rounded-md px-3 text-sm font-medium ${tally.keyKind === k.id ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}>
+          <button key={k.id} type="button" aria-pressed={tally.keyKind === k.id} onClick={() => set("cluster", k.id)} className={`h-11 rounded-md px-3 text-sm font-medium lg:h-8 ${tally.keyKind === k.id ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}>
             {k.label}
           </button>
         ))}
       </div>
       <label className="flex items-center gap-2 text-sm text-ink-2">
         within
-        <select aria-label="Window in days" value={tally.windowDays} onChange={(e) => set("window", e.target.value)} className="h-9 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink">
+        <select aria-label="Window in days" value={tally.windowDays} onChange={(e) => set("window", e.target.value)} className="h-11 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink lg:h-9">
           {[...new Set([...WINDOWS, tally.windowDays])].sort((a, b) => a - b).map((w) => <option key={w} value={w}>{w} days</option>)}
         </select>
       </label>
@@ -67,10 +68,10 @@ export function ClustersList({ tally }: { tally: ClusterTally }) {
             <ul className="mt-1.5 flex flex-wrap gap-1.5">
               {c.caseNumbers.slice(0, 12).map((n) => (
                 <li key={n}>
-                  <Link href={`/cases/${n}`} className="inline-flex h-7 items-center rounded-md bg-surface-2 px-2 text-xs font-medium text-ink-2 ring-1 ring-line tabular hover:text-accent hover:ring-accent">{n}</Link>
+                  <Link href={`/cases/${n}`} className="inline-flex h-11 items-center rounded-md bg-surface-2 px-2.5 text-xs lg:h-7 lg:px-2 font-medium text-ink-2 ring-1 ring-line tabular hover:text-accent hover:ring-accent">{n}</Link>
                 </li>
               ))}
-              {c.size > 12 ? <li className="inline-flex h-7 items-center px-1 text-xs text-muted">newest 12 of {c.size}</li> : null}
+              {c.size > 12 ? <li className="inline-flex h-11 items-center px-1 lg:h-7 text-xs text-muted">newest 12 of {c.size}</li> : null}
             </ul>
           </li>
         ))}

@@ -71,9 +71,9 @@ export function FilterBar({ filters, sites, classes, triggers, siteLimit, curren
           </Select>
           {preset === "custom" ? (
             <div className="mt-2 flex items-center gap-2">
-              <input aria-label="From month" type="month" className="h-10 min-w-0 flex-1 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink" value={filters.from ?? ""} max={filters.to} onChange={(e) => e.target.value && go({ from: e.target.value })} />
+              <input aria-label="From month" type="month" className="h-11 lg:h-10 min-w-0 flex-1 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink" value={filters.from ?? ""} max={filters.to} onChange={(e) => e.target.value && go({ from: e.target.value })} />
               <span className="text-muted">–</span>
-              <input aria-label="To month" type="month" className="h-10 min-w-0 flex-1 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink" value={filters.to ?? ""} min={filters.from} onChange={(e) => e.target.value && go({ to: e.target.value })} />
+              <input aria-label="To month" type="month" className="h-11 lg:h-10 min-w-0 flex-1 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink" value={filters.to ?? ""} min={filters.from} onChange={(e) => e.target.value && go({ to: e.target.value })} />
             </div>
           ) : null}
         </div>
@@ -105,7 +105,7 @@ export function FilterBar({ filters, sites, classes, triggers, siteLimit, curren
         <div className="col-span-2 flex items-end justify-between gap-3 md:col-span-4 xl:col-span-1 xl:justify-end">
           <p aria-live="polite" className="text-xs text-muted">{pending ? "Updating…" : active ? `${active} filter${active === 1 ? "" : "s"} on` : "No filters"}</p>
           {active ? (
-            <button type="button" className="h-10 rounded-lg px-3 text-sm font-medium text-accent hover:bg-accent-soft" onClick={() => go({ from: undefined, to: undefined, site: undefined, class: undefined, trigger: undefined })}>
+            <button type="button" className="h-11 rounded-lg px-3 text-sm font-medium text-accent lg:h-10 hover:bg-accent-soft" onClick={() => go({ from: undefined, to: undefined, site: undefined, class: undefined, trigger: undefined })}>
               Clear
             </button>
           ) : null}

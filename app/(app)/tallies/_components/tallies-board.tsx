@@ -51,7 +51,7 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
           footer={
             lowShops.length ? (
               <p><span className="font-semibold text-danger">Training signal:</span> {lowShops.map((s) => s.label).join(", ")} {lowShops.length === 1 ? "has" : "have"} a confirmed share clearly below the rest.</p>
-            ) : data.byShop.rows.length > 1 ? <p className="text-muted">No shop's confirmed share differs clearly from the others.</p> : undefined
+            ) : data.byShop.rows.length > 1 ? <p className="text-muted">No shop&rsquo;s confirmed share differs clearly from the others.</p> : undefined
           }
         >
           <ConfirmationChart table={data.byShop} nameWidth={170} />
@@ -85,7 +85,7 @@ export function TalliesBoard({ data, scopeWords }: { data: TalliesData; scopeWor
             {series ? <ControlChart months={data.monthly.months} series={series} partialMonth={data.monthly.partialMonth} /> : null}
             <ChartLegend items={CONTROL_LEGEND} />
             <details className="mt-3 text-sm">
-              <summary className="cursor-pointer text-accent">All series: limits and months beyond</summary>
+              <summary className="flex min-h-11 cursor-pointer items-center text-accent lg:min-h-0">All series: limits and months beyond</summary>
               <div className="mt-2 overflow-x-auto">
                 <table className="w-full text-sm">
                   <tbody>

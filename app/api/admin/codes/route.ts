@@ -1,6 +1,6 @@
 // GET /api/admin/codes?list= - a classification list with retired codes and usage; POST - add a code
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { codeUsageCounts, getCodeEntry, insertCodeEntry, listCodeEntries } from "@/db/queries/code-entries";
 import { familyOfCode } from "@/lib/classification/damage-families";
 import { conflict } from "@/lib/http/errors";

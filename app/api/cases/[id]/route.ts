@@ -1,6 +1,6 @@
 // GET /api/cases/:id - one case with findings; PATCH - save a section (field, teardown, verdict) at a version
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { getCaseDetail } from "@/db/queries/case-read";
 import { saveSection } from "@/lib/cases/service";
 import { SECTION_PERMISSIONS } from "@/lib/cases/workflow";

@@ -1,5 +1,5 @@
 // GET /api/cases/export - the filtered case list as a CSV download (every matching case, up to the cap)
-import { streamCasesCsv } from "@/db/queries/case-list";
+import { caseListCsv } from "@/lib/cases/list-service";
 import { cappedNote, exportFileName } from "@/lib/cases/list-csv";
 import { parseListParams } from "@/lib/cases/list-params";
 import { withRole } from "@/lib/http/handler";
@@ -8,7 +8,7 @@ import { audit } from "@/lib/security/audit";
 // Same reach as the list: an inspector's file holds only the cases the inspector may read.
 export const GET = withRole("case:read", async ({ req, user }) => {
   const { filters, sort } = parseListParams(req.nextUrl.searchParams);
-  const csv = await streamCasesCsv(filters, sort, user);
+  const csv = await caseListCsv(filters, sort, user);
   const name = exportFileName(new Date());
   const headers: Record<string, string> = {
     "content-type": "text/csv; charset=utf-8; header=present",

@@ -1,6 +1,6 @@
 // GET /api/me/notices - my notice switches; PATCH - turn some of my notices on or off
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { getNoticePrefs, saveNoticePrefs } from "@/db/queries/notices";
 import { parseJson, withRole } from "@/lib/http/handler";
 import { mergeNoticePrefs, NOTICE_KIND_CODES, noticeKindsFor, type NoticeKind } from "@/lib/notify/notice-kinds";

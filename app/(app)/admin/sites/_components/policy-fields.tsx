@@ -3,12 +3,18 @@ import { useId } from "react";
 import { Field, Input } from "@/components/ui/field";
 import { formatIn, formatMmFromIn, limitText, readLimit, type PolicyUnit } from "@/lib/admin/policy-units";
 import { DEFAULT_END_PLAY_POLICY } from "@/lib/field/end-play-policy";
+import { DEFAULT_PLAUSIBLE_MAX_IN } from "@/lib/field/plausibility";
 import type { PolicyKey } from "./types";
 
 const FIELDS: { key: PolicyKey; label: string; hint: string }[] = [
   { key: "endPlayMaxIn", label: "Remove when end play is more than", hint: "Mounted end play above this removes the bearing." },
   { key: "dialSpreadIn", label: "Dial-indicator trials may differ by", hint: "Trials further apart than this are flagged for a re-check." },
   { key: "tapeSpreadIn", label: "Tape trials may differ by", hint: "The same for readings taken with a tape." },
+  {
+    key: "plausibleMaxIn",
+    label: "Largest believable reading",
+    hint: "A trial above this is refused until corrected or confirmed as typed: a wrong unit or a missing decimal point, not end play.",
+  },
 ];
 
 export type PolicyTexts = Record<PolicyKey, string>;
@@ -18,10 +24,11 @@ export function policyTexts(values: Record<PolicyKey, number>, unit: PolicyUnit)
     endPlayMaxIn: limitText(values.endPlayMaxIn, unit),
     dialSpreadIn: limitText(values.dialSpreadIn, unit),
     tapeSpreadIn: limitText(values.tapeSpreadIn, unit),
+    plausibleMaxIn: limitText(values.plausibleMaxIn, unit),
   };
 }
 
-/** The three limits, typed in inches or millimetres, each shown in the other unit as you type. */
+/** The four limits, typed in inches or millimetres, each shown in the other unit as you type. */
 export function PolicyFields({ texts, unit, errors, onChange, onUnit }: {
   texts: PolicyTexts;
   unit: PolicyUnit;
@@ -43,7 +50,7 @@ export function PolicyFields({ texts, unit, errors, onChange, onUnit }: {
               role="radio"
               aria-checked={unit === u}
               onClick={() => onUnit(u)}
-              className={`h-8 min-w-12 rounded-md px-3 font-medium ${unit === u ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}
+              className={`h-11 min-w-12 rounded-md px-3 font-medium lg:h-8 ${unit === u ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}
             >
               {u === "in" ? "inches" : "mm"}
             </button>
@@ -75,7 +82,7 @@ export function PolicyFields({ texts, unit, errors, onChange, onUnit }: {
       })}
       <p className="text-xs text-muted">
         Tearline&apos;s starting values: {formatIn(DEFAULT_END_PLAY_POLICY.maxIn)} in ({formatMmFromIn(DEFAULT_END_PLAY_POLICY.maxIn)} mm), trials within{" "}
-        {formatIn(DEFAULT_END_PLAY_POLICY.dialSpreadIn)} in on a dial and 1/64 in on a tape.
+        {formatIn(DEFAULT_END_PLAY_POLICY.dialSpreadIn)} in on a dial and 1/64 in on a tape, readings believable up to {formatIn(DEFAULT_PLAUSIBLE_MAX_IN)} in.
       </p>
     </fieldset>
   );

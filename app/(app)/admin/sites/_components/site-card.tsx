@@ -68,10 +68,11 @@ export function SiteCard({ site }: { site: SiteView }) {
           <SiteForm site={site} onDone={(message) => { setEditing(false); if (message) setNote({ tone: "ok", text: message }); }} />
         ) : (
           <>
-            <dl className="grid grid-cols-3 gap-3 rounded-lg bg-surface-2 px-3 py-3 text-sm">
+            <dl className="grid grid-cols-2 gap-3 rounded-lg bg-surface-2 px-3 py-3 text-sm sm:grid-cols-4">
               <Limit label="Removes above" inches={site.endPlayMaxIn} testId={`limit-${site.code}`} />
               <Limit label="Dial trials within" inches={site.dialSpreadIn} testId={`dial-${site.code}`} />
               <Limit label="Tape trials within" inches={site.tapeSpreadIn} testId={`tape-${site.code}`} />
+              <Limit label="Believable up to" inches={site.plausibleMaxIn} testId={`plausible-${site.code}`} />
             </dl>
             <div className="flex flex-wrap items-center justify-between gap-2 text-xs text-muted">
               <span>

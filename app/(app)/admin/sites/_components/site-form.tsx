@@ -7,7 +7,8 @@ import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
 import type { PolicyUnit } from "@/lib/admin/policy-units";
 import { DEFAULT_END_PLAY_POLICY } from "@/lib/field/end-play-policy";
-import { SITE_KIND_LABELS, SITE_KINDS, siteCreateSchema, sitePatchSchema } from "@/lib/validation/site";
+import { DEFAULT_PLAUSIBLE_MAX_IN } from "@/lib/field/plausibility";
+import { policyOrderProblems, SITE_KIND_LABELS, SITE_KINDS, siteCreateSchema, sitePatchSchema } from "@/lib/validation/site";
 import { PolicyFields, policyTexts, readPolicy } from "./policy-fields";
 import type { SiteView } from "./types";
 import { ErrorSummary } from "@/components/ui/error-summary";
@@ -18,7 +19,7 @@ function readCost(text: string): number | null {
   return t === "" ? null : Number(t);
 }
 
-const DEFAULTS = { endPlayMaxIn: DEFAULT_END_PLAY_POLICY.maxIn, dialSpreadIn: DEFAULT_END_PLAY_POLICY.dialSpreadIn, tapeSpreadIn: DEFAULT_END_PLAY_POLICY.tapeSpreadIn };
+const DEFAULTS = { endPlayMaxIn: DEFAULT_END_PLAY_POLICY.maxIn, dialSpreadIn: DEFAULT_END_PLAY_POLICY.dialSpreadIn, tapeSpreadIn: DEFAULT_END_PLAY_POLICY.tapeSpreadIn, plausibleMaxIn: DEFAULT_PLAUSIBLE_MAX_IN };
 
 /** Adds a site (no `site`) or edits one; the limits can be typed in either unit. */
 export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?: string) => void }) {
@@ -53,6 +54,9 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
     const checked = (site ? sitePatchSchema : siteCreateSchema).safeParse(input);
     const local: Record<string, string> = { ...policy.errors };
     if (!checked.success) for (const issue of checked.error.issues) local[String(issue.path[0])] ??= issue.message;
+    const endPlayMaxIn = policy.values.endPlayMaxIn ?? site?.endPlayMaxIn ?? DEFAULTS.endPlayMaxIn;
+    const plausibleMaxIn = policy.values.plausibleMaxIn ?? site?.plausibleMaxIn ?? DEFAULTS.plausibleMaxIn;
+    if (!local.endPlayMaxIn && !local.plausibleMaxIn) Object.assign(local, policyOrderProblems({ endPlayMaxIn, plausibleMaxIn }));
     if (Object.keys(local).length) {
       setErrors(local);
       setNote({ tone: "danger", text: "Check the marked fields." });

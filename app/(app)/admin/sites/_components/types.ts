@@ -12,9 +12,10 @@ export type SiteView = {
   endPlayMaxIn: number;
   dialSpreadIn: number;
   tapeSpreadIn: number;
+  plausibleMaxIn: number;
   /** What one removal costs here, USD; null when not set. */
   removalCostUsd: number | null;
   usage: { cases: number; users: number };
 };
 
-export type PolicyKey = "endPlayMaxIn" | "dialSpreadIn" | "tapeSpreadIn";
+export type PolicyKey = "endPlayMaxIn" | "dialSpreadIn" | "tapeSpreadIn" | "plausibleMaxIn";

@@ -24,7 +24,7 @@ export function CaseExtras({ c, user }: { c: CaseDetail; user: CurrentUser }) {
         </Card>
       ) : null}
       <section id="photos" className="scroll-mt-24">
-        <Card title="Photos" action={<Link href={`/cases/${c.number}/photos`} className="text-sm text-accent hover:underline">All photos</Link>}>
+        <Card title="Photos" action={<Link href={`/cases/${c.number}/photos`} className="inline-flex min-h-11 items-center text-sm text-accent hover:underline lg:min-h-0">All photos</Link>}>
           <CasePhotos caseId={c.id} canUpload={can(user.role, "photo:upload") && !signed} canDelete={can(user.role, "photo:delete") && !signed} readOnly={signed} findings={findingOptions} maxBytes={photoLimits().maxBytes} />
         </Card>
       </section>

@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { downloadBlob } from "@/components/charts/export-image";
 import { FLEET_COLUMNS, FLEET_TEMPLATE } from "@/lib/tallies/fleet-csv";
 import type { FleetBatch } from "@/lib/tallies/life-data";
+import { formatDay } from "@/lib/dates";
 
 type RowError = { row: number; column: string | null; message: string };
 type Outcome = { tone: "ok" | "danger"; text: string; rows?: RowError[]; more?: number } | null;
@@ -45,7 +46,7 @@ export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
     <div className="space-y-3" data-fleet-upload>
       <p className="text-sm text-ink-2">
         {batch ? (
-          <>In use: <span className="font-medium text-ink">{batch.units.toLocaleString("en-US")} units</span>, uploaded {new Date(batch.uploadedAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}{batch.uploadedBy ? ` by ${batch.uploadedBy}` : ""}.</>
+          <>In use: <span className="font-medium text-ink">{batch.units.toLocaleString("en-US")} units</span>, uploaded {formatDay(batch.uploadedAt)}{batch.uploadedBy ? ` by ${batch.uploadedBy}` : ""}.</>
         ) : (
           "No fleet list yet: analyses count only removed bearings."
         )}
@@ -54,12 +55,12 @@ export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
         CSV with a header row: {FLEET_COLUMNS.join(", ")}. Dates as YYYY-MM-DD; months are worked out from mounted_on and as_of when left empty. A new upload replaces the list in use; a file with any bad row stores nothing.
       </p>
       <div className="flex flex-wrap items-center gap-2">
-        <label className="inline-flex h-10 cursor-pointer items-center rounded-lg border border-dashed border-line-strong bg-surface-2 px-3 text-sm text-ink-2 hover:border-accent">
+        <label className="inline-flex h-11 cursor-pointer lg:h-10 items-center rounded-lg border border-dashed border-line-strong bg-surface-2 px-3 text-sm text-ink-2 hover:border-accent">
           <input ref={input} type="file" accept=".csv,text/csv" className="sr-only" aria-label="Fleet list CSV" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
           {file ? file.name : "Choose a CSV file…"}
         </label>
         <Button onClick={upload} disabled={!file || busy}>{busy ? "Checking…" : "Upload fleet list"}</Button>
-        <button type="button" className="h-10 px-2 text-sm text-accent hover:underline" onClick={() => downloadBlob(new Blob([FLEET_TEMPLATE], { type: "text/csv" }), "tearline-fleet-template.csv")}>
+        <button type="button" className="h-11 px-2 text-sm lg:h-10 text-accent hover:underline" onClick={() => downloadBlob(new Blob([FLEET_TEMPLATE], { type: "text/csv" }), "tearline-fleet-template.csv")}>
           Template
         </button>
       </div>

@@ -43,7 +43,7 @@ export function LifeBoard({ data, canUpload, scopeWords }: { data: LifeData; can
           controls={
             <div role="group" aria-label="Life measured in" className="inline-flex rounded-lg bg-surface-2 p-0.5 ring-1 ring-line">
               {(["months", "miles"] as const).map((m) => (
-                <Link key={m} href={href({ measure: m === "months" ? null : m })} scroll={false} aria-current={unit === m ? "true" : undefined} className={`inline-flex h-8 items-center rounded-md px-3 text-sm font-medium ${unit === m ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}>
+                <Link key={m} href={href({ measure: m === "months" ? null : m })} scroll={false} aria-current={unit === m ? "true" : undefined} className={`inline-flex h-11 items-center rounded-md px-3 lg:h-8 text-sm font-medium ${unit === m ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}>
                   {m === "months" ? "Months" : "Miles"}
                 </Link>
               ))}

@@ -18,7 +18,7 @@ export function ParameterTable({ detail, unit }: { detail: LifeDetail; unit: str
     { name: `B10 life (${unit})`, mle: m?.b10, fisher: m?.fisher.b10, lr: lr?.b10, rr: rr?.b10, f: life },
   ];
   return (
-    <div className="overflow-x-auto rounded-lg border border-line">
+    <div className="overflow-x-auto rounded-lg border border-line" tabIndex={0} role="region" aria-label="Weibull parameters with 95% bounds">
       <table className="w-full border-collapse text-sm" data-life-parameters>
         <caption className="sr-only">Weibull parameters with 95% bounds</caption>
         <thead className="bg-surface-2 text-xs text-muted">

@@ -1,6 +1,6 @@
 // DELETE /api/admin/invitations/:id - withdraw a pending invitation
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { revokeInvitation } from "@/db/queries/invitations";
 import { notFound } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";

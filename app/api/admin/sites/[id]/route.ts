@@ -1,11 +1,11 @@
 // PATCH /api/admin/sites/:id - edit a site, its end-play policy or active flag; DELETE - only an unused site
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { deleteSite, findSiteByCode, getSite, siteUsage, updateSite } from "@/db/queries/sites";
-import { conflict, notFound } from "@/lib/http/errors";
+import { badRequest, conflict, notFound } from "@/lib/http/errors";
 import { parseJson, withRole } from "@/lib/http/handler";
 import { audit } from "@/lib/security/audit";
-import { sitePatchSchema } from "@/lib/validation/site";
+import { policyOrderProblems, sitePatchSchema } from "@/lib/validation/site";
 
 const idSchema = z.string().uuid("Site id must be a UUID.");
 
@@ -17,6 +17,8 @@ export const PATCH = withRole<{ id: string }>("admin:sites", async ({ req, param
   if (input.code && input.code !== site.code && (await findSiteByCode(input.code))) {
     throw conflict(`A site with the code ${input.code} already exists.`, { fields: { code: "This code is taken." } });
   }
+  const order = policyOrderProblems({ endPlayMaxIn: input.endPlayMaxIn ?? site.endPlayMaxIn, plausibleMaxIn: input.plausibleMaxIn ?? site.plausibleMaxIn });
+  if (order.plausibleMaxIn) throw badRequest(order.plausibleMaxIn, { fields: order });
   const updated = await updateSite(id, input);
   await audit("site-policy", user, { subject: site.code, headers: req.headers, detail: { changed: Object.keys(input) } });
   return NextResponse.json({ site: updated });

@@ -1,6 +1,6 @@
 // PATCH /api/admin/users/:id - change a person's role (and home site)
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { LastAdminError, setRoleIn, withAdminsLocked } from "@/db/queries/admin-guard";
 import { getUserById, setUserSite } from "@/db/queries/users";
 import { badRequest, HttpError, notFound } from "@/lib/http/errors";

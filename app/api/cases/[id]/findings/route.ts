@@ -1,6 +1,6 @@
 // POST /api/cases/:id/findings - add a teardown finding at the case's current version
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { addCaseFinding } from "@/lib/cases/service";
 import { parseJson } from "@/lib/http/handler";
 import { withCase } from "@/lib/http/with-case";

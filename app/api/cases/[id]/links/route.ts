@@ -1,6 +1,6 @@
 // GET /api/cases/:id/links - related cases; POST - link a case both ways; DELETE ?relatedId= - unlink both ways
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { addCaseLink, listCaseLinks, removeCaseLink } from "@/db/queries/case-links";
 import { loadReadableCase } from "@/lib/cases/service";
 import { badRequest } from "@/lib/http/errors";

@@ -1,7 +1,7 @@
 // GET /api/cases/:id/signature - what a signature covers now (hash) and, once signed, whether it still matches
 // POST /api/cases/:id/signature - sign the verdict: password again, meaning confirmed, hash of what was shown
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { SIGNATURE_MEANING, contentHash } from "@/lib/cases/signature-content";
 import { checkSignature, contentOf, signCase } from "@/lib/cases/signature-service";
 import { parseJson } from "@/lib/http/handler";

@@ -1,6 +1,6 @@
 // POST /api/cases/:id/transitions - receive, propose, return or reopen (role and stage checked); signing has its own step
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { transitionCase } from "@/lib/cases/service";
 import { ACTIONS, WORKFLOW } from "@/lib/cases/workflow";
 import { badRequest } from "@/lib/http/errors";

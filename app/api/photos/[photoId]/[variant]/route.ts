@@ -1,5 +1,5 @@
 // GET /api/photos/:photoId/:variant - the bytes of a photo (thumb, screen or original) for someone allowed to see its case
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { notFound } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";
 import { openStoredObject } from "@/lib/photos/object-store";

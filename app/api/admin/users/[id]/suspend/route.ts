@@ -1,6 +1,6 @@
 // POST /api/admin/users/:id/suspend - suspend an account (signs it out everywhere); DELETE - restore it
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { getUserById } from "@/db/queries/users";
 import { auth } from "@/lib/auth/auth";
 import { LastAdminError, suspendIn, withAdminsLocked } from "@/db/queries/admin-guard";

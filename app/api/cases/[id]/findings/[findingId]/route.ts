@@ -1,6 +1,6 @@
 // PATCH /api/cases/:id/findings/:findingId - change a finding; DELETE - remove it (?version=N)
 import { NextResponse } from "next/server";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { editCaseFinding, removeCaseFinding } from "@/lib/cases/service";
 import { parseJson, parseQuery } from "@/lib/http/handler";
 import { withCase } from "@/lib/http/with-case";

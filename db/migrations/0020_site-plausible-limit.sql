@@ -1,0 +1,1 @@
+ALTER TABLE "sites" ADD COLUMN "plausible_max_in" numeric(8, 5) DEFAULT 0.25 NOT NULL;
