@@ -1,7 +1,7 @@
 // The removal-yield roll-ups (yield_cells, yield_alarm_cells, keep_gaps) are kept by triggers on
 // cases. After inserts, single and many-row updates, position changes and deletes, each roll-up must
 // equal a full recount from the cases, made here with the page's own reading of the trigger detail.
-import { eq, inArray } from "drizzle-orm";
+import { and, eq, inArray, isNotNull } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db, pool, t } from "../../support/db";
 import { createCase, userId } from "../../support/factories";
@@ -103,6 +103,20 @@ describe("removal-yield roll-ups", () => {
   it("equal a full recount after deletes", async () => {
     await db.delete(t.cases).where(inArray(t.cases.id, ids.slice(0, 25)));
     ids = ids.slice(25);
+    await expectExact();
+  });
+
+  it("equal a full recount after signed cases are reopened, then signed again with another outcome", async () => {
+    const signed = await db.select({ id: t.cases.id }).from(t.cases)
+      .where(and(eq(t.cases.bearingClass, CLASS), eq(t.cases.status, "signed"), isNotNull(t.cases.removalConfirmed)));
+    const chosen = signed.slice(0, 8).map((c) => c.id);
+    expect(chosen.length).toBeGreaterThan(3);
+    // Reopening moves a signed case back to the bench and keeps its verdict (lib/cases/service.ts).
+    await db.update(t.cases).set({ status: "bench", signedAt: null, signedBy: null }).where(inArray(t.cases.id, chosen));
+    await expectExact();
+    for (const [i, id] of chosen.entries()) {
+      await db.update(t.cases).set({ status: "signed", signedAt: new Date(), removalConfirmed: i % 2 ? "confirmed" : "no-defect" }).where(eq(t.cases.id, id));
+    }
     await expectExact();
   });
 
