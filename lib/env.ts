@@ -1,5 +1,5 @@
 // The server's environment, validated once; a missing value names itself instead of failing later.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 
 const schema = z.object({
   DATABASE_URL: z.string().url(),

@@ -1,6 +1,6 @@
 // The case list's state as it lives in the URL: filters, sort and page. One schema reads it for the
 // API, the export and the page, so a shared link shows the same cases everywhere.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { BEARING_CLASSES } from "./schemas";
 import { CASE_COLUMN_IDS, columnInfo, type CaseColumnId } from "./list-columns";
 import { STAGES, type Stage } from "./stages";

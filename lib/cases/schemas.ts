@@ -1,5 +1,5 @@
 // The shapes of a case's sections as the API accepts them. Clear messages: a shop mechanic reads them.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { COMPONENTS, CONFIDENCES, DISPOSITIONS, LUBRICANT_CONDITIONS, ZONES } from "@/lib/classification";
 import { VISUAL_FINDINGS } from "@/lib/field";
 import { BEARING_CLASSES } from "./bearing-classes";

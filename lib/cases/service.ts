@@ -1,6 +1,6 @@
 // Case operations as the API and pages call them: access, stage rules, computed fields, history.
 import "server-only";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { addFinding, changeFinding, countFindings, findingCode, insertCase, insertCaseOnce, updateCase } from "@/db/queries/case-write";
 import { codeStates, siteKinds } from "@/db/queries/reference-rows";
 import { can } from "@/lib/auth/permissions";

@@ -2,7 +2,7 @@
 // means, and gives their password again. The second-signer and stage rules are the workflow's own.
 import "server-only";
 import { verifyPassword } from "better-auth/crypto";
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { passwordHashOf, signedParts } from "@/db/queries/signature";
 import { addFailure, clearCounter, readCounters } from "@/db/queries/sign-in-failures";
 import type { Case } from "@/db/schema";

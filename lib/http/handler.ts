@@ -1,7 +1,7 @@
 // Wraps a route handler so none can forget the role check, input validation or error shape.
 import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
-import { z, type ZodType } from "zod";
+import { z, type ZodType } from "@/lib/validation/zod";
 import { requireApiUser, type CurrentUser } from "@/lib/auth/session";
 import type { Permission } from "@/lib/auth/permissions";
 import { JSON_MAX_BYTES, readTextLimited } from "./body";

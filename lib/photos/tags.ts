@@ -1,5 +1,5 @@
 // The tags a photo carries: which part, which row, where on the clock, which finding, a caption.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { COMPONENTS, ROWS, type ComponentInfo } from "@/lib/classification/components";
 
 const byCode = new Map<string, ComponentInfo>(COMPONENTS.map((c) => [c.code, c]));

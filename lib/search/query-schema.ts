@@ -1,7 +1,7 @@
 // What a search asks for, as it travels in the URL: free text, multi-select facets
 // (comma-separated, so a link holds the whole search), a minimum severity, a date range,
 // a sort and a page. The API refuses what it cannot read; the page drops it and says so.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 
 export const MULTI_FACETS = ["trigger", "cause", "code", "component", "class", "site", "status"] as const;
 export type MultiFacet = (typeof MULTI_FACETS)[number];

@@ -1,5 +1,5 @@
 // The audit page's filters, shared by the page and its API route.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { AUDIT_KIND_VALUES } from "./audit-kinds";
 
 const day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-03-31.").optional().or(z.literal("").transform(() => undefined));

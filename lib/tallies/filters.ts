@@ -1,6 +1,6 @@
 // The filters every tally takes (period, site, bearing class, trigger, recurrence settings),
 // read from a URL query so a filtered view can be shared as a link.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 
 const month = z
   .string()

@@ -1,6 +1,6 @@
 // Reads an uploaded fleet list (bearings still in service). Every row is checked; any error
 // means nothing is stored, and each error names its row as a spreadsheet would number it.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 import { monthsBetween } from "@/lib/field/service-life";
 import { parseCsv } from "./csv";
 

@@ -1,5 +1,5 @@
 // The removal-yield page's own settings on top of the Tallies filters.
-import { z } from "zod";
+import { z } from "@/lib/validation/zod";
 
 const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
 

@@ -40,6 +40,23 @@ test("an incomplete removal shows a summary at the top with a link per field, an
   await page.context().close();
 });
 
+test("the inspector reopens a filed report for correction and the form loads with what was filed", async () => {
+  const inspector = await as("inspector");
+  const base = await fieldReport();
+  const res = await inspector.request("POST", "/api/cases", base);
+  expect(res.status).toBe(201);
+  const { case: filed } = (await res.json()) as { case: { number: string } };
+  const page = await signedInPage(browser, "inspector", PHONE);
+  await page.goto(`/cases/${filed.number}`);
+  await page.locator("h1").waitFor();
+  // The case page itself carries no editor; it loads on demand for the correction.
+  expect(await page.locator("#carMark").count()).toBe(0);
+  await page.goto(`/cases/${filed.number}?edit=field`);
+  await expect.poll(() => page.locator("#carNumber").inputValue(), { timeout: 15_000 }).toBe(base.carNumber);
+  await page.screenshot({ path: "/tmp/shots/e2e-field-edit-phone.png", fullPage: false });
+  await page.context().close();
+});
+
 test("a report filed with safety confirmations unticked shows the flag to the engineer", async () => {
   const inspector = await as("inspector");
   const base = await fieldReport();

@@ -7,7 +7,7 @@ import { HistoryList } from "@/components/case/history-list";
 import { TeardownForm } from "@/components/case/teardown-form";
 import { VerdictForm } from "@/components/case/verdict-form";
 import { WorkflowBar } from "@/components/case/workflow-bar";
-import lazyComponent from "next/dynamic";
+import { RemovalFormLazy as RemovalForm } from "@/components/removal/removal-form-lazy";
 import { getCaseDetail } from "@/db/queries/case-read";
 import { readableHistory } from "@/lib/cases/service";
 import { listCodeEntries } from "@/db/queries/code-entries";
@@ -25,9 +25,6 @@ import { toDraft } from "./_components/to-draft";
 import { SafetyFlagNote } from "./_components/safety-flag-note";
 import { safetyFlagOf } from "@/lib/cases/safety-flag";
 import { formatDay } from "@/lib/dates";
-
-// The field-report editor (and the validation it carries) loads only on a draft someone may edit.
-const RemovalForm = lazyComponent(() => import("@/components/removal/removal-form").then((m) => m.RemovalForm));
 
 export const dynamic = "force-dynamic";
 
