@@ -10,3 +10,4 @@ export * from "./mail";
 export * from "./fleet";
 export * from "./search";
 export * from "./security";
+export * from "./yield-cells";

@@ -7,7 +7,7 @@ import type { ProcedureFault } from "./field-parts";
 export type RemovalSite = "MJC" | "PYC" | "OSW";
 
 /** The stories the demo casebook tells; each shows up in the charts and searches. */
-export type Story = "pellham-hand-roll" | "water-run" | "arc-cluster" | "bad-lot" | "repeat-car";
+export type Story = "pellham-hand-roll" | "water-run" | "arc-cluster" | "bad-lot" | "repeat-car" | "missed-call";
 
 export type CaseSpec = {
   key: string;
@@ -19,6 +19,8 @@ export type CaseSpec = {
   status: Stage;
   story?: Story;
   car?: Car;
+  /** The axle and side, when a story needs the same position again. */
+  position?: { axle: number; side: "L" | "R" };
   bearing?: BearingOptions;
   procedureFault?: ProcedureFault;
   /** The wayside alarm was not confirmed on inspection; the car came out under the owner's rule. */

@@ -6,6 +6,7 @@ import { nextCaseNumber } from "../../db/queries/case-number";
 import { buildCase, type BuiltCase } from "./case-builder";
 import { planDemoCases } from "./demo-plan";
 import { buildHistory, type EventDraft } from "./history";
+import { buildYieldStories } from "./demo-yield-stories";
 import { createRng } from "./prng";
 import { loadSeedContext } from "./seed-context";
 
@@ -25,6 +26,13 @@ export async function seedDemoCases(db: Db, seed = DEMO_SEED): Promise<DemoSeedR
     const teardownDone = spec.status !== "bench" || benchSeen++ % 2 === 0;
     const c = buildCase(rng, spec, ctx, teardownDone);
     const events = buildHistory(rng, spec, c, ctx);
+    c.values.version = events.length;
+    built.push({ key: spec.key, c, events });
+  }
+  // The removal-yield stories draw on their own, so the cases above stay as they were.
+  const storyRng = createRng(seed + 17);
+  for (const { spec, built: c } of buildYieldStories(storyRng, ctx)) {
+    const events = buildHistory(storyRng, spec, c, ctx);
     c.values.version = events.length;
     built.push({ key: spec.key, c, events });
   }

@@ -1,35 +1,34 @@
-// Alarm readings, acoustic levels, detectors and triggers against the teardown outcome, counted in
-// PostgreSQL over signed verdicts within the viewer's reach and the Tallies filters.
+// Alarm readings, acoustic levels, detectors and triggers against the teardown outcome, summed in
+// PostgreSQL from the yield roll-ups (db/schema/yield-cells.ts) within the viewer's reach and the
+// Tallies filters. The money on no-defect removals is each cell's count at its removal site's cost.
 import "server-only";
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
-import { cases, sites } from "@/db/schema";
+import { sites, yieldAlarmCells as a, yieldCells as c } from "@/db/schema";
 import type { TallyFilters } from "@/lib/tallies/filters";
 import type { DetectorCell, HotCell, OutcomeCell } from "@/lib/tallies/yield-counts";
-import { tallyWhere, type TallyViewer } from "./scope";
+import type { TallyViewer } from "./scope";
+import { cellWhere } from "./yield-scope";
 
-const num = (key: string) => sql`(${cases.triggerDetail}->>${key})::numeric`;
-const isNum = (key: string) => sql`jsonb_typeof(${cases.triggerDetail}->${key}) = 'number'`;
-const recorded = sql`${cases.removalConfirmed} is not null`;
+type Cells = typeof a | typeof c;
 
-/** The outcome sums every grouping shares; cost comes from the removal site's policy. */
-const outcomeColumns = sql`
-  count(*) filter (where ${recorded})::int as n,
-  count(*) filter (where ${cases.removalConfirmed} = 'confirmed')::int as confirmed,
-  count(*) filter (where ${cases.removalConfirmed} = 'no-defect')::int as no_defect,
-  coalesce(sum(${sites.removalCostUsd}) filter (where ${cases.removalConfirmed} = 'no-defect'), 0)::float8 as cost_usd,
-  count(*) filter (where ${cases.removalConfirmed} = 'no-defect' and ${sites.removalCostUsd} is null)::int as uncosted`;
+/** The outcome sums every grouping shares, over cells matching `where` (a filter on the cells). */
+const outcomeColumns = (t: Cells, where = sql`true`) => sql`
+  coalesce(sum(${t.n}) filter (where ${where} and ${t.outcome} is not null), 0)::int as n,
+  coalesce(sum(${t.n}) filter (where ${where} and ${t.outcome} = 'confirmed'), 0)::int as confirmed,
+  coalesce(sum(${t.n}) filter (where ${where} and ${t.outcome} = 'no-defect'), 0)::int as no_defect,
+  coalesce(sum(${t.n} * ${sites.removalCostUsd}) filter (where ${where} and ${t.outcome} = 'no-defect'), 0)::float8 as cost_usd,
+  coalesce(sum(${t.n}) filter (where ${where} and ${t.outcome} = 'no-defect' and ${sites.removalCostUsd} is null), 0)::int as uncosted`;
 
 type OutcomeRow = { key: string | null; n: number; confirmed: number; no_defect: number; cost_usd: number; uncosted: number };
 const toCell = (r: OutcomeRow): OutcomeCell => ({ key: r.key ?? "", n: r.n, confirmed: r.confirmed, noDefect: r.no_defect, costUsd: r.cost_usd, uncosted: r.uncosted });
 
 export async function hotReadings(filters: TallyFilters, viewer: TallyViewer): Promise<{ cells: HotCell[]; withoutReading: number }> {
   const { rows } = await db.execute<{ margin: number | null; reading: number | null; confirmed: number; n: number }>(sql`
-    select case when ${isNum("readingF")} and ${isNum("thresholdF")} then round(${num("readingF")} - ${num("thresholdF")})::int end as margin,
-      case when ${isNum("readingF")} then round(${num("readingF")})::int end as reading,
-      count(*) filter (where ${cases.removalConfirmed} = 'confirmed')::int as confirmed, count(*)::int as n
-    from ${cases}
-    where ${tallyWhere(filters, viewer, { signedOnly: true })} and ${cases.trigger} = 'wayside-hot' and ${recorded}
+    select ${a.margin} as margin, ${a.reading} as reading,
+      coalesce(sum(${a.n}) filter (where ${a.outcome} = 'confirmed'), 0)::int as confirmed, sum(${a.n})::int as n
+    from ${a}
+    where ${cellWhere(a, filters, viewer)} and ${a.signed} and ${a.trigger} = 'wayside-hot' and ${a.outcome} is not null
     group by 1, 2`);
   const cells: HotCell[] = [];
   let withoutReading = 0;
@@ -42,37 +41,38 @@ export async function hotReadings(filters: TallyFilters, viewer: TallyViewer): P
 
 export async function acousticLevels(filters: TallyFilters, viewer: TallyViewer): Promise<OutcomeCell[]> {
   const { rows } = await db.execute<OutcomeRow>(sql`
-    select coalesce(nullif(trim(${cases.triggerDetail}->>'alarmLevel'), ''), 'not recorded') as key, ${outcomeColumns}
-    from ${cases} left join ${sites} on ${sites.id} = ${cases.siteId}
-    where ${tallyWhere(filters, viewer, { signedOnly: true })} and ${cases.trigger} = 'wayside-acoustic'
+    select ${a.alarmLevel} as key, ${outcomeColumns(a)}
+    from ${a} left join ${sites} on ${sites.id} = ${a.siteId}
+    where ${cellWhere(a, filters, viewer)} and ${a.signed} and ${a.trigger} = 'wayside-acoustic'
     group by 1 order by 1`);
   return rows.map(toCell);
 }
 
 /** Every wayside detector named on an alarm: removals at any stage, outcomes of the signed ones. */
 export async function detectorCounts(filters: TallyFilters, viewer: TallyViewer): Promise<DetectorCell[]> {
-  const signed = sql`${cases.status} = 'signed'`;
   const { rows } = await db.execute<OutcomeRow & { trigger: string; location: string | null; alarms: number }>(sql`
-    select trim(${cases.triggerDetail}->>'detectorId') as key, ${cases.trigger} as trigger,
-      min(nullif(trim(${cases.triggerDetail}->>'detectorLocation'), '')) as location,
-      count(*)::int as alarms,
-      count(*) filter (where ${signed} and ${recorded})::int as n,
-      count(*) filter (where ${signed} and ${cases.removalConfirmed} = 'confirmed')::int as confirmed,
-      count(*) filter (where ${signed} and ${cases.removalConfirmed} = 'no-defect')::int as no_defect,
-      coalesce(sum(${sites.removalCostUsd}) filter (where ${signed} and ${cases.removalConfirmed} = 'no-defect'), 0)::float8 as cost_usd,
-      count(*) filter (where ${signed} and ${cases.removalConfirmed} = 'no-defect' and ${sites.removalCostUsd} is null)::int as uncosted
-    from ${cases} left join ${sites} on ${sites.id} = ${cases.siteId}
-    where ${tallyWhere(filters, viewer)} and ${cases.trigger} in ('wayside-hot', 'wayside-acoustic')
-      and coalesce(trim(${cases.triggerDetail}->>'detectorId'), '') <> ''
+    select ${a.detectorId} as key, ${a.trigger} as trigger, min(${a.detectorLocation}) as location,
+      sum(${a.n})::int as alarms, ${outcomeColumns(a, sql`${a.signed}`)}
+    from ${a} left join ${sites} on ${sites.id} = ${a.siteId}
+    where ${cellWhere(a, filters, viewer)} and ${a.detectorId} is not null
     group by 1, 2`);
   return rows.map((r) => ({ ...toCell(r), trigger: r.trigger, location: r.location, alarms: r.alarms }));
 }
 
 export async function triggerCosts(filters: TallyFilters, viewer: TallyViewer): Promise<OutcomeCell[]> {
+  // Summed per trigger, shop and outcome first, then priced at each shop's cost.
   const { rows } = await db.execute<OutcomeRow>(sql`
-    select ${cases.trigger} as key, ${outcomeColumns}
-    from ${cases} left join ${sites} on ${sites.id} = ${cases.siteId}
-    where ${tallyWhere(filters, viewer, { signedOnly: true })}
+    with t as (
+      select ${c.trigger} as key, ${c.siteId} as site_id, ${c.outcome} as outcome, sum(${c.n})::int as n
+      from ${c} where ${cellWhere(c, filters, viewer)} group by 1, 2, 3
+    )
+    select t.key,
+      sum(t.n)::int as n,
+      coalesce(sum(t.n) filter (where t.outcome = 'confirmed'), 0)::int as confirmed,
+      coalesce(sum(t.n) filter (where t.outcome = 'no-defect'), 0)::int as no_defect,
+      coalesce(sum(t.n * ${sites.removalCostUsd}) filter (where t.outcome = 'no-defect'), 0)::float8 as cost_usd,
+      coalesce(sum(t.n) filter (where t.outcome = 'no-defect' and ${sites.removalCostUsd} is null), 0)::int as uncosted
+    from t left join ${sites} on ${sites.id} = t.site_id
     group by 1`);
   return rows.map(toCell);
 }
