@@ -3,7 +3,7 @@ import { formatDay } from "@/lib/cases/list-columns";
 import { AXLE_POSITIONS, ROLL_DIRECTIONS, formatInches, formatMm, wheelRevolutions, type EndPlayPolicy, type HandRollGrid } from "@/lib/field";
 import { evaluateFieldChecks } from "@/lib/cases/compute";
 import { fieldChecksSchema } from "@/lib/cases/schemas";
-import type { CaseDetail } from "@/db/queries/case-read";
+import type { CaseDetail } from "@/lib/cases/types";
 import { FieldMessages } from "@/components/removal/field-messages";
 import { FieldCallPanel } from "@/components/removal/field-call-panel";
 import { TRIGGERS } from "@/lib/classification";

@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/card";
-import type { Finding } from "@/db/schema";
+import type { Finding } from "@/lib/cases/types";
 import { COMPONENTS } from "@/lib/classification";
 import type { FindingInput } from "@/lib/cases/schemas";
 import { FindingForm } from "./finding-form";

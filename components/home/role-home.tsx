@@ -2,10 +2,11 @@ import Link from "next/link";
 import { StageBadge } from "@/components/ui/badge";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
-import { caseCards, stageCounts, type CaseCard } from "@/db/queries/home";
 import { ROLE_LABELS, can } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
+import { homeCaseCards as caseCards, homeStageCounts as stageCounts } from "@/lib/cases/home-service";
 import { STAGES, STAGE_LABELS, type Stage } from "@/lib/cases/stages";
+import type { CaseCard } from "@/lib/cases/types";
 import { triggerLabel } from "@/lib/classification/labels";
 
 

@@ -1,7 +1,6 @@
 // The requests the similar-case and related-case panels make, and the keys they share so
 // linking from one panel refreshes the other.
-import type { CaseLinkItem } from "@/db/queries/case-links";
-import type { SimilarCaseItem } from "@/db/queries/similar";
+import type { CaseLinkItem, SimilarCaseItem } from "@/lib/cases/types";
 import { ApiError, callApi, getOrThrow, type ApiResult } from "@/lib/client/api";
 
 export const similarKey = (caseId: string) => `/api/cases/${encodeURIComponent(caseId)}/similar`;

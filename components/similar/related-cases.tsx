@@ -7,7 +7,7 @@ import { useState } from "react";
 import useSWR, { useSWRConfig } from "swr";
 import { StageBadge } from "@/components/ui/badge";
 import { getJson, linkCase, linksKey, similarKey, unlinkCase, type LinksAnswer } from "./case-links-api";
-import type { CaseLinkItem } from "@/db/queries/case-links";
+import type { CaseLinkItem } from "@/lib/cases/types";
 import { formatDay } from "@/lib/dates";
 
 function Unlink({ caseId, link, onDone }: { caseId: string; link: CaseLinkItem; onDone: () => void }) {

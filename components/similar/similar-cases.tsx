@@ -9,7 +9,7 @@ import { StageBadge } from "@/components/ui/badge";
 import { getJson, linkCase, linksKey, similarKey, type SimilarAnswer } from "./case-links-api";
 import { ReasonChip, ScoreBar } from "./reason-chip";
 import { SimilarPhotos } from "./similar-photos";
-import type { SimilarCaseItem } from "@/db/queries/similar";
+import type { SimilarCaseItem } from "@/lib/cases/types";
 
 function LinkControl({ caseId, item, onLinked }: { caseId: string; item: SimilarCaseItem; onLinked: () => void }) {
   const [open, setOpen] = useState(false);

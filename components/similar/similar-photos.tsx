@@ -1,7 +1,7 @@
 // The photos of a similar case: the same part from both cases side by side, with the way to
 // the full comparison; or the similar case's first photo where no part was photographed in both.
 import Link from "next/link";
-import type { SimilarCaseItem } from "@/db/queries/similar";
+import type { SimilarCaseItem } from "@/lib/cases/types";
 
 const thumb = (id: string) => `/api/photos/${encodeURIComponent(id)}/thumb`;
 

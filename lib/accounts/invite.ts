@@ -1,11 +1,11 @@
 // Inviting a person: a pending invitation and an e-mail with a one-time link to set a password.
 import "server-only";
-import { findOpenInvitation, findUserByEmail, insertInvitation, markInvitationAccepted } from "@/db/queries/invitations";
+import { findOpenInvitation, findUserByEmail, insertInvitation, listPendingInvitations, markInvitationAccepted, revokeInvitation } from "@/db/queries/invitations";
 import { setUserSite } from "@/db/queries/users";
 import { auth } from "@/lib/auth/auth";
 import { ROLE_LABELS, type Role } from "@/lib/auth/permissions";
 import { env } from "@/lib/env";
-import { HttpError } from "@/lib/http/errors";
+import { HttpError, notFound } from "@/lib/http/errors";
 import { enqueueMail } from "@/lib/mail/outbox";
 import { invitationMail } from "@/lib/mail/templates/account";
 import { hashToken, INVITATION_DAYS, newToken } from "./tokens";
@@ -40,4 +40,18 @@ export async function acceptInvitation(token: string, password: string) {
   if (invitation.siteId) await setUserSite(created.user.id, invitation.siteId);
   await markInvitationAccepted(invitation.id);
   return { email: invitation.email };
+}
+
+/** The open invitation a link's token names, or null (a short token is never looked up). */
+export async function openInvitation(token: string) {
+  return token.length >= 20 ? findOpenInvitation(hashToken(token)) : null;
+}
+
+export async function pendingInvitations() {
+  return listPendingInvitations();
+}
+
+/** Withdraws a pending invitation; 404 when none is pending under that id. */
+export async function withdrawInvitation(id: string) {
+  if (!(await revokeInvitation(id))) throw notFound("A pending invitation with that id");
 }

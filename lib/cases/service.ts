@@ -4,10 +4,11 @@ import { z } from "@/lib/validation/zod";
 import { addFinding, changeFinding, countFindings, findingCode, insertCase, insertCaseOnce, updateCase } from "@/db/queries/case-write";
 import { codeStates, siteKinds } from "@/db/queries/reference-rows";
 import { can } from "@/lib/auth/permissions";
-import { findReadableCase, listCaseHistory, sitePolicy } from "@/db/queries/case-read";
+import { findReadableCase, getCaseDetail, listCaseHistory, sitePolicy } from "@/db/queries/case-read";
 import { readableNumbers } from "@/db/queries/case-scope";
 import type { Case } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
+import type { CaseDetail } from "./types";
 import { DEFAULT_END_PLAY_POLICY, evaluateEndPlay, type EndPlayPolicy } from "@/lib/field";
 import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
@@ -38,6 +39,16 @@ function assertOwnShop(siteId: string | null | undefined, user: CurrentUser, cur
   if (current && siteId === current.siteId) return;
   if (!user.siteId) throw forbidden("Your account has no home shop, so it cannot file or move removals; ask an admin to set your shop.");
   if (siteId !== user.siteId) throw forbidden("Inspectors file removals for their own shop only.");
+}
+
+/** A case by number or id if the user may read it, else null (for pages, which answer notFound()). */
+export async function findCase(key: string, user: CurrentUser): Promise<Case | null> {
+  return findReadableCase(key, user);
+}
+
+/** A readable case with its findings, site, people's names and policy, else null. */
+export async function caseDetail(key: string, user: CurrentUser): Promise<CaseDetail | null> {
+  return getCaseDetail(key, user);
 }
 
 export async function loadReadableCase(key: string, user: CurrentUser): Promise<Case> {

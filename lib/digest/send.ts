@@ -5,7 +5,7 @@ import { desc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { mailOutbox } from "@/db/schema";
 import { peopleWithRoles } from "@/db/queries/notices";
-import { loadTallies } from "@/db/queries/tallies/load-tallies";
+import { loadTallies } from "@/lib/tallies/tallies-service";
 import { weekCounts } from "@/db/queries/tallies/week-counts";
 import { env } from "@/lib/env";
 import { enqueueMail } from "@/lib/mail/outbox";

@@ -1,7 +1,7 @@
 // Photo operations as routes and pages call them: who may touch which case, then ingest,
 // tag and remove with the real bucket and database.
 import "server-only";
-import { deletePhotoRow, findingInCase, getReadablePhoto, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
+import { deletePhotoRow, findingInCase, findingOptions, getReadablePhoto, listCasePhotos, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
 import type { Case, Photo } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
 import { badRequest, conflict, forbidden, notFound } from "@/lib/http/errors";
@@ -14,6 +14,16 @@ import type { PhotoTags } from "./tags";
 /** Photos of a signed case are evidence under a signature: refused until an engineer reopens it. */
 export function assertPhotosOpen(c: Pick<Case, "status">): void {
   if (c.status === "signed") throw conflict(SIGNED_REFUSAL);
+}
+
+/** The photos of a case already loaded as readable by the caller. */
+export async function photosOfCase(c: Pick<Case, "id">): Promise<Photo[]> {
+  return listCasePhotos(c.id);
+}
+
+/** The findings of a readable case, for the photo tag picker. */
+export async function findingChoices(c: Pick<Case, "id">): Promise<{ id: string; label: string }[]> {
+  return findingOptions(c.id);
 }
 
 /** A photo with its case, or null when it does not exist or the user may not see its case. */

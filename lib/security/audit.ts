@@ -1,8 +1,10 @@
-// Writes to the append-only audit log. A failed write is reported, never allowed to undo the action itself.
+// Writes to the append-only audit log (a failed write is reported, never allowed to undo the
+// action itself) and reads it back for the admins' audit page.
 import "server-only";
-import { insertAudit } from "@/db/queries/audit";
+import { insertAudit, listAudit } from "@/db/queries/audit";
 import type { Tx } from "@/db";
 import type { AuditKind } from "./audit-kinds";
+import { auditFilterOf, type AuditQuery } from "./audit-query";
 import { clientAddress } from "./client-address";
 
 type Who = { id: string; email: string } | null;
@@ -22,4 +24,9 @@ export async function audit(kind: AuditKind, who: Who, opts: { subject?: string 
   } catch (err) {
     console.error("audit log write failed", kind, err);
   }
+}
+
+/** Entries matching the filters, newest first, at most the query's limit. */
+export async function auditEntries(q: AuditQuery) {
+  return listAudit(auditFilterOf(q));
 }

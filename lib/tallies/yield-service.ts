@@ -2,7 +2,7 @@
 // only to managers and admins; others see stable "Inspector n" labels, an inspector sees "You".
 import "server-only";
 import { allSites } from "@/db/queries/tallies/sites";
-import { viewerSiteLimit } from "@/db/queries/tallies/scope";
+import { viewerSiteLimit } from "./site-limit";
 import { acousticLevels, detectorCounts, hotReadings, triggerCosts } from "@/db/queries/tallies/yield-alarms";
 import { keepCalls, peopleNames, removeCalls, type CallViewer } from "@/db/queries/tallies/yield-calls";
 import type { Role } from "@/lib/auth/permissions";

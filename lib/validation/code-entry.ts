@@ -1,6 +1,8 @@
 // Input rules for the classification lists that admins keep (damage codes, root causes, triggers).
 import { z } from "@/lib/validation/zod";
 import type { CodeListName } from "@/db/schema/code-lists";
+
+export type { CodeListName };
 import { DAMAGE_FAMILIES } from "@/lib/classification/damage-families";
 
 export const CODE_LIST_NAMES = ["damage", "cause", "trigger"] as const satisfies readonly CodeListName[];

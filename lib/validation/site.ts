@@ -3,6 +3,8 @@
 import { z } from "@/lib/validation/zod";
 import type { SiteKind } from "@/db/schema/sites";
 
+export type { SiteKind };
+
 /** The largest end-play limit a site may set: 1/4 in. Anything above is a typing slip, not a policy. */
 export const END_PLAY_MAX_CEILING_IN = 0.25;
 

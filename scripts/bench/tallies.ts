@@ -3,8 +3,8 @@
 // its raw-SQL floor, and of a Weibull fit of 10,000 lives with half of them suspensions.
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
-import { loadLife } from "@/db/queries/tallies/load-life";
-import { loadTallies } from "@/db/queries/tallies/load-tallies";
+import { loadLife } from "@/lib/tallies/life-service";
+import { loadTallies } from "@/lib/tallies/tallies-service";
 import { fitWeibull } from "@/lib/stats/weibull";
 import { addMonths, parseTallyFilters } from "@/lib/tallies/filters";
 import { createRng } from "../seed/prng";

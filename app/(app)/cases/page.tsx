@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { caseListOptions } from "@/db/queries/case-list-options";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
+import { caseFilterChoices } from "@/lib/cases/list-service";
 import { CaseListView } from "./_components/case-list-view";
 import { TableSkeleton } from "./_components/skeletons";
 
@@ -13,7 +13,7 @@ export const dynamic = "force-dynamic";
 // checks the role and supplies the filter choices.
 export default async function CasesPage() {
   const user = await requirePageUser("case:read");
-  const options = await caseListOptions();
+  const options = await caseFilterChoices();
   return (
     <Suspense fallback={<TableSkeleton columns={8} rows={10} />}>
       <CaseListView

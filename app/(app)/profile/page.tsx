@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
 import { NoticeSwitches } from "@/components/notify/notice-switches";
-import { getNoticePrefs } from "@/db/queries/notices";
-import { siteNameOf } from "@/db/queries/profile";
+import { noticePrefsOf } from "@/lib/notify/notice-service";
+import { siteName as siteNameOf } from "@/lib/sites/site-service";
 import { ROLE_LABELS } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
 import { noticeKindsFor } from "@/lib/notify/notice-kinds";
@@ -12,7 +12,7 @@ export const dynamic = "force-dynamic";
 
 export default async function ProfilePage() {
   const user = await requirePageUser();
-  const prefs = await getNoticePrefs(user.id);
+  const prefs = await noticePrefsOf(user.id);
   const siteName = await siteNameOf(user.siteId);
   const switches = noticeKindsFor(user.role).map((k) => ({ kind: k.kind, label: k.label, description: k.description, on: prefs[k.kind] !== false }));
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
-import { listCodeEntries } from "@/db/queries/code-entries";
+import { codeEntries } from "@/lib/codes/code-service";
 import { requirePageUser } from "@/lib/auth/session";
 import { CodeFinder } from "./_components/code-finder";
 import { PartList, SeverityScale } from "./_components/scales";
@@ -19,7 +19,7 @@ const JUMPS = [
 
 export default async function ReferencePage() {
   await requirePageUser();
-  const rows = await listCodeEntries(undefined, { includeRetired: true });
+  const rows = await codeEntries(undefined, { includeRetired: true });
   const entries: RefEntry[] = rows.map((r) => ({
     list: r.list, code: r.code, label: r.label, description: r.description, family: r.family, isoMode: r.isoMode,
     synonyms: r.synonyms, retired: r.retiredAt !== null,

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
-import { listCodeEntries } from "@/db/queries/code-entries";
-import { searchCases } from "@/db/queries/search";
+import { codeEntries } from "@/lib/codes/code-service";
+import { searchCases } from "@/lib/search/search-service";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
 import { hasCriteria, readSearchParams } from "@/lib/search/query-schema";
@@ -27,7 +27,7 @@ export async function generateMetadata({ searchParams }: { searchParams: Promise
 export default async function SearchPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser("case:read");
   const { params, dropped } = readSearchParams(await searchParams);
-  const [result, damage] = await Promise.all([searchCases(params, user), listCodeEntries("damage", { includeRetired: true })]);
+  const [result, damage] = await Promise.all([searchCases(params, user), codeEntries("damage", { includeRetired: true })]);
   const damageEntries = damage.map((d) => ({ code: d.code, label: d.label, synonyms: d.synonyms, retired: d.retiredAt !== null }));
   const criteria = hasCriteria(params);
   const scope = can(user.role, "case:read-all") ? "all sites" : "your shop's cases and the ones you filed";

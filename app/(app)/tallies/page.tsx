@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
-import { loadTallies } from "@/db/queries/tallies/load-tallies";
-import { allSites } from "@/db/queries/tallies/sites";
+import { loadTallies, tallySites } from "@/lib/tallies/tallies-service";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
 import { filtersToQuery, monthRange, readTallyFilters } from "@/lib/tallies/filters";
@@ -20,7 +19,7 @@ type Props = { searchParams: Promise<Record<string, string | string[] | undefine
 export default async function TalliesPage({ searchParams }: Props) {
   const user = await requirePageUser("tallies:read");
   const filters = readTallyFilters(await searchParams);
-  const [data, sites] = await Promise.all([loadTallies(filters, user), allSites()]);
+  const [data, sites] = await Promise.all([loadTallies(filters, user), tallySites()]);
   const options = filterOptions(sites);
   const siteName = filters.site ? (sites.find((s) => s.code === filters.site)?.name ?? filters.site) : null;
   const where = data.siteLimit ? data.siteLimit.name : (siteName ?? "all sites");

@@ -1,7 +1,7 @@
 // GET /api/codes?list=damage[&includeRetired=1] - a classification list for pickers (any signed-in person)
 import { NextResponse } from "next/server";
 import { z } from "@/lib/validation/zod";
-import { listCodeEntries } from "@/db/queries/code-entries";
+import { codeEntries } from "@/lib/codes/code-service";
 import { parseQuery, withRole } from "@/lib/http/handler";
 import { listSchema } from "@/lib/validation/code-entry";
 
@@ -12,7 +12,7 @@ const querySchema = z.object({
 
 export const GET = withRole(null, async ({ req }) => {
   const { list, includeRetired } = parseQuery(req, querySchema);
-  const rows = await listCodeEntries(list, { includeRetired: includeRetired === "1" || includeRetired === "true" });
+  const rows = await codeEntries(list, { includeRetired: includeRetired === "1" || includeRetired === "true" });
   return NextResponse.json({
     codes: rows.map((r) => ({
       code: r.code, label: r.label, description: r.description, family: r.family, isoMode: r.isoMode,

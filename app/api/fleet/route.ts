@@ -1,17 +1,16 @@
 // GET /api/fleet - the fleet list in use; POST - upload a fleet list CSV (units still in service)
 import { NextResponse } from "next/server";
-import { latestFleetBatch } from "@/db/queries/tallies/life-counts";
-import { storeFleetBatch } from "@/db/queries/tallies/fleet-upload";
 import { badRequest, HttpError } from "@/lib/http/errors";
 import { withRole } from "@/lib/http/handler";
 import { readFormLimited, readTextLimited } from "@/lib/http/body";
 import { FLEET_COLUMNS, parseFleetCsv } from "@/lib/tallies/fleet-csv";
+import { currentFleetBatch, storeFleetList } from "@/lib/tallies/fleet-service";
 
 export const dynamic = "force-dynamic";
 const MAX_BYTES = 20 * 1024 * 1024;
 const TOO_LARGE = "The fleet list";
 
-export const GET = withRole("tallies:read", async () => NextResponse.json({ batch: await latestFleetBatch(), columns: FLEET_COLUMNS }));
+export const GET = withRole("tallies:read", async () => NextResponse.json({ batch: await currentFleetBatch(), columns: FLEET_COLUMNS }));
 
 async function csvText(req: Request): Promise<string> {
   const length = Number(req.headers.get("content-length") ?? 0);
@@ -35,6 +34,6 @@ export const POST = withRole("fleet:upload", async ({ req, user }) => {
       { status: 422 },
     );
   }
-  const stored = await storeFleetBatch(parsed.rows, user.id);
+  const stored = await storeFleetList(parsed.rows, user.id);
   return NextResponse.json(stored, { status: 201 });
 });

@@ -1,6 +1,6 @@
 // GET /api/search - free-text and faceted case search with highlighted snippets, held to what the caller may read
 import { NextResponse } from "next/server";
-import { searchCases } from "@/db/queries/search";
+import { searchCases } from "@/lib/search/search-service";
 import { withRole } from "@/lib/http/handler";
 import { parseSearchParams, recordOf } from "@/lib/search/query-schema";
 

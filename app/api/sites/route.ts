@@ -1,6 +1,6 @@
 // GET /api/sites - the sites for forms' pickers (any signed-in person; no policy details)
 import { NextResponse } from "next/server";
-import { listSiteChoices } from "@/db/queries/sites";
+import { siteChoices } from "@/lib/sites/site-service";
 import { withRole } from "@/lib/http/handler";
 
-export const GET = withRole(null, async () => NextResponse.json({ sites: await listSiteChoices() }));
+export const GET = withRole(null, async () => NextResponse.json({ sites: await siteChoices() }));

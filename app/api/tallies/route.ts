@@ -1,6 +1,6 @@
 // GET /api/tallies - every tally for the given filters (period, site, class, trigger, recurrence settings)
 import { NextResponse } from "next/server";
-import { loadTallies } from "@/db/queries/tallies/load-tallies";
+import { loadTallies } from "@/lib/tallies/tallies-service";
 import { parseQuery, withRole } from "@/lib/http/handler";
 import { tallyFiltersSchema } from "@/lib/tallies/filters";
 

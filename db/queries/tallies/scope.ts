@@ -6,14 +6,9 @@ import { cases, sites } from "@/db/schema";
 import { can } from "@/lib/auth/permissions";
 import { readableCases } from "../case-scope";
 import { periodBounds, type TallyFilters } from "@/lib/tallies/filters";
+import type { TallyViewer } from "@/lib/tallies/site-limit";
 
-export type TallyViewer = { id: string; role: string; siteId: string | null };
-
-/** The site an inspector is held to, or null when the viewer reads every site. */
-export function viewerSiteLimit(viewer: TallyViewer): { limited: boolean; siteId: string | null } {
-  if (can(viewer.role, "tallies:read-all")) return { limited: false, siteId: null };
-  return { limited: true, siteId: viewer.siteId };
-}
+export type { TallyViewer };
 
 export function viewerScope(viewer: TallyViewer): SQL | undefined {
   if (!can(viewer.role, "tallies:read")) return sql`false`;

@@ -7,7 +7,7 @@ import { db } from "@/db";
 import { keepGaps, sites, user, yieldCells } from "@/db/schema";
 import type { TallyFilters } from "@/lib/tallies/filters";
 import type { CallCell, KeepCell, OutcomeCell } from "@/lib/tallies/yield-counts";
-import { viewerSiteLimit, type TallyViewer } from "./scope";
+import { viewerSiteLimit, type TallyViewer } from "@/lib/tallies/site-limit";
 import { cellWhere } from "./yield-scope";
 
 export type CallViewer = TallyViewer & { id: string };

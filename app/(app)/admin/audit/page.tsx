@@ -3,10 +3,10 @@ import { Card, EmptyState, PageHeader } from "@/components/ui/card";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
-import { listAudit } from "@/db/queries/audit";
 import { requirePageUser } from "@/lib/auth/session";
 import { AUDIT_KINDS, type AuditKind } from "@/lib/security/audit-kinds";
-import { auditFilterOf, auditQuerySchema } from "@/lib/security/audit-query";
+import { auditEntries } from "@/lib/security/audit";
+import { auditQuerySchema } from "@/lib/security/audit-query";
 import { formatMoment } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Audit log" };
@@ -25,7 +25,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
   const raw = await searchParams;
   const parsed = auditQuerySchema.safeParse(raw);
   const q = parsed.success ? parsed.data : auditQuerySchema.parse({});
-  const rows = await listAudit(auditFilterOf(q));
+  const rows = await auditEntries(q);
 
   return (
     <>

@@ -1,11 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader } from "@/components/ui/card";
-import { codeUsageCounts, listCodeEntries } from "@/db/queries/code-entries";
-import type { CodeListName } from "@/db/schema/code-lists";
+import { codeEntries, codesWithUsage } from "@/lib/codes/code-service";
 import { requirePageUser } from "@/lib/auth/session";
 import { DAMAGE_FAMILIES, familyOfCode } from "@/lib/classification/damage-families";
-import { CODE_LIST_LABELS, CODE_LIST_NAMES } from "@/lib/validation/code-entry";
+import { CODE_LIST_LABELS, CODE_LIST_NAMES, type CodeListName } from "@/lib/validation/code-entry";
 import { CodeListPanel, type CodeGroup } from "./_components/code-list-panel";
 import type { CodeView } from "./_components/types";
 
@@ -30,10 +29,10 @@ export default async function CodeListsPage({ searchParams }: { searchParams: Pr
   await requirePageUser("admin:codes");
   const raw = (await searchParams).list;
   const list: CodeListName = (CODE_LIST_NAMES as readonly string[]).includes(raw ?? "") ? (raw as CodeListName) : "damage";
-  const [rows, usage, all] = await Promise.all([listCodeEntries(list, { includeRetired: true }), codeUsageCounts(list), listCodeEntries(undefined, { includeRetired: true })]);
+  const [rows, all] = await Promise.all([codesWithUsage(list), codeEntries(undefined, { includeRetired: true })]);
   const entries: CodeView[] = rows.map((r) => ({
     list: r.list, code: r.code, label: r.label, description: r.description, family: r.family, isoMode: r.isoMode,
-    synonyms: r.synonyms, retired: r.retiredAt !== null, cases: usage.get(r.code) ?? 0,
+    synonyms: r.synonyms, retired: r.retiredAt !== null, cases: r.cases,
   }));
   const count = (l: CodeListName) => all.filter((r) => r.list === l && !r.retiredAt).length;
 

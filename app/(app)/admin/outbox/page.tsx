@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
-import { jobQueueStates } from "@/db/queries/job-queue";
-import { listOutbox, OUTBOX_STATUSES, outboxCounts, type OutboxStatus } from "@/db/queries/outbox";
+import { OUTBOX_STATUSES, outboxBoard, type OutboxStatus } from "@/lib/admin/outbox-service";
 import { requirePageUser } from "@/lib/auth/session";
 import { readFakeMailbox } from "@/lib/mail/fake-mailbox";
 import { FakeMailboxPanel } from "./_components/fake-mailbox-panel";
@@ -19,7 +18,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
   await requirePageUser("admin:outbox");
   const raw = (await searchParams).status;
   const status = (OUTBOX_STATUSES as readonly string[]).includes(raw ?? "") ? (raw as OutboxStatus) : undefined;
-  const [rows, counts, fake, jobs] = await Promise.all([listOutbox(status), outboxCounts(), readFakeMailbox(), jobQueueStates()]);
+  const [{ rows, counts, jobs }, fake] = await Promise.all([outboxBoard(status), readFakeMailbox()]);
   const total = counts.pending + counts.failed + counts.sent;
   const now = Date.now();
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
-import { listSites, siteUsageCounts } from "@/db/queries/sites";
+import { sitesWithUsage } from "@/lib/sites/site-service";
 import { requirePageUser } from "@/lib/auth/session";
 import { PolicyNotes } from "./_components/policy-notes";
 import { SitesBoard } from "./_components/sites-board";
@@ -10,11 +10,11 @@ export const dynamic = "force-dynamic";
 
 export default async function SitesPage() {
   await requirePageUser("admin:sites");
-  const [sites, usage] = await Promise.all([listSites(), siteUsageCounts()]);
+  const sites = await sitesWithUsage();
   const views = sites.map((s) => ({
     id: s.id, code: s.code, name: s.name, kind: s.kind, railway: s.railway, location: s.location, active: s.active,
     endPlayMaxIn: s.endPlayMaxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn, plausibleMaxIn: s.plausibleMaxIn, removalCostUsd: s.removalCostUsd,
-    usage: usage.get(s.id) ?? { cases: 0, users: 0 },
+    usage: s.usage,
   }));
 
   return (

@@ -1,11 +1,9 @@
 import type { Metadata } from "next";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, PageHeader } from "@/components/ui/card";
-import { listPendingInvitations } from "@/db/queries/invitations";
-import { listSiteChoices } from "@/db/queries/sites";
-import { listUsers } from "@/db/queries/users";
-import { lockedAccountKeys } from "@/db/queries/sign-in-failures";
-import { accountKey } from "@/lib/security/sign-in-rules";
+import { pendingInvitations } from "@/lib/accounts/invite";
+import { listPeople } from "@/lib/accounts/people-service";
+import { siteChoices } from "@/lib/sites/site-service";
 import { requirePageUser } from "@/lib/auth/session";
 import { InviteForm } from "./_components/invite-form";
 import { PendingInvitations } from "./_components/pending-invitations";
@@ -16,8 +14,7 @@ export const dynamic = "force-dynamic";
 
 export default async function PeoplePage() {
   const me = await requirePageUser("admin:users");
-  const [people, invitations, sites, lockedKeys] = await Promise.all([listUsers(), listPendingInvitations(), listSiteChoices(), lockedAccountKeys()]);
-  const locked = new Set(lockedKeys);
+  const [people, invitations, sites] = await Promise.all([listPeople(), pendingInvitations(), siteChoices()]);
   const active = people.filter((p) => !p.banned).length;
   const now = Date.now();
 
@@ -31,7 +28,7 @@ export default async function PeoplePage() {
       <div className="flex flex-col gap-5">
         <Card title="Everyone with an account">
           <PeopleList
-            people={people.map((p) => ({ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId, locked: locked.has(accountKey(p.email)) }))}
+            people={people.map((p) => ({ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId, locked: p.locked }))}
             sites={sites}
             meId={me.id}
           />

@@ -4,7 +4,7 @@ import { useCallback, useEffect, useMemo, useState } from "react";
 import { getCoreRowModel, useReactTable } from "@tanstack/react-table";
 import { buttonClass, ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/card";
-import type { CaseListOptions } from "@/db/queries/case-list-options";
+import type { CaseListOptions } from "@/lib/cases/types";
 import type { CaseColumnId } from "@/lib/cases/list-columns";
 import { EXPORT_CAP } from "@/lib/cases/list-csv";
 import {

@@ -1,7 +1,7 @@
 "use client";
 // Everything that narrows the list. On a phone the less used filters fold behind one button.
 import { useState } from "react";
-import type { CaseListOptions } from "@/db/queries/case-list-options";
+import type { CaseListOptions } from "@/lib/cases/types";
 import { BEARING_CLASS_OPTIONS } from "./labels";
 import { activeFilterCount, type CaseFilters } from "@/lib/cases/list-params";
 import { DateRange } from "./date-range";

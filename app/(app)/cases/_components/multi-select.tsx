@@ -1,7 +1,7 @@
 "use client";
 // A filter that takes several values: a chip naming what is chosen, a checklist behind it.
 import { useState } from "react";
-import type { FilterOption } from "@/db/queries/case-list-options";
+import type { FilterOption } from "@/lib/cases/types";
 import { Icon } from "./icons";
 import { Popover } from "./popover";
 

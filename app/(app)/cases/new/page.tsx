@@ -1,14 +1,14 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
 import { RemovalForm } from "@/components/removal/removal-form";
-import { siteOptions } from "@/db/queries/site-options";
+import { siteFormOptions } from "@/lib/sites/site-service";
 import { requirePageUser } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "New removal" };
 
 export default async function NewRemovalPage() {
   const user = await requirePageUser("case:create");
-  const sites = await siteOptions();
+  const sites = await siteFormOptions();
   const home = sites.find((s) => s.id === user.siteId && s.kind !== "lab")?.id ?? null;
   return (
     <div className="mx-auto max-w-3xl">

@@ -2,12 +2,11 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ComparePhotos, type ComparedPhoto } from "@/components/photos/compare-photos";
 import { EmptyState, PageHeader } from "@/components/ui/card";
-import { findReadableCase } from "@/db/queries/case-read";
-import { findingOptions, listCasePhotos } from "@/db/queries/photos";
 import type { CurrentUser } from "@/lib/auth/session";
 import { requirePageUser } from "@/lib/auth/session";
+import { findCase } from "@/lib/cases/service";
 import { displayOrder } from "@/lib/photos/grouping";
-import { findReadablePhoto } from "@/lib/photos/service";
+import { findingChoices, findReadablePhoto, photosOfCase } from "@/lib/photos/service";
 import { toPhotoView } from "@/lib/photos/view";
 import { SecondPhotoPicker } from "./_components/second-photo-picker";
 
@@ -21,16 +20,16 @@ async function compared(id: string | undefined, user: CurrentUser): Promise<Comp
   const hit = await findReadablePhoto(id, user);
   // A photo of a case the viewer may not see answers like one that does not exist.
   if (!hit) notFound();
-  return { photo: toPhotoView(hit.photo), caseNumber: hit.caseRow.number, findings: await findingOptions(hit.caseRow.id) };
+  return { photo: toPhotoView(hit.photo), caseNumber: hit.caseRow.number, findings: await findingChoices(hit.caseRow) };
 }
 
 async function otherCase(query: string, user: CurrentUser, aCaseId: string) {
   const empty = { query, number: null, photos: [], problem: null };
   if (!query.trim()) return empty;
-  const c = await findReadableCase(query.trim(), user);
+  const c = await findCase(query.trim(), user);
   if (!c) return { ...empty, problem: `No case ${query.trim().toUpperCase()} that you can see.` };
   if (c.id === aCaseId) return { ...empty, problem: "That is photo A's own case; its photos are listed below." };
-  return { query, number: c.number, photos: displayOrder((await listCasePhotos(c.id)).map(toPhotoView)), problem: null };
+  return { query, number: c.number, photos: displayOrder((await photosOfCase(c)).map(toPhotoView)), problem: null };
 }
 
 export default async function ComparePage({ searchParams }: { searchParams: Promise<Search> }) {
@@ -51,7 +50,7 @@ export default async function ComparePage({ searchParams }: { searchParams: Prom
   const picker = b ? null : (
     <SecondPhotoPicker
       aId={a.photo.id}
-      sameCase={{ number: a.caseNumber, photos: displayOrder((await listCasePhotos(a.photo.caseId)).map(toPhotoView)).filter((p) => p.id !== a.photo.id) }}
+      sameCase={{ number: a.caseNumber, photos: displayOrder((await photosOfCase({ id: a.photo.caseId })).map(toPhotoView)).filter((p) => p.id !== a.photo.id) }}
       other={await otherCase(q.case ?? "", user, a.photo.caseId)}
     />
   );

@@ -1,6 +1,6 @@
 // The filters in force as removable chips, so it is always clear what narrowed the list.
 import Link from "next/link";
-import type { SearchResult } from "@/db/queries/search";
+import type { SearchResult } from "@/lib/search/search-service";
 import { MULTI_FACETS, type SearchParams } from "@/lib/search/query-schema";
 import { activeFilterCount, clearFilters, searchHref, toggleValue, withChange } from "@/lib/search/url-state";
 

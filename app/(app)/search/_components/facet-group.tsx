@@ -1,7 +1,7 @@
 // One facet: each value a link that adds it to or takes it from the search, with how many
 // cases it would show. Values within a facet widen the search (either one); facets narrow it.
 import Link from "next/link";
-import type { FacetValue } from "@/db/queries/search-facets";
+import type { FacetValue } from "@/lib/search/search-service";
 import type { MultiFacet, SearchParams } from "@/lib/search/query-schema";
 import { searchHref, toggleValue, withChange } from "@/lib/search/url-state";
 

@@ -1,6 +1,6 @@
 // All the filters beside the results: stage, trigger, cause, damage, part, class, site,
 // worst finding and removal dates, each with counts for the current search.
-import type { SearchResult } from "@/db/queries/search";
+import type { SearchResult } from "@/lib/search/search-service";
 import type { CodeSearchEntry } from "@/lib/classification/code-search";
 import type { SearchParams } from "@/lib/search/query-schema";
 import { searchHref, toggleValue } from "@/lib/search/url-state";

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { StageBadge } from "@/components/ui/badge";
 import { MarkedText } from "@/components/search/marked-text";
-import type { SearchHit } from "@/db/queries/search";
+import type { SearchHit } from "@/lib/search/search-service";
 
 const severityTone = (s: number) =>
   s >= 4 ? "bg-danger-soft text-danger ring-danger/30" : s >= 3 ? "bg-warn-soft text-warn ring-warn/30" : "bg-surface-2 text-ink-2 ring-line-strong";

@@ -1,7 +1,7 @@
 // How many cases matched, how the query was read (part, row, damage…; corrections, shop words),
 // and the sort. Each part of the reading can be dropped with one click.
 import Link from "next/link";
-import type { SearchResult } from "@/db/queries/search";
+import type { SearchResult } from "@/lib/search/search-service";
 import { SORTS, type SearchParams, type SearchSort } from "@/lib/search/query-schema";
 import { searchHref, withChange } from "@/lib/search/url-state";
 

@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
-import { loadLife } from "@/db/queries/tallies/load-life";
-import { allSites } from "@/db/queries/tallies/sites";
-import { viewerSiteLimit } from "@/db/queries/tallies/scope";
+import { loadLife } from "@/lib/tallies/life-service";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
 import { filtersToQuery, readTallyFilters } from "@/lib/tallies/filters";
 import { monthLabel } from "@/lib/tallies/labels";
+import { viewerSiteLimit } from "@/lib/tallies/site-limit";
+import { tallySites } from "@/lib/tallies/tallies-service";
 import { currentMonth, filterOptions } from "../_components/filter-options";
 import { FilterBar } from "../_components/filter-bar";
 import { TallyTabs } from "../_components/tally-tabs";
@@ -23,7 +23,7 @@ export default async function LifePage({ searchParams }: Props) {
   const filters = readTallyFilters(params);
   const measure = params.measure === "miles" ? "miles" : "months";
   const cause = typeof params.cause === "string" ? params.cause.slice(0, 60) : undefined;
-  const [data, sites] = await Promise.all([loadLife(filters, user, measure, cause), allSites()]);
+  const [data, sites] = await Promise.all([loadLife(filters, user, measure, cause), tallySites()]);
   const limit = viewerSiteLimit(user);
   const ownSite = limit.limited ? (sites.find((s) => s.id === limit.siteId)?.name ?? "No home site") : null;
   const where = ownSite ?? (filters.site ? (sites.find((s) => s.code === filters.site)?.name ?? filters.site) : "all sites");

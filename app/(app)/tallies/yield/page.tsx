@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/card";
-import { allSites } from "@/db/queries/tallies/sites";
 import { requirePageUser } from "@/lib/auth/session";
 import { filtersToQuery, readTallyFilters } from "@/lib/tallies/filters";
 import { monthLabel } from "@/lib/tallies/labels";
 import { readYieldQuery } from "@/lib/tallies/yield-query";
+import { tallySites } from "@/lib/tallies/tallies-service";
 import { loadYield } from "@/lib/tallies/yield-service";
 import { currentMonth, filterOptions } from "../_components/filter-options";
 import { FilterBar } from "../_components/filter-bar";
@@ -22,7 +22,7 @@ export default async function YieldPage({ searchParams }: Props) {
   const params = await searchParams;
   const filters = readTallyFilters(params);
   const { miss } = readYieldQuery(params);
-  const [data, sites] = await Promise.all([loadYield(filters, user, miss), allSites()]);
+  const [data, sites] = await Promise.all([loadYield(filters, user, miss), tallySites()]);
   const siteName = filters.site ? (sites.find((s) => s.code === filters.site)?.name ?? filters.site) : null;
   const where = data.siteLimit ? data.siteLimit.name : (siteName ?? "all sites");
   const when = filters.from || filters.to ? `${filters.from ? monthLabel(filters.from) : "start"} – ${filters.to ? monthLabel(filters.to) : "now"}` : "all time";

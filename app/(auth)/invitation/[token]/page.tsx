@@ -1,14 +1,13 @@
 import type { Metadata } from "next";
-import { findOpenInvitation } from "@/db/queries/invitations";
+import { openInvitation } from "@/lib/accounts/invite";
 import { SetPasswordForm } from "@/components/auth/set-password-form";
-import { hashToken } from "@/lib/accounts/tokens";
 import { ROLE_LABELS, isRole } from "@/lib/auth/permissions";
 
 export const metadata: Metadata = { title: "Accept invitation" };
 
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const invitation = token.length >= 20 ? await findOpenInvitation(hashToken(token)) : null;
+  const invitation = await openInvitation(token);
   if (!invitation) {
     return (
       <>

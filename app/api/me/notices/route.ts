@@ -1,9 +1,9 @@
 // GET /api/me/notices - my notice switches; PATCH - turn some of my notices on or off
 import { NextResponse } from "next/server";
 import { z } from "@/lib/validation/zod";
-import { getNoticePrefs, saveNoticePrefs } from "@/db/queries/notices";
+import { noticePrefsOf, switchNotices } from "@/lib/notify/notice-service";
 import { parseJson, withRole } from "@/lib/http/handler";
-import { mergeNoticePrefs, NOTICE_KIND_CODES, noticeKindsFor, type NoticeKind } from "@/lib/notify/notice-kinds";
+import { NOTICE_KIND_CODES, noticeKindsFor, type NoticeKind } from "@/lib/notify/notice-kinds";
 
 const switchValue = z.boolean({ message: "Each notice is switched with true (on) or false (off)." }).optional();
 const changeSchema = z
@@ -17,11 +17,10 @@ function view(role: string, prefs: Record<string, boolean>) {
 }
 
 // Any signed-in person, and only their own switches: the id comes from the session, never the body.
-export const GET = withRole(null, async ({ user }) => NextResponse.json({ notices: view(user.role, await getNoticePrefs(user.id)) }));
+export const GET = withRole(null, async ({ user }) => NextResponse.json({ notices: view(user.role, await noticePrefsOf(user.id)) }));
 
 export const PATCH = withRole(null, async ({ req, user }) => {
   const change = await parseJson(req, changeSchema);
-  const prefs = mergeNoticePrefs(await getNoticePrefs(user.id), change);
-  await saveNoticePrefs(user.id, prefs);
+  const prefs = await switchNotices(user.id, change);
   return NextResponse.json({ notices: view(user.role, prefs), prefs });
 });

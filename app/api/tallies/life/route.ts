@@ -1,7 +1,7 @@
 // GET /api/tallies/life - Weibull life per root cause (months or miles) for the given filters
 import { NextResponse } from "next/server";
 import { z } from "@/lib/validation/zod";
-import { loadLife } from "@/db/queries/tallies/load-life";
+import { loadLife } from "@/lib/tallies/life-service";
 import { parseQuery, withRole } from "@/lib/http/handler";
 import { tallyFiltersSchema } from "@/lib/tallies/filters";
 

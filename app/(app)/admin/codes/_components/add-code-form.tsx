@@ -5,7 +5,7 @@ import { sendJson } from "@/lib/client/api";
 import { StatusNote, type Note } from "@/components/admin/status-note";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import type { CodeListName } from "@/db/schema/code-lists";
+import type { CodeListName } from "@/lib/validation/code-entry";
 import { DAMAGE_FAMILIES } from "@/lib/classification/damage-families";
 import { CODE_LIST_LABELS, codeCreateSchema, parseSynonyms } from "@/lib/validation/code-entry";
 import { ErrorSummary } from "@/components/ui/error-summary";

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, EmptyState } from "@/components/ui/card";
 import { Input } from "@/components/ui/field";
-import type { CodeListName } from "@/db/schema/code-lists";
+import type { CodeListName } from "@/lib/validation/code-entry";
 import { CODE_LIST_LABELS } from "@/lib/validation/code-entry";
 import { AddCodeForm } from "./add-code-form";
 import { CodeRow } from "./code-row";

@@ -1,6 +1,6 @@
 // The background job queue beside the mail: what waits, what runs, what failed and why.
 import { Card } from "@/components/ui/card";
-import type { QueueState } from "@/db/queries/job-queue";
+import type { QueueState } from "@/lib/admin/outbox-service";
 import { QUEUE_LABELS } from "@/lib/jobs/queues";
 import { when } from "./when";
 

@@ -1,5 +1,5 @@
 import { Badge } from "@/components/ui/badge";
-import type { OutboxRow } from "@/db/queries/outbox";
+import type { OutboxRow } from "@/lib/admin/outbox-service";
 import { NOTICE_KINDS } from "@/lib/notify/notice-kinds";
 import { when } from "./when";
 

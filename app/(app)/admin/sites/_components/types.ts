@@ -1,5 +1,5 @@
 // The site as the Sites page hands it to its client pieces.
-import type { SiteKind } from "@/db/schema/sites";
+import type { SiteKind } from "@/lib/validation/site";
 
 export type SiteView = {
   id: string;

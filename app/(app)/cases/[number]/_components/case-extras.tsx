@@ -7,7 +7,7 @@ import { CasePhotos } from "@/components/photos/case-photos";
 import { RelatedCases } from "@/components/similar/related-cases";
 import { SimilarCases } from "@/components/similar/similar-cases";
 import { componentLabel, damageLabel } from "@/lib/classification/labels";
-import type { CaseDetail } from "@/db/queries/case-read";
+import type { CaseDetail } from "@/lib/cases/types";
 import { can } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
 import { photoLimits } from "@/lib/photos/limits";

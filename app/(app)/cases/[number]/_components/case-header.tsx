@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { StageBadge, Badge } from "@/components/ui/badge";
 import { triggerLabel } from "@/lib/classification/labels";
-import type { CaseDetail } from "@/db/queries/case-read";
+import type { CaseDetail } from "@/lib/cases/types";
 import { formatDay } from "@/lib/cases/list-columns";
 import { safetyFlagOf } from "@/lib/cases/safety-flag";
 import { SafetyFlagNote } from "./safety-flag-note";

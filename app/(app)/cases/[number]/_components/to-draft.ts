@@ -1,5 +1,5 @@
 import type { RemovalDraft } from "@/components/removal/form-state";
-import type { CaseDetail } from "@/db/queries/case-read";
+import type { CaseDetail } from "@/lib/cases/types";
 import { fieldChecksSchema, BEARING_CLASSES } from "@/lib/cases/schemas";
 
 /** The stored case as the removal form edits it. */

@@ -5,12 +5,12 @@ import { CasePhotos } from "@/components/photos/case-photos";
 import { StageBadge } from "@/components/ui/badge";
 import { ButtonLink } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
-import { findReadableCase } from "@/db/queries/case-read";
-import { findingOptions, listCasePhotos } from "@/db/queries/photos";
 import { can } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/session";
+import { findCase } from "@/lib/cases/service";
 import { photoLimits } from "@/lib/photos/limits";
 import { mayDeletePhoto } from "@/lib/photos/rules";
+import { findingChoices, photosOfCase } from "@/lib/photos/service";
 import { toPhotoView } from "@/lib/photos/view";
 
 export const dynamic = "force-dynamic";
@@ -22,9 +22,9 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 export default async function CasePhotosPage({ params }: { params: Promise<{ number: string }> }) {
   const user = await requirePageUser("case:read");
   const { number } = await params;
-  const c = await findReadableCase(number, user);
+  const c = await findCase(number, user);
   if (!c) notFound();
-  const [rows, findings] = await Promise.all([listCasePhotos(c.id), findingOptions(c.id)]);
+  const [rows, findings] = await Promise.all([photosOfCase(c), findingChoices(c)]);
   const photos = rows.map((p) => ({ ...toPhotoView(p), canDelete: mayDeletePhoto(user, p, c.status) }));
   const where = [c.carMark && `${c.carMark} ${c.carNumber}`, c.axle && c.side ? `position ${c.axle}${c.side}` : null, c.serial && `serial ${c.serial}`].filter(Boolean).join(" · ");
 

@@ -1,18 +1,17 @@
 // POST /api/cases/:id/photos - upload one photo (multipart: file + tags); GET - the case's photos with tags
 import { NextResponse } from "next/server";
-import { listCasePhotos } from "@/db/queries/photos";
 import { HttpError, badRequest } from "@/lib/http/errors";
 import { withCase } from "@/lib/http/with-case";
 import { FORM_OVERHEAD_BYTES, photoLimits } from "@/lib/photos/limits";
 import { readFormLimited } from "@/lib/http/body";
 import { PhotoRefusal, refuse } from "@/lib/photos/refusal";
 import { mayDeletePhoto } from "@/lib/photos/rules";
-import { assertPhotosOpen, uploadPhoto } from "@/lib/photos/service";
+import { assertPhotosOpen, photosOfCase, uploadPhoto } from "@/lib/photos/service";
 import { photoTagsSchema, tagsFromForm } from "@/lib/photos/tags";
 import { toPhotoView } from "@/lib/photos/view";
 
 export const GET = withCase("case:read", async ({ case: c, user }) => {
-  const rows = await listCasePhotos(c.id);
+  const rows = await photosOfCase(c);
   const photos = rows.map((p) => ({ ...toPhotoView(p), canDelete: mayDeletePhoto(user, p, c.status) }));
   return NextResponse.json({ caseId: c.id, caseNumber: c.number, readOnly: c.status === "signed", photos });
 });

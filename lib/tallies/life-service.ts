@@ -1,10 +1,10 @@
 // The life section's data: a quick fit for every cause and the full analysis for the chosen one.
 import "server-only";
-import { analyseCause, countedFor, summariseEveryCause, type LifeMeasure } from "@/lib/tallies/life";
-import type { TallyFilters } from "@/lib/tallies/filters";
-import type { LifeData } from "@/lib/tallies/life-data";
-import { fleetCounts, latestFleetBatch, lifeCounts } from "./life-counts";
-import { viewerSiteLimit, type TallyViewer } from "./scope";
+import { analyseCause, countedFor, summariseEveryCause, type LifeMeasure } from "./life";
+import type { TallyFilters } from "./filters";
+import type { LifeData } from "./life-data";
+import { fleetCounts, latestFleetBatch, lifeCounts } from "@/db/queries/tallies/life-counts";
+import { viewerSiteLimit, type TallyViewer } from "./site-limit";
 
 export async function loadLife(filters: TallyFilters, viewer: TallyViewer, measure: LifeMeasure, cause?: string): Promise<LifeData> {
   const [{ rows, withoutLife }, batch] = await Promise.all([lifeCounts(filters, viewer, measure), latestFleetBatch()]);

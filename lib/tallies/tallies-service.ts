@@ -1,19 +1,24 @@
 // Everything the tallies page shows for one set of filters: a handful of GROUP BY queries run
 // side by side, then shaped by the pure functions in lib/tallies.
 import "server-only";
-import { causeLabel } from "@/lib/tallies/labels";
-import { confirmationTable } from "@/lib/tallies/shape-confirmation";
-import { causeSiteTally } from "@/lib/tallies/shape-cause-site";
-import { monthlyTally } from "@/lib/tallies/shape-monthly";
-import { causePareto, triggerVerdictRows, verdictTotals } from "@/lib/tallies/shape-verdicts";
+import { recurringClusters } from "@/db/queries/tallies/clusters";
+import { tallyCounts } from "@/db/queries/tallies/counts";
+import { damageSectors } from "@/db/queries/tallies/damage-sectors";
+import { allSites } from "@/db/queries/tallies/sites";
 import { triggerLabel } from "@/lib/classification/labels";
-import type { TallyFilters } from "@/lib/tallies/filters";
-import type { TalliesData } from "@/lib/tallies/types";
-import { recurringClusters } from "./clusters";
-import { damageSectors } from "./damage-sectors";
-import { viewerSiteLimit, type TallyViewer } from "./scope";
-import { allSites } from "./sites";
-import { tallyCounts } from "./counts";
+import { causeLabel } from "./labels";
+import type { TallyFilters } from "./filters";
+import { confirmationTable } from "./shape-confirmation";
+import { causeSiteTally } from "./shape-cause-site";
+import { monthlyTally } from "./shape-monthly";
+import { causePareto, triggerVerdictRows, verdictTotals } from "./shape-verdicts";
+import { viewerSiteLimit, type TallyViewer } from "./site-limit";
+import type { SiteInfo, TalliesData } from "./types";
+
+/** Every site by id and code, for chart labels and the filter bar. */
+export async function tallySites(): Promise<SiteInfo[]> {
+  return allSites();
+}
 
 export async function loadTallies(filters: TallyFilters, viewer: TallyViewer): Promise<TalliesData> {
   const [{ cube, months }, clusters, damage, sites] = await Promise.all([
