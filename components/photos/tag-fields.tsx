@@ -2,7 +2,7 @@
 // The tag inputs shared by the upload defaults and the photo editor: part, row, clock, finding, caption.
 import { useId, useState } from "react";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { COMPONENTS, ROWS } from "@/lib/classification/components";
+import { COMPONENTS, ROWS } from "@/lib/classification/bearing-parts";
 import { oClockToDeg } from "@/lib/photos/clock";
 import type { FindingOption, TagValues } from "./tag-values";
 

@@ -2,7 +2,7 @@
 // most common first (stages in their own order, severity as "this bad or worse").
 import "server-only";
 import { bearingClassLabel, componentLabel } from "@/lib/classification/labels";
-import { SEVERITIES } from "@/lib/classification/components";
+import { SEVERITIES } from "@/lib/classification/bearing-parts";
 import { STAGES, STAGE_LABELS } from "@/lib/cases/stages";
 import type { SearchParams } from "@/lib/search/query-schema";
 import type { SearchLookups } from "./search-lookups";

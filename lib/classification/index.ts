@@ -1,4 +1,4 @@
-export * from "./components";
+export * from "./bearing-parts";
 export * from "./triggers";
 export * from "./damage-families";
 export * from "./damage-codes";

@@ -2,7 +2,7 @@
 // triggers, dispositions, confidence, grease, severity, bearing class. Pure. A code an admin added
 // after these lists were written reads as itself; `overrides` carries admins' own labels
 // (code_entries) where a caller has loaded them. No code at all reads as a dash.
-import { COMPONENTS, CONFIDENCES, DISPOSITIONS, LUBRICANT_CONDITIONS, ROWS, SEVERITIES, ZONES } from "./components";
+import { COMPONENTS, CONFIDENCES, DISPOSITIONS, LUBRICANT_CONDITIONS, ROWS, SEVERITIES, ZONES } from "./bearing-parts";
 import { DAMAGE_CODES } from "./damage-codes";
 import { DAMAGE_FAMILIES } from "./damage-families";
 import { ROOT_CAUSES } from "./root-causes";

@@ -1,5 +1,5 @@
 // How the case page orders photos: by part, in the order a bearing is taken apart, untagged last.
-import { COMPONENTS } from "@/lib/classification/components";
+import { COMPONENTS } from "@/lib/classification/bearing-parts";
 import { clockWords } from "@/lib/damage-map/geometry";
 import { componentLabel as labelOfComponent, damageLabel } from "@/lib/classification/labels";
 

@@ -1,6 +1,6 @@
 // The tags a photo carries: which part, which row, where on the clock, which finding, a caption.
 import { z } from "@/lib/validation/zod";
-import { COMPONENTS, ROWS, type ComponentInfo } from "@/lib/classification/components";
+import { COMPONENTS, ROWS, type ComponentInfo } from "@/lib/classification/bearing-parts";
 
 const byCode = new Map<string, ComponentInfo>(COMPONENTS.map((c) => [c.code, c]));
 export const componentInfo = (code: string): ComponentInfo | undefined => byCode.get(code);

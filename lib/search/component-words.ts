@@ -1,7 +1,7 @@
 // Words that name a part of the bearing, so "spall cup" also finds a case whose cup
 // finding is coded but whose notes never say "cup". Names come from the part list;
 // a few shop words are added where the trade uses another name (common practice).
-import { COMPONENTS } from "@/lib/classification/components";
+import { COMPONENTS } from "@/lib/classification/bearing-parts";
 import { stem, words } from "@/lib/classification/text-tokens";
 
 const EXTRA_NAMES: Record<string, readonly string[]> = {

@@ -1,6 +1,6 @@
 // Which demo cases get photos, of which findings, and how each photo is tagged and captioned.
 // Pure: it reads case rows and returns the plan, so the same casebook always gets the same photos.
-import { COMPONENTS } from "../../../lib/classification/components";
+import { COMPONENTS } from "../../../lib/classification/bearing-parts";
 import { damageCodeInfo } from "../../../lib/classification";
 import { oclock } from "../findings";
 import { WATER_RUN } from "../demo-groups";

@@ -1,4 +1,4 @@
-import { COMPONENTS, SEVERITIES } from "@/lib/classification/components";
+import { COMPONENTS, SEVERITIES } from "@/lib/classification/bearing-parts";
 import { zoneLabel } from "@/lib/classification/labels";
 
 // Warmer as it gets worse; the same tokens as the rest of the app, so dark mode follows.
