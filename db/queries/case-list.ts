@@ -133,18 +133,24 @@ export async function listCases(
   const where = caseListWhere(filters, viewer);
   // The page and the total side by side: a window count would make PostgreSQL read and sort every
   // matching row for 25 of them, where the page alone walks an index (cases_list_*_idx) and stops;
-  // the total sums the count cells (or, for a date range or text, counts the cases).
+  // the total sums the count cells (or, for a date range or text, counts the cases). The page is
+  // picked by case number first, with only the joins its filters and order need, so the rows a deep
+  // page skips are read from the index alone and the labels are looked up for the 25 it shows.
+  const needsSite = Boolean(filters.site?.length) || sort.field === "site";
+  let pick = db.select({ number: cases.number }).from(cases).$dynamic();
+  if (needsSite) pick = pick.leftJoin(sites, onSite);
+  if (sort.field === "trigger") pick = pick.leftJoin(triggerCode, onTrigger);
+  if (sort.field === "cause") pick = pick.leftJoin(causeCode, onCause);
+  const onPage = pick.where(where).orderBy(...caseListOrder(sort)).limit(pageSize).offset((page - 1) * pageSize).as("on_page");
   const [found, total] = await Promise.all([
     db
       .select(rowColumns)
-      .from(cases)
+      .from(onPage)
+      .innerJoin(cases, eq(cases.number, onPage.number))
       .leftJoin(sites, onSite)
       .leftJoin(triggerCode, onTrigger)
       .leftJoin(causeCode, onCause)
-      .where(where)
-      .orderBy(...caseListOrder(sort))
-      .limit(pageSize)
-      .offset((page - 1) * pageSize),
+      .orderBy(...caseListOrder(sort)),
     countCases(filters, viewer),
   ]);
   return { rows: found.map((r) => toRow(r)), total };
