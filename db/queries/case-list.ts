@@ -2,9 +2,9 @@
 // Every query is held to what the viewer may read (canReadCase, written as SQL).
 import "server-only";
 import { and, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
+import { alias, type AnyPgColumn } from "drizzle-orm/pg-core";
 import { db } from "@/db";
-import { cases, codeEntries, sites } from "@/db/schema";
+import { caseListCounts, cases, codeEntries, sites } from "@/db/schema";
 import type { CaseColumnId, CaseListRow } from "@/lib/cases/list-columns";
 import { CSV_HEADER, csvValues, EXPORT_CAP } from "@/lib/cases/list-csv";
 import type { CaseFilters, CaseSort } from "@/lib/cases/list-params";
@@ -27,9 +27,6 @@ const rowColumns = {
   removalConfirmed: cases.removalConfirmed, serviceMonths: cases.serviceMonths, updatedAt: cases.updatedAt,
 };
 
-/** Inspectors: their shop's cases and the ones they filed. Other roles: everything. */
-export const viewerCaseScope = (viewer: CaseListViewer): SQL | undefined => readableCases(viewer);
-
 const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 function textMatch(q: string): SQL[] {
@@ -37,13 +34,19 @@ function textMatch(q: string): SQL[] {
   return q.split(/\s+/).filter(Boolean).slice(0, 8).map((term) => sql`${hay} ilike ${`%${likeEscape(term)}%`}`);
 }
 
-export function caseListWhere(f: CaseFilters, viewer: CaseListViewer): SQL | undefined {
+type FilterColumns = { [K in "createdBy" | "siteId" | "status" | "trigger" | "primaryCause" | "bearingClass"]: AnyPgColumn };
+
+/** The filters the count cells can answer: every one but a removal-date range and free text. */
+export const countedByCells = (f: CaseFilters): boolean => !f.from && !f.to && !f.q;
+
+/** The viewer's reach and the filters, over cases or (only what countedByCells allows) over the count cells. */
+export function caseListWhere(f: CaseFilters, viewer: CaseListViewer, on: FilterColumns = cases): SQL | undefined {
   return and(
-    viewerCaseScope(viewer),
-    f.status?.length ? inArray(cases.status, f.status) : undefined,
-    f.trigger?.length ? inArray(cases.trigger, f.trigger) : undefined,
-    f.cause?.length ? inArray(cases.primaryCause, f.cause) : undefined,
-    f.class?.length ? inArray(cases.bearingClass, f.class) : undefined,
+    readableCases(viewer, { createdBy: on.createdBy, siteId: on.siteId }),
+    f.status?.length ? inArray(on.status, f.status) : undefined,
+    f.trigger?.length ? inArray(on.trigger, f.trigger) : undefined,
+    f.cause?.length ? inArray(on.primaryCause, f.cause) : undefined,
+    f.class?.length ? inArray(on.bearingClass, f.class) : undefined,
     f.site?.length ? inArray(sites.code, f.site) : undefined,
     f.from ? gte(cases.removedOn, f.from) : undefined,
     f.to ? lte(cases.removedOn, f.to) : undefined,
@@ -103,28 +106,54 @@ export async function unknownFilterCodes(f: CaseFilters): Promise<string[]> {
   return problems;
 }
 
+/**
+ * How many cases match, exactly. Without a date range or text every filter is a column of
+ * case_list_counts, whose cells (kept by triggers on cases) are summed within the viewer's reach;
+ * otherwise the cases are counted (a date range from cases_list_count_day_idx alone).
+ */
+export async function countCases(filters: CaseFilters, viewer: CaseListViewer): Promise<number> {
+  if (countedByCells(filters)) {
+    const total = sql<number>`coalesce(sum(${caseListCounts.n}), 0)`.mapWith(Number);
+    const where = caseListWhere(filters, viewer, caseListCounts);
+    const [row] = filters.site?.length
+      ? await db.select({ n: total }).from(caseListCounts).innerJoin(sites, eq(sites.id, caseListCounts.siteId)).where(where)
+      : await db.select({ n: total }).from(caseListCounts).where(where);
+    return row.n;
+  }
+  const where = caseListWhere(filters, viewer);
+  const [row] = filters.site?.length
+    ? await db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(cases).innerJoin(sites, onSite).where(where)
+    : await db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(cases).where(where);
+  return row.n;
+}
+
 export async function listCases(
   filters: CaseFilters, sort: CaseSort, page: number, pageSize: number, viewer: CaseListViewer,
 ): Promise<{ rows: CaseListRow[]; total: number }> {
   const where = caseListWhere(filters, viewer);
   // The page and the total side by side: a window count would make PostgreSQL read and sort every
-  // matching row for 25 of them, where the page alone walks an index (cases_list_*_idx) and stops.
-  const [found, [counted]] = await Promise.all([
+  // matching row for 25 of them, where the page alone walks an index (cases_list_*_idx) and stops;
+  // the total sums the count cells (or, for a date range or text, counts the cases). The page is
+  // picked by case number first, with only the joins its filters and order need, so the rows a deep
+  // page skips are read from the index alone and the labels are looked up for the 25 it shows.
+  const needsSite = Boolean(filters.site?.length) || sort.field === "site";
+  let pick = db.select({ number: cases.number }).from(cases).$dynamic();
+  if (needsSite) pick = pick.leftJoin(sites, onSite);
+  if (sort.field === "trigger") pick = pick.leftJoin(triggerCode, onTrigger);
+  if (sort.field === "cause") pick = pick.leftJoin(causeCode, onCause);
+  const onPage = pick.where(where).orderBy(...caseListOrder(sort)).limit(pageSize).offset((page - 1) * pageSize).as("on_page");
+  const [found, total] = await Promise.all([
     db
       .select(rowColumns)
-      .from(cases)
+      .from(onPage)
+      .innerJoin(cases, eq(cases.number, onPage.number))
       .leftJoin(sites, onSite)
       .leftJoin(triggerCode, onTrigger)
       .leftJoin(causeCode, onCause)
-      .where(where)
-      .orderBy(...caseListOrder(sort))
-      .limit(pageSize)
-      .offset((page - 1) * pageSize),
-    filters.site?.length
-      ? db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(cases).innerJoin(sites, onSite).where(where)
-      : db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(cases).where(where),
+      .orderBy(...caseListOrder(sort)),
+    countCases(filters, viewer),
   ]);
-  return { rows: found.map((r) => toRow(r)), total: counted.n };
+  return { rows: found.map((r) => toRow(r)), total };
 }
 
 export type CaseExport = { total: number; capped: boolean; cap: number; batches: () => AsyncGenerator<CaseListRow[]> };

@@ -2,6 +2,7 @@
 // JSON columns hold structured entry (field checks, lubricant, dispositions) whose shape is
 // validated by the zod schemas in lib/cases; the computed results are stored beside them
 // so lists and tallies can filter without recomputing.
+import { sql } from "drizzle-orm";
 import { date, index, uniqueIndex, integer, jsonb, numeric, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { user } from "./auth";
 import { sites } from "./sites";
@@ -89,6 +90,9 @@ export const cases = pgTable(
     index("cases_list_updated_idx").on(t.updatedAt.desc().nullsLast(), t.number.desc()),
     index("cases_list_removed_desc_idx").on(t.removedOn.desc().nullsLast(), t.number.desc()),
     index("cases_list_removed_asc_idx").on(t.removedOn.asc().nullsLast(), t.number.desc()),
+    // The car order (mark, then the number by length so 9 comes before 10), each way.
+    index("cases_list_car_asc_idx").on(sql`nullif(${t.carMark}, '') asc nulls last`, sql`length(${t.carNumber}) asc nulls last`, sql`${t.carNumber} asc nulls last`, t.number.desc().nullsLast()),
+    index("cases_list_car_desc_idx").on(sql`nullif(${t.carMark}, '') desc nulls last`, sql`length(${t.carNumber}) desc nulls last`, sql`${t.carNumber} desc nulls last`, t.number.desc().nullsLast()),
     uniqueIndex("cases_create_key_idx").on(t.createdBy, t.createKey),
     // later removals of the same car and position (missed keep calls)
     index("cases_position_idx").on(t.carMark, t.carNumber, t.axle, t.side, t.removedOn),

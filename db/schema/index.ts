@@ -11,3 +11,4 @@ export * from "./fleet";
 export * from "./search";
 export * from "./security";
 export * from "./yield-cells";
+export * from "./case-list-counts";

@@ -1,6 +1,6 @@
 // The read rule exists twice on purpose: as SQL (db/queries/case-scope.ts) for every query, and as a
 // pure function (lib/cases/access.ts) for rows in hand. Here both judge every case in the database
-// for each kind of reader, and must agree case by case.
+// for each kind of reader, and must agree case by case (and the SQL over the list's count cells in sum).
 import { describe, expect, test } from "vitest";
 import { eq, sql } from "drizzle-orm";
 import { readableCases, readableIn } from "../../../db/queries/case-scope";
@@ -38,6 +38,10 @@ describe("one read rule, two forms", () => {
       const byRule = new Set(all.filter((c) => canReadCase(viewer, c)).map((c) => c.id));
       expect([...bySql].sort(), who).toEqual([...byRule].sort());
       expect([...byAlias].sort(), who).toEqual([...byRule].sort());
+      // The list's total: the same rule over the count cells' columns sums to the same cases.
+      const cells = t.caseListCounts;
+      const [summed] = await db.select({ n: sql<number>`coalesce(sum(${cells.n}), 0)`.mapWith(Number) }).from(cells).where(readableCases(viewer, { createdBy: cells.createdBy, siteId: cells.siteId }));
+      expect(summed.n, who).toBe(byRule.size);
     }
   });
 });
