@@ -49,8 +49,9 @@ const EFFECTIVE_ROW = `coalesce(fi.row, CASE fi.component ${FIXED_ROWS.map((f) =
 
 /**
  * Cases holding one finding that is everything the words name together: the part, the row
- * (recorded, or the part's own), the zone and the damage. Null when the words name no finding.
- * An array sub-select, so PostgreSQL works it out once and can OR it with the text index.
+ * (recorded, or the part's own), the zone and the damage, as a set of case ids. Null when the
+ * words name no finding. Joined to the searched rows once (a hash join), never tested per row
+ * against an array: a part word alone ("cup") names most of the casebook.
  */
 export function structuredFindingIds(clauses: readonly PreparedClause[]): SQL | null {
   const named = clauses.filter(namesFinding);
@@ -63,22 +64,25 @@ export function structuredFindingIds(clauses: readonly PreparedClause[]): SQL | 
     if (c.zones.length) either.push(sql`fi.zone = ANY(${param(c.zones)}::text[])`);
     return sql`(${sql.join(either, sql` OR `)})`;
   });
-  return sql`ARRAY(SELECT DISTINCT fi.case_id FROM findings fi WHERE ${sql.join(conditions, sql` AND `)})`;
+  return sql`SELECT DISTINCT fi.case_id FROM findings fi WHERE ${sql.join(conditions, sql` AND `)}`;
 }
+
+/** The join that brings the structured set in as sf (sf.case_id is null for the other rows). */
+export const STRUCTURED_HIT = sql.raw("(sf.case_id IS NOT NULL)");
 
 /**
  * What the words ask of a case: every word clause in its text (or its codes and parts), or a
  * finding that is what the part, row, zone and damage words name together, with the other
  * words still in its text.
  */
-export function wordMatchSql(clauses: readonly PreparedClause[]): { match: SQL | null; structured: SQL | null } {
+export function wordMatchSql(clauses: readonly PreparedClause[]): { match: SQL | null; structured: SQL | null; join: SQL | null } {
   const all = documentQuery(clauses);
-  const structured = structuredFindingIds(clauses);
+  const ids = structuredFindingIds(clauses);
   const textAll = all ? sql`s.document @@ ${all}::tsquery` : null;
-  if (!structured) return { match: textAll, structured: null };
+  if (!ids) return { match: textAll, structured: null, join: null };
   const rest = documentQuery(clauses.filter((c) => !namesFinding(c)));
-  const byFinding = rest ? sql`(s.case_id = ANY(${structured}) AND s.document @@ ${rest}::tsquery)` : sql`s.case_id = ANY(${structured})`;
-  return { match: textAll ? sql`(${textAll} OR ${byFinding})` : byFinding, structured };
+  const byFinding = rest ? sql`(${STRUCTURED_HIT} AND s.document @@ ${rest}::tsquery)` : STRUCTURED_HIT;
+  return { match: textAll ? sql`(${textAll} OR ${byFinding})` : byFinding, structured: STRUCTURED_HIT, join: sql`LEFT JOIN (${ids}) sf ON sf.case_id = s.case_id` };
 }
 
 /** A serial, car or case number in part; or the same token in the narrative ("1/16"). */
@@ -99,7 +103,7 @@ export function rankSql(clauses: readonly PreparedClause[], withText: boolean, s
   const components = [...new Set(clauses.flatMap((c) => c.components))];
   const pairs = components.flatMap((p) => codes.map((code) => `${p}|${code}`));
   const terms: SQL[] = [sql`0`];
-  if (structured) terms.push(sql`2 * (s.case_id = ANY(${structured}))::int`);
+  if (structured) terms.push(sql`2 * ${structured}::int`);
   if (withText && tsqueries.length) terms.push(sql`ts_rank(s.document, ${tsqueries.map((q) => `( ${q} )`).join(" | ")}::tsquery, 1)`);
   if (codes.length) terms.push(sql`0.25 * (s.damage_codes && ${param(codes)}::text[])::int`);
   if (pairs.length) terms.push(sql`0.25 * (s.finding_keys && ${param(pairs)}::text[])::int`);

@@ -48,7 +48,7 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
     params.to ? sql`s.sort_on <= ${params.to}::date` : null,
   ].filter((x): x is SQL => x !== null);
   // Word searches read the row that carries the narrative; the rest the narrow one.
-  const from = docQuery ? sql`case_search_text s` : sql`case_search s`;
+  const from = sql`${docQuery ? sql`case_search_text s` : sql`case_search s`} ${words.join ?? sql``}`;
   const where = and([...base, ...(Object.values(filters) as SQL[])]);
   const ranked = prepared.length > 0 && params.sort === "relevance";
   const rank = ranked ? rankSql(prepared, docQuery !== "", words.structured) : sql`0`;

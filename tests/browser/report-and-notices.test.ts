@@ -1,5 +1,5 @@
 // In Chromium: the printable report (draft mark, print layout), the Notices switches and the outbox,
-// at phone and desk sizes. Screenshots go to /tmp/shots for review.
+// at phone and desk sizes. Screenshots go to the shots folder (tests/support/browser-fixture.ts) for review.
 import { randomUUID } from "node:crypto";
 import { writeFileSync } from "node:fs";
 import { hashPassword } from "better-auth/crypto";

@@ -48,14 +48,14 @@ test("an engineer sees the twin first with photos side by side, and links it as 
   expect(await first.locator('[data-kind="same-finding"]').count()).toBeGreaterThan(0);
   const compare = await first.locator('[data-testid="compare-photos"]').getAttribute("href");
   expect(compare).toBe(`/photos/compare?a=${photoIds[0]}&b=${photoIds[1]}`);
-  await page.locator("#similar").screenshot({ path: "/tmp/shots/similar-desktop.png" });
+  await ui.shotOf(page.locator("#similar"), "similar-desktop");
 
   await first.locator('[data-testid="link-related"]').click();
   await first.locator('input[aria-label="Note on the link"]').fill("Same spring water run");
   await first.locator('button:has-text("Link")').first().click();
   await first.locator('[data-testid="linked-mark"]').waitFor();
   await page.waitForSelector(`[data-testid="related-case"]:has-text("${twin.number}")`);
-  await page.locator("#similar").screenshot({ path: "/tmp/shots/similar-linked-desktop.png" });
+  await ui.shotOf(page.locator("#similar"), "similar-linked-desktop");
   await page.context().close();
 });
 
@@ -67,6 +67,6 @@ test("on a phone the twin's page lists the link back, and the target's list fits
   await new CasePage(page).goto(target.number, "", "similar");
   await page.waitForSelector('[data-testid="similar-case"]');
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
-  await page.locator("#similar").screenshot({ path: "/tmp/shots/similar-phone.png" });
+  await ui.shotOf(page.locator("#similar"), "similar-phone");
   await page.context().close();
 });

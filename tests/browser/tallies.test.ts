@@ -1,6 +1,6 @@
 // In Chromium: a manager opens the tallies on the demo data and every chart draws; the table view,
 // CSV and PNG downloads work; the filters go into the URL; the life section draws its Weibull plot.
-// Screenshots at phone and desk sizes go to /tmp/shots for review.
+// Screenshots at phone and desk sizes go to the shots folder (tests/support/browser-fixture.ts) for review.
 import { readFileSync } from "node:fs";
 import { beforeAll, expect, test } from "vitest";
 import type { Page } from "playwright-core";

@@ -1,5 +1,5 @@
 // In Chromium: a manager opens Tallies › Removal yield on the demo data and every figure draws;
-// the table view and the CSV download work. Screenshots at phone and desk sizes go to /tmp/shots.
+// the table view and the CSV download work. Screenshots at phone and desk sizes go to the shots folder (tests/support/browser-fixture.ts).
 import { expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { DESK, PHONE } from "../support/browser";

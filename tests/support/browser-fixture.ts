@@ -4,7 +4,7 @@
 //   test("…", async () => { const page = await ui.signIn("inspector", PHONE); … await ui.shot(page, "name"); });
 import { mkdirSync } from "node:fs";
 import path from "node:path";
-import type { Browser, BrowserContextOptions, Page } from "playwright-core";
+import type { Browser, BrowserContextOptions, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll } from "vitest";
 import { DEMO_PASSWORD } from "../../scripts/seed/demo-people";
 import { demoUser, type DemoRole } from "./api";
@@ -25,6 +25,8 @@ export type BrowserFixture = {
   open(viewport?: Viewport, options?: BrowserContextOptions): Promise<Page>;
   /** Saves a screenshot as SHOTS/<name>.png (whole page unless told). */
   shot(page: Page, name: string, options?: { fullPage?: boolean }): Promise<string>;
+  /** Saves a screenshot of one part of a page as SHOTS/<name>.png. */
+  shotOf(part: Locator, name: string): Promise<string>;
 };
 
 export function browserPerFile(): BrowserFixture {
@@ -56,6 +58,11 @@ export function browserPerFile(): BrowserFixture {
     async shot(page, name, options = {}) {
       const file = path.join(SHOTS, `${name}.png`);
       await page.screenshot({ path: file, fullPage: options.fullPage ?? true });
+      return file;
+    },
+    async shotOf(part, name) {
+      const file = path.join(SHOTS, `${name}.png`);
+      await part.screenshot({ path: file });
       return file;
     },
   };

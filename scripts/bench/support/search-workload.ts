@@ -11,6 +11,8 @@ const WORDS = [
   "spalling cup", "spaling", "rust", "milky grease", "water etch", "arc burn", "welding current", "debris dents",
   "gritty grease", "brinell dents", "heat tint ribs", "seal", "grease loss", "creep journal", "lot C-2207", "fretting",
   "flaking", "pitting", "no defect found", "seal drag cold", "bent cage", "craters roller spacing", "emulsified", "\"fatigue spall\"",
+  // Part and row words name findings: a part alone ("cup", "roller") holds most of the casebook.
+  "cup", "cone", "roller", "lubricant", "spall cup outboard row", "cone inboard row fretting",
 ];
 const TYPOS = ["milkey greese", "emulsfied", "brinnel", "fretign", "spaled cone"];
 const FACETS = [

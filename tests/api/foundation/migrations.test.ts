@@ -24,10 +24,18 @@ beforeAll(async () => {
   const url = new URL(process.env.DATABASE_URL!);
   url.pathname = `/${name}`;
   fresh = new Pool({ connectionString: url.toString(), max: 2 });
+  fresh.on("error", (err) => console.warn(`migration test pool: ${err.message}`));
 });
 
 afterAll(async () => {
   await fresh?.end();
+  // end() can resolve while a backend is still closing; forcing the drop then kills a socket the
+  // ended pool no longer listens on (an uncaught error). Wait for the backends to go first.
+  for (let i = 0; i < 50; i++) {
+    const { rows } = await pool.query(`select count(*)::int as n from pg_stat_activity where datname = $1`, [name]);
+    if (rows[0].n === 0) break;
+    await new Promise((r) => setTimeout(r, 100));
+  }
   await pool.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
 });
 
