@@ -4,5 +4,5 @@ export type { CaseDetail } from "@/db/queries/case-read";
 export type { CaseListOptions, FilterOption } from "@/db/queries/case-list-options";
 export type { CaseLinkItem } from "@/db/queries/case-links";
 export type { CaseCard } from "@/db/queries/home";
-export type { SimilarCaseItem } from "@/db/queries/similar";
+export type { SimilarCaseItem } from "./similar-service";
 export type { Finding } from "@/db/schema";

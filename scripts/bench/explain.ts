@@ -6,7 +6,7 @@ import { db, pool } from "@/db";
 import { findReadableCase, getCaseDetail } from "@/db/queries/case-read";
 import { listCases } from "@/db/queries/case-list";
 import { searchCases } from "@/db/queries/search";
-import { findSimilarCases } from "@/db/queries/similar";
+import { findSimilarCases } from "@/lib/cases/similar-service";
 import { loadLife } from "@/lib/tallies/life-service";
 import { loadTallies } from "@/lib/tallies/tallies-service";
 import { parseListParams } from "@/lib/cases/list-params";

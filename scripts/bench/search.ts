@@ -3,7 +3,7 @@
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
 import { searchCases } from "@/db/queries/search";
-import { findSimilarCases } from "@/db/queries/similar";
+import { findSimilarCases } from "@/lib/cases/similar-service";
 import { parseSearchParams } from "@/lib/search/query-schema";
 import { runBench, measure } from "./support/figures";
 import { benchQueries } from "./support/search-workload";
