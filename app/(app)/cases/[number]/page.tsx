@@ -8,7 +8,7 @@ import { TeardownForm } from "@/components/case/teardown-form";
 import { VerdictForm } from "@/components/case/verdict-form";
 import { WorkflowBar } from "@/components/case/workflow-bar";
 import { RemovalFormLazy as RemovalForm } from "@/components/removal/removal-form-lazy";
-import { caseDetail, loadReadableCase, readableHistory } from "@/lib/cases/service";
+import { caseDetail, readableHistory } from "@/lib/cases/service";
 import { codeEntries } from "@/lib/codes/code-service";
 import { siteFormOptions } from "@/lib/sites/site-service";
 import { requirePageUser } from "@/lib/auth/session";
@@ -43,7 +43,7 @@ export default async function CasePage({ params, searchParams }: { params: Promi
   const actions = ACTIONS.filter((a) => WORKFLOW[a].from.includes(c.status) && can(user.role, WORKFLOW[a].permission));
   const problems = verdictProblems({ primaryCause: c.primaryCause, confidence: c.confidence, removalConfirmed: c.removalConfirmed, findingCount: c.findings.length });
   const editing = (await searchParams).edit === "field" && editField;
-  const signature = c.status === "signed" ? await checkSignature(await loadReadableCase(c.id, user)) : null;
+  const signature = c.status === "signed" ? await checkSignature(c) : null;
   const codes = damage.map((d) => ({ code: d.code, label: d.label, description: d.description, synonyms: d.synonyms, retired: d.retiredAt !== null, family: d.family }));
 
   return (
