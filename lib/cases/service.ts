@@ -91,8 +91,6 @@ async function refuseImplausible(input: FieldReportInput) {
   if (problem) throw badRequest(problem.text, { fields: { endPlay: problem.text } });
 }
 
-export { createCaseSchema } from "./schemas";
-
 /** A device's key for one filing: letters, digits and dashes (a UUID fits). */
 export const createKeySchema = z
   .string({ message: "Idempotency-Key must be text." })
