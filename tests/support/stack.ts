@@ -11,19 +11,10 @@ import { ListObjectsV2Command, S3Client } from "@aws-sdk/client-s3";
 import { DEMO_PASSWORD } from "../../scripts/seed/demo-people";
 import { ApiClient, demoUser, type DemoRole } from "./api";
 import { freePort } from "./free-port";
+import { PROJECT, bin, killAndWait, spawnNextStart, waitUntil } from "./next-server";
 
 const run = promisify(execFile);
-export const PROJECT = path.resolve(import.meta.dirname, "../..");
-const bin = (name: string) => path.join(PROJECT, "node_modules/.bin", name);
-
-export async function waitUntil(what: string, ok: () => Promise<boolean>, seconds = 60): Promise<void> {
-  const until = Date.now() + seconds * 1000;
-  while (Date.now() < until) {
-    if (await ok().catch(() => false)) return;
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`${what} within ${seconds} s`);
-}
+export { PROJECT, waitUntil } from "./next-server";
 
 // Any HTTP answer means the process is listening (the health check says 503 here: no mail server).
 const answers = (url: string) => async () => Boolean((await fetch(url, { signal: AbortSignal.timeout(2000) })).status);
@@ -124,7 +115,7 @@ export class Stack {
 
   async startApp(i = 0) {
     const log = openSync(path.join(this.dir, "logs", `app-${i}.log`), "a");
-    const proc = spawn(bin("next"), ["start", "-H", "127.0.0.1", "-p", String(this.appPorts[i])], { cwd: PROJECT, env: { ...this.env(i), ...this.extraEnv }, stdio: ["ignore", log, log] });
+    const proc = spawnNextStart(this.appPorts[i], { ...this.env(i), ...this.extraEnv }, ["ignore", log, log]);
     this.apps.set(i, proc);
     await waitUntil(`app server ${i} answered`, answers(`${this.appUrl(i)}/api/health`), 90);
   }
@@ -166,9 +157,3 @@ export class Stack {
   }
 }
 
-async function killAndWait(p: ChildProcess | undefined, signal: NodeJS.Signals) {
-  if (!p || p.exitCode !== null || p.signalCode !== null) return;
-  const gone = new Promise((r) => p.once("exit", r));
-  p.kill(signal);
-  await Promise.race([gone, new Promise((r) => setTimeout(r, 10_000))]);
-}
