@@ -24,6 +24,8 @@ export class Stack {
   ports = { pg: 0, s3: 0, smtp: 0 };
   appPorts: number[] = [];
   private s3Proc?: ChildProcess;
+  private mailProc?: ChildProcess;
+  private mailHttpPort = 0;
   private apps = new Map<number, ChildProcess>();
   /** `extraEnv` goes to the app servers only (a lower statement timeout, say). */
   constructor(
@@ -55,7 +57,7 @@ export class Stack {
       S3_ENDPOINT: this.s3Endpoint,
       S3_PORT: String(this.ports.s3),
       S3_DIR: path.join(this.dir, "s3"),
-      // Nobody listens here: mail waits in the outbox, which these tests do not read.
+      // Nobody listens here unless a test starts the mail fake (startMail): mail waits in the outbox.
       SMTP_PORT: String(this.ports.smtp),
       APP_URL: url,
       BETTER_AUTH_URL: url,
@@ -87,6 +89,22 @@ export class Stack {
     // node itself (not the tsx wrapper, which runs a child) so a signal reaches the server process.
     this.s3Proc = spawn(process.execPath, ["--import", "tsx", "storage-fake/server.ts"], { cwd: PROJECT, env: this.env(), stdio: ["ignore", log, log] });
     await waitUntil("the object store fake answered", answers(`${this.s3Endpoint}/`), 30);
+  }
+  /** Starts the mail fake on the stack's SMTP port (nobody listens there until this is called). */
+  async startMail() {
+    this.mailHttpPort ||= await freePort();
+    const log = openSync(path.join(this.dir, "logs", "mail.log"), "a");
+    const env = { ...this.env(), MAIL_HTTP_PORT: String(this.mailHttpPort), MAIL_DIR: path.join(this.dir, "mail") };
+    this.mailProc = spawn(process.execPath, ["--import", "tsx", "scripts/services/mail-fake.ts"], { cwd: PROJECT, env, stdio: ["ignore", log, log] });
+    await waitUntil("the mail fake answered", answers(`http://127.0.0.1:${this.mailHttpPort}/health`), 30);
+  }
+  async killMail() {
+    await killAndWait(this.mailProc, "SIGKILL");
+    this.mailProc = undefined;
+  }
+  /** Every message the mail fake has taken (kept on disk, so across its restarts). */
+  async mailMessages(): Promise<{ to: string[]; subject: string; text: string }[]> {
+    return (await fetch(`http://127.0.0.1:${this.mailHttpPort}/messages`)).json();
   }
   /** Freezes the store fake: it still accepts connections but answers nothing (a stuck store). */
   pauseObjectStore() {
@@ -152,6 +170,7 @@ export class Stack {
   async stop() {
     for (const p of this.apps.values()) await killAndWait(p, "SIGTERM");
     await killAndWait(this.s3Proc, "SIGTERM");
+    await killAndWait(this.mailProc, "SIGTERM");
     await run("bash", ["scripts/services/pg.sh", "remove"], { cwd: PROJECT, env: this.env() }).catch(() => undefined);
     rmSync(this.dir, { recursive: true, force: true });
   }
