@@ -155,12 +155,28 @@ export function waldInterval(fit: LogisticFit, which: Coefficient, confidence = 
 /** Highest log-likelihood with one coefficient held at `value`: a 1-D concave problem in the other, by Newton. */
 function profileLoglik(points: readonly BinomialPoint[], which: Coefficient, value: number, start: number): { ll: number; other: number } {
   let other = start;
-  const at = (o: number) => (which === "slope" ? logLikelihood(points, o, value) : logLikelihood(points, value, o));
+  // e^-|eta| at each point where the log-likelihood was last taken: the Newton step that follows is
+  // taken at that same place, and logistic() and softplus() would work out the same exponential
+  // again. Reusing it saves a third of the exponentials and changes no digit.
+  const ex = new Float64Array(points.length);
+  const at = (o: number) => {
+    let ll = 0;
+    for (let i = 0; i < points.length; i++) {
+      const p = points[i];
+      const eta = which === "slope" ? o + value * p.x : value + o * p.x;
+      const e = eta > 0 ? Math.exp(-eta) : Math.exp(eta);
+      ex[i] = e;
+      ll += p.y * eta - p.n * (eta > 0 ? eta + Math.log1p(e) : Math.log1p(e));
+    }
+    return ll;
+  };
   let ll = at(other);
   for (let i = 0; i < 100; i++) {
     let g = 0, h = 0;
-    for (const p of points) {
-      const mu = which === "slope" ? logistic(other + value * p.x) : logistic(value + other * p.x);
+    for (let j = 0; j < points.length; j++) {
+      const p = points[j];
+      const eta = which === "slope" ? other + value * p.x : value + other * p.x;
+      const mu = eta >= 0 ? 1 / (1 + ex[j]) : ex[j] / (1 + ex[j]);
       const dx = which === "slope" ? 1 : p.x;
       g += (p.y - p.n * mu) * dx;
       h += p.n * mu * (1 - mu) * dx * dx;

@@ -153,15 +153,24 @@ export function quarterSeries(cells: readonly CallCell[], siteLabel: (id: string
 
 export type YieldLabels = { site: (id: string) => string; person: (id: string) => string; trigger: (code: string) => string };
 
-export function shapeYield(counts: YieldCounts, labels: YieldLabels): Omit<YieldData, "filters" | "missWindow" | "siteLimit" | "ownCallsOnly" | "namesShown" | "generatedAt"> {
-  const margin = readingFit(counts.hot, "margin");
-  const reading = readingFit(counts.hot, "reading");
+/** Both reading fits of the hot-bearing cells: the costliest shaping, so a caller may start it as soon as those cells arrive. */
+export function readingFits(cells: readonly HotCell[]): ReadingFits {
+  return { margin: readingFit(cells, "margin"), reading: readingFit(cells, "reading") };
+}
+
+export type ReadingFits = { margin: ReadingFit; reading: ReadingFit };
+
+/** `fits`, when given, must be `readingFits(counts.hot)`. */
+export function shapeYield(counts: YieldCounts, labels: YieldLabels, fits: ReadingFits = readingFits(counts.hot)): Omit<YieldData, "filters" | "missWindow" | "siteLimit" | "ownCallsOnly" | "namesShown" | "generatedAt"> {
+  const { margin, reading } = fits;
   const detectors = detectorRows(counts.detectors, labels.trigger);
   const shops = callRows(counts.callsByShop, counts.keepsByShop, labels.site);
   const inspectors = callRows(counts.callsByInspector, counts.keepsByInspector, labels.person);
   const callN = counts.callsByShop.reduce((s, c) => s + c.n, 0);
   const callY = counts.callsByShop.reduce((s, c) => s + c.confirmed, 0);
-  const byTrigger = counts.triggers.filter((c) => c.n > 0).map((c) => rateRow(c, labels.trigger(c.key))).sort((a, b) => b.costUsd - a.costUsd || b.noDefect - a.noDefect);
+  const byTrigger = counts.triggers.filter((c) => c.n > 0).map((c) => rateRow(c, labels.trigger(c.key)))
+    // the label settles ties (triggers with no no-defect removals), whatever order the counts came in
+    .sort((a, b) => b.costUsd - a.costUsd || b.noDefect - a.noDefect || a.label.localeCompare(b.label));
   const byDetector = detectors.rows.filter((r) => r.noDefect > 0).sort((a, b) => b.costUsd - a.costUsd || b.noDefect - a.noDefect);
   const cost = {
     byTrigger,

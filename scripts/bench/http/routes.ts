@@ -30,6 +30,7 @@ async function routes(): Promise<Route[]> {
       { name: "tallies page data", paths: ["/api/tallies"], target: 300, inProcess: "tallies page data" },
       { name: "life section, all time", paths: ["/api/tallies/life"], target: 300, inProcess: "life section, all time and filters" },
       { name: "life section, one cause", paths: [`/api/tallies/life?cause=${encodeURIComponent(cause)}`], target: 300, inProcess: `life section, one cause (${cause})` },
+      { name: "removal yield", paths: ["/api/tallies/yield", "/api/tallies/yield?trigger=wayside-hot", "/api/tallies/yield?miss=365"], target: 300, inProcess: "removal-yield page data" },
     ];
   } finally {
     await pg.end();
