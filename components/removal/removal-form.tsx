@@ -58,16 +58,20 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
 
   async function file() {
     if (filing) return;
-    // Checked on the device first: what is missing is shown now, not after the outbox replays it.
-    const { createCaseSchema } = await loadReportRules();
-    const parsed = createCaseSchema.safeParse(forSaving(draft));
-    if (!parsed.success) {
+    // Set before the first await, so a second tap while the check loads does nothing.
+    setFiling(true);
+    // Checked on the device first: what is missing is shown now, not after the outbox replays it. Should the
+    // check itself not load (no signal on a visit that never fetched it), the server checks the report when it
+    // arrives, and a refusal stays in the outbox with its reason.
+    const rules = await loadReportRules().catch(() => null);
+    const parsed = rules?.createCaseSchema.safeParse(forSaving(draft));
+    if (parsed && !parsed.success) {
       const fields: Record<string, string> = {};
       for (const issue of parsed.error.issues) fields[issue.path.join(".") || "_"] ??= issue.message;
+      setFiling(false);
       return setChecked(fields);
     }
     setChecked(null);
-    setFiling(true);
     fileKey.current ??= crypto.randomUUID();
     const label = [draft.carMark, draft.carNumber].filter(Boolean).join(" ") + (draft.axle && draft.side ? ` · ${draft.axle}${draft.side}` : "");
     const entry: OutboxEntry = { key: fileKey.current, body: forSaving(draft), label: label || "Removal report", queuedAt: new Date().toISOString(), attempts: 0, state: "waiting" };
