@@ -1,10 +1,11 @@
 "use client";
-import Link from "next/link";
 import { BrandMark } from "@/components/brand";
 
 // A page that failed while rendering (the database dropped mid-request, say): our own plain words and
 // a way to try again, never the framework's bare error page. The reference lets an admin find the log line.
 // "Try again" reloads the address, since the failure was in the server's render, not in this page.
+// The way home is a plain link, a fresh load after a failure: this boundary's code comes with every
+// page, and next/link here would bring a second copy of the router's link code into each first load.
 export default function PageError({ error }: { error: Error & { digest?: string } }) {
   return (
     <main className="mx-auto flex min-h-dvh max-w-md flex-col items-center justify-center px-6 text-center">
@@ -20,7 +21,8 @@ export default function PageError({ error }: { error: Error & { digest?: string 
         <button type="button" onClick={() => window.location.reload()} className="inline-flex min-h-11 items-center justify-center whitespace-nowrap rounded-lg bg-accent px-4 font-medium text-accent-ink">
           Try again
         </button>
-        <Link href="/" className="inline-flex min-h-11 items-center justify-center whitespace-nowrap rounded-lg border border-line px-4 font-medium text-ink">Back to your home page</Link>
+        {/* eslint-disable-next-line @next/next/no-html-link-for-pages -- a fresh load after a failed render (see above) */}
+        <a href="/" className="inline-flex min-h-11 items-center justify-center whitespace-nowrap rounded-lg border border-line px-4 font-medium text-ink">Back to your home page</a>
       </div>
     </main>
   );

@@ -1,7 +1,7 @@
 "use client";
 // Damage code picker: type a code, its name or a shop word ("rust", "flaking", "pitting"), typos welcome.
 import { useMemo, useState } from "react";
-import { createCodeSearch, type CodeSearchEntry } from "@/lib/classification";
+import { createCodeSearch, type CodeSearchEntry } from "@/lib/classification/code-search";
 import { inputClass } from "@/components/ui/field";
 
 export type PickerEntry = CodeSearchEntry & { family?: string | null };

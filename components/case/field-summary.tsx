@@ -6,7 +6,7 @@ import { fieldChecksSchema } from "@/lib/cases/schemas";
 import type { CaseDetail } from "@/lib/cases/types";
 import { FieldMessages } from "@/components/removal/field-messages";
 import { FieldCallPanel } from "@/components/removal/field-call-panel";
-import { TRIGGERS } from "@/lib/classification";
+import { TRIGGERS } from "@/lib/classification/triggers";
 import { Facts } from "./facts";
 import { triggerLabel } from "@/lib/classification/labels";
 

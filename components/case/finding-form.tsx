@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { COMPONENTS, SEVERITIES, ZONES } from "@/lib/classification";
+import { COMPONENTS, SEVERITIES, ZONES } from "@/lib/classification/bearing-parts";
 import type { FindingInput } from "@/lib/cases/schemas";
 import { CodePicker, type PickerEntry } from "./code-picker";
 

@@ -1,17 +1,22 @@
 "use client";
 // Teardown findings, component by component, with add / change / remove for the analyst.
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/card";
 import type { Finding } from "@/lib/cases/types";
-import { COMPONENTS } from "@/lib/classification";
+import { COMPONENTS } from "@/lib/classification/bearing-parts";
 import type { FindingInput } from "@/lib/cases/schemas";
-import { FindingForm } from "./finding-form";
 import type { PickerEntry } from "./code-picker";
 import { clockWords } from "@/lib/damage-map/geometry";
 import { componentLabel, damageLabel, zoneLabel } from "@/lib/classification/labels";
 import { ActionError, useCaseAction } from "./use-case-action";
+
+// The form, its code picker and the search behind it load when a finding is added or changed, not with every case page.
+const FindingForm = dynamic(() => import("./finding-form").then((m) => m.FindingForm), {
+  loading: () => <div className="h-64 w-full animate-pulse rounded-lg border border-line bg-surface-2" aria-hidden="true" />,
+});
 
 const sevTone = ["neutral", "neutral", "warn", "danger", "danger"] as const;
 

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, Select, Textarea } from "@/components/ui/field";
-import { COMPONENTS, DISPOSITIONS, LUBRICANT_CONDITIONS } from "@/lib/classification";
+import { COMPONENTS, DISPOSITIONS, LUBRICANT_CONDITIONS } from "@/lib/classification/bearing-parts";
 import { ActionError, useCaseAction } from "./use-case-action";
 import { componentLabel, dispositionLabel, lubricantLabel } from "@/lib/classification/labels";
 

@@ -1,6 +1,7 @@
 "use client";
 // A case's photos: the uploader (for those who may add), the grid grouped by part, and the lightbox.
 // Mount it on any page that already checked the viewer may read the case.
+import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { useCallback, useMemo, useState } from "react";
 import useSWR from "swr";
@@ -12,8 +13,12 @@ import { DEFAULT_MAX_BYTES } from "@/lib/photos/limits";
 import type { PhotoView } from "@/lib/photos/view";
 import { PhotoGrid } from "./photo-grid";
 import { PhotoLightbox } from "./photo-lightbox";
-import { PhotoUploader } from "./photo-uploader";
 import type { FindingOption } from "./tag-values";
+
+// The uploader and its dropzone load when it is opened ("Add photos"), or with the photos page that opens it.
+const PhotoUploader = dynamic(() => import("./photo-uploader").then((m) => m.PhotoUploader), {
+  loading: () => <div className="h-40 w-full animate-pulse rounded-xl border border-dashed border-line bg-surface-2" aria-hidden="true" />,
+});
 
 export type CasePhotosProps = {
   caseId: string;

@@ -1,27 +1,27 @@
 "use client";
 // The removal form, phone first: where and when, why, the bearing, the checks, and the live field call.
+// The first screen (where and when) comes with the page; the rest (removal-checks.tsx) and the
+// report's check before filing (lib/cases/schemas, with zod) load just after it, so a phone on a weak
+// signal can start typing sooner. Both are fetched on every visit, so the offline worker holds them.
 import { useRouter } from "next/navigation";
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { sendEntry } from "@/components/offline/outbox-send";
 import { deleteEntry, putEntry, type OutboxEntry } from "@/components/offline/outbox-store";
 import { useOutboxEntries } from "@/components/offline/use-connection";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Caution } from "@/components/ui/caution";
-import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { evaluateFieldChecks } from "@/lib/cases/compute";
-import { BEARING_CLASSES } from "@/lib/cases/bearing-classes";
-import { createCaseSchema } from "@/lib/cases/schemas";
+import { Field, Input, Select } from "@/components/ui/field";
 import { ErrorSummary } from "@/components/ui/error-summary";
-import { DEFAULT_END_PLAY_POLICY, VISUAL_FINDINGS, safetyConfirmationsFor, type EndPlayPolicy } from "@/lib/field";
+import { DEFAULT_END_PLAY_POLICY, type EndPlayPolicy } from "@/lib/field/end-play-policy";
 import { AxlePicker } from "./axle-picker";
 import { ChoiceChips } from "./choice-chips";
-import { EndPlayEntry } from "./end-play-entry";
-import { FieldCallPanel } from "./field-call-panel";
 import { emptyDraft, forSaving, type RemovalDraft } from "./form-state";
-import { HandRollEntry } from "./hand-roll-grid";
-import { TriggerDetails } from "./trigger-details";
+import { RemovalChecks } from "./removal-checks-lazy";
 import { clearLocalDraft, loadLocalDraft, useAutosave } from "./use-autosave";
+
+/** The zod schema the API files a report with, loaded once after the first screen. */
+const loadReportRules = () => import("@/lib/cases/schemas");
 
 export type SiteOption = { id: string; name: string; kind: string; policy: EndPlayPolicy };
 
@@ -41,6 +41,9 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   const [checked, setChecked] = useState<Record<string, string> | null>(null);
   const errors = checked ?? autosave.state.fields ?? {};
 
+  // Fetched now, not when filing: filing must work without signal, from what this visit loaded.
+  useEffect(() => void loadReportRules().catch(() => undefined), []);
+
   useEffect(() => {
     if (mode === "new") {
       const saved = loadLocalDraft();
@@ -50,24 +53,25 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   }, [mode]);
 
   const patch = (p: Partial<RemovalDraft>) => setDraft((d) => ({ ...d, ...p }));
-  const checks = draft.fieldChecks;
   const setChecks = (p: Partial<RemovalDraft["fieldChecks"]>) => setDraft((d) => ({ ...d, fieldChecks: { ...d.fieldChecks, ...p } }));
   const policy = sites.find((s) => s.id === draft.siteId)?.policy ?? DEFAULT_END_PLAY_POLICY;
-  const evaluation = useMemo(() => evaluateFieldChecks(forSaving(draft).fieldChecks, policy), [draft, policy]);
-  const wayside = draft.trigger === "wayside-hot" || draft.trigger === "wayside-acoustic";
-  const conf = checks.confirmations ?? {};
 
   async function file() {
     if (filing) return;
-    // Checked on the device first: what is missing is shown now, not after the outbox replays it.
-    const parsed = createCaseSchema.safeParse(forSaving(draft));
-    if (!parsed.success) {
+    // Set before the first await, so a second tap while the check loads does nothing.
+    setFiling(true);
+    // Checked on the device first: what is missing is shown now, not after the outbox replays it. Should the
+    // check itself not load (no signal on a visit that never fetched it), the server checks the report when it
+    // arrives, and a refusal stays in the outbox with its reason.
+    const rules = await loadReportRules().catch(() => null);
+    const parsed = rules?.createCaseSchema.safeParse(forSaving(draft));
+    if (parsed && !parsed.success) {
       const fields: Record<string, string> = {};
       for (const issue of parsed.error.issues) fields[issue.path.join(".") || "_"] ??= issue.message;
+      setFiling(false);
       return setChecked(fields);
     }
     setChecked(null);
-    setFiling(true);
     fileKey.current ??= crypto.randomUUID();
     const label = [draft.carMark, draft.carNumber].filter(Boolean).join(" ") + (draft.axle && draft.side ? ` · ${draft.axle}${draft.side}` : "");
     const entry: OutboxEntry = { key: fileKey.current, body: forSaving(draft), label: label || "Removal report", queuedAt: new Date().toISOString(), attempts: 0, state: "waiting" };
@@ -163,115 +167,7 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
         </div>
       </Card>
 
-      <Card title="2 · Why it came out">
-        <TriggerDetails trigger={draft.trigger ?? ""} detail={(draft.triggerDetail ?? {}) as Record<string, string | number | boolean | null>} onTrigger={(trigger) => patch({ trigger, triggerDetail: {} })} onDetail={(triggerDetail) => patch({ triggerDetail })} errors={errors} />
-        {draft.trigger === "wayside-hot" ? (
-          <div className="mt-4">
-            <Caution title="Hot bearing">A bearing that set off a hot-bearing alarm may be hot enough to burn. Let it cool and handle it with protection.</Caution>
-          </div>
-        ) : null}
-        {draft.trigger === "welding" ? (
-          <div className="mt-4">
-            <Caution title="Welding near bearings">Welding near a mounted bearing must never return current through it; ground the work piece directly.</Caution>
-          </div>
-        ) : null}
-      </Card>
-
-      <Card title="3 · The bearing">
-        <div className="grid gap-4 sm:grid-cols-3">
-          <Field label="Serial" htmlFor="serial" error={errors.serial}>
-            <Input id="serial" autoCapitalize="characters" value={draft.serial ?? ""} onChange={(e) => patch({ serial: e.target.value })} />
-          </Field>
-          <Field label="Class" htmlFor="bearingClass" error={errors.bearingClass}>
-            <Select id="bearingClass" value={draft.bearingClass ?? ""} onChange={(e) => patch({ bearingClass: (e.target.value || undefined) as RemovalDraft["bearingClass"] })}>
-              <option value="">Choose…</option>
-              {BEARING_CLASSES.map((c) => (
-                <option key={c} value={c}>{c === "other" ? "Other…" : `Class ${c}`}</option>
-              ))}
-            </Select>
-          </Field>
-          {draft.bearingClass === "other" ? (
-            <Field label="Other class" htmlFor="bearingClassOther">
-              <Input id="bearingClassOther" value={draft.bearingClassOther ?? ""} onChange={(e) => patch({ bearingClassOther: e.target.value })} />
-            </Field>
-          ) : (
-            <Field label="Maker code" htmlFor="makerCode">
-              <Input id="makerCode" value={draft.makerCode ?? ""} onChange={(e) => patch({ makerCode: e.target.value })} />
-            </Field>
-          )}
-          <Field label="Made (year-month)" htmlFor="manufacturedYm" error={errors.manufacturedYm}>
-            <Input id="manufacturedYm" type="month" value={draft.manufacturedYm ?? ""} onChange={(e) => patch({ manufacturedYm: e.target.value || null })} />
-          </Field>
-          <Field label="Mounted on" htmlFor="mountedOn" error={errors.mountedOn}>
-            <Input id="mountedOn" type="date" value={draft.mountedOn ?? ""} onChange={(e) => patch({ mountedOn: e.target.value || null })} />
-          </Field>
-          <Field label="Times reconditioned" htmlFor="timesReconditioned">
-            <Input id="timesReconditioned" inputMode="numeric" value={draft.timesReconditioned ?? ""} onChange={(e) => patch({ timesReconditioned: e.target.value === "" ? null : Number(e.target.value) })} />
-          </Field>
-          <Field label="Lot" htmlFor="lot">
-            <Input id="lot" value={draft.lot ?? ""} onChange={(e) => patch({ lot: e.target.value || null })} />
-          </Field>
-          <Field label="Miles since mounting (if known)" htmlFor="serviceMiles">
-            <Input id="serviceMiles" inputMode="numeric" value={draft.serviceMiles ?? ""} onChange={(e) => patch({ serviceMiles: e.target.value === "" ? null : Number(e.target.value) })} />
-          </Field>
-        </div>
-      </Card>
-
-      <Card title="4 · Hand roll">
-        <div className="mb-4 grid gap-2 text-sm text-ink-2 sm:grid-cols-2">
-          {safetyConfirmationsFor(draft.trigger).map(({ key, label, caution }) => (
-            <div key={key} data-safety={key}>
-              <label className={`flex min-h-12 items-center gap-3 rounded-lg border px-3 ${conf[key] ? "border-line" : "border-warn/50"}`}>
-                <input type="checkbox" className="h-6 w-6 accent-[var(--accent)]" checked={!!conf[key]} onChange={(e) => setChecks({ confirmations: { ...conf, [key]: e.target.checked } })} />
-                {label}
-              </label>
-              {/* Unticked is allowed (the report still files) but recorded on the case and shown to the engineer. */}
-              {!conf[key] ? <p className="mt-1 px-1 text-xs text-warn">Not confirmed: {caution} If filed unticked, the case carries a safety flag.</p> : null}
-            </div>
-          ))}
-        </div>
-        <p className="mb-3 text-sm text-muted">
-          Truck lifted off the wheelset. Hands on the cup 180° apart; turn two full revolutions one way, by hand, feeling for roughness or a catch.
-          Pull the cup outboard, then push it inboard; rotate the axle 120° and repeat, then once more.
-        </p>
-        <HandRollEntry value={checks.handRoll ?? { grid: {}, procedure: {} }} onChange={(handRoll) => setChecks({ handRoll })} />
-      </Card>
-
-      <Card title="5 · Mounted end play">
-        <p className="mb-3 text-sm text-muted">
-          Turn the bearing first so the rollers seat. Dial indicator on a magnetic base on the cup, stem against the wheel hub: push the cup toward the wheel and zero, pull toward the end cap and read the travel.
-        </p>
-        <div data-field="endPlay">
-          <EndPlayEntry value={checks.endPlay ?? { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] }} onChange={(endPlay) => setChecks({ endPlay })} policy={policy} />
-        </div>
-      </Card>
-
-      <Card title="6 · What can be seen">
-        <div className="grid gap-2 sm:grid-cols-2">
-          {VISUAL_FINDINGS.map((v) => {
-            const on = checks.visual.some((x) => x.code === v.code);
-            return (
-              <label key={v.code} className={`flex min-h-11 items-center gap-3 rounded-lg border px-3 text-sm ${on ? "border-accent bg-accent-soft" : "border-line"}`}>
-                <input type="checkbox" className="h-5 w-5 accent-[var(--accent)]" checked={on} onChange={(e) => setChecks({ visual: e.target.checked ? [...checks.visual, { code: v.code }] : checks.visual.filter((x) => x.code !== v.code) })} />
-                {v.label}
-              </label>
-            );
-          })}
-        </div>
-        {wayside ? (
-          <div className="mt-4">
-            <p className="mb-1.5 text-sm font-medium text-ink-2">Was the detector alarm confirmed on inspection?</p>
-            <ChoiceChips label="Alarm confirmed" value={checks.waysideAlarmConfirmed === undefined ? undefined : checks.waysideAlarmConfirmed ? "yes" : "no"} onChange={(v) => setChecks({ waysideAlarmConfirmed: v === "yes" })} options={[{ value: "yes", label: "Confirmed", tone: "danger" }, { value: "no", label: "Not confirmed" }]} />
-          </div>
-        ) : null}
-        <div className="mt-4">
-          <Field label="Notes" htmlFor="fieldNotes" error={errors.fieldNotes}>
-            <Textarea id="fieldNotes" rows={3} value={draft.fieldNotes ?? ""} onChange={(e) => patch({ fieldNotes: e.target.value })} placeholder="Anything else the lab should know." />
-          </Field>
-        </div>
-      </Card>
-
-      <FieldCallPanel call={evaluation.call} />
+      <RemovalChecks draft={draft} patch={patch} setChecks={setChecks} policy={policy} errors={errors} />
 
       <div className="flex flex-col-reverse items-stretch gap-3 sm:flex-row sm:items-center sm:justify-between">
         <p className="text-sm text-muted" role="status" data-testid="save-state">

@@ -1,6 +1,6 @@
 "use client";
 // The trigger and the detail it needs (detector reading and the owner's threshold, alarm level…).
-import { TRIGGERS } from "@/lib/classification";
+import { TRIGGERS } from "@/lib/classification/triggers";
 import { Field, Input, Select } from "@/components/ui/field";
 
 type Detail = Record<string, string | number | boolean | null>;

@@ -39,9 +39,4 @@ const phrases = new Map(COMPONENTS.map((c) => [c.code as string, c.phrase]));
 /** The part as a sentence says it: "the cup". */
 export const componentPhrase = (code: string): string => phrases.get(code) ?? code;
 
-/** "Class K"; `short` gives "Other" rather than "Other class" where the heading already says class. */
-export function bearingClassLabel(code: Code, short = false): string {
-  if (code === null || code === undefined || code === "") return NO_CODE;
-  if (code === "other") return short ? "Other" : "Other class";
-  return `Class ${code}`;
-}
+export { bearingClassLabel } from "@/lib/cases/bearing-classes";

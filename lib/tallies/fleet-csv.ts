@@ -3,12 +3,12 @@
 import { z } from "@/lib/validation/zod";
 import { monthsBetween } from "@/lib/field/service-life";
 import { parseCsv } from "./csv";
+import { FLEET_COLUMNS } from "./fleet-columns";
 
-export const FLEET_COLUMNS = ["serial", "bearing_class", "mounted_on", "as_of", "service_months", "service_miles"] as const;
+export { FLEET_COLUMNS, FLEET_TEMPLATE } from "./fleet-columns";
+
 const REQUIRED = ["serial", "bearing_class", "as_of"] as const;
 export const MAX_FLEET_ROWS = 200_000;
-
-export const FLEET_TEMPLATE = `${FLEET_COLUMNS.join(",")}\r\nSRX40001,F,2019-04-10,2026-03-31,,\r\nSRX40002,G,,2026-03-31,58.5,402000\r\n`;
 
 // One message per bad date: the format first, then whether the day exists.
 const isoDate = z.string().max(10, "write the date as YYYY-MM-DD").superRefine((s, ctx) => {

@@ -5,6 +5,8 @@ import { causeLabel } from "./labels";
 import { sumBy } from "./shape-verdicts";
 import type { CauseSiteTally, VerdictCell } from "./types";
 
+export { strengthWords } from "./read-outs";
+
 export function causeSiteTally(cells: readonly VerdictCell[], siteLabel: (id: string) => string, threshold = 2): CauseSiteTally {
   const withSite = cells.filter((c) => c.siteId !== null);
   const siteTotals = [...sumBy(withSite, (c) => c.siteId as string)].map(([id, l]) => ({ id, n: l.reduce((s, c) => s + c.count, 0) }));
@@ -47,9 +49,3 @@ export function plainSummary(pValue: number | null, siteCount: number): string {
   return "The sites' mixes of causes look alike: the differences are within what chance alone produces.";
 }
 
-/** Cramér's V in a sentence a manager can read. */
-export function strengthWords(v: number | null, strength: CauseSiteTally["strength"]): string | null {
-  if (v === null || strength === null) return null;
-  const what = { negligible: "hardly at all", weak: "weakly", moderate: "moderately", strong: "strongly" }[strength];
-  return `Site and cause go together ${what}: Cramér's V = ${v.toFixed(2)}, on a scale from 0 (the site tells nothing about the cause) to 1 (the site decides the cause).`;
-}

@@ -1,8 +1,10 @@
 // Months on one axis (gaps filled with zero) and a c-chart for all removals and for each cause.
 import { cChart } from "@/lib/stats/c-chart";
-import { monthRange } from "./filters";
+import { monthRange } from "./filter-query";
 import { causeLabel } from "./labels";
 import type { ControlSeries, MonthCell, MonthlyTally } from "./types";
+
+export { outOfControl } from "./read-outs";
 
 export const ALL_REMOVALS = "all-removals";
 export const ALL_SIGNED = "all-signed";
@@ -57,13 +59,3 @@ export function monthlyTally(cells: readonly MonthCell[], first?: string, last?:
   };
 }
 
-/** Months beyond the limits, in words, newest first: "Water ingress: 14 in Mar 2026, above the upper limit 9.8". */
-export function outOfControl(t: MonthlyTally): { series: string; month: string; count: number; side: "above" | "below"; limit: number }[] {
-  const out: { series: string; month: string; count: number; side: "above" | "below"; limit: number }[] = [];
-  for (const s of t.series) {
-    s.beyond.forEach((b, i) => {
-      if (b) out.push({ series: s.label, month: t.months[i], count: s.counts[i], side: b, limit: b === "above" ? s.upperLimit : s.lowerLimit });
-    });
-  }
-  return out.sort((a, b) => b.month.localeCompare(a.month) || a.series.localeCompare(b.series));
-}

@@ -15,8 +15,11 @@ import {
 } from "@/lib/stats";
 import { percent } from "./labels";
 import { niceBandWidth, wilsonBins } from "./yield-bins";
+import { usd } from "./read-outs";
 import type { CallCell, DetectorCell, HotCell, KeepCell, OutcomeCell, YieldCounts } from "./yield-counts";
 import type { CallRow, DetectorRow, QuarterSeries, RateRow, ReadingFit, YieldData } from "./yield-data";
+
+export { usd };
 
 /** Fewer outcomes than this and a rate is marked as resting on few removals (common practice: n < 10). */
 export const SMALL_GROUP = 10;
@@ -190,7 +193,6 @@ export function shapeYield(counts: YieldCounts, labels: YieldLabels, fits: Readi
   };
 }
 
-export const usd = (x: number) => `$${Math.round(x).toLocaleString("en-US")}`;
 
 function summaryLines(margin: ReadingFit, detectors: DetectorRow[], shops: CallRow[], cost: YieldData["cost"]): string[] {
   const out: string[] = [];

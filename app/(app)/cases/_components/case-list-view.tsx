@@ -9,7 +9,7 @@ import type { CaseColumnId } from "@/lib/cases/list-columns";
 import { EXPORT_CAP } from "@/lib/cases/list-csv";
 import {
   activeFilterCount, DEFAULT_LIST_PARAMS, listParamsToQuery, toggleSort, withFilters, type CaseFilters, type CaseSort,
-} from "@/lib/cases/list-params";
+} from "@/lib/cases/list-query";
 import { CaseCards } from "./case-cards";
 import { caseColumns } from "./case-columns";
 import { CaseTable } from "./case-table";

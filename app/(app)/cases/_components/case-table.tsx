@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { flexRender, type Table } from "@tanstack/react-table";
 import type { CaseColumnId, CaseListRow } from "@/lib/cases/list-columns";
-import type { CaseSort } from "@/lib/cases/list-params";
+import type { CaseSort } from "@/lib/cases/list-query";
 import { NUMERIC } from "./case-columns";
 import { Icon } from "./icons";
 

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import type { CaseListOptions } from "@/lib/cases/types";
 import { BEARING_CLASS_OPTIONS } from "./labels";
-import { activeFilterCount, type CaseFilters } from "@/lib/cases/list-params";
+import { activeFilterCount, type CaseFilters } from "@/lib/cases/list-query";
 import { DateRange } from "./date-range";
 import { Icon } from "./icons";
 import { MultiSelect } from "./multi-select";

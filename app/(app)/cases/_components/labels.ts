@@ -1,5 +1,4 @@
 // Display choices the list needs on the client beyond what lib/cases/list-columns formats.
-import { BEARING_CLASSES } from "@/lib/cases/schemas";
-import { bearingClassLabel } from "@/lib/classification/labels";
+import { BEARING_CLASSES, bearingClassLabel } from "@/lib/cases/bearing-classes";
 
 export const BEARING_CLASS_OPTIONS = BEARING_CLASSES.map((c) => ({ code: c, label: bearingClassLabel(c) }));

@@ -1,6 +1,6 @@
 "use client";
 // Where you are in the list, how many a page shows, and the way to the next page.
-import { PAGE_SIZES } from "@/lib/cases/list-params";
+import { PAGE_SIZES } from "@/lib/cases/list-query";
 import { Icon } from "./icons";
 
 type Props = { page: number; pageSize: number; total: number; onPage: (p: number) => void; onPageSize: (n: number) => void };

@@ -1,7 +1,7 @@
 "use client";
 // On a phone there are no headers to click: a column list and a direction button sort instead.
 import { CASE_COLUMNS, type CaseColumnId } from "@/lib/cases/list-columns";
-import type { CaseSort } from "@/lib/cases/list-params";
+import type { CaseSort } from "@/lib/cases/list-query";
 import { Icon } from "./icons";
 
 export function PhoneSort({ sort, onChange }: { sort: CaseSort; onChange: (s: CaseSort) => void }) {

@@ -5,7 +5,7 @@
 // ticked box stays ticked on a slow machine.
 import { useSearchParams } from "next/navigation";
 import { useCallback, useEffect, useMemo, useState } from "react";
-import { listParamsToQuery, readListParams, type ListParams } from "@/lib/cases/list-params";
+import { listParamsToQuery, readListParams, type ListParams } from "@/lib/cases/list-query";
 
 export function useListState() {
   const search = useSearchParams();

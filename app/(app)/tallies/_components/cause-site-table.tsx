@@ -1,6 +1,6 @@
 // Cause x site counts with the cells that stand out shaded: warm where a site has more of a cause
 // than its share of verdicts would suggest, cool where it has fewer.
-import { strengthWords } from "@/lib/tallies/shape-cause-site";
+import { strengthWords } from "@/lib/tallies/read-outs";
 import type { CauseSiteTally } from "@/lib/tallies/types";
 
 const pWords = (p: number) => (p < 0.001 ? "p < 0.001" : `p = ${p.toFixed(3)}`);

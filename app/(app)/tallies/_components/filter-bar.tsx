@@ -3,7 +3,7 @@
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useTransition } from "react";
 import { Select } from "@/components/ui/field";
-import { addMonths, filtersToQuery, type TallyFilters } from "@/lib/tallies/filters";
+import { addMonths, filtersToQuery, type TallyFilters } from "@/lib/tallies/filter-query";
 
 type Option = { value: string; label: string };
 type Props = {

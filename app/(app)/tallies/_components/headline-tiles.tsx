@@ -1,6 +1,6 @@
 // The figures a manager reads first.
 import { percent, percentRange } from "@/lib/tallies/labels";
-import { outOfControl } from "@/lib/tallies/shape-monthly";
+import { outOfControl } from "@/lib/tallies/read-outs";
 import type { TalliesData } from "@/lib/tallies/types";
 
 function Tile({ label, value, note, tone = "ink" }: { label: string; value: string; note?: string; tone?: "ink" | "ok" | "danger" }) {

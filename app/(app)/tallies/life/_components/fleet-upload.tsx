@@ -5,7 +5,7 @@ import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { callApi } from "@/lib/client/api";
 import { downloadBlob } from "@/components/charts/export-image";
-import { FLEET_COLUMNS, FLEET_TEMPLATE } from "@/lib/tallies/fleet-csv";
+import { FLEET_COLUMNS, FLEET_TEMPLATE } from "@/lib/tallies/fleet-columns";
 import type { FleetBatch } from "@/lib/tallies/life-data";
 import { formatDay } from "@/lib/dates";
 

@@ -2,7 +2,7 @@
 // Horizontal bars: keep calls with and without a later removal, and money on removals teardown did not confirm.
 import { Bar, BarChart, CartesianGrid, Tooltip, XAxis, YAxis } from "recharts";
 import { AXIS_TICK, OUTCOME_COLOURS, THEME } from "@/components/charts/palette";
-import { usd } from "@/lib/tallies/shape-yield";
+import { usd } from "@/lib/tallies/read-outs";
 import type { CallRow, RateRow } from "@/lib/tallies/yield-data";
 
 const tooltipStyle = { borderRadius: 8, borderColor: "var(--line)", background: "var(--surface)", color: "var(--ink)" };
@@ -22,10 +22,6 @@ export function MissedChart({ rows, window }: { rows: CallRow[]; window: number 
   );
 }
 
-export const missedLegend = (window: number) => [
-  { label: `Keep call, not removed again within ${window} days`, colour: "#94a3b8" },
-  { label: `Keep call, same car and position removed within ${window} days`, colour: OUTCOME_COLOURS.noDefect },
-];
 
 /** Money when any site has a cost set; otherwise the count of no-defect removals. */
 export function CostChart({ rows, money }: { rows: RateRow[]; money: boolean }) {

@@ -6,8 +6,8 @@ import { AXIS_TICK, THEME } from "@/components/charts/palette";
 import { percent } from "@/lib/tallies/labels";
 import { positionWords } from "@/lib/tallies/yield-tables";
 import type { DetectorRow, YieldData } from "@/lib/tallies/yield-data";
+import { FUNNEL_TONE as TONE } from "./yield-legends";
 
-const TONE = { low: "#dc2626", high: "#047857", inside: "#334155" } as const;
 const toneOf = (p: DetectorRow["position"]) => (p === "below-998" || p === "below-95" ? TONE.low : p === "above-998" || p === "above-95" ? TONE.high : TONE.inside);
 
 function Dot(props: { cx?: number; cy?: number; payload?: DetectorRow & { y: number } }) {
@@ -52,10 +52,3 @@ export function FunnelChart({ detectors }: { detectors: YieldData["detectors"] }
   );
 }
 
-export const FUNNEL_LEGEND = [
-  { label: "Detector within the limits", colour: TONE.inside },
-  { label: "Confirmed less often than the fleet", colour: TONE.low },
-  { label: "Confirmed more often", colour: TONE.high },
-  { label: "95% limits (dashed), 99.8% limits", colour: "#64748b" },
-  { label: "Fleet rate (dashed)", colour: "#b45309" },
-];

@@ -3,8 +3,8 @@
 import { CartesianGrid, Line, LineChart, Tooltip, XAxis, YAxis } from "recharts";
 import { AXIS_TICK, THEME } from "@/components/charts/palette";
 import type { YieldData } from "@/lib/tallies/yield-data";
+import { SHOP_COLOURS } from "./yield-legends";
 
-export const SHOP_COLOURS = ["#0f766e", "#b45309", "#4f46e5", "#db2777", "#0284c7", "#65a30d"];
 
 export function QuarterChart({ calls }: { calls: YieldData["calls"] }) {
   const data = calls.quarterList.map((q) => {
@@ -36,4 +36,3 @@ export function QuarterChart({ calls }: { calls: YieldData["calls"] }) {
   );
 }
 
-export const quarterLegend = (calls: YieldData["calls"]) => calls.quarters.map((s, i) => ({ label: s.label, colour: SHOP_COLOURS[i % SHOP_COLOURS.length] }));

@@ -5,10 +5,10 @@ import { Area, CartesianGrid, ComposedChart, ErrorBar, Line, ReferenceLine, Scat
 import { AXIS_TICK, THEME } from "@/components/charts/palette";
 import { percent, percentRange } from "@/lib/tallies/labels";
 import type { ReadingFit } from "@/lib/tallies/yield-data";
+import { READING_TONE } from "./yield-legends";
 
-const CURVE = "#0f766e";
-const BAND = "#99f6e4";
-const BINS = "#334155";
+const { curve: CURVE, band: BAND, bins: BINS } = READING_TONE;
+
 
 export function ReadingCurveChart({ fit }: { fit: ReadingFit }) {
   const curve = (fit.fit?.curve ?? []).map((c) => ({ x: c.x, p: c.p * 100, band: [c.lower * 100, c.upper * 100] as [number, number] }));
@@ -48,8 +48,3 @@ export function ReadingCurveChart({ fit }: { fit: ReadingFit }) {
   );
 }
 
-export const READING_LEGEND = [
-  { label: "Confirmed share per band, 95% Wilson interval", colour: BINS },
-  { label: "Fitted logistic curve", colour: CURVE },
-  { label: "95% band of the curve", colour: BAND },
-];

@@ -4,16 +4,14 @@ import { useState } from "react";
 import { ChartCard } from "@/components/charts/chart-card";
 import { ChartLegend } from "@/components/charts/legend";
 import { percent } from "@/lib/tallies/labels";
-import { usd } from "@/lib/tallies/shape-yield";
+import { usd } from "@/lib/tallies/read-outs";
 import type { ConfirmationTable } from "@/lib/tallies/types";
 import type { RateRow, YieldData } from "@/lib/tallies/yield-data";
 import { callTable, costTable, detectorTable, quarterTable, rateTable, readingBinsTable } from "@/lib/tallies/yield-tables";
 import { ConfirmationChart } from "../../_components/charts";
 import { CONFIRMATION_LEGEND } from "../../_components/chart-words";
-import { CostChart, MissedChart, missedLegend } from "./bar-charts";
-import { FUNNEL_LEGEND, FunnelChart } from "./funnel-chart";
-import { QuarterChart, quarterLegend } from "./quarter-chart";
-import { READING_LEGEND, ReadingCurveChart } from "./reading-curve-chart";
+import { CostChart, FunnelChart, MissedChart, QuarterChart, ReadingCurveChart } from "./yield-charts";
+import { FUNNEL_LEGEND, missedLegend, quarterLegend, READING_LEGEND } from "./yield-legends";
 
 const SIGNED = "Signed verdicts only";
 
