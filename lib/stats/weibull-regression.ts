@@ -27,13 +27,31 @@ export function weibullRankRegressionCounted(groups: readonly CountedUnit[]): Ra
   return rankRegressionOf(johnsonAdjustedRanksCounted(groups));
 }
 
-/** Least squares both ways through already ranked failures. */
-export function rankRegressionOf(points: readonly RankedFailure[]): RankRegressionResult {
-  const xs = points.map((p) => Math.log(p.time));
-  const ys = points.map((p) => weibullPlotY(p.medianRank));
-  const m = xs.length;
-  const mx = xs.reduce((s, v) => s + v, 0) / m;
-  const my = ys.reduce((s, v) => s + v, 0) / m;
+/**
+ * Least squares both ways through already ranked failures (their ordinate y is used when given).
+ * Failures come in time order, so ln t is taken once per run of equal times.
+ */
+export function rankRegressionOf(points: readonly (RankedFailure & { y?: number })[]): RankRegressionResult {
+  const m = points.length;
+  const xs = new Float64Array(m);
+  const ys = new Float64Array(m);
+  let lastTime = NaN;
+  let lastLog = NaN;
+  let sumX = 0;
+  let sumY = 0;
+  for (let i = 0; i < m; i++) {
+    const p = points[i];
+    if (p.time !== lastTime) {
+      lastTime = p.time;
+      lastLog = Math.log(p.time);
+    }
+    xs[i] = lastLog;
+    ys[i] = p.y ?? weibullPlotY(p.medianRank);
+    sumX += xs[i];
+    sumY += ys[i];
+  }
+  const mx = sumX / m;
+  const my = sumY / m;
   let sxx = 0;
   let syy = 0;
   let sxy = 0;
