@@ -13,3 +13,4 @@ export * from "./security";
 export * from "./yield-cells";
 export * from "./case-list-counts";
 export * from "./tally-cells";
+export * from "./recurrence-keys";

@@ -1,7 +1,7 @@
-// The tallies page's count cells (tally_cells) are kept by triggers on cases. After inserts, single
-// and many-row updates (status, verdict, removal day, site, class, trigger), reopening and deletes,
-// the cells must equal a full recount from the cases, and an inspector's counts must equal a count of
-// the cases they may read at their own shop.
+// The tallies page's roll-ups (tally_cells, recurrence_car_counts, recurrence_lot_counts) are kept by
+// triggers on cases. After inserts, single and many-row updates (status, verdict, removal day, site,
+// class, trigger, car, lot), reopening and deletes, each must equal a full recount from the cases, and
+// an inspector's counts must equal a count of the cases they may read at their own shop.
 import { and, eq, inArray } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { tallyCounts } from "@/db/queries/tallies/counts";
@@ -12,25 +12,39 @@ import { makeSites, rng, tag } from "./casebook";
 const CLASS = tag();
 const OTHER_CLASS = tag();
 
-/** Rows of the cells that a recount does not give, and the other way round, in one snapshot. */
-async function differences(): Promise<{ extra: unknown[]; missing: unknown[] }> {
+/** Rows of the roll-up that a recount does not give, and the other way round, in one snapshot. */
+async function differences(rollUp: string, recount: string): Promise<{ extra: unknown[]; missing: unknown[] }> {
   const { rows } = await pool.query<{ side: string; r: unknown }>(`
-    with roll as (
-      select month, site_id, bearing_class, trigger, signed, primary_cause, outcome, n::bigint from tally_cells where n <> 0
-    ), fresh as (
-      select date_trunc('month', removed_on::timestamp)::date, site_id, bearing_class, trigger, status = 'signed', primary_cause, removal_confirmed, count(*)
-      from cases group by 1, 2, 3, 4, 5, 6, 7
-    )
+    with roll as (${rollUp}), fresh as (${recount})
     select 'extra' as side, to_jsonb(x) as r from (select * from roll except all select * from fresh) x
     union all
     select 'missing', to_jsonb(y) from (select * from fresh except all select * from roll) y`);
   return { extra: rows.filter((r) => r.side === "extra").map((r) => r.r), missing: rows.filter((r) => r.side === "missing").map((r) => r.r) };
 }
 
+const clusterable = `status = 'signed' and removed_on is not null and primary_cause is not null`;
+const ROLL_UPS = {
+  tally_cells: {
+    rollUp: `select month, site_id, bearing_class, trigger, signed, primary_cause, outcome, n::bigint from tally_cells where n <> 0`,
+    recount: `select date_trunc('month', removed_on::timestamp)::date, site_id, bearing_class, trigger, status = 'signed', primary_cause, removal_confirmed, count(*)
+      from cases group by 1, 2, 3, 4, 5, 6, 7`,
+  },
+  recurrence_car_counts: {
+    rollUp: `select car_mark, car_number, primary_cause, n::bigint from recurrence_car_counts where n <> 0`,
+    recount: `select car_mark, car_number, primary_cause, count(*) from cases where ${clusterable} and car_mark <> '' and car_number <> '' group by 1, 2, 3`,
+  },
+  recurrence_lot_counts: {
+    rollUp: `select lot, primary_cause, n::bigint from recurrence_lot_counts where n <> 0`,
+    recount: `select lot, primary_cause, count(*) from cases where ${clusterable} and coalesce(lot, '') <> '' group by 1, 2`,
+  },
+};
+
 async function expectExact() {
-  expect(await differences()).toEqual({ extra: [], missing: [] });
-  const negative = await pool.query(`select * from tally_cells where n < 0`);
-  expect(negative.rows).toEqual([]);
+  for (const [name, q] of Object.entries(ROLL_UPS)) {
+    expect({ name, ...(await differences(q.rollUp, q.recount)) }).toEqual({ name, extra: [], missing: [] });
+    const negative = await pool.query(`select * from ${name} where n < 0`);
+    expect(negative.rows).toEqual([]);
+  }
 }
 
 let ids: string[] = [];
@@ -51,13 +65,16 @@ beforeAll(async () => {
       removalConfirmed: status === "signed" ? r.pick(["confirmed", "no-defect", null] as const) : null,
       siteId: r.pick([sites.A, sites.B]),
       createdBy: r.pick(people),
+      carMark: r.pick(["RLUX", ""]),
+      carNumber: String(r.int(1, 3)),
+      lot: r.pick([`${CLASS}-1`, `${CLASS}-2`, "", null]),
       removedOn: r.next() < 0.1 ? null : `1986-${String(r.int(1, 12)).padStart(2, "0")}-${String(r.int(1, 28)).padStart(2, "0")}`,
     });
     ids.push(row.id);
   }
 });
 
-describe("tally count cells", () => {
+describe("tallies roll-ups", () => {
   it("equal a full recount after inserts", async () => {
     await expectExact();
   });
@@ -81,6 +98,7 @@ describe("tally count cells", () => {
     await db.update(t.cases).set({ removedOn: "1986-02-28" }).where(inArray(t.cases.id, ids.slice(1, 10)));
     await db.update(t.cases).set({ siteId: sites.B, trigger: "seal-grease" }).where(inArray(t.cases.id, ids.slice(10, 20)));
     await db.update(t.cases).set({ bearingClass: OTHER_CLASS, removedOn: null }).where(inArray(t.cases.id, ids.slice(20, 25)));
+    await db.update(t.cases).set({ carNumber: "9", lot: `${CLASS}-3` }).where(inArray(t.cases.id, ids.slice(25, 35)));
     await db.update(t.cases).set({ updatedAt: new Date() }).where(inArray(t.cases.bearingClass, [CLASS, OTHER_CLASS]));
     await expectExact();
   });
