@@ -1,7 +1,8 @@
 // The one rule for "which cases may this person read", as SQL. lib/cases/access.ts holds the same
 // rule as a pure function for rows already in hand; tests/api/security/case-scope.test.ts keeps the two equal.
 // Every read path (case, list, export, search, facets, similar, links, history, report, photos,
-// home, tallies) filters through readableCases, so nothing fetches a case and checks afterwards.
+// home) filters through readableCases, so nothing fetches a case and checks afterwards; the tallies,
+// which count only the viewer's own shop, ask canReadCase of a case at that shop (db/queries/tallies/scope.ts).
 import "server-only";
 import { and, inArray, or, sql, type SQL } from "drizzle-orm";
 import type { AnyPgColumn } from "drizzle-orm/pg-core";

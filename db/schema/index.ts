@@ -12,3 +12,5 @@ export * from "./search";
 export * from "./security";
 export * from "./yield-cells";
 export * from "./case-list-counts";
+export * from "./tally-cells";
+export * from "./recurrence-keys";

@@ -17,12 +17,18 @@ export class WeibullInputError extends Error {
 
 /** Throws a WeibullInputError unless the data can support a two-parameter fit. */
 export function assertFittable(units: readonly LifeUnit[]): void {
+  let failures = 0;
+  let firstFailureTime = NaN;
+  let allFailureTimesEqual = true;
   for (const u of units) {
     if (!Number.isFinite(u.time)) throw new WeibullInputError("Every time must be a finite number.");
     if (u.time <= 0) throw new WeibullInputError(`Times must be greater than zero (got ${u.time}).`);
+    if (!u.failed) continue;
+    if (failures === 0) firstFailureTime = u.time;
+    else if (u.time !== firstFailureTime) allFailureTimesEqual = false;
+    failures++;
   }
-  const failureTimes = units.filter((u) => u.failed).map((u) => u.time);
-  const reason = unfittableReason(failureTimes.length, failureTimes.every((t) => t === failureTimes[0]));
+  const reason = unfittableReason(failures, allFailureTimesEqual);
   if (reason) throw new WeibullInputError(reason);
 }
 

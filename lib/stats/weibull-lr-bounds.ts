@@ -3,7 +3,7 @@
 import { chiSquareQuantile } from "./distributions";
 import type { Interval, WeibullMle } from "./weibull-mle";
 import { profileLogLikBeta, shiftedSums, type LikelihoodData } from "./weibull-likelihood";
-import { bisectRoot } from "./solve-1d";
+import { brentRoot } from "./solve-1d";
 
 export interface LikelihoodRatioBounds {
   confidence: number;
@@ -48,17 +48,24 @@ export function profileOverBeta(d: LikelihoodData, logScale: number, shift: numb
   return { beta, logLik: p.value };
 }
 
-/** Where the deviance crosses the limit on each side of the estimate, searched on ln theta. */
+/**
+ * Where the deviance crosses the limit on each side of the estimate, searched on ln theta: steps
+ * out from the estimate until the deviance passes the limit, then Brent's method inside that step.
+ */
 function boundsFor(estimate: number, deviance: (theta: number) => number, limit: number): Interval {
   const f = (logTheta: number) => deviance(Math.exp(logTheta)) - limit;
   const centre = Math.log(estimate);
+  const fCentre = f(centre);
   const side = (dir: 1 | -1): number => {
     let step = 0.05;
     let inner = centre;
+    let fInner = fCentre;
     while (step < 40) {
       const outer = centre + dir * step;
-      if (f(outer) > 0) return Math.exp(bisectRoot(f, inner, outer, 1e-14));
+      const fOuter = f(outer);
+      if (fOuter > 0) return Math.exp(brentRoot(f, inner, outer, fInner, fOuter, 1e-14));
       inner = outer;
+      fInner = fOuter;
       step *= 2;
     }
     return dir > 0 ? Infinity : 0;
@@ -66,14 +73,22 @@ function boundsFor(estimate: number, deviance: (theta: number) => number, limit:
   return [side(-1), side(1)];
 }
 
+/** The deviance with eta or B10 held, each profile's Newton search starting where the last one ended. */
+function heldScaleDeviance(d: LikelihoodData, fit: WeibullMle, shift: number): (theta: number) => number {
+  let start = fit.beta;
+  return (theta) => {
+    const p = profileOverBeta(d, Math.log(theta), shift, start);
+    if (Number.isFinite(p.beta) && p.beta > 0) start = p.beta;
+    return 2 * (fit.logLik - p.logLik);
+  };
+}
+
 export function likelihoodRatioBounds(d: LikelihoodData, fit: WeibullMle, confidence = 0.95): LikelihoodRatioBounds {
   const limit = chiSquareQuantile(confidence, 1);
-  const dev = (logL: number) => 2 * (fit.logLik - logL);
-  const logMinusLog09 = Math.log(-Math.log(0.9));
   return {
     confidence,
-    beta: boundsFor(fit.beta, (beta) => dev(profileLogLikBeta(d, beta)), limit),
-    eta: boundsFor(fit.eta, (eta) => dev(profileOverBeta(d, Math.log(eta), 0, fit.beta).logLik), limit),
-    b10: boundsFor(fit.b10, (b10) => dev(profileOverBeta(d, Math.log(b10), logMinusLog09, fit.beta).logLik), limit),
+    beta: boundsFor(fit.beta, (beta) => 2 * (fit.logLik - profileLogLikBeta(d, beta)), limit),
+    eta: boundsFor(fit.eta, heldScaleDeviance(d, fit, 0), limit),
+    b10: boundsFor(fit.b10, heldScaleDeviance(d, fit, Math.log(-Math.log(0.9))), limit),
   };
 }

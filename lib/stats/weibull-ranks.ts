@@ -1,4 +1,4 @@
-import type { LifeUnit } from "./weibull-data";
+import { weibullPlotY, type LifeUnit } from "./weibull-data";
 
 export interface RankedFailure {
   time: number;
@@ -31,9 +31,24 @@ export function johnsonAdjustedRanks(units: readonly LifeUnit[]): RankedFailure[
 
 /** The same from counted units: sorting costs the distinct lives, not every unit. */
 export function johnsonAdjustedRanksCounted(groups: readonly CountedUnit[]): RankedFailure[] {
+  const out: RankedFailure[] = [];
+  eachAdjustedRank(groups, (time, adjustedRank, medianRank) => out.push({ time, adjustedRank, medianRank }));
+  return out;
+}
+
+/** Ranked failures with their Weibull-paper ordinate y = ln(-ln(1 - F)), built in the same pass. */
+export function johnsonPlotPointsCounted(groups: readonly CountedUnit[]): PlottedFailure[] {
+  const out: PlottedFailure[] = [];
+  eachAdjustedRank(groups, (time, adjustedRank, medianRank) => out.push({ time, adjustedRank, medianRank, y: weibullPlotY(medianRank) }));
+  return out;
+}
+
+export type PlottedFailure = RankedFailure & { y: number };
+
+/** Calls `emit` for every failure in time order with its adjusted and median rank. */
+export function eachAdjustedRank(groups: readonly CountedUnit[], emit: (time: number, adjustedRank: number, medianRank: number) => void): void {
   const sorted = sortForRanking(groups);
   const n = sorted.reduce((s, g) => s + g.count, 0);
-  const out: RankedFailure[] = [];
   let previous = 0;
   let before = 0;
   for (const g of sorted) {
@@ -42,10 +57,9 @@ export function johnsonAdjustedRanksCounted(groups: readonly CountedUnit[]): Ran
       for (let k = 0; k < g.count; k++) {
         const atOrAfter = n - before - k;
         previous += (n + 1 - previous) / (1 + atOrAfter);
-        out.push({ time: g.time, adjustedRank: previous, medianRank: benardMedianRank(previous, n) });
+        emit(g.time, previous, benardMedianRank(previous, n));
       }
     }
     before += g.count;
   }
-  return out;
 }

@@ -1,6 +1,6 @@
 // One call that gives the screens everything a Weibull life analysis shows.
-import { assertFittable, weibullCdf, weibullPlotY, type LifeUnit } from "./weibull-data";
-import { johnsonAdjustedRanksCounted, type CountedUnit } from "./weibull-ranks";
+import { assertFittable, weibullCdf, type LifeUnit } from "./weibull-data";
+import { johnsonPlotPointsCounted, type CountedUnit } from "./weibull-ranks";
 import { rankRegressionOf, type RankRegressionResult } from "./weibull-regression";
 import { fisherBounds, weibullMleFromData, type FisherBounds, type Interval, type WeibullMle } from "./weibull-mle";
 import { likelihoodRatioBounds, type LikelihoodRatioBounds } from "./weibull-lr-bounds";
@@ -51,12 +51,11 @@ export function fitWeibull(units: readonly LifeUnit[], opts: WeibullOptions = {}
   const fit = weibullMleFromData(data);
   const fisher = fisherBounds(data, fit, confidence);
   const likelihoodRatio = likelihoodRatioBounds(data, fit, confidence);
-  const ranked = johnsonAdjustedRanksCounted(groups);
-  const rankRegression = rankRegressionOf(ranked);
+  // ranks and plot ordinates in one pass; the regression reads the same ordinates
+  const plotPoints: PlotPoint[] = johnsonPlotPointsCounted(groups);
+  const rankRegression = rankRegressionOf(plotPoints);
   const shape = readShape(fit.beta, likelihoodRatio.beta);
   const failures = data.failures;
-
-  const plotPoints = ranked.map((p) => ({ ...p, y: weibullPlotY(p.medianRank) }));
 
   const fittedLine = (tMin: number, tMax: number, steps = 20): LinePoint[] => {
     if (!(tMin > 0 && tMax > tMin)) throw new RangeError("fittedLine needs 0 < tMin < tMax");
@@ -93,14 +92,20 @@ export function fitWeibull(units: readonly LifeUnit[], opts: WeibullOptions = {}
   };
 }
 
-/** Units counted by life and outcome. */
+/** Units counted by life and outcome, in the order each life and outcome first appears. */
 export function countUnits(units: readonly LifeUnit[]): CountedUnit[] {
-  const byKey = new Map<string, CountedUnit>();
+  const failed = new Map<number, CountedUnit>();
+  const running = new Map<number, CountedUnit>();
+  const out: CountedUnit[] = [];
   for (const u of units) {
-    const key = `${u.time}|${u.failed ? 1 : 0}`;
-    const g = byKey.get(key);
+    const byTime = u.failed ? failed : running;
+    const g = byTime.get(u.time);
     if (g) g.count++;
-    else byKey.set(key, { time: u.time, failed: u.failed, count: 1 });
+    else {
+      const created = { time: u.time, failed: u.failed, count: 1 };
+      byTime.set(u.time, created);
+      out.push(created);
+    }
   }
-  return [...byKey.values()];
+  return out;
 }

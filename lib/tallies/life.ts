@@ -4,12 +4,10 @@ import {
   assertFittable,
   fisherBounds,
   fitWeibull,
-  johnsonAdjustedRanksCounted,
   prepareLikelihoodData,
-  rankRegressionOf,
+  rankRegressionAndPlot,
   readShape,
   weibullMleFromData,
-  weibullPlotY,
   WeibullInputError,
   unfittableReason,
   type CountedUnit,
@@ -81,10 +79,13 @@ export function unitsFor(cause: string, rows: readonly LifeCountRow[], fleet: re
   return units;
 }
 
+/** The order of the cause table: most failures first, then by name. */
+const causeOrder = (a: { cause: string; failures: number }, b: { cause: string; failures: number }) => b.failures - a.failures || a.cause.localeCompare(b.cause);
+
 export function lifeCauses(rows: readonly LifeCountRow[]): { cause: string; failures: number }[] {
   const totals = new Map<string, number>();
   for (const r of rows) if (r.cause && !NOT_A_FAILURE.has(r.cause) && r.time > 0) totals.set(r.cause, (totals.get(r.cause) ?? 0) + r.count);
-  return [...totals].map(([cause, failures]) => ({ cause, failures })).sort((a, b) => b.failures - a.failures || a.cause.localeCompare(b.cause));
+  return [...totals].map(([cause, failures]) => ({ cause, failures })).sort(causeOrder);
 }
 
 const noteFor = (err: unknown) => (err instanceof WeibullInputError ? err.message : "The fit did not converge on these data.");
@@ -102,14 +103,21 @@ export function summariseCause(cause: string, units: readonly LifeUnit[], confid
 }
 
 /**
- * summariseCause for every cause at once, from the counted rows. Each cause sees the same lives
- * (its removals failed, the rest suspended), so one table of distinct lives serves them all and a
- * cause costs only its failure count and sum of log lives: the casebook is read once, not per cause.
+ * What the cause table needs from the casebook, counted by the database: every signed life by
+ * service life (any cause), and per cause its failures, the sum of their log lives and the first
+ * and last of them. `own` carries one cause's lives (the chosen cause's failures) when fetched.
  */
-export function summariseEveryCause(rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary[] {
-  const causes = lifeCauses(rows);
+export type LifeTotals = {
+  byTime: readonly FleetCountRow[];
+  causes: readonly { cause: string; failures: number; sumLog: number; first: number; last: number }[];
+  own: { cause: string; times: readonly FleetCountRow[] } | null;
+  withoutLife: number;
+};
+
+/** LifeTotals from rows counted by cause and life (the same sums the database makes). */
+export function lifeTotalsOf(rows: readonly LifeCountRow[]): Omit<LifeTotals, "own" | "withoutLife"> {
   const byTime = new Map<number, number>();
-  const own = new Map(causes.map((c) => [c.cause, { failures: 0, sumLog: 0, first: Infinity, last: -Infinity }]));
+  const own = new Map(lifeCauses(rows).map((c) => [c.cause, { cause: c.cause, failures: 0, sumLog: 0, first: Infinity, last: -Infinity }]));
   for (const r of rows) {
     if (!(r.time > 0)) continue;
     byTime.set(r.time, (byTime.get(r.time) ?? 0) + r.count);
@@ -120,6 +128,22 @@ export function summariseEveryCause(rows: readonly LifeCountRow[], fleet: readon
     c.first = Math.min(c.first, r.time);
     c.last = Math.max(c.last, r.time);
   }
+  return { byTime: [...byTime].map(([time, count]) => ({ time, count })), causes: [...own.values()] };
+}
+
+/**
+ * summariseCause for every cause at once, from the counted rows. Each cause sees the same lives
+ * (its removals failed, the rest suspended), so one table of distinct lives serves them all and a
+ * cause costs only its failure count and sum of log lives: the casebook is read once, not per cause.
+ */
+export function summariseEveryCause(rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary[] {
+  return summariseTotals(lifeTotalsOf(rows), fleet, confidence, unit);
+}
+
+/** summariseEveryCause from the totals the database counted. */
+export function summariseTotals(totals: Pick<LifeTotals, "byTime" | "causes">, fleet: readonly FleetCountRow[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary[] {
+  const byTime = new Map<number, number>();
+  for (const b of totals.byTime) if (b.time > 0) byTime.set(b.time, (byTime.get(b.time) ?? 0) + b.count);
   for (const f of fleet) if (f.time > 0) byTime.set(f.time, (byTime.get(f.time) ?? 0) + f.count);
   const logTimes: number[] = [];
   const counts: number[] = [];
@@ -132,14 +156,29 @@ export function summariseEveryCause(rows: readonly LifeCountRow[], fleet: readon
     longestLife = Math.max(longestLife, t);
   }
   const maxLogTime = Math.log(longestLife);
-  return causes.map(({ cause }) => {
-    const c = own.get(cause)!;
+  const causes = totals.causes.filter((c) => c.failures > 0 && !NOT_A_FAILURE.has(c.cause)).sort(causeOrder);
+  return causes.map((c) => {
+    const cause = c.cause;
     // The rules of assertFittable, on counts.
     const note = unfittableReason(c.failures, c.first === c.last);
     if (note) return { cause, label: causeLabel(cause), failures: c.failures, suspensions: total - c.failures, longestLife, fit: null, note, cautions: [] };
     const data: LikelihoodData = { logTimes, counts, maxLogTime, failures: c.failures, sumLogFailureTimes: c.sumLog };
     return summariseData(cause, data, { total, longestLife, confidence, unit });
   });
+}
+
+/** One cause's lives as counted groups from the totals: its own lives failed, every other life (and the fleet) suspended. */
+export function countedFromTotals(own: readonly FleetCountRow[], byTime: readonly FleetCountRow[], fleet: readonly FleetCountRow[]): CountedUnit[] {
+  const failed = new Map<number, number>();
+  const running = new Map<number, number>();
+  const add = (m: Map<number, number>, t: number, n: number) => m.set(t, (m.get(t) ?? 0) + n);
+  for (const o of own) if (o.time > 0) add(failed, o.time, o.count);
+  for (const b of byTime) if (b.time > 0) add(running, b.time, b.count - (failed.get(b.time) ?? 0));
+  for (const f of fleet) if (f.time > 0) add(running, f.time, f.count);
+  return [
+    ...[...failed].map(([time, count]) => ({ time, failed: true, count })),
+    ...[...running].filter(([, count]) => count > 0).map(([time, count]) => ({ time, failed: false, count })),
+  ];
 }
 
 function summariseCounted(cause: string, groups: readonly CountedUnit[], total: number, confidence: number, unit: LifeMeasure): LifeSummary {
@@ -200,13 +239,17 @@ export function analyseCause(
   const empty = { rankRegression: null, mle: null, likelihoodRatio: null, shapeExplanation: "", plotPoints: [], fittedLine: [], thinnedFrom: null };
   if (!summary.fit) return { ...summary, ...empty };
   const full = units ? fitWeibull(units, { confidence }) : null;
-  const ranked = full?.plotPoints ?? johnsonAdjustedRanksCounted(groups).map((p) => ({ ...p, y: weibullPlotY(p.medianRank) }));
-  const rr = full?.rankRegression.xOnY ?? rankRegressionOf(ranked).xOnY;
+  const maxPoints = opts.maxPlotPoints ?? 300;
+  // a large set is ranked without keeping an object per failure: the regression and the thinned plot in one pass
+  const counted = full ? null : rankRegressionAndPlot(groups, maxPoints);
+  const plotted = full ? thin(full.plotPoints, maxPoints) : counted!.points;
+  const plottedFrom = full ? full.plotPoints.length : counted!.failures;
+  const rr = full?.rankRegression.xOnY ?? counted!.regression.xOnY;
   const beta = full?.mle.beta ?? summary.fit.beta;
   const eta = full?.mle.eta ?? summary.fit.eta;
-  const tMin = ranked.reduce((m, p) => Math.min(m, p.time), eta / 10);
+  // failures come in time order: the first plotted one is the earliest
+  const tMin = Math.min(plotted[0]?.time ?? Infinity, eta / 10);
   const tMax = groups.reduce((m, u) => Math.max(m, u.time), eta * 1.5);
-  const maxPoints = opts.maxPlotPoints ?? 300;
   // the same reading as the cause table: from the Fisher bounds, never the likelihood-ratio ones
   const shape = readShape(summary.fit.beta, summary.fit.betaBounds);
   const [lo, hi] = summary.fit.betaBounds;
@@ -217,8 +260,8 @@ export function analyseCause(
     mle: { beta, eta, b10: summary.fit.b10, fisher: { beta: summary.fit.betaBounds, eta: summary.fit.etaBounds, b10: summary.fit.b10Bounds } },
     likelihoodRatio: full ? { beta: full.mle.likelihoodRatio.beta, eta: full.mle.likelihoodRatio.eta, b10: full.mle.likelihoodRatio.b10 } : null,
     shapeExplanation: shape.explanation,
-    plotPoints: thin(ranked, maxPoints).map((p) => ({ time: p.time, medianRank: p.medianRank, y: p.y })),
+    plotPoints: plotted.map((p) => ({ time: p.time, medianRank: p.medianRank, y: p.y })),
     fittedLine: line(beta, eta, tMin, tMax),
-    thinnedFrom: ranked.length > maxPoints ? ranked.length : null,
+    thinnedFrom: plottedFrom > maxPoints ? plottedFrom : null,
   };
 }

@@ -5,7 +5,7 @@
 import "server-only";
 import { sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
-import { cases } from "@/db/schema";
+import { cases, recurrenceCarCounts, recurrenceLotCounts } from "@/db/schema";
 import type { ClusterKey, TallyFilters } from "@/lib/tallies/filters";
 import { tallyWhere, type TallyViewer } from "./scope";
 
@@ -44,19 +44,19 @@ export async function recurringClusters(filters: TallyFilters, viewer: TallyView
   const { cols, label, match, present } = keyOf(filters.cluster);
   const k = KEY_NAMES[filters.cluster];
   const where = sql`${tallyWhere(filters, viewer, { signedOnly: true })} and ${cases.removedOn} is not null and ${cases.primaryCause} is not null and ${present}`;
-  // Cars and lots are many and mostly seen once: keep only groups with enough cases before the
-  // window work. Sites are few and busy, so there the pre-filter would only cost time.
+  // Cars and lots are many and mostly seen once: only keys with enough signed removals in all (the
+  // counts kept by triggers, whatever the filters) can hold a cluster within the filters, so the window
+  // work sees only their cases. Sites are few and busy, so there the pre-filter would only cost time.
+  const repeated =
+    filters.cluster === "car"
+      ? sql`(select car_mark, car_number, primary_cause from ${recurrenceCarCounts} where n >= ${sql.raw(String(minSize))})`
+      : sql`(select lot, primary_cause from ${recurrenceLotCounts} where n >= ${sql.raw(String(minSize))})`;
   const source =
     filters.cluster === "site"
       ? sql`select ${cols}, ${cases.primaryCause} as cause, ${cases.removedOn} as d from ${cases} where ${where}`
-      : sql`select ${cols}, ${cases.primaryCause} as cause, ${cases.removedOn} as d from ${cases} join big using (${k}, primary_cause) where ${where}`;
-  // Counted once, before any parallel workers would each count it again.
-  const big =
-    filters.cluster === "site"
-      ? sql``
-      : sql`big as materialized (select ${cols}, ${cases.primaryCause} from ${cases} where ${where} group by ${cols}, ${cases.primaryCause} having count(*) >= ${minSize}),`;
+      : sql`select ${cols}, ${cases.primaryCause} as cause, ${cases.removedOn} as d from ${cases} join ${repeated} big using (${k}, primary_cause) where ${where}`;
   const result = await db.execute<{ k: string; cause: string; first_d: string; last_d: string; size: number; total: number; numbers: string[] }>(sql`
-    with ${big} days as (
+    with days as (
       select ${k}, cause, d, count(*)::int as n from (${source}) src group by ${k}, cause, d
     ),
     w as (

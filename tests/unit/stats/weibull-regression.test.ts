@@ -1,5 +1,6 @@
-import { describe, it } from "vitest";
-import { weibullRankRegression } from "@/lib/stats/weibull-regression";
+import { describe, expect, it } from "vitest";
+import { johnsonPlotPointsCounted } from "@/lib/stats/weibull-ranks";
+import { rankRegressionAndPlot, rankRegressionOf, weibullRankRegression } from "@/lib/stats/weibull-regression";
 import { checkValues, expectRel, unitsOf } from "./check-values";
 
 const { lieblein_zelen_complete: lz, nist_8_4_1_3: nist, kececioglu_mean_order_number: kec } = checkValues.weibull;
@@ -36,5 +37,26 @@ describe("median-rank regression", () => {
     const got = weibullRankRegression(unitsOf(kec));
     // Kececioglu, Reliability & Life Testing Handbook Vol. 2 (1994), Table 3.1 data; values computed
     checkBothWays(got, kec, kec.rel_tol);
+  });
+});
+
+describe("rank regression and thinned plot in one pass", () => {
+  // Invented counted lives: 40 distinct times, failures and suspensions interleaved (arithmetic check).
+  const groups = Array.from({ length: 40 }, (_, i) => ({ time: 5 + i * 1.5, failed: i % 3 !== 1, count: 1 + (i % 4) }));
+  const every = johnsonPlotPointsCounted(groups);
+
+  it("gives the regression of every ranked failure", () => {
+    const { regression, failures } = rankRegressionAndPlot(groups, 10);
+    expect(failures).toBe(every.length);
+    expect(regression).toEqual(rankRegressionOf(every));
+  });
+
+  it("keeps evenly spaced failures, the first and last among them, or all when few", () => {
+    const { points } = rankRegressionAndPlot(groups, 10);
+    expect(points).toHaveLength(10);
+    expect(points[0]).toEqual(every[0]);
+    expect(points[9]).toEqual(every[every.length - 1]);
+    points.forEach((p, j) => expect(p).toEqual(every[Math.round((j * (every.length - 1)) / 9)]));
+    expect(rankRegressionAndPlot(groups, 1000).points).toEqual(every);
   });
 });
