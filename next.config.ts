@@ -17,6 +17,7 @@ const config: NextConfig = {
 
 export default function nextConfig(phase: string): NextConfig {
   // The offline worker is built beside the app, so a build never ships a worker from older source.
-  if (phase === PHASE_PRODUCTION_BUILD || phase === PHASE_DEVELOPMENT_SERVER) buildServiceWorker(process.cwd(), phase === PHASE_PRODUCTION_BUILD);
+  if (phase === PHASE_PRODUCTION_BUILD || phase === PHASE_DEVELOPMENT_SERVER)
+    buildServiceWorker(process.cwd(), phase === PHASE_PRODUCTION_BUILD);
   return config;
 }

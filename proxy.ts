@@ -31,7 +31,11 @@ const runtimeEnv: Record<string, string | undefined> = process.env;
 const selfOrigin = () => runtimeEnv["__NEXT_PRIVATE_ORIGIN"] ?? `http://127.0.0.1:${runtimeEnv["PORT"] ?? 3000}`;
 
 async function unavailablePage(asked: string, method: string): Promise<NextResponse> {
-  const page = await fetch(new URL(UNAVAILABLE_PATH, selfOrigin()), { method, headers: { [RETRY_HEADER]: asked }, signal: AbortSignal.timeout(10_000) });
+  const page = await fetch(new URL(UNAVAILABLE_PATH, selfOrigin()), {
+    method,
+    headers: { [RETRY_HEADER]: asked },
+    signal: AbortSignal.timeout(10_000),
+  });
   const headers = new Headers(page.headers);
   // fetch has already unpacked the body; the server packs the answer again itself.
   for (const h of ["content-encoding", "content-length", "transfer-encoding"]) headers.delete(h);

@@ -21,9 +21,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await headers();
   return (
     <html lang="en">
-      <body className="min-h-dvh bg-bg font-sans text-ink antialiased">
-        {children}
-      </body>
+      <body className="min-h-dvh bg-bg font-sans text-ink antialiased">{children}</body>
     </html>
   );
 }

@@ -5,7 +5,13 @@ export function BrandMark({ className = "h-7 w-7" }: { className?: string }) {
       <circle cx="16" cy="16" r="14" fill="none" stroke="currentColor" strokeWidth="3" />
       <circle cx="16" cy="16" r="6" fill="none" stroke="currentColor" strokeWidth="3" />
       {[0, 60, 120, 180, 240, 300].map((a) => (
-        <circle key={a} cx={16 + 10 * Math.sin((a * Math.PI) / 180)} cy={16 - 10 * Math.cos((a * Math.PI) / 180)} r="2" fill="currentColor" />
+        <circle
+          key={a}
+          cx={16 + 10 * Math.sin((a * Math.PI) / 180)}
+          cy={16 - 10 * Math.cos((a * Math.PI) / 180)}
+          r="2"
+          fill="currentColor"
+        />
       ))}
       <path d="M3 25 L29 7" stroke="#f59e0b" strokeWidth="2.5" strokeLinecap="round" />
     </svg>

@@ -9,7 +9,13 @@ const state = globalThis as unknown as { tearlineProbe?: { pool: Pool; inFlight?
 
 function probe() {
   state.tearlineProbe ??= {
-    pool: new Pool({ connectionString: process.env.DATABASE_URL, max: 1, connectionTimeoutMillis: 3000, query_timeout: 3000, idleTimeoutMillis: 60_000 }),
+    pool: new Pool({
+      connectionString: process.env.DATABASE_URL,
+      max: 1,
+      connectionTimeoutMillis: 3000,
+      query_timeout: 3000,
+      idleTimeoutMillis: 60_000,
+    }),
     downUntil: 0,
   };
   // A dropped idle connection must not end the process; the next probe opens a new one.

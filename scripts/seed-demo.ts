@@ -21,12 +21,16 @@ if (count > 0 && !args.has("--reset")) {
   await seedSitesAndPeople(db);
   log("demo sites, people and code lists loaded");
   const loaded = await seedDemoCases(db);
-  log(`demo casebook loaded: ${loaded.cases} cases, ${loaded.findings} findings, ${loaded.events} history entries, ${loaded.links} links (${Date.now() - started} ms)`);
+  log(
+    `demo casebook loaded: ${loaded.cases} cases, ${loaded.findings} findings, ${loaded.events} history entries, ${loaded.links} links (${Date.now() - started} ms)`,
+  );
   if (demoPhotos) {
     const photosStarted = Date.now();
     const shots = await demoPhotos.seedDemoPhotos(db);
     const swept = args.has("--reset") ? await demoPhotos.removeUnusedPhotoObjects() : 0;
-    log(`demo photos attached: ${shots.photos} photos on ${shots.cases} cases${swept ? `, ${swept} objects of earlier photos removed` : ""} (${Date.now() - photosStarted} ms)`);
+    log(
+      `demo photos attached: ${shots.photos} photos on ${shots.cases} cases${swept ? `, ${swept} objects of earlier photos removed` : ""} (${Date.now() - photosStarted} ms)`,
+    );
   }
 }
 await pool.end();

@@ -11,9 +11,20 @@ mkdirSync(out, { recursive: true });
 
 const browser = await chromium.launch({
   executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-  args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+  args: [
+    "--no-sandbox",
+    "--disable-gpu",
+    "--disable-quic",
+    "--no-first-run",
+    "--disable-background-networking",
+    "--disable-component-update",
+    "--disable-sync",
+  ],
 });
-for (const [label, viewport] of [["phone", { width: 390, height: 844 }], ["desk", { width: 1366, height: 900 }]] as const) {
+for (const [label, viewport] of [
+  ["phone", { width: 390, height: 844 }],
+  ["desk", { width: 1366, height: 900 }],
+] as const) {
   const ctx = await browser.newContext({ viewport, colorScheme: (process.env.SCHEME as "dark" | "light") ?? "light" });
   const page = await ctx.newPage();
   if (role !== "anon") {

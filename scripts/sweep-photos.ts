@@ -17,7 +17,9 @@ const dryRun = Boolean(arg("dry-run"));
 try {
   const report = await sweepPhotoObjects({ olderThanMinutes, dryRun });
   const verb = dryRun ? "would remove" : "removed";
-  console.log(`photo sweep: ${report.foldersExamined} photo folders examined, ${report.orphanFolders} without a row older than ${olderThanMinutes} min; ${verb} ${report.removedKeys.length} objects`);
+  console.log(
+    `photo sweep: ${report.foldersExamined} photo folders examined, ${report.orphanFolders} without a row older than ${olderThanMinutes} min; ${verb} ${report.removedKeys.length} objects`,
+  );
   for (const key of report.removedKeys) console.log(`  ${key}`);
 } finally {
   await pool.end();

@@ -11,8 +11,8 @@ export default function AuthLayout({ children }: { children: React.ReactNode }) 
         <div className="max-w-md">
           <p className="text-3xl font-semibold leading-tight text-white">Every removed bearing, from the shop floor to a signed verdict.</p>
           <p className="mt-4 text-slate-400">
-            Field checks, teardown findings and root causes in one casebook, so the causes that recur and the removals
-            that teardown did not confirm are plain to see.
+            Field checks, teardown findings and root causes in one casebook, so the causes that recur and the removals that teardown did not
+            confirm are plain to see.
           </p>
         </div>
         <p className="text-xs text-slate-500">Tearline casebook</p>

@@ -6,7 +6,17 @@ import { inputClass } from "@/components/ui/field";
 
 export type PickerEntry = CodeSearchEntry & { family?: string | null };
 
-export function CodePicker({ entries, value, onChange, id }: { entries: PickerEntry[]; value: string; onChange: (code: string) => void; id: string }) {
+export function CodePicker({
+  entries,
+  value,
+  onChange,
+  id,
+}: {
+  entries: PickerEntry[];
+  value: string;
+  onChange: (code: string) => void;
+  id: string;
+}) {
   const search = useMemo(() => createCodeSearch(entries), [entries]);
   const current = entries.find((e) => e.code === value);
   const [query, setQuery] = useState("");
@@ -48,9 +58,17 @@ export function CodePicker({ entries, value, onChange, id }: { entries: PickerEn
           if (e.key === "Escape") setOpen(false);
         }}
       />
-      {current && !query ? <p className="mt-1 text-xs text-muted">Chosen: <strong className="text-ink-2">{current.label}</strong> · {current.code}</p> : null}
+      {current && !query ? (
+        <p className="mt-1 text-xs text-muted">
+          Chosen: <strong className="text-ink-2">{current.label}</strong> · {current.code}
+        </p>
+      ) : null}
       {open && hits.length ? (
-        <ul id={`${id}-list`} role="listbox" className="absolute z-30 mt-1 max-h-72 w-full overflow-auto rounded-lg border border-line-strong bg-surface shadow-lg">
+        <ul
+          id={`${id}-list`}
+          role="listbox"
+          className="absolute z-30 mt-1 max-h-72 w-full overflow-auto rounded-lg border border-line-strong bg-surface shadow-lg"
+        >
           {hits.map((h, i) => (
             <li
               key={h.entry.code}
@@ -63,7 +81,9 @@ export function CodePicker({ entries, value, onChange, id }: { entries: PickerEn
               className={`cursor-pointer px-3 py-2 text-sm ${i === active ? "bg-accent-soft" : ""}`}
             >
               <span className="font-medium">{h.entry.label}</span> <span className="text-xs text-muted">{h.entry.code}</span>
-              {h.matchedOn === "synonym" || h.matchedOn === "description" ? <span className="block text-xs text-muted">matched “{h.matchedText}”</span> : null}
+              {h.matchedOn === "synonym" || h.matchedOn === "description" ? (
+                <span className="block text-xs text-muted">matched “{h.matchedText}”</span>
+              ) : null}
             </li>
           ))}
         </ul>

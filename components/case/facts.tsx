@@ -6,7 +6,9 @@ export function Facts({ items }: { items: [string, ReactNode][] }) {
       {items.map(([k, v]) => (
         <div key={k} className="min-w-0">
           <dt className="text-xs text-muted">{k}</dt>
-          <dd className="mt-0.5 break-words font-medium text-ink">{v === null || v === undefined || v === "" ? <span className="text-muted">—</span> : v}</dd>
+          <dd className="mt-0.5 break-words font-medium text-ink">
+            {v === null || v === undefined || v === "" ? <span className="text-muted">—</span> : v}
+          </dd>
         </div>
       ))}
     </dl>

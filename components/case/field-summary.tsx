@@ -1,6 +1,14 @@
 // The field report as read back: facts, the hand-roll grid, the end-play arithmetic and the call.
 import { formatDay } from "@/lib/cases/list-columns";
-import { AXLE_POSITIONS, ROLL_DIRECTIONS, formatInches, formatMm, wheelRevolutions, type EndPlayPolicy, type HandRollGrid } from "@/lib/field";
+import {
+  AXLE_POSITIONS,
+  ROLL_DIRECTIONS,
+  formatInches,
+  formatMm,
+  wheelRevolutions,
+  type EndPlayPolicy,
+  type HandRollGrid,
+} from "@/lib/field";
 import { evaluateFieldChecks } from "@/lib/cases/compute";
 import { fieldChecksSchema } from "@/lib/cases/schemas";
 import type { CaseDetail } from "@/lib/cases/types";
@@ -10,7 +18,12 @@ import { TRIGGERS } from "@/lib/classification/triggers";
 import { Facts } from "./facts";
 import { triggerLabel } from "@/lib/classification/labels";
 
-const feelTone: Record<string, string> = { smooth: "bg-ok-soft text-ok", stiff: "bg-warn-soft text-warn", rough: "bg-danger-soft text-danger", catch: "bg-danger-soft text-danger" };
+const feelTone: Record<string, string> = {
+  smooth: "bg-ok-soft text-ok",
+  stiff: "bg-warn-soft text-warn",
+  rough: "bg-danger-soft text-danger",
+  catch: "bg-danger-soft text-danger",
+};
 
 export function FieldSummary({ c, policy }: { c: CaseDetail; policy: EndPlayPolicy }) {
   const checks = fieldChecksSchema.safeParse(c.fieldChecks);
@@ -28,7 +41,13 @@ export function FieldSummary({ c, policy }: { c: CaseDetail; policy: EndPlayPoli
           ["Removed", formatDay(c.removedOn)],
           ["Site", c.siteName],
           ["Trigger", triggerLabel(c.trigger)],
-          ...detail.map(([k, v]) => [trigger?.fields.find((f) => f.key === k)?.label ?? k, `${v}${trigger?.fields.find((f) => f.key === k)?.unit ? ` ${trigger?.fields.find((f) => f.key === k)?.unit}` : ""}`] as [string, string]),
+          ...detail.map(
+            ([k, v]) =>
+              [
+                trigger?.fields.find((f) => f.key === k)?.label ?? k,
+                `${v}${trigger?.fields.find((f) => f.key === k)?.unit ? ` ${trigger?.fields.find((f) => f.key === k)?.unit}` : ""}`,
+              ] as [string, string],
+          ),
           ["Serial", c.serial],
           ["Class", c.bearingClass === "other" ? c.bearingClassOther : c.bearingClass],
           ["Maker", c.makerCode],
@@ -36,7 +55,14 @@ export function FieldSummary({ c, policy }: { c: CaseDetail; policy: EndPlayPoli
           ["Lot", c.lot],
           ["Reconditioned", c.timesReconditioned === null ? null : `${c.timesReconditioned}×`],
           ["Mounted", c.mountedOn],
-          ["Service", c.serviceMonths !== null ? `${c.serviceMonths.toFixed(1)} months${c.serviceMiles ? `, ${c.serviceMiles.toLocaleString("en-US")} mi` : ""}` : c.serviceMiles ? `${c.serviceMiles.toLocaleString("en-US")} mi` : null],
+          [
+            "Service",
+            c.serviceMonths !== null
+              ? `${c.serviceMonths.toFixed(1)} months${c.serviceMiles ? `, ${c.serviceMiles.toLocaleString("en-US")} mi` : ""}`
+              : c.serviceMiles
+                ? `${c.serviceMiles.toLocaleString("en-US")} mi`
+                : null,
+          ],
           ["Wheel", c.wheelDiameterIn ? `${c.wheelDiameterIn} in` : null],
           ["Wheel revolutions", revs ? `${(revs / 1e6).toFixed(1)} million` : null],
         ]}
@@ -54,7 +80,10 @@ export function FieldSummary({ c, policy }: { c: CaseDetail; policy: EndPlayPoli
                 {ROLL_DIRECTIONS.map((d) => {
                   const cell = grid[p]?.[d];
                   return (
-                    <span key={d} className={`rounded px-2 py-1 font-medium ${cell?.feel ? feelTone[cell.feel] : "bg-surface-2 text-muted"}`}>
+                    <span
+                      key={d}
+                      className={`rounded px-2 py-1 font-medium ${cell?.feel ? feelTone[cell.feel] : "bg-surface-2 text-muted"}`}
+                    >
                       {cell?.feel ?? "not done"}
                       {cell?.revolutions !== undefined ? ` · ${cell.revolutions} rev` : ""}
                     </span>
@@ -63,12 +92,18 @@ export function FieldSummary({ c, policy }: { c: CaseDetail; policy: EndPlayPoli
               </div>
             ))}
           </div>
-          {ev?.handRoll ? <div className="mt-2"><FieldMessages messages={ev.handRoll.messages.filter((m) => m.level !== "info")} /></div> : null}
+          {ev?.handRoll ? (
+            <div className="mt-2">
+              <FieldMessages messages={ev.handRoll.messages.filter((m) => m.level !== "info")} />
+            </div>
+          ) : null}
         </div>
       ) : null}
       {ev?.endPlay && ev.endPlay.call !== "incomplete" ? (
         <div>
-          <h3 className="mb-2 text-sm font-semibold">Mounted end play ({checks.success && checks.data.endPlay?.method === "tape" ? "metal tape" : "dial indicator"})</h3>
+          <h3 className="mb-2 text-sm font-semibold">
+            Mounted end play ({checks.success && checks.data.endPlay?.method === "tape" ? "metal tape" : "dial indicator"})
+          </h3>
           <table className="text-sm tabular">
             <tbody>
               {ev.endPlay.trials.map((t) => (

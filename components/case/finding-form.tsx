@@ -9,7 +9,21 @@ import { CodePicker, type PickerEntry } from "./code-picker";
 
 const num = (v: string) => (v.trim() === "" ? null : Number(v.replace(",", ".")));
 
-export function FindingForm({ initial, codes, onSubmit, onCancel, busy, errors }: { initial?: Partial<FindingInput>; codes: PickerEntry[]; onSubmit: (f: FindingInput) => void; onCancel: () => void; busy: boolean; errors: Record<string, string> }) {
+export function FindingForm({
+  initial,
+  codes,
+  onSubmit,
+  onCancel,
+  busy,
+  errors,
+}: {
+  initial?: Partial<FindingInput>;
+  codes: PickerEntry[];
+  onSubmit: (f: FindingInput) => void;
+  onCancel: () => void;
+  busy: boolean;
+  errors: Record<string, string>;
+}) {
   const [f, setF] = useState<Partial<FindingInput>>(initial ?? { component: "cup", severity: 2 });
   const comp = COMPONENTS.find((c) => c.code === f.component);
   const set = (p: Partial<FindingInput>) => setF((x) => ({ ...x, ...p }));
@@ -25,7 +39,9 @@ export function FindingForm({ initial, codes, onSubmit, onCancel, busy, errors }
       <Field label="Part" htmlFor="f-component" error={errors.component}>
         <Select id="f-component" value={f.component ?? ""} onChange={(e) => set({ component: e.target.value })}>
           {COMPONENTS.map((c) => (
-            <option key={c.code} value={c.code}>{c.label}</option>
+            <option key={c.code} value={c.code}>
+              {c.label}
+            </option>
           ))}
         </Select>
       </Field>
@@ -37,7 +53,9 @@ export function FindingForm({ initial, codes, onSubmit, onCancel, busy, errors }
       <Field label="Severity" htmlFor="f-severity" error={errors.severity}>
         <Select id="f-severity" value={f.severity ?? ""} onChange={(e) => set({ severity: Number(e.target.value) })}>
           {SEVERITIES.map((s) => (
-            <option key={s.code} value={s.code}>{s.code} · {s.label}</option>
+            <option key={s.code} value={s.code}>
+              {s.code} · {s.label}
+            </option>
           ))}
         </Select>
       </Field>
@@ -50,7 +68,12 @@ export function FindingForm({ initial, codes, onSubmit, onCancel, busy, errors }
           </Select>
         </Field>
       ) : null}
-      <Field label="Clock position (°, 0 = 12 o'clock)" htmlFor="f-clock" error={errors.clockDeg} hint="Clockwise seen from the outboard end.">
+      <Field
+        label="Clock position (°, 0 = 12 o'clock)"
+        htmlFor="f-clock"
+        error={errors.clockDeg}
+        hint="Clockwise seen from the outboard end."
+      >
         <Input id="f-clock" inputMode="numeric" value={f.clockDeg ?? ""} onChange={(e) => set({ clockDeg: num(e.target.value) })} />
       </Field>
       <Field label="Arc extent (°)" htmlFor="f-arc" error={errors.arcDeg}>
@@ -60,15 +83,28 @@ export function FindingForm({ initial, codes, onSubmit, onCancel, busy, errors }
         <Select id="f-zone" value={f.zone ?? ""} onChange={(e) => set({ zone: e.target.value || null })}>
           <option value="">—</option>
           {ZONES.map((z) => (
-            <option key={z.code} value={z.code}>{z.label}</option>
+            <option key={z.code} value={z.code}>
+              {z.label}
+            </option>
           ))}
         </Select>
       </Field>
       <Field label="Length × width (mm)" htmlFor="f-length" error={errors.lengthMm ?? errors.widthMm}>
         <div className="flex items-center gap-2">
-          <Input id="f-length" aria-label="Length in mm" inputMode="decimal" value={f.lengthMm ?? ""} onChange={(e) => set({ lengthMm: num(e.target.value) })} />
+          <Input
+            id="f-length"
+            aria-label="Length in mm"
+            inputMode="decimal"
+            value={f.lengthMm ?? ""}
+            onChange={(e) => set({ lengthMm: num(e.target.value) })}
+          />
           <span className="text-muted">×</span>
-          <Input aria-label="Width in mm" inputMode="decimal" value={f.widthMm ?? ""} onChange={(e) => set({ widthMm: num(e.target.value) })} />
+          <Input
+            aria-label="Width in mm"
+            inputMode="decimal"
+            value={f.widthMm ?? ""}
+            onChange={(e) => set({ widthMm: num(e.target.value) })}
+          />
         </div>
       </Field>
       <div className="sm:col-span-2 lg:col-span-4">
@@ -77,8 +113,12 @@ export function FindingForm({ initial, codes, onSubmit, onCancel, busy, errors }
         </Field>
       </div>
       <div className="flex gap-2 sm:col-span-2 lg:col-span-4">
-        <Button type="submit" disabled={busy}>{initial?.damageCode ? "Save finding" : "Add finding"}</Button>
-        <Button variant="ghost" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" disabled={busy}>
+          {initial?.damageCode ? "Save finding" : "Add finding"}
+        </Button>
+        <Button variant="ghost" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

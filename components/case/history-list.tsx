@@ -2,7 +2,14 @@
 import { componentLabel } from "@/lib/classification/labels";
 import { formatMoment } from "@/lib/dates";
 
-type Event = { id: string; at: Date; action: string; changes: { field: string; from: unknown; to: unknown }[]; reason: string | null; userName: string | null };
+type Event = {
+  id: string;
+  at: Date;
+  action: string;
+  changes: { field: string; from: unknown; to: unknown }[];
+  reason: string | null;
+  userName: string | null;
+};
 
 const ACTION_WORDS: Record<string, string> = {
   created: "filed the field report",
@@ -34,9 +41,19 @@ export const actionWords = (action: string) => ACTION_WORDS[action] ?? action.re
 
 // Stored field names as people say them; anything else is split from camelCase.
 const FIELD_WORDS: Record<string, string> = {
-  status: "stage", primaryCause: "primary cause", contributingCauses: "contributing causes", removalConfirmed: "removal",
-  signedBy: "signed by", signedAt: "signed at", signedMeaning: "signature meaning", signedContentHash: "signed content (SHA-256)",
-  proposedBy: "proposed by", proposedAt: "proposed at", receivedBy: "received by", receivedAt: "received at", returnReason: "reason returned",
+  status: "stage",
+  primaryCause: "primary cause",
+  contributingCauses: "contributing causes",
+  removalConfirmed: "removal",
+  signedBy: "signed by",
+  signedAt: "signed at",
+  signedMeaning: "signature meaning",
+  signedContentHash: "signed content (SHA-256)",
+  proposedBy: "proposed by",
+  proposedAt: "proposed at",
+  receivedBy: "received by",
+  receivedAt: "received at",
+  returnReason: "reason returned",
 };
 
 export function fieldWords(field: string): string {
@@ -62,18 +79,24 @@ export function HistoryList({ events }: { events: Event[] }) {
           <span className="absolute -left-[25px] top-1.5 h-2.5 w-2.5 rounded-full border-2 border-surface bg-accent" aria-hidden />
           <p className="text-sm">
             <strong>{e.userName ?? "Someone"}</strong> {actionWords(e.action)}
-            <time className="ml-2 inline-block whitespace-nowrap text-xs text-muted" dateTime={new Date(e.at).toISOString()}>{formatMoment(e.at)}</time>
+            <time className="ml-2 inline-block whitespace-nowrap text-xs text-muted" dateTime={new Date(e.at).toISOString()}>
+              {formatMoment(e.at)}
+            </time>
           </p>
           {e.reason ? <p className="mt-1 rounded bg-surface-2 px-2 py-1 text-sm italic text-ink-2">“{e.reason}”</p> : null}
           {e.changes.filter((c) => !HIDDEN.has(c.field)).length ? (
             <details className="mt-1 text-xs text-muted">
-              <summary className="flex min-h-11 cursor-pointer items-center lg:min-h-0">{changeCount(e.changes.filter((c) => !HIDDEN.has(c.field)).length)}</summary>
+              <summary className="flex min-h-11 cursor-pointer items-center lg:min-h-0">
+                {changeCount(e.changes.filter((c) => !HIDDEN.has(c.field)).length)}
+              </summary>
               <ul className="mt-1 flex flex-col gap-0.5">
-                {e.changes.filter((c) => !HIDDEN.has(c.field)).map((c, i) => (
-                  <li key={i} className="break-words">
-                    <span className="font-medium text-ink-2">{fieldWords(c.field)}</span>: {show(c.from)} → {show(c.to)}
-                  </li>
-                ))}
+                {e.changes
+                  .filter((c) => !HIDDEN.has(c.field))
+                  .map((c, i) => (
+                    <li key={i} className="break-words">
+                      <span className="font-medium text-ink-2">{fieldWords(c.field)}</span>: {show(c.from)} → {show(c.to)}
+                    </li>
+                  ))}
               </ul>
             </details>
           ) : null}

@@ -10,7 +10,17 @@ import { componentLabel, dispositionLabel, lubricantLabel } from "@/lib/classifi
 type Teardown = { lubricant: { conditions?: string[]; notes?: string }; dispositions: Record<string, string>; teardownNotes: string };
 const PARTS = COMPONENTS.filter((c) => !["lubricant", "journal"].includes(c.code));
 
-export function TeardownForm({ caseId, version, value, editable }: { caseId: string; version: number; value: Teardown; editable: boolean }) {
+export function TeardownForm({
+  caseId,
+  version,
+  value,
+  editable,
+}: {
+  caseId: string;
+  version: number;
+  value: Teardown;
+  editable: boolean;
+}) {
   const { run, error, busy } = useCaseAction();
   const [t, setT] = useState<Teardown>(value);
   const [dirty, setDirty] = useState(false);
@@ -28,7 +38,11 @@ export function TeardownForm({ caseId, version, value, editable }: { caseId: str
         </div>
         <div>
           <p className="text-xs text-muted">Dispositions</p>
-          <p className="font-medium">{Object.entries(t.dispositions).map(([k, v]) => `${componentLabel(k)}: ${dispositionLabel(v)}`).join(" · ") || "—"}</p>
+          <p className="font-medium">
+            {Object.entries(t.dispositions)
+              .map(([k, v]) => `${componentLabel(k)}: ${dispositionLabel(v)}`)
+              .join(" · ") || "—"}
+          </p>
         </div>
         {t.teardownNotes ? <p className="whitespace-pre-wrap rounded-lg bg-surface-2 p-3 sm:col-span-2">{t.teardownNotes}</p> : null}
       </div>
@@ -43,7 +57,15 @@ export function TeardownForm({ caseId, version, value, editable }: { caseId: str
           {LUBRICANT_CONDITIONS.map((l) => {
             const on = conds.includes(l.code);
             return (
-              <button key={l.code} type="button" aria-pressed={on} onClick={() => set({ lubricant: { ...t.lubricant, conditions: on ? conds.filter((c) => c !== l.code) : [...conds, l.code] } })} className={`min-h-11 rounded-lg border px-3 text-sm lg:min-h-10 ${on ? "border-accent bg-accent-soft font-medium" : "border-line-strong"}`}>
+              <button
+                key={l.code}
+                type="button"
+                aria-pressed={on}
+                onClick={() =>
+                  set({ lubricant: { ...t.lubricant, conditions: on ? conds.filter((c) => c !== l.code) : [...conds, l.code] } })
+                }
+                className={`min-h-11 rounded-lg border px-3 text-sm lg:min-h-10 ${on ? "border-accent bg-accent-soft font-medium" : "border-line-strong"}`}
+              >
                 {l.label}
               </button>
             );
@@ -51,7 +73,12 @@ export function TeardownForm({ caseId, version, value, editable }: { caseId: str
         </div>
       </div>
       <Field label="Lubricant notes" htmlFor="lub-notes">
-        <Textarea id="lub-notes" rows={2} value={t.lubricant.notes ?? ""} onChange={(e) => set({ lubricant: { ...t.lubricant, notes: e.target.value } })} />
+        <Textarea
+          id="lub-notes"
+          rows={2}
+          value={t.lubricant.notes ?? ""}
+          onChange={(e) => set({ lubricant: { ...t.lubricant, notes: e.target.value } })}
+        />
       </Field>
       <div>
         <p className="mb-1.5 text-sm font-medium text-ink-2">Disposition of each part</p>
@@ -59,15 +86,22 @@ export function TeardownForm({ caseId, version, value, editable }: { caseId: str
           {PARTS.map((p) => (
             <label key={p.code} className="flex items-center justify-between gap-2 text-sm">
               <span className="text-ink-2">{p.label}</span>
-              <Select aria-label={`Disposition of ${p.label}`} className="!w-36" value={t.dispositions[p.code] ?? ""} onChange={(e) => {
-                const next = { ...t.dispositions };
-                if (e.target.value) next[p.code] = e.target.value;
-                else delete next[p.code];
-                set({ dispositions: next });
-              }}>
+              <Select
+                aria-label={`Disposition of ${p.label}`}
+                className="!w-36"
+                value={t.dispositions[p.code] ?? ""}
+                onChange={(e) => {
+                  const next = { ...t.dispositions };
+                  if (e.target.value) next[p.code] = e.target.value;
+                  else delete next[p.code];
+                  set({ dispositions: next });
+                }}
+              >
                 <option value="">—</option>
                 {DISPOSITIONS.map((d) => (
-                  <option key={d.code} value={d.code}>{d.label}</option>
+                  <option key={d.code} value={d.code}>
+                    {d.label}
+                  </option>
                 ))}
               </Select>
             </label>
@@ -75,10 +109,19 @@ export function TeardownForm({ caseId, version, value, editable }: { caseId: str
         </div>
       </div>
       <Field label="Teardown notes" htmlFor="teardownNotes">
-        <Textarea id="teardownNotes" rows={4} value={t.teardownNotes} onChange={(e) => set({ teardownNotes: e.target.value })} placeholder="What the teardown showed, in the order you found it." />
+        <Textarea
+          id="teardownNotes"
+          rows={4}
+          value={t.teardownNotes}
+          onChange={(e) => set({ teardownNotes: e.target.value })}
+          placeholder="What the teardown showed, in the order you found it."
+        />
       </Field>
       <div className="flex items-center gap-3">
-        <Button disabled={busy || !dirty} onClick={async () => (await run("PATCH", `/api/cases/${caseId}`, { version, section: "teardown", data: t })) && setDirty(false)}>
+        <Button
+          disabled={busy || !dirty}
+          onClick={async () => (await run("PATCH", `/api/cases/${caseId}`, { version, section: "teardown", data: t })) && setDirty(false)}
+        >
           Save teardown
         </Button>
         {dirty ? <span className="text-sm text-muted">Unsaved changes</span> : null}

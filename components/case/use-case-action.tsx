@@ -14,7 +14,11 @@ export function useCaseAction() {
   async function run(method: string, url: string, body?: unknown): Promise<boolean> {
     setBusy(true);
     setError(null);
-    const res = await callApi(method, url, { json: body ?? undefined, fieldPrefixes: ["data", "finding"], fallback: "The change was not saved." });
+    const res = await callApi(method, url, {
+      json: body ?? undefined,
+      fieldPrefixes: ["data", "finding"],
+      fallback: "The change was not saved.",
+    });
     setBusy(false);
     if (!res.ok) {
       setError({ message: res.message, conflict: res.conflict, fields: res.fields });
@@ -27,7 +31,11 @@ export function useCaseAction() {
   return { run, error, busy, clearError: () => setError(null) };
 }
 
-type ActionErrorProps = { error: { message: string; conflict: boolean; fields?: Record<string, string> } | null; labels?: Record<string, string>; idPrefix?: string };
+type ActionErrorProps = {
+  error: { message: string; conflict: boolean; fields?: Record<string, string> } | null;
+  labels?: Record<string, string>;
+  idPrefix?: string;
+};
 
 /** Field problems as a summary with links to each field; anything else (a stale version, a refused step) as one line. */
 export function ActionError({ error, labels, idPrefix }: ActionErrorProps) {

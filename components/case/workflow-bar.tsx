@@ -20,7 +20,11 @@ export function WorkflowBar({ caseId, version, actions, verdictProblems }: Props
     // a signature is never one click: it opens the ceremony
     if (action === "sign") return setSigning(true);
     if (WORKFLOW[action].needsReason && asking !== action) return setAsking(action);
-    const ok = await run("POST", `/api/cases/${caseId}/transitions`, { version, action, reason: WORKFLOW[action].needsReason ? reason : undefined });
+    const ok = await run("POST", `/api/cases/${caseId}/transitions`, {
+      version,
+      action,
+      reason: WORKFLOW[action].needsReason ? reason : undefined,
+    });
     if (ok) {
       setAsking(null);
       setReason("");
@@ -51,11 +55,17 @@ export function WorkflowBar({ caseId, version, actions, verdictProblems }: Props
       ) : null}
       {asking ? (
         <div className="flex flex-col gap-2 rounded-lg border border-line bg-surface-2 p-3">
-          <label htmlFor="reason" className="text-sm font-medium">Reason for “{WORKFLOW[asking].label.toLowerCase()}” (kept in the history and sent to the people on the case)</label>
+          <label htmlFor="reason" className="text-sm font-medium">
+            Reason for “{WORKFLOW[asking].label.toLowerCase()}” (kept in the history and sent to the people on the case)
+          </label>
           <Textarea id="reason" rows={3} value={reason} onChange={(e) => setReason(e.target.value)} />
           <div className="flex gap-2">
-            <Button onClick={() => void go(asking)} disabled={busy}>{WORKFLOW[asking].label}</Button>
-            <Button variant="ghost" onClick={() => setAsking(null)}>Cancel</Button>
+            <Button onClick={() => void go(asking)} disabled={busy}>
+              {WORKFLOW[asking].label}
+            </Button>
+            <Button variant="ghost" onClick={() => setAsking(null)}>
+              Cancel
+            </Button>
           </div>
         </div>
       ) : null}

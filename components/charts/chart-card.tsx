@@ -30,7 +30,21 @@ type Props = {
 const toggleClass = (on: boolean) =>
   `h-11 rounded-md px-3 text-sm lg:h-8 font-medium transition ${on ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`;
 
-export function ChartCard({ title, subtitle, imageSubtitle, table, legend, controls, footer, empty, children, tableView, id, noImage, chartLabel = "Chart" }: Props) {
+export function ChartCard({
+  title,
+  subtitle,
+  imageSubtitle,
+  table,
+  legend,
+  controls,
+  footer,
+  empty,
+  children,
+  tableView,
+  id,
+  noImage,
+  chartLabel = "Chart",
+}: Props) {
   const [view, setView] = useState<"chart" | "table">("chart");
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
@@ -63,20 +77,59 @@ export function ChartCard({ title, subtitle, imageSubtitle, table, legend, contr
   }
 
   return (
-    <section id={id} aria-labelledby={headingId} data-chart-card className="flex min-w-0 flex-col rounded-xl border border-line bg-surface shadow-[0_1px_2px_rgba(15,23,42,0.04)]">
+    <section
+      id={id}
+      aria-labelledby={headingId}
+      data-chart-card
+      className="flex min-w-0 flex-col rounded-xl border border-line bg-surface shadow-[0_1px_2px_rgba(15,23,42,0.04)]"
+    >
       <header className="flex flex-wrap items-start justify-between gap-3 border-b border-line px-4 py-3 sm:px-5">
         <div className="min-w-0">
-          <h2 id={headingId} className="text-[15px] font-semibold text-ink">{title}</h2>
+          <h2 id={headingId} className="text-[15px] font-semibold text-ink">
+            {title}
+          </h2>
           {subtitle ? <p className="mt-0.5 text-xs text-muted">{subtitle}</p> : null}
         </div>
         <div className="flex items-center gap-2">
           <div role="group" aria-label="Show as" className="inline-flex rounded-lg bg-surface-2 p-0.5 ring-1 ring-line">
-            <button type="button" aria-pressed={view === "chart"} className={toggleClass(view === "chart")} onClick={() => setView("chart")}>{chartLabel}</button>
-            <button type="button" aria-pressed={view === "table"} className={toggleClass(view === "table")} onClick={() => setView("table")}>Table</button>
+            <button
+              type="button"
+              aria-pressed={view === "chart"}
+              className={toggleClass(view === "chart")}
+              onClick={() => setView("chart")}
+            >
+              {chartLabel}
+            </button>
+            <button
+              type="button"
+              aria-pressed={view === "table"}
+              className={toggleClass(view === "table")}
+              onClick={() => setView("table")}
+            >
+              Table
+            </button>
           </div>
           <div className="inline-flex">
-            <button type="button" onClick={downloadCsv} disabled={table.rows.length === 0} className={`h-11 min-w-11 border lg:h-9 lg:min-w-0 ${noImage ? "rounded-lg" : "rounded-l-lg"} border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40`} title={`Download ${title} as CSV`}>CSV</button>
-            {noImage ? null : <button type="button" onClick={downloadPng} disabled={busy || Boolean(empty)} className="-ml-px h-11 min-w-11 rounded-r-lg lg:h-9 lg:min-w-0 border border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40" title={`Download ${title} as an image`}>{busy ? "…" : "PNG"}</button>}
+            <button
+              type="button"
+              onClick={downloadCsv}
+              disabled={table.rows.length === 0}
+              className={`h-11 min-w-11 border lg:h-9 lg:min-w-0 ${noImage ? "rounded-lg" : "rounded-l-lg"} border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40`}
+              title={`Download ${title} as CSV`}
+            >
+              CSV
+            </button>
+            {noImage ? null : (
+              <button
+                type="button"
+                onClick={downloadPng}
+                disabled={busy || Boolean(empty)}
+                className="-ml-px h-11 min-w-11 rounded-r-lg lg:h-9 lg:min-w-0 border border-line-strong px-2.5 text-xs font-semibold text-ink-2 hover:bg-surface-2 disabled:opacity-40"
+                title={`Download ${title} as an image`}
+              >
+                {busy ? "…" : "PNG"}
+              </button>
+            )}
           </div>
         </div>
       </header>
@@ -85,11 +138,17 @@ export function ChartCard({ title, subtitle, imageSubtitle, table, legend, contr
         {empty ? (
           <p className="rounded-lg border border-dashed border-line-strong px-4 py-10 text-center text-sm text-muted">{empty}</p>
         ) : view === "chart" ? (
-          <div ref={chartRef} className="min-w-0">{children}</div>
+          <div ref={chartRef} className="min-w-0">
+            {children}
+          </div>
         ) : (
           (tableView ?? <DataTableView table={table} caption={title} />)
         )}
-        {problem ? <p role="alert" className="mt-2 text-sm text-danger">{problem}</p> : null}
+        {problem ? (
+          <p role="alert" className="mt-2 text-sm text-danger">
+            {problem}
+          </p>
+        ) : null}
       </div>
       {footer ? <div className="border-t border-line px-4 py-3 text-sm text-ink-2 sm:px-5">{footer}</div> : null}
     </section>

@@ -11,7 +11,13 @@ export function DataTableView({ table, caption }: { table: DataTable; caption: s
         <thead className="sticky top-0 bg-surface-2">
           <tr>
             {table.columns.map((c, j) => (
-              <th key={j} scope="col" className={`whitespace-nowrap border-b border-line px-3 py-2 text-xs font-semibold text-muted ${numeric[j] ? "text-right" : "text-left"}`}>{c}</th>
+              <th
+                key={j}
+                scope="col"
+                className={`whitespace-nowrap border-b border-line px-3 py-2 text-xs font-semibold text-muted ${numeric[j] ? "text-right" : "text-left"}`}
+              >
+                {c}
+              </th>
             ))}
           </tr>
         </thead>
@@ -19,7 +25,10 @@ export function DataTableView({ table, caption }: { table: DataTable; caption: s
           {table.rows.map((row, i) => (
             <tr key={i} className="odd:bg-surface even:bg-surface-2/60">
               {row.map((cell, j) => (
-                <td key={j} className={`border-b border-line px-3 py-1.5 ${numeric[j] ? "text-right tabular" : "text-left"} ${j === 0 ? "font-medium text-ink" : "text-ink-2"}`}>
+                <td
+                  key={j}
+                  className={`border-b border-line px-3 py-1.5 ${numeric[j] ? "text-right tabular" : "text-left"} ${j === 0 ? "font-medium text-ink" : "text-ink-2"}`}
+                >
                   {cell === null || cell === undefined ? "–" : typeof cell === "number" ? cell.toLocaleString("en-US") : String(cell)}
                 </td>
               ))}

@@ -1,8 +1,21 @@
 // Turns a chart's SVG into a PNG in the browser: styles are copied inline (so theme colours and
 // fonts survive outside the page), then the SVG is drawn on a canvas with a title and legend.
 const STYLE_PROPS = [
-  "fill", "fill-opacity", "stroke", "stroke-width", "stroke-opacity", "stroke-dasharray", "opacity",
-  "font-family", "font-size", "font-weight", "letter-spacing", "text-anchor", "dominant-baseline", "visibility", "display",
+  "fill",
+  "fill-opacity",
+  "stroke",
+  "stroke-width",
+  "stroke-opacity",
+  "stroke-dasharray",
+  "opacity",
+  "font-family",
+  "font-size",
+  "font-weight",
+  "letter-spacing",
+  "text-anchor",
+  "dominant-baseline",
+  "visibility",
+  "display",
 ];
 
 function inlineStyles(source: Element, target: Element): void {
@@ -25,7 +38,10 @@ function loadImage(src: string): Promise<HTMLImageElement> {
 
 export type ImageLegend = { label: string; colour: string }[];
 
-export async function svgToPngBlob(svg: SVGSVGElement, opts: { title: string; subtitle?: string; legend?: ImageLegend; scale?: number }): Promise<Blob> {
+export async function svgToPngBlob(
+  svg: SVGSVGElement,
+  opts: { title: string; subtitle?: string; legend?: ImageLegend; scale?: number },
+): Promise<Blob> {
   const box = svg.getBoundingClientRect();
   const width = Math.max(1, Math.round(box.width));
   const height = Math.max(1, Math.round(box.height));
@@ -43,7 +59,10 @@ export async function svgToPngBlob(svg: SVGSVGElement, opts: { title: string; su
   const header = opts.subtitle ? 64 : 44;
   const measure = document.createElement("canvas").getContext("2d");
   if (measure) measure.font = "12px Inter, system-ui, sans-serif";
-  const legend = layoutLegend((opts.legend ?? []).map((l) => 18 + (measure?.measureText(l.label).width ?? l.label.length * 7)), width);
+  const legend = layoutLegend(
+    (opts.legend ?? []).map((l) => 18 + (measure?.measureText(l.label).width ?? l.label.length * 7)),
+    width,
+  );
   const legendRows = legend.length ? legend[legend.length - 1].row + 1 : 0;
   const footer = legendRows * 22 + 28;
   const scale = opts.scale ?? 2;

@@ -42,38 +42,97 @@ export function WeibullPlot({ points, line, beta, eta, b10, unit, title }: Weibu
   const fit = line.filter((l) => inside(l.y));
   const b10y = py(yOfF(0.1));
   return (
-    <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full" role="img" aria-label={`${title}: shape ${beta.toFixed(2)}, scale ${eta.toFixed(1)} ${unit}, B10 ${b10.toFixed(1)} ${unit}`} data-export data-weibull-plot>
+    <svg
+      viewBox={`0 0 ${W} ${H}`}
+      className="h-auto w-full"
+      role="img"
+      aria-label={`${title}: shape ${beta.toFixed(2)}, scale ${eta.toFixed(1)} ${unit}, B10 ${b10.toFixed(1)} ${unit}`}
+      data-export
+      data-weibull-plot
+    >
       <title>{title}</title>
       <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="var(--surface-2, #f8fafc)" />
-      {minors.map((t) => <line key={`m${t}`} x1={px(t)} x2={px(t)} y1={M.top} y2={H - M.bottom} stroke="var(--line, #e2e8f0)" strokeWidth={0.6} />)}
+      {minors.map((t) => (
+        <line key={`m${t}`} x1={px(t)} x2={px(t)} y1={M.top} y2={H - M.bottom} stroke="var(--line, #e2e8f0)" strokeWidth={0.6} />
+      ))}
       {decades.map((t) => (
         <g key={`d${t}`}>
           <line x1={px(t)} x2={px(t)} y1={M.top} y2={H - M.bottom} stroke="var(--line-strong, #cbd5e1)" />
-          <text x={px(t)} y={H - M.bottom + 19} textAnchor="middle" fontSize={14} fill="var(--muted, #64748b)">{fmtTime(t)}</text>
+          <text x={px(t)} y={H - M.bottom + 19} textAnchor="middle" fontSize={14} fill="var(--muted, #64748b)">
+            {fmtTime(t)}
+          </text>
         </g>
       ))}
       {F_TICKS.map((f) => (
         <g key={f}>
-          <line x1={M.left} x2={W - M.right} y1={py(yOfF(f))} y2={py(yOfF(f))} stroke={f === 0.632 ? "var(--muted, #64748b)" : "var(--line-strong, #cbd5e1)"} strokeDasharray={f === 0.632 ? "4 3" : undefined} strokeWidth={f === 0.632 ? 0.8 : 0.6} />
-          <text x={M.left - 6} y={py(yOfF(f)) + 4} textAnchor="end" fontSize={14} fill="var(--muted, #64748b)">{f === 0.632 ? "63.2" : Math.round(f * 100)}</text>
+          <line
+            x1={M.left}
+            x2={W - M.right}
+            y1={py(yOfF(f))}
+            y2={py(yOfF(f))}
+            stroke={f === 0.632 ? "var(--muted, #64748b)" : "var(--line-strong, #cbd5e1)"}
+            strokeDasharray={f === 0.632 ? "4 3" : undefined}
+            strokeWidth={f === 0.632 ? 0.8 : 0.6}
+          />
+          <text x={M.left - 6} y={py(yOfF(f)) + 4} textAnchor="end" fontSize={14} fill="var(--muted, #64748b)">
+            {f === 0.632 ? "63.2" : Math.round(f * 100)}
+          </text>
         </g>
       ))}
-      <text x={(M.left + W - M.right) / 2} y={H - 8} textAnchor="middle" fontSize={15} fill="var(--ink-2, #334155)">{`Life at removal (${unit}, log scale)`}</text>
-      <text transform={`translate(14 ${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle" fontSize={15} fill="var(--ink-2, #334155)">Share failed F (%, Weibull scale)</text>
-      {fit.length > 1 ? <polyline points={fit.map((l) => `${px(l.time)},${py(l.y)}`).join(" ")} fill="none" stroke="#b45309" strokeWidth={2.2} /> : null}
+      <text
+        x={(M.left + W - M.right) / 2}
+        y={H - 8}
+        textAnchor="middle"
+        fontSize={15}
+        fill="var(--ink-2, #334155)"
+      >{`Life at removal (${unit}, log scale)`}</text>
+      <text
+        transform={`translate(14 ${(M.top + H - M.bottom) / 2}) rotate(-90)`}
+        textAnchor="middle"
+        fontSize={15}
+        fill="var(--ink-2, #334155)"
+      >
+        Share failed F (%, Weibull scale)
+      </text>
+      {fit.length > 1 ? (
+        <polyline points={fit.map((l) => `${px(l.time)},${py(l.y)}`).join(" ")} fill="none" stroke="#b45309" strokeWidth={2.2} />
+      ) : null}
       {b10 > 10 ** xMin ? (
         <g>
           <line x1={M.left} x2={px(b10)} y1={b10y} y2={b10y} stroke="#dc2626" strokeDasharray="5 4" strokeWidth={1.2} />
           <line x1={px(b10)} x2={px(b10)} y1={b10y} y2={H - M.bottom} stroke="#dc2626" strokeDasharray="5 4" strokeWidth={1.2} />
-          <text x={px(b10) + 5} y={H - M.bottom - 6} fontSize={14} fontWeight={600} fill="#dc2626">{`B10 ${b10 < 100 ? b10.toFixed(1) : Math.round(b10).toLocaleString("en-US")}`}</text>
+          <text
+            x={px(b10) + 5}
+            y={H - M.bottom - 6}
+            fontSize={14}
+            fontWeight={600}
+            fill="#dc2626"
+          >{`B10 ${b10 < 100 ? b10.toFixed(1) : Math.round(b10).toLocaleString("en-US")}`}</text>
         </g>
       ) : null}
-      {points.filter((p) => inside(yOfF(p.medianRank))).map((p, i) => (
-        <circle key={i} cx={px(p.time)} cy={py(yOfF(p.medianRank))} r={3.4} fill="var(--surface, #ffffff)" stroke="var(--ink-2, #334155)" strokeWidth={1.4}>
-          <title>{`${p.time.toLocaleString("en-US")} ${unit}: median rank ${(p.medianRank * 100).toFixed(1)}%`}</title>
-        </circle>
-      ))}
-      <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="none" stroke="var(--line-strong, #cbd5e1)" />
+      {points
+        .filter((p) => inside(yOfF(p.medianRank)))
+        .map((p, i) => (
+          <circle
+            key={i}
+            cx={px(p.time)}
+            cy={py(yOfF(p.medianRank))}
+            r={3.4}
+            fill="var(--surface, #ffffff)"
+            stroke="var(--ink-2, #334155)"
+            strokeWidth={1.4}
+          >
+            <title>{`${p.time.toLocaleString("en-US")} ${unit}: median rank ${(p.medianRank * 100).toFixed(1)}%`}</title>
+          </circle>
+        ))}
+      <rect
+        x={M.left}
+        y={M.top}
+        width={W - M.left - M.right}
+        height={H - M.top - M.bottom}
+        fill="none"
+        stroke="var(--line-strong, #cbd5e1)"
+      />
     </svg>
   );
 }

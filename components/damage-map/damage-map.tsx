@@ -4,7 +4,23 @@
 // `sectors` for many cases summed (shaded by how many findings touch each clock sector).
 import { damageLabel } from "@/lib/classification/labels";
 import { bandPath, clockPoint, clockWords, HOUR_TICKS } from "@/lib/damage-map/geometry";
-import { arcOf, HEAT_COLOURS, heatColour, LOAD_ZONE_COLOUR, LOAD_ZONE_HALF_DEG, LOAD_ZONE_INK, offMapWords, RING_BANDS, RING_LABELS, RING_NAMES, ringKindOf, SEVERITY_COLOURS, SEVERITY_KEYS, severityColour, severityWord } from "@/lib/damage-map/look";
+import {
+  arcOf,
+  HEAT_COLOURS,
+  heatColour,
+  LOAD_ZONE_COLOUR,
+  LOAD_ZONE_HALF_DEG,
+  LOAD_ZONE_INK,
+  offMapWords,
+  RING_BANDS,
+  RING_LABELS,
+  RING_NAMES,
+  ringKindOf,
+  SEVERITY_COLOURS,
+  SEVERITY_KEYS,
+  severityColour,
+  severityWord,
+} from "@/lib/damage-map/look";
 import { ringsOf, type RingId, type SectorCell } from "@/lib/damage-map/rings";
 
 export type DamageMapFinding = {
@@ -26,7 +42,6 @@ export type DamageMapProps = {
   className?: string;
 };
 
-
 const R = 78;
 const DISCS = [
   { row: "inboard", cx: 106, cup: "cup-inboard", cone: "cone-inboard" },
@@ -42,7 +57,6 @@ function discOf(ring: RingId) {
   return DISCS.find((d) => d.cup === ring || d.cone === ring)!;
 }
 
-
 function Disc({ cx, row }: { cx: number; row: string }) {
   const zone = bandPath(cx, CY, R * 0.985, R * 1.06, -LOAD_ZONE_HALF_DEG, LOAD_ZONE_HALF_DEG);
   return (
@@ -50,7 +64,14 @@ function Disc({ cx, row }: { cx: number; row: string }) {
       <path d={zone} fill={LOAD_ZONE_COLOUR} fillOpacity={0.35} />
       {(["cup", "cone"] as const).map((b) => (
         <g key={b}>
-          <circle cx={cx} cy={CY} r={((BANDS[b][0] + BANDS[b][1]) / 2) * R} fill="none" stroke="var(--surface-2, #f1f5f9)" strokeWidth={(BANDS[b][1] - BANDS[b][0]) * R} />
+          <circle
+            cx={cx}
+            cy={CY}
+            r={((BANDS[b][0] + BANDS[b][1]) / 2) * R}
+            fill="none"
+            stroke="var(--surface-2, #f1f5f9)"
+            strokeWidth={(BANDS[b][1] - BANDS[b][0]) * R}
+          />
           <circle cx={cx} cy={CY} r={BANDS[b][1] * R} fill="none" stroke="var(--line-strong, #cbd5e1)" strokeWidth={0.8} />
           <circle cx={cx} cy={CY} r={BANDS[b][0] * R} fill="none" stroke="var(--line-strong, #cbd5e1)" strokeWidth={0.8} />
         </g>
@@ -62,12 +83,20 @@ function Disc({ cx, row }: { cx: number; row: string }) {
         return (
           <g key={t.deg}>
             <line x1={x0} y1={y0} x2={x1} y2={y1} stroke="var(--muted, #64748b)" strokeWidth={0.8} />
-            {t.major ? <text x={lx} y={ly + 4} textAnchor="middle" fontSize={11} fontWeight={700} fill="var(--ink-2, #334155)">{t.label}</text> : null}
+            {t.major ? (
+              <text x={lx} y={ly + 4} textAnchor="middle" fontSize={11} fontWeight={700} fill="var(--ink-2, #334155)">
+                {t.label}
+              </text>
+            ) : null}
           </g>
         );
       })}
-      <text x={cx} y={CY + 4} textAnchor="middle" fontSize={10} fontWeight={600} fill="var(--ink-2, #334155)">{row === "inboard" ? "Inboard" : "Outboard"}</text>
-      <text x={cx} y={CY + 16} textAnchor="middle" fontSize={8} fill="var(--muted, #64748b)">row</text>
+      <text x={cx} y={CY + 4} textAnchor="middle" fontSize={10} fontWeight={600} fill="var(--ink-2, #334155)">
+        {row === "inboard" ? "Inboard" : "Outboard"}
+      </text>
+      <text x={cx} y={CY + 16} textAnchor="middle" fontSize={8} fill="var(--muted, #64748b)">
+        row
+      </text>
     </g>
   );
 }
@@ -77,8 +106,30 @@ function RingNames({ cx }: { cx: number }) {
   const halo = { stroke: "var(--surface, #ffffff)", strokeWidth: 2.5, paintOrder: "stroke" as const, strokeLinejoin: "round" as const };
   return (
     <g>
-      <text x={cx} y={CY + R * 0.85 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>{RING_NAMES.cup}</text>
-      <text x={cx} y={CY + R * 0.53 + 3} textAnchor="middle" fontSize={8} fontWeight={700} letterSpacing={0.6} fill="var(--muted, #64748b)" {...halo}>{RING_NAMES.cone}</text>
+      <text
+        x={cx}
+        y={CY + R * 0.85 + 3}
+        textAnchor="middle"
+        fontSize={8}
+        fontWeight={700}
+        letterSpacing={0.6}
+        fill="var(--muted, #64748b)"
+        {...halo}
+      >
+        {RING_NAMES.cup}
+      </text>
+      <text
+        x={cx}
+        y={CY + R * 0.53 + 3}
+        textAnchor="middle"
+        fontSize={8}
+        fontWeight={700}
+        letterSpacing={0.6}
+        fill="var(--muted, #64748b)"
+        {...halo}
+      >
+        {RING_NAMES.cone}
+      </text>
     </g>
   );
 }
@@ -97,7 +148,9 @@ function describe(f: DamageMapFinding): string {
 export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, className = "" }: DamageMapProps) {
   const summed = sectors !== undefined;
   const max = summed ? Math.max(0, ...sectors.map((s) => s.findings)) : 0;
-  const offMap = findings ? findings.filter((f) => ringsOf(f.component, f.row).length === 0 || f.clockDeg === null || f.clockDeg === undefined).length : 0;
+  const offMap = findings
+    ? findings.filter((f) => ringsOf(f.component, f.row).length === 0 || f.clockDeg === null || f.clockDeg === undefined).length
+    : 0;
   const placed = findings ? findings.length - offMap : 0;
   const label = summed
     ? `${title}: ${sectors.reduce((s, c) => s + c.findings, 0)} finding-sectors on the cup and cone raceways`
@@ -106,13 +159,19 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
     <figure className={`min-w-0 ${className}`}>
       <svg viewBox="0 0 430 262" className="h-auto w-full max-w-[36rem]" role="img" aria-label={label} data-export data-damage-map>
         <title>{title}</title>
-        {DISCS.map((d) => <Disc key={d.row} cx={d.cx} row={d.row} />)}
+        {DISCS.map((d) => (
+          <Disc key={d.row} cx={d.cx} row={d.row} />
+        ))}
         {summed
           ? sectors.map((s) => {
               const d = discOf(s.ring);
               const [a, b] = bandOf(s.ring);
               return (
-                <path key={`${s.ring}-${s.sector}`} d={bandPath(d.cx, CY, a * R, b * R, s.sector * sectorDeg, (s.sector + 1) * sectorDeg)} fill={heatColour(s.findings, max)}>
+                <path
+                  key={`${s.ring}-${s.sector}`}
+                  d={bandPath(d.cx, CY, a * R, b * R, s.sector * sectorDeg, (s.sector + 1) * sectorDeg)}
+                  fill={heatColour(s.findings, max)}
+                >
                   <title>{`${RING_LABELS[s.ring]}, ${clockWords(s.sector * sectorDeg)} to ${clockWords((s.sector + 1) * sectorDeg)}: ${s.findings} finding${s.findings === 1 ? "" : "s"}, worst severity ${s.maxSeverity}`}</title>
                 </path>
               );
@@ -125,37 +184,58 @@ export function DamageMap({ title, findings, sectors, sectorDeg = 10, caption, c
                     const [a, b] = bandOf(ring);
                     const { startDeg, endDeg } = arcOf(f.clockDeg!, f.arcDeg);
                     return (
-                      <path key={`${i}-${ring}`} d={bandPath(d.cx, CY, a * R + 1, b * R - 1, startDeg, endDeg)} fill={severityColour(f.severity)} fillOpacity={0.9} stroke="#ffffff" strokeWidth={0.6}>
+                      <path
+                        key={`${i}-${ring}`}
+                        d={bandPath(d.cx, CY, a * R + 1, b * R - 1, startDeg, endDeg)}
+                        fill={severityColour(f.severity)}
+                        fillOpacity={0.9}
+                        stroke="#ffffff"
+                        strokeWidth={0.6}
+                      >
                         <title>{describe(f)}</title>
                       </path>
                     );
                   }),
             )}
-        {DISCS.map((d) => <RingNames key={d.row} cx={d.cx} />)}
         {DISCS.map((d) => (
-          <text key={d.row} x={Math.round(d.cx + R * 0.5)} y={Math.round(CY - R * 1.1)} fontSize={8} fill={LOAD_ZONE_INK}>load zone</text>
+          <RingNames key={d.row} cx={d.cx} />
+        ))}
+        {DISCS.map((d) => (
+          <text key={d.row} x={Math.round(d.cx + R * 0.5)} y={Math.round(CY - R * 1.1)} fontSize={8} fill={LOAD_ZONE_INK}>
+            load zone
+          </text>
         ))}
         <g transform="translate(12 236)">
           {summed
             ? [
-                <text key="l" x={0} y={9} fontSize={9} fill="var(--muted, #64748b)">Fewer</text>,
+                <text key="l" x={0} y={9} fontSize={9} fill="var(--muted, #64748b)">
+                  Fewer
+                </text>,
                 ...HEAT_COLOURS.map((c, i) => <rect key={c} x={34 + i * 22} y={1} width={20} height={10} rx={2} fill={c} />),
-                <text key="r" x={34 + HEAT_COLOURS.length * 22 + 4} y={9} fontSize={9} fill="var(--muted, #64748b)">{`more findings (most: ${max})`}</text>,
+                <text
+                  key="r"
+                  x={34 + HEAT_COLOURS.length * 22 + 4}
+                  y={9}
+                  fontSize={9}
+                  fill="var(--muted, #64748b)"
+                >{`more findings (most: ${max})`}</text>,
               ]
             : SEVERITY_COLOURS.map((c, i) => (
                 <g key={c} transform={`translate(${Math.round(LEGEND_X[i])} 0)`}>
                   <rect x={0} y={1} width={12} height={10} rx={2} fill={c} />
-                  <text x={16} y={9.5} fontSize={9} fill="var(--muted, #64748b)">{LEGEND_WORDS[i]}</text>
+                  <text x={16} y={9.5} fontSize={9} fill="var(--muted, #64748b)">
+                    {LEGEND_WORDS[i]}
+                  </text>
                 </g>
               ))}
         </g>
       </svg>
       <figcaption className="mt-2 max-w-[34rem] text-xs leading-relaxed text-muted">
-        Seen from the outboard end, 12 o&apos;clock at the top, clockwise. {summed ? `Each ${sectorDeg}° sector is shaded by how many findings touch it.` : "Each arc is centred on its clock position."}
+        Seen from the outboard end, 12 o&apos;clock at the top, clockwise.{" "}
+        {summed ? `Each ${sectorDeg}° sector is shaded by how many findings touch it.` : "Each arc is centred on its clock position."}
         {!summed && offMap ? ` ${offMapWords(offMap)}` : ""}
         {caption ? ` ${caption}` : ""}
       </figcaption>
     </figure>
   );
 }
-

@@ -9,7 +9,6 @@ import { STAGES, STAGE_LABELS, type Stage } from "@/lib/cases/stages";
 import type { CaseCard } from "@/lib/cases/types";
 import { triggerLabel } from "@/lib/classification/labels";
 
-
 function CaseList({ rows, empty }: { rows: CaseCard[]; empty: string }) {
   if (!rows.length) return <EmptyState title={empty} />;
   return (
@@ -50,18 +49,43 @@ export async function RoleHome({ user }: { user: CurrentUser }) {
   const first = user.name.split(" ")[0];
   const panels: { title: string; rows: CaseCard[]; empty: string; href: string }[] = [];
   if (user.role === "inspector") {
-    panels.push({ title: "My shop's open field reports", rows: await caseCards(user, ["field"]), empty: "No open field reports.", href: "/cases?status=field" });
+    panels.push({
+      title: "My shop's open field reports",
+      rows: await caseCards(user, ["field"]),
+      empty: "No open field reports.",
+      href: "/cases?status=field",
+    });
     panels.push({ title: "Recently updated", rows: await caseCards(user), empty: "No cases yet.", href: "/cases" });
   }
   if (user.role === "analyst" || user.role === "admin") {
-    panels.push({ title: "Waiting for the bench", rows: await caseCards(user, ["field"]), empty: "Nothing waiting to be received.", href: "/cases?status=field" });
-    panels.push({ title: "On the bench", rows: await caseCards(user, ["bench"]), empty: "Nothing on the bench.", href: "/cases?status=bench" });
+    panels.push({
+      title: "Waiting for the bench",
+      rows: await caseCards(user, ["field"]),
+      empty: "Nothing waiting to be received.",
+      href: "/cases?status=field",
+    });
+    panels.push({
+      title: "On the bench",
+      rows: await caseCards(user, ["bench"]),
+      empty: "Nothing on the bench.",
+      href: "/cases?status=bench",
+    });
   }
   if (user.role === "engineer" || user.role === "admin") {
-    panels.push({ title: "Sign-off queue", rows: await caseCards(user, ["signoff"]), empty: "No verdicts waiting for sign-off.", href: "/cases?status=signoff" });
+    panels.push({
+      title: "Sign-off queue",
+      rows: await caseCards(user, ["signoff"]),
+      empty: "No verdicts waiting for sign-off.",
+      href: "/cases?status=signoff",
+    });
   }
   if (user.role === "manager" || user.role === "engineer") {
-    panels.push({ title: "Recently signed", rows: await caseCards(user, ["signed"]), empty: "No signed verdicts yet.", href: "/cases?status=signed" });
+    panels.push({
+      title: "Recently signed",
+      rows: await caseCards(user, ["signed"]),
+      empty: "No signed verdicts yet.",
+      href: "/cases?status=signed",
+    });
   }
   return (
     <>
@@ -71,14 +95,26 @@ export async function RoleHome({ user }: { user: CurrentUser }) {
         actions={
           <>
             {can(user.role, "case:create") ? <ButtonLink href="/cases/new">New removal</ButtonLink> : null}
-            {can(user.role, "tallies:read") ? <ButtonLink href="/tallies" variant="secondary">Tallies</ButtonLink> : null}
+            {can(user.role, "tallies:read") ? (
+              <ButtonLink href="/tallies" variant="secondary">
+                Tallies
+              </ButtonLink>
+            ) : null}
           </>
         }
       />
       <StageTiles counts={counts} />
       <div className="mt-6 grid gap-5 lg:grid-cols-2 [&>*]:min-w-0">
         {panels.map((p) => (
-          <Card key={p.title} title={p.title} action={<Link href={p.href} className="text-sm text-accent hover:underline">All</Link>}>
+          <Card
+            key={p.title}
+            title={p.title}
+            action={
+              <Link href={p.href} className="text-sm text-accent hover:underline">
+                All
+              </Link>
+            }
+          >
             <CaseList rows={p.rows} empty={p.empty} />
           </Card>
         ))}

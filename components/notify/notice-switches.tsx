@@ -42,12 +42,19 @@ export function NoticeSwitches({ initial }: { initial: NoticeSwitch[] }) {
               className={`relative mt-0.5 inline-flex h-7 w-12 shrink-0 items-center rounded-full transition focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent disabled:opacity-60 ${i.on ? "bg-accent" : "bg-line-strong"}`}
             >
               <span className="sr-only">{i.on ? "On" : "Off"}</span>
-              <span aria-hidden className={`inline-block h-5 w-5 rounded-full bg-white shadow transition ${i.on ? "translate-x-6" : "translate-x-1"}`} />
+              <span
+                aria-hidden
+                className={`inline-block h-5 w-5 rounded-full bg-white shadow transition ${i.on ? "translate-x-6" : "translate-x-1"}`}
+              />
             </button>
           </li>
         ))}
       </ul>
-      <p role="status" aria-live="polite" className={status ? `mt-3 text-sm ${status.tone === "danger" ? "text-danger" : "text-ok"}` : "sr-only"}>
+      <p
+        role="status"
+        aria-live="polite"
+        className={status ? `mt-3 text-sm ${status.tone === "danger" ? "text-danger" : "text-ok"}` : "sr-only"}
+      >
         {status?.text ?? ""}
       </p>
     </div>

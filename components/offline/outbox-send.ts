@@ -21,7 +21,10 @@ export async function sendReport(key: string, body: unknown): Promise<SendResult
   if (res.status === 0) return { kind: "retry", reason: res.code === "timeout" ? "The server did not answer in time." : "No connection." };
   // Signed out, busy or broken server: worth another try; anything else is the report itself.
   if (res.status === 401 || res.status === 408 || res.status === 429 || res.status >= 500) {
-    return { kind: "retry", reason: res.status === 401 ? "Sign in again to send it." : `The server answered ${res.status}; it will try again.` };
+    return {
+      kind: "retry",
+      reason: res.status === 401 ? "Sign in again to send it." : `The server answered ${res.status}; it will try again.`,
+    };
   }
   return { kind: "refused", message: res.message, fields: res.fields };
 }

@@ -41,7 +41,8 @@ async function run<T>(mode: IDBTransactionMode, fn: (s: IDBObjectStore) => IDBRe
 
 export const putEntry = (e: OutboxEntry) => run("readwrite", (s) => s.put(e)).then(() => undefined);
 export const deleteEntry = (key: string) => run("readwrite", (s) => s.delete(key)).then(() => undefined);
-export const listEntries = async () => ((await run("readonly", (s) => s.getAll())) as OutboxEntry[]).sort((a, b) => a.queuedAt.localeCompare(b.queuedAt));
+export const listEntries = async () =>
+  ((await run("readonly", (s) => s.getAll())) as OutboxEntry[]).sort((a, b) => a.queuedAt.localeCompare(b.queuedAt));
 
 /** Tells every open page (and tab) that the outbox changed. */
 export function announce(detail: { sent?: { key: string; number: string } } = {}) {

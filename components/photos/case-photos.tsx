@@ -40,9 +40,21 @@ export type CasePhotosProps = {
 type ListAnswer = { photos: PhotoView[] };
 const fetchList = (url: string) => getOrThrow<ListAnswer>(url, { fallback: "Photos could not be loaded." });
 
-export function CasePhotos({ caseId, canUpload, canDelete, readOnly, findings, uploaderOpen = false, maxBytes = DEFAULT_MAX_BYTES, initialPhotos }: CasePhotosProps) {
+export function CasePhotos({
+  caseId,
+  canUpload,
+  canDelete,
+  readOnly,
+  findings,
+  uploaderOpen = false,
+  maxBytes = DEFAULT_MAX_BYTES,
+  initialPhotos,
+}: CasePhotosProps) {
   const url = `/api/cases/${caseId}/photos`;
-  const { data, error, mutate, isLoading } = useSWR<ListAnswer>(url, fetchList, { fallbackData: initialPhotos ? { photos: initialPhotos } : undefined, revalidateOnFocus: false });
+  const { data, error, mutate, isLoading } = useSWR<ListAnswer>(url, fetchList, {
+    fallbackData: initialPhotos ? { photos: initialPhotos } : undefined,
+    revalidateOnFocus: false,
+  });
   const [openId, setOpenId] = useState<string | null>(null);
   const [showUploader, setShowUploader] = useState(uploaderOpen);
   const photos = useMemo(() => data?.photos ?? [], [data]);
@@ -72,7 +84,9 @@ export function CasePhotos({ caseId, canUpload, canDelete, readOnly, findings, u
     <div className="flex flex-col gap-5" data-testid="case-photos">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="text-sm text-muted" aria-live="polite">
-          {isLoading && !data ? "Loading photos…" : `${photos.length} photo${photos.length === 1 ? "" : "s"}${groups.length > 1 ? ` of ${groups.length} parts` : ""}`}
+          {isLoading && !data
+            ? "Loading photos…"
+            : `${photos.length} photo${photos.length === 1 ? "" : "s"}${groups.length > 1 ? ` of ${groups.length} parts` : ""}`}
           {readOnly ? " · signed case, photos are read-only" : ""}
         </p>
         {mayAdd && !showUploader ? <Button onClick={() => setShowUploader(true)}>Add photos</Button> : null}
@@ -82,14 +96,21 @@ export function CasePhotos({ caseId, canUpload, canDelete, readOnly, findings, u
 
       {error ? (
         <p className="rounded-lg border border-danger/30 bg-danger-soft px-3 py-2 text-sm text-danger" role="alert">
-          {(error as Error).message} <button type="button" className="underline" onClick={() => mutate()}>Try again</button>
+          {(error as Error).message}{" "}
+          <button type="button" className="underline" onClick={() => mutate()}>
+            Try again
+          </button>
         </p>
       ) : null}
 
       {photos.length ? (
         <PhotoGrid groups={groups} onOpen={(p) => setOpenId(p.id)} />
       ) : !isLoading && !error ? (
-        <EmptyState title="No photos yet">{mayAdd ? "Photos of raceways, rollers, cages, seals and the grease go here, each tagged to its part." : "Nobody has added photos to this case."}</EmptyState>
+        <EmptyState title="No photos yet">
+          {mayAdd
+            ? "Photos of raceways, rollers, cages, seals and the grease go here, each tagged to its part."
+            : "Nobody has added photos to this case."}
+        </EmptyState>
       ) : null}
 
       {openIndex >= 0 ? (

@@ -19,30 +19,72 @@ function ComparePane({ side, entry, changeHref }: { side: "A" | "B"; entry: Comp
       <div className="flex items-center justify-between gap-2 border-b border-line px-3 py-2">
         <p className="flex min-w-0 items-center gap-2 text-sm">
           <span className="grid h-6 w-6 shrink-0 place-items-center rounded-full bg-ink text-xs font-semibold text-surface">{side}</span>
-          <Link href={`/cases/${entry.caseNumber}/photos`} className="truncate font-medium tabular text-accent hover:underline">{entry.caseNumber}</Link>
+          <Link href={`/cases/${entry.caseNumber}/photos`} className="truncate font-medium tabular text-accent hover:underline">
+            {entry.caseNumber}
+          </Link>
         </p>
         <div className="flex items-center gap-1 text-ink-2">
-          <button type="button" onClick={() => zoom.zoomBy(1 / 1.5)} className="grid h-9 w-9 place-items-center rounded-md hover:bg-surface-2" aria-label={`Zoom out of ${side}`}><ZoomIcon out width={18} height={18} /></button>
-          <button type="button" onClick={() => zoom.zoomBy(1.5)} className="grid h-9 w-9 place-items-center rounded-md hover:bg-surface-2" aria-label={`Zoom into ${side}`}><ZoomIcon width={18} height={18} /></button>
-          <Link href={changeHref} className="ml-1 rounded-md px-2 py-1.5 text-sm text-muted hover:bg-surface-2 hover:text-ink">Change</Link>
+          <button
+            type="button"
+            onClick={() => zoom.zoomBy(1 / 1.5)}
+            className="grid h-9 w-9 place-items-center rounded-md hover:bg-surface-2"
+            aria-label={`Zoom out of ${side}`}
+          >
+            <ZoomIcon out width={18} height={18} />
+          </button>
+          <button
+            type="button"
+            onClick={() => zoom.zoomBy(1.5)}
+            className="grid h-9 w-9 place-items-center rounded-md hover:bg-surface-2"
+            aria-label={`Zoom into ${side}`}
+          >
+            <ZoomIcon width={18} height={18} />
+          </button>
+          <Link href={changeHref} className="ml-1 rounded-md px-2 py-1.5 text-sm text-muted hover:bg-surface-2 hover:text-ink">
+            Change
+          </Link>
         </div>
       </div>
-      <div ref={zoom.ref} {...zoom.handlers} className={`relative aspect-[4/3] touch-none select-none overflow-hidden bg-[#06090f] ${zoom.view.scale > 1 ? "cursor-grab" : "cursor-zoom-in"}`}>
+      <div
+        ref={zoom.ref}
+        {...zoom.handlers}
+        className={`relative aspect-[4/3] touch-none select-none overflow-hidden bg-[#06090f] ${zoom.view.scale > 1 ? "cursor-grab" : "cursor-zoom-in"}`}
+      >
         {/* eslint-disable-next-line @next/next/no-img-element */}
-        <img src={photo.urls.screen} alt={photo.caption || `Photo ${side}`} draggable={false} style={zoom.style} className="pointer-events-none absolute inset-0 h-full w-full object-contain" />
+        <img
+          src={photo.urls.screen}
+          alt={photo.caption || `Photo ${side}`}
+          draggable={false}
+          style={zoom.style}
+          className="pointer-events-none absolute inset-0 h-full w-full object-contain"
+        />
       </div>
       <figcaption className="flex flex-col gap-3 p-3 sm:p-4">
         <PhotoTagLine photo={photo} findings={entry.findings} />
         <details className="text-sm">
           <summary className="cursor-pointer text-accent">Photo details</summary>
-          <div className="mt-2"><PhotoFactList photo={photo} /></div>
+          <div className="mt-2">
+            <PhotoFactList photo={photo} />
+          </div>
         </details>
       </figcaption>
     </figure>
   );
 }
 
-export function ComparePhotos({ a, b, changeA, changeB, picker }: { a: ComparedPhoto; b: ComparedPhoto | null; changeA: string; changeB: string; picker?: ReactNode }) {
+export function ComparePhotos({
+  a,
+  b,
+  changeA,
+  changeB,
+  picker,
+}: {
+  a: ComparedPhoto;
+  b: ComparedPhoto | null;
+  changeA: string;
+  changeB: string;
+  picker?: ReactNode;
+}) {
   return (
     <div className="grid gap-4 md:grid-cols-2">
       <ComparePane side="A" entry={a} changeHref={changeA} />

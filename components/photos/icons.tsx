@@ -1,7 +1,16 @@
 // Small line icons for the photo screens (stroke follows the text colour).
 import type { SVGProps } from "react";
 
-const base = { width: 20, height: 20, viewBox: "0 0 24 24", fill: "none", stroke: "currentColor", strokeWidth: 1.8, strokeLinecap: "round", strokeLinejoin: "round" } as const;
+const base = {
+  width: 20,
+  height: 20,
+  viewBox: "0 0 24 24",
+  fill: "none",
+  stroke: "currentColor",
+  strokeWidth: 1.8,
+  strokeLinecap: "round",
+  strokeLinejoin: "round",
+} as const;
 
 export const UploadIcon = (p: SVGProps<SVGSVGElement>) => (
   <svg {...base} {...p} aria-hidden>

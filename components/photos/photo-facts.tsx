@@ -26,7 +26,14 @@ export function PhotoTagLine({ photo, findings }: { photo: PhotoView; findings: 
     <div className="flex flex-col gap-1">
       <p className="font-semibold text-ink">{photoTitle(photo)}</p>
       {photo.clockDeg !== null ? <p className="text-sm text-ink-2">At {clockWords(photo.clockDeg)}</p> : null}
-      {finding ? <p className="text-sm text-ink-2"><span className="text-muted">Finding: </span>{finding.label}</p> : photo.findingId ? <p className="text-sm text-muted">Linked to a finding</p> : null}
+      {finding ? (
+        <p className="text-sm text-ink-2">
+          <span className="text-muted">Finding: </span>
+          {finding.label}
+        </p>
+      ) : photo.findingId ? (
+        <p className="text-sm text-muted">Linked to a finding</p>
+      ) : null}
       {photo.caption ? <p className="text-sm leading-relaxed text-ink">{photo.caption}</p> : null}
     </div>
   );
@@ -36,7 +43,10 @@ export function PhotoFactList({ photo }: { photo: PhotoView }) {
   const rows: [string, string][] = [
     ["Taken", photo.takenAt ? `${formatMoment(photo.takenAt)} (camera clock)` : "Not recorded by the camera"],
     ["Uploaded", formatDay(photo.createdAt)],
-    ["Original", `${photo.width} × ${photo.height} px · ${formatBytes(photo.bytes)} · ${photo.contentType.replace("image/", "").toUpperCase()}`],
+    [
+      "Original",
+      `${photo.width} × ${photo.height} px · ${formatBytes(photo.bytes)} · ${photo.contentType.replace("image/", "").toUpperCase()}`,
+    ],
     ["File", photo.fileName || "—"],
   ];
   return (
@@ -48,7 +58,9 @@ export function PhotoFactList({ photo }: { photo: PhotoView }) {
         </div>
       ))}
       <dt className="text-muted">SHA-256</dt>
-      <dd className="min-w-0 truncate font-mono text-xs leading-5 text-ink-2" title={photo.sha256}>{photo.sha256}</dd>
+      <dd className="min-w-0 truncate font-mono text-xs leading-5 text-ink-2" title={photo.sha256}>
+        {photo.sha256}
+      </dd>
     </dl>
   );
 }

@@ -27,13 +27,27 @@ export function PhotoGrid({ groups, onOpen }: Props) {
                   {/* Named by what it shows (the picture's alt text and the words on it), so the name holds every visible word. */}
                   <span className="sr-only">Open photo: </span>
                   {/* eslint-disable-next-line @next/next/no-img-element */}
-                  <img src={p.urls.thumb} alt={photoAlt(p)} loading="lazy" decoding="async" className="h-full w-full object-cover transition duration-300 group-hover:scale-[1.03]" />
+                  <img
+                    src={p.urls.thumb}
+                    alt={photoAlt(p)}
+                    loading="lazy"
+                    decoding="async"
+                    className="h-full w-full object-cover transition duration-300 group-hover:scale-[1.03]"
+                  />
                   {p.clockDeg !== null || p.findingId || p.caption ? (
                     <span className="absolute inset-x-0 bottom-0 flex items-end justify-between gap-1 bg-gradient-to-t from-black/75 via-black/30 to-transparent px-1.5 pb-1 pt-5 text-left text-[11px] leading-tight text-white">
                       <span className="line-clamp-2 min-w-0">{p.caption}</span>
                       <span className="flex shrink-0 gap-1">
-                        {p.clockDeg !== null ? <span className="rounded bg-black/55 px-1 py-px tabular" title={`${p.clockDeg}°`}>{degToOClock(p.clockDeg)}h</span> : null}
-                        {p.findingId ? <span className="rounded bg-amber-500/90 px-1 py-px font-semibold text-black" title="Shows a recorded finding">F</span> : null}
+                        {p.clockDeg !== null ? (
+                          <span className="rounded bg-black/55 px-1 py-px tabular" title={`${p.clockDeg}°`}>
+                            {degToOClock(p.clockDeg)}h
+                          </span>
+                        ) : null}
+                        {p.findingId ? (
+                          <span className="rounded bg-amber-500/90 px-1 py-px font-semibold text-black" title="Shows a recorded finding">
+                            F
+                          </span>
+                        ) : null}
                       </span>
                     </span>
                   ) : null}

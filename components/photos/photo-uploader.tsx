@@ -42,14 +42,23 @@ export function PhotoUploader({ caseId, findings, maxBytes, onStored }: Props) {
 
   const addFiles = (files: File[]) => {
     // Too large is known before sending; no need to wait for a phone to push 40 MB first.
-    queue.add(files.filter((f) => f.size <= maxBytes), defaults);
+    queue.add(
+      files.filter((f) => f.size <= maxBytes),
+      defaults,
+    );
     for (const f of files.filter((f) => f.size > maxBytes)) queue.reject(f, refuse.tooLarge(f.name, f.size, maxBytes).message);
   };
   const onDrop = (accepted: File[], rejected: FileRejection[]) => {
     addFiles(accepted);
     for (const r of rejected) queue.reject(r.file, `“${r.file.name}” is not a photo type Tearline keeps. Use JPEG, PNG, WebP or HEIC.`);
   };
-  const { getRootProps, getInputProps, isDragActive, open } = useDropzone({ onDrop, accept: ACCEPT, multiple: true, noClick: true, noKeyboard: true });
+  const { getRootProps, getInputProps, isDragActive, open } = useDropzone({
+    onDrop,
+    accept: ACCEPT,
+    multiple: true,
+    noClick: true,
+    noKeyboard: true,
+  });
   const finished = queue.items.filter((i) => i.status === "done" || i.status === "duplicate").length;
   const active = queue.items.filter((i) => i.status === "uploading" || i.status === "waiting").length;
 
@@ -65,13 +74,35 @@ export function PhotoUploader({ caseId, findings, maxBytes, onStored }: Props) {
           <UploadIcon />
         </div>
         <div className="min-w-0 flex-1">
-          <p className="font-medium text-ink">{isDragActive ? "Drop to upload" : <><span className="hidden sm:inline">Drop photos here, as many as you like</span><span className="sm:hidden">Add photos</span></>}</p>
-          <p className="mt-0.5 text-sm text-muted">JPEG, PNG, WebP or HEIC, up to {formatBytes(maxBytes)} each. Originals are kept unchanged as evidence.</p>
+          <p className="font-medium text-ink">
+            {isDragActive ? (
+              "Drop to upload"
+            ) : (
+              <>
+                <span className="hidden sm:inline">Drop photos here, as many as you like</span>
+                <span className="sm:hidden">Add photos</span>
+              </>
+            )}
+          </p>
+          <p className="mt-0.5 text-sm text-muted">
+            JPEG, PNG, WebP or HEIC, up to {formatBytes(maxBytes)} each. Originals are kept unchanged as evidence.
+          </p>
         </div>
         <div className="flex w-full shrink-0 flex-col gap-2 sm:w-auto sm:flex-row">
           <label className={buttonClass({ variant: "primary", size: "lg" }, "cursor-pointer sm:hidden")}>
             <CameraIcon /> Take photo
-            <input type="file" accept="image/*" capture="environment" multiple className="sr-only" data-testid="photo-camera-input" onChange={(e) => { addFiles(Array.from(e.target.files ?? [])); e.target.value = ""; }} />
+            <input
+              type="file"
+              accept="image/*"
+              capture="environment"
+              multiple
+              className="sr-only"
+              data-testid="photo-camera-input"
+              onChange={(e) => {
+                addFiles(Array.from(e.target.files ?? []));
+                e.target.value = "";
+              }}
+            />
           </label>
           <Button variant="secondary" size="md" onClick={open} className="h-12 sm:h-10">
             Choose files
@@ -80,7 +111,12 @@ export function PhotoUploader({ caseId, findings, maxBytes, onStored }: Props) {
       </div>
 
       <div className="rounded-lg border border-line bg-surface">
-        <button type="button" className="flex w-full items-center justify-between gap-3 px-3 py-2.5 text-left text-sm" onClick={() => setShowDefaults((v) => !v)} aria-expanded={showDefaults}>
+        <button
+          type="button"
+          className="flex w-full items-center justify-between gap-3 px-3 py-2.5 text-left text-sm"
+          onClick={() => setShowDefaults((v) => !v)}
+          aria-expanded={showDefaults}
+        >
           <span className="min-w-0">
             <span className="font-medium text-ink-2">Tags for the next photos: </span>
             <span className="text-muted">{defaultsSummary(defaults, findings)}</span>
@@ -90,7 +126,9 @@ export function PhotoUploader({ caseId, findings, maxBytes, onStored }: Props) {
         {showDefaults ? (
           <div className="border-t border-line px-3 py-3">
             <TagFields value={defaults} onChange={setDefaults} findings={findings} withCaption={false} />
-            <p className="mt-2 text-xs text-muted">Set the part before you drop a batch, e.g. twelve photos of the cup raceway. Each photo can still be changed later.</p>
+            <p className="mt-2 text-xs text-muted">
+              Set the part before you drop a batch, e.g. twelve photos of the cup raceway. Each photo can still be changed later.
+            </p>
           </div>
         ) : null}
       </div>
@@ -101,11 +139,22 @@ export function PhotoUploader({ caseId, findings, maxBytes, onStored }: Props) {
             <p className="text-muted" aria-live="polite">
               {active ? `Uploading ${active} of ${queue.items.length}…` : `${finished} of ${queue.items.length} added`}
             </p>
-            {finished ? <button type="button" className="text-accent hover:underline" onClick={queue.clearFinished}>Clear finished</button> : null}
+            {finished ? (
+              <button type="button" className="text-accent hover:underline" onClick={queue.clearFinished}>
+                Clear finished
+              </button>
+            ) : null}
           </div>
           <ul className="flex flex-col gap-2">
             {queue.items.map((item) => (
-              <UploadItem key={item.key} item={item} findings={findings} onRetry={() => queue.retry(item.key)} onRemove={() => queue.remove(item.key)} onTags={(t) => queue.setTags(item.key, t)} />
+              <UploadItem
+                key={item.key}
+                item={item}
+                findings={findings}
+                onRetry={() => queue.retry(item.key)}
+                onRemove={() => queue.remove(item.key)}
+                onTags={(t) => queue.setTags(item.key, t)}
+              />
             ))}
           </ul>
         </div>

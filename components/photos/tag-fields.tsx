@@ -32,7 +32,14 @@ function ClockInput({ id, value, onChange }: { id: string; value: string; onChan
         <option value={OTHER}>Exact angle…</option>
       </Select>
       {custom ? (
-        <Input aria-label="Angle in degrees" inputMode="numeric" className="w-24 shrink-0" placeholder="0–359" value={value} onChange={(e) => onChange(e.target.value.replace(/[^\d]/g, "").slice(0, 3))} />
+        <Input
+          aria-label="Angle in degrees"
+          inputMode="numeric"
+          className="w-24 shrink-0"
+          placeholder="0–359"
+          value={value}
+          onChange={(e) => onChange(e.target.value.replace(/[^\d]/g, "").slice(0, 3))}
+        />
       ) : null}
     </div>
   );
@@ -77,8 +84,17 @@ export function TagFields({ value, onChange, findings, withCaption = true, layou
       <Field label="Clock position" htmlFor={`${id}-clock`} hint="12 o'clock = 0°, clockwise seen from the outboard end.">
         <ClockInput id={`${id}-clock`} value={value.clockDeg} onChange={(clockDeg) => set({ clockDeg })} />
       </Field>
-      <Field label="Finding it shows" htmlFor={`${id}-finding`} hint={findings.length === 0 ? "No findings recorded on this case yet." : undefined}>
-        <Select id={`${id}-finding`} value={value.findingId} onChange={(e) => set({ findingId: e.target.value })} disabled={findings.length === 0}>
+      <Field
+        label="Finding it shows"
+        htmlFor={`${id}-finding`}
+        hint={findings.length === 0 ? "No findings recorded on this case yet." : undefined}
+      >
+        <Select
+          id={`${id}-finding`}
+          value={value.findingId}
+          onChange={(e) => set({ findingId: e.target.value })}
+          disabled={findings.length === 0}
+        >
           <option value="">None</option>
           {findings.map((f) => (
             <option key={f.id} value={f.id}>
@@ -90,7 +106,14 @@ export function TagFields({ value, onChange, findings, withCaption = true, layou
       {withCaption ? (
         <div className={layout === "grid" ? "sm:col-span-2" : ""}>
           <Field label="Caption" htmlFor={`${id}-caption`}>
-            <Textarea id={`${id}-caption`} className="min-h-16" maxLength={500} value={value.caption} placeholder="What the photo shows, e.g. spall 12 × 8 mm in the load zone" onChange={(e) => set({ caption: e.target.value })} />
+            <Textarea
+              id={`${id}-caption`}
+              className="min-h-16"
+              maxLength={500}
+              value={value.caption}
+              placeholder="What the photo shows, e.g. spall 12 × 8 mm in the load zone"
+              onChange={(e) => set({ caption: e.target.value })}
+            />
           </Field>
         </div>
       ) : null}

@@ -7,7 +7,13 @@ export type FindingOption = { id: string; label: string };
 export const EMPTY_TAGS: TagValues = { component: "", row: "", clockDeg: "", findingId: "", caption: "" };
 
 export function tagsOf(p: PhotoView): TagValues {
-  return { component: p.component ?? "", row: p.row ?? "", clockDeg: p.clockDeg === null ? "" : String(p.clockDeg), findingId: p.findingId ?? "", caption: p.caption };
+  return {
+    component: p.component ?? "",
+    row: p.row ?? "",
+    clockDeg: p.clockDeg === null ? "" : String(p.clockDeg),
+    findingId: p.findingId ?? "",
+    caption: p.caption,
+  };
 }
 
 /** JSON for PATCH: empty means "clear". */

@@ -37,20 +37,38 @@ export function UploadItem({ item, findings, onRetry, onRemove, onTags }: Props)
     <li className="rounded-lg border border-line bg-surface p-2.5" data-testid="upload-item" data-status={item.status}>
       <div className="flex items-center gap-3">
         <div className="grid h-12 w-12 shrink-0 place-items-center overflow-hidden rounded-md bg-surface-2 text-muted">
-          {/* eslint-disable-next-line @next/next/no-img-element -- a local blob: preview, nothing to optimise */}
-          {item.preview && !previewFailed ? <img src={item.preview} alt="" className="h-full w-full object-cover" onError={() => setPreviewFailed(true)} /> : <PhotoIcon />}
+          {item.preview && !previewFailed ? (
+            // eslint-disable-next-line @next/next/no-img-element -- a local blob: preview, nothing to optimise
+            <img src={item.preview} alt="" className="h-full w-full object-cover" onError={() => setPreviewFailed(true)} />
+          ) : (
+            <PhotoIcon />
+          )}
         </div>
         <div className="min-w-0 flex-1">
           <div className="flex items-baseline justify-between gap-2">
-            <p className="truncate text-sm font-medium text-ink" title={item.file.name}>{item.file.name || "photo"}</p>
+            <p className="truncate text-sm font-medium text-ink" title={item.file.name}>
+              {item.file.name || "photo"}
+            </p>
             <span className="shrink-0 text-xs tabular text-muted">{formatBytes(item.file.size)}</span>
           </div>
           {item.status === "uploading" || item.status === "waiting" ? (
             <div className="mt-1.5 flex items-center gap-2">
-              <div className="h-1.5 flex-1 overflow-hidden rounded-full bg-surface-2 ring-1 ring-inset ring-line" role="progressbar" aria-valuenow={pct} aria-valuemin={0} aria-valuemax={100} aria-label={`Upload of ${item.file.name}`}>
-                <div className="h-full rounded-full bg-accent transition-[width] duration-200" style={{ width: `${item.status === "waiting" ? 0 : Math.max(3, pct)}%` }} />
+              <div
+                className="h-1.5 flex-1 overflow-hidden rounded-full bg-surface-2 ring-1 ring-inset ring-line"
+                role="progressbar"
+                aria-valuenow={pct}
+                aria-valuemin={0}
+                aria-valuemax={100}
+                aria-label={`Upload of ${item.file.name}`}
+              >
+                <div
+                  className="h-full rounded-full bg-accent transition-[width] duration-200"
+                  style={{ width: `${item.status === "waiting" ? 0 : Math.max(3, pct)}%` }}
+                />
               </div>
-              <span className="w-16 text-right text-xs tabular text-muted">{item.status === "waiting" ? STATUS_TEXT.waiting : pct >= 100 ? "Processing" : `${pct}%`}</span>
+              <span className="w-16 text-right text-xs tabular text-muted">
+                {item.status === "waiting" ? STATUS_TEXT.waiting : pct >= 100 ? "Processing" : `${pct}%`}
+              </span>
             </div>
           ) : (
             <p className={`mt-0.5 text-xs ${tone}`} role={item.status === "failed" ? "alert" : undefined}>
@@ -65,11 +83,25 @@ export function UploadItem({ item, findings, onRetry, onRemove, onTags }: Props)
               <RetryIcon width={16} height={16} /> <span className="hidden sm:inline">Retry</span>
             </Button>
           ) : null}
-          <button type="button" onClick={() => { setDraft(item.tags); setEditing((v) => !v); }} className="grid h-9 w-9 place-items-center rounded-md text-ink-2 hover:bg-surface-2" aria-label={`Tags of ${item.file.name}`} aria-expanded={editing}>
+          <button
+            type="button"
+            onClick={() => {
+              setDraft(item.tags);
+              setEditing((v) => !v);
+            }}
+            className="grid h-9 w-9 place-items-center rounded-md text-ink-2 hover:bg-surface-2"
+            aria-label={`Tags of ${item.file.name}`}
+            aria-expanded={editing}
+          >
             <TagIcon width={18} height={18} />
           </button>
           {item.status !== "done" && item.status !== "duplicate" ? (
-            <button type="button" onClick={onRemove} className="grid h-9 w-9 place-items-center rounded-md text-muted hover:bg-surface-2 hover:text-ink" aria-label={item.status === "uploading" ? `Cancel ${item.file.name}` : `Remove ${item.file.name} from the list`}>
+            <button
+              type="button"
+              onClick={onRemove}
+              className="grid h-9 w-9 place-items-center rounded-md text-muted hover:bg-surface-2 hover:text-ink"
+              aria-label={item.status === "uploading" ? `Cancel ${item.file.name}` : `Remove ${item.file.name} from the list`}
+            >
               <CloseIcon width={18} height={18} />
             </button>
           ) : null}
@@ -78,9 +110,15 @@ export function UploadItem({ item, findings, onRetry, onRemove, onTags }: Props)
       {editing ? (
         <div className="mt-3 border-t border-line pt-3">
           <TagFields value={draft} onChange={setDraft} findings={findings} />
-          {error ? <p className="mt-2 text-sm text-danger" role="alert">{error}</p> : null}
+          {error ? (
+            <p className="mt-2 text-sm text-danger" role="alert">
+              {error}
+            </p>
+          ) : null}
           <div className="mt-3 flex justify-end gap-2">
-            <Button variant="ghost" size="sm" onClick={() => setEditing(false)}>Cancel</Button>
+            <Button variant="ghost" size="sm" onClick={() => setEditing(false)}>
+              Cancel
+            </Button>
             <Button
               size="sm"
               disabled={saving}

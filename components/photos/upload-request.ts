@@ -7,7 +7,12 @@ export type UploadAnswer =
   | { ok: true; photo: PhotoView; duplicate: boolean; message: string }
   | { ok: false; status: number; message: string };
 
-export function sendPhoto(url: string, form: FormData, onProgress: (fraction: number) => void, signal?: AbortSignal): Promise<UploadAnswer> {
+export function sendPhoto(
+  url: string,
+  form: FormData,
+  onProgress: (fraction: number) => void,
+  signal?: AbortSignal,
+): Promise<UploadAnswer> {
   return new Promise((resolve) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);
@@ -21,18 +26,26 @@ export function sendPhoto(url: string, form: FormData, onProgress: (fraction: nu
       if (xhr.status >= 200 && xhr.status < 300 && body.photo) {
         resolve({ ok: true, photo: body.photo, duplicate: Boolean(body.duplicate), message: body.message ?? "" });
       } else {
-        resolve({ ok: false, status: xhr.status, message: problemFrom(xhr.status, xhr.response, { fallback: `The server answered ${xhr.status}; try again.` }).message });
+        resolve({
+          ok: false,
+          status: xhr.status,
+          message: problemFrom(xhr.status, xhr.response, { fallback: `The server answered ${xhr.status}; try again.` }).message,
+        });
       }
     };
     xhr.ontimeout = () => resolve({ ok: false, status: 0, message: TIMEOUT_MESSAGE });
-    xhr.onerror = () => resolve({ ok: false, status: 0, message: "The connection dropped during the upload. Check the network and retry." });
+    xhr.onerror = () =>
+      resolve({ ok: false, status: 0, message: "The connection dropped during the upload. Check the network and retry." });
     xhr.onabort = () => resolve({ ok: false, status: 0, message: "Upload cancelled." });
     signal?.addEventListener("abort", () => xhr.abort());
     xhr.send(form);
   });
 }
 
-export async function patchPhoto(id: string, tags: Record<string, unknown>): Promise<{ ok: true; photo: PhotoView } | { ok: false; message: string }> {
+export async function patchPhoto(
+  id: string,
+  tags: Record<string, unknown>,
+): Promise<{ ok: true; photo: PhotoView } | { ok: false; message: string }> {
   const res = await callApi<{ photo?: PhotoView }>("PATCH", `/api/photos/${id}`, { json: tags, fallback: "Could not save the tags." });
   if (!res.ok) return { ok: false, message: res.message };
   return res.data?.photo ? { ok: true, photo: res.data.photo } : { ok: false, message: "Could not save the tags." };

@@ -54,7 +54,13 @@ export function useUploadQueue(url: string, onStored: (photo: PhotoView) => void
         const saved = await patchPhoto(photo.id, tagsForApi(latest.tags));
         if (saved.ok) photo = saved.photo;
       }
-      update(item.key, { status: answer.duplicate ? "duplicate" : "done", progress: 1, message: answer.message, photo, tagsChangedInFlight: false });
+      update(item.key, {
+        status: answer.duplicate ? "duplicate" : "done",
+        progress: 1,
+        message: answer.message,
+        photo,
+        tagsChangedInFlight: false,
+      });
       onStored(photo);
     },
     [onStored, update, url],
@@ -92,7 +98,18 @@ export function useUploadQueue(url: string, onStored: (photo: PhotoView) => void
 
   /** A file refused before it was sent (wrong type picked in the browser). */
   const reject = useCallback((file: File, message: string) => {
-    setItems((list) => [...list, { key: `u${++counter}`, file, preview: null, status: "failed", progress: 0, message, tags: { component: "", row: "", clockDeg: "", findingId: "", caption: "" } }]);
+    setItems((list) => [
+      ...list,
+      {
+        key: `u${++counter}`,
+        file,
+        preview: null,
+        status: "failed",
+        progress: 0,
+        message,
+        tags: { component: "", row: "", clockDeg: "", findingId: "", caption: "" },
+      },
+    ]);
   }, []);
 
   const retry = useCallback((key: string) => update(key, { status: "waiting", progress: 0, message: "" }), [update]);

@@ -74,7 +74,12 @@ export function useZoomPan(onSwipe?: (direction: 1 | -1) => void) {
     pointers.current.set(e.pointerId, { x: e.clientX, y: e.clientY });
     const pts = [...pointers.current.values()];
     if (pts.length === 2) {
-      gesture.current = { start: pts[0], startView: viewRef.current, moved: true, pinch: { dist: distance(pts[0], pts[1]), view: viewRef.current } };
+      gesture.current = {
+        start: pts[0],
+        startView: viewRef.current,
+        moved: true,
+        pinch: { dist: distance(pts[0], pts[1]), view: viewRef.current },
+      };
     } else if (pts.length === 1) {
       gesture.current = { start: { x: e.clientX, y: e.clientY }, startView: viewRef.current, moved: false };
     }
@@ -121,6 +126,9 @@ export function useZoomPan(onSwipe?: (direction: 1 | -1) => void) {
     }
   };
 
-  const style = { transform: `translate3d(${view.x}px, ${view.y}px, 0) scale(${view.scale})`, transition: gesture.current ? "none" : "transform 160ms ease-out" };
+  const style = {
+    transform: `translate3d(${view.x}px, ${view.y}px, 0) scale(${view.scale})`,
+    transition: gesture.current ? "none" : "transform 160ms ease-out",
+  };
   return { ref, view, style, reset, zoomBy, handlers: { onPointerDown, onPointerMove, onPointerUp, onPointerCancel: onPointerUp } };
 }

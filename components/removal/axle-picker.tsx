@@ -17,7 +17,9 @@ function Chip({ n, s, active, onPick }: { n: number; s: Side; active: boolean; o
       onClick={() => onPick(n, s)}
       style={{ left: `${AXLE_AT[n - 1]}%` }}
       className={`absolute top-0 h-12 w-12 -translate-x-1/2 rounded-lg border-2 text-sm font-bold transition focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent ${
-        active ? "border-accent bg-accent text-accent-ink" : "border-line-strong bg-surface text-ink hover:border-accent hover:bg-accent-soft"
+        active
+          ? "border-accent bg-accent text-accent-ink"
+          : "border-line-strong bg-surface text-ink hover:border-accent hover:bg-accent-soft"
       }`}
     >
       {n}
@@ -46,8 +48,20 @@ export function AxlePicker(props: Props) {
       <ChipRow s="L" {...props} />
       <svg className="block h-24 w-full overflow-visible" aria-hidden>
         <rect x="1%" y="14" width="98%" height="68" rx="8" className="fill-surface-2 stroke-line-strong" strokeWidth="2" />
-        {[[4, 40], [60, 96]].map(([from, to]) => (
-          <rect key={from} x={`${from}%`} y="24" width={`${to - from}%`} height="48" rx="6" className="fill-none stroke-line-strong" strokeDasharray="4 3" />
+        {[
+          [4, 40],
+          [60, 96],
+        ].map(([from, to]) => (
+          <rect
+            key={from}
+            x={`${from}%`}
+            y="24"
+            width={`${to - from}%`}
+            height="48"
+            rx="6"
+            className="fill-none stroke-line-strong"
+            strokeDasharray="4 3"
+          />
         ))}
         {AXLE_AT.map((x, i) => (
           <g key={x}>
@@ -56,7 +70,15 @@ export function AxlePicker(props: Props) {
               <rect key={y} x={`${x - 2.5}%`} y={y} width="5%" height="6" rx="2" className="fill-ink-2" />
             ))}
             {/* A halo in the body colour keeps the axle line from crossing its label. */}
-            <text x={`${x}%`} y="52" textAnchor="middle" className="fill-ink-2 stroke-surface-2 text-[11px] font-semibold" strokeWidth="5" paintOrder="stroke" strokeLinejoin="round">
+            <text
+              x={`${x}%`}
+              y="52"
+              textAnchor="middle"
+              className="fill-ink-2 stroke-surface-2 text-[11px] font-semibold"
+              strokeWidth="5"
+              paintOrder="stroke"
+              strokeLinejoin="round"
+            >
               Axle {i + 1}
             </text>
           </g>

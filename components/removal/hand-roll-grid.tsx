@@ -29,15 +29,42 @@ export function HandRollEntry({ value, onChange, readOnly }: { value: HandRoll; 
       <div className="grid gap-3 sm:grid-cols-3">
         <div>
           <p className="mb-1.5 text-xs font-medium text-muted">Turned by</p>
-          <ChoiceChips label="Turned by" size="sm" value={proc.turnedBy} onChange={(v) => onChange({ ...value, procedure: { ...proc, turnedBy: v } })} options={[{ value: "hand", label: "Hand" }, { value: "foot", label: "Foot", tone: "danger" }]} />
+          <ChoiceChips
+            label="Turned by"
+            size="sm"
+            value={proc.turnedBy}
+            onChange={(v) => onChange({ ...value, procedure: { ...proc, turnedBy: v } })}
+            options={[
+              { value: "hand", label: "Hand" },
+              { value: "foot", label: "Foot", tone: "danger" },
+            ]}
+          />
         </div>
         <div>
           <p className="mb-1.5 text-xs font-medium text-muted">Direction</p>
-          <ChoiceChips label="Direction" size="sm" value={proc.oneDirection === undefined ? undefined : proc.oneDirection ? "one" : "osc"} onChange={(v) => onChange({ ...value, procedure: { ...proc, oneDirection: v === "one" } })} options={[{ value: "one", label: "One direction" }, { value: "osc", label: "Back and forth", tone: "danger" }]} />
+          <ChoiceChips
+            label="Direction"
+            size="sm"
+            value={proc.oneDirection === undefined ? undefined : proc.oneDirection ? "one" : "osc"}
+            onChange={(v) => onChange({ ...value, procedure: { ...proc, oneDirection: v === "one" } })}
+            options={[
+              { value: "one", label: "One direction" },
+              { value: "osc", label: "Back and forth", tone: "danger" },
+            ]}
+          />
         </div>
         <div>
           <p className="mb-1.5 text-xs font-medium text-muted">Judged by</p>
-          <ChoiceChips label="Judged by" size="sm" value={proc.judgedBy} onChange={(v) => onChange({ ...value, procedure: { ...proc, judgedBy: v } })} options={[{ value: "feel", label: "Feel" }, { value: "ear", label: "Ear", tone: "danger" }]} />
+          <ChoiceChips
+            label="Judged by"
+            size="sm"
+            value={proc.judgedBy}
+            onChange={(v) => onChange({ ...value, procedure: { ...proc, judgedBy: v } })}
+            options={[
+              { value: "feel", label: "Feel" },
+              { value: "ear", label: "Ear", tone: "danger" },
+            ]}
+          />
         </div>
       </div>
       <div className="grid gap-3 md:grid-cols-3">
@@ -49,10 +76,26 @@ export function HandRollEntry({ value, onChange, readOnly }: { value: HandRoll; 
               return (
                 <div key={dir} className="mb-3 last:mb-0" data-cell={`${pos}-${dir}`}>
                   <p className="mb-1 text-xs text-muted">{DIRECTION_LABEL[dir]}</p>
-                  <ChoiceChips label={`${pos}° ${dir}`} size="sm" options={FEELS} value={cell?.feel ?? null} onChange={(feel) => setCell(pos, dir, { feel })} />
+                  <ChoiceChips
+                    label={`${pos}° ${dir}`}
+                    size="sm"
+                    options={FEELS}
+                    value={cell?.feel ?? null}
+                    onChange={(feel) => setCell(pos, dir, { feel })}
+                  />
                   <label className="mt-2 flex items-center gap-2 text-sm text-muted">
                     Full revolutions
-                    <input type="number" min={0} max={20} inputMode="numeric" aria-label={`${pos}° ${dir} revolutions`} placeholder="2" className="h-11 w-16 rounded-lg border border-line-strong bg-surface px-2 text-base text-ink placeholder:text-muted/50" value={cell?.revolutions ?? ""} onChange={(e) => setCell(pos, dir, { revolutions: e.target.value === "" ? undefined : Number(e.target.value) })} />
+                    <input
+                      type="number"
+                      min={0}
+                      max={20}
+                      inputMode="numeric"
+                      aria-label={`${pos}° ${dir} revolutions`}
+                      placeholder="2"
+                      className="h-11 w-16 rounded-lg border border-line-strong bg-surface px-2 text-base text-ink placeholder:text-muted/50"
+                      value={cell?.revolutions ?? ""}
+                      onChange={(e) => setCell(pos, dir, { revolutions: e.target.value === "" ? undefined : Number(e.target.value) })}
+                    />
                   </label>
                 </div>
               );

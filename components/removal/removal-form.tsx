@@ -25,7 +25,14 @@ const loadReportRules = () => import("@/lib/cases/schemas");
 
 export type SiteOption = { id: string; name: string; kind: string; policy: EndPlayPolicy };
 
-type Props = { mode: "new" | "edit"; sites: SiteOption[]; initial?: RemovalDraft; caseId?: string; version?: number; defaultSiteId: string | null };
+type Props = {
+  mode: "new" | "edit";
+  sites: SiteOption[];
+  initial?: RemovalDraft;
+  caseId?: string;
+  version?: number;
+  defaultSiteId: string | null;
+};
 
 export function RemovalForm({ mode, sites, initial, caseId, version, defaultSiteId }: Props) {
   const router = useRouter();
@@ -73,8 +80,16 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
     }
     setChecked(null);
     fileKey.current ??= crypto.randomUUID();
-    const label = [draft.carMark, draft.carNumber].filter(Boolean).join(" ") + (draft.axle && draft.side ? ` · ${draft.axle}${draft.side}` : "");
-    const entry: OutboxEntry = { key: fileKey.current, body: forSaving(draft), label: label || "Removal report", queuedAt: new Date().toISOString(), attempts: 0, state: "waiting" };
+    const label =
+      [draft.carMark, draft.carNumber].filter(Boolean).join(" ") + (draft.axle && draft.side ? ` · ${draft.axle}${draft.side}` : "");
+    const entry: OutboxEntry = {
+      key: fileKey.current,
+      body: forSaving(draft),
+      label: label || "Removal report",
+      queuedAt: new Date().toISOString(),
+      attempts: 0,
+      state: "waiting",
+    };
     // Into the device outbox first: whatever the signal does next, the report is not lost.
     await putEntry(entry);
     const result = await sendEntry(entry);
@@ -102,10 +117,16 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
   if (queued && sentNow) {
     return (
       <div role="status" data-testid="queued-sent" className="flex flex-col gap-4 rounded-xl border border-ok/40 bg-ok-soft p-5 text-ink">
-        <p className="text-lg font-semibold">{queued} is filed as {sentNow}.</p>
+        <p className="text-lg font-semibold">
+          {queued} is filed as {sentNow}.
+        </p>
         <div className="flex flex-col gap-3 sm:flex-row">
-          <Button size="lg" onClick={() => router.push(`/cases/${sentNow}`)}>Open {sentNow}</Button>
-          <Button size="lg" variant="secondary" onClick={startAnother}>Start another report</Button>
+          <Button size="lg" onClick={() => router.push(`/cases/${sentNow}`)}>
+            Open {sentNow}
+          </Button>
+          <Button size="lg" variant="secondary" onClick={startAnother}>
+            Start another report
+          </Button>
         </div>
       </div>
     );
@@ -115,8 +136,13 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
     return (
       <div role="status" data-testid="queued" className="flex flex-col gap-4 rounded-xl border border-warn/40 bg-warn-soft p-5 text-ink">
         <p className="text-lg font-semibold">{queued} is kept on this device — waiting to send.</p>
-        <p className="text-sm text-ink-2">There is no connection to the server right now. The report is sent by itself, once, when the connection returns; the bar at the top shows when it is filed. Do not file it again.</p>
-        <Button size="lg" onClick={startAnother}>Start another report</Button>
+        <p className="text-sm text-ink-2">
+          There is no connection to the server right now. The report is sent by itself, once, when the connection returns; the bar at the
+          top shows when it is filed. Do not file it again.
+        </p>
+        <Button size="lg" onClick={startAnother}>
+          Start another report
+        </Button>
       </div>
     );
   }
@@ -125,8 +151,8 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
     <form className="flex flex-col gap-5" onSubmit={(e) => e.preventDefault()} noValidate aria-label="Removal report">
       <ErrorSummary errors={errors} />
       <Caution title="Before you start">
-        Wear the protective equipment your employer requires (safety-toe boots, safety glasses, gloves). Work on, under or between cars only under
-        blue-signal protection. The wheelset must be out from under the car and secured against rolling.
+        Wear the protective equipment your employer requires (safety-toe boots, safety glasses, gloves). Work on, under or between cars only
+        under blue-signal protection. The wheelset must be out from under the car and secured against rolling.
       </Caution>
 
       <Card title="1 · Where and when">
@@ -134,24 +160,51 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
           <Field label="Removal site" htmlFor="siteId" error={errors.siteId}>
             <Select id="siteId" value={draft.siteId ?? ""} onChange={(e) => patch({ siteId: e.target.value || null })}>
               <option value="">Choose…</option>
-              {sites.filter((s) => s.kind !== "lab").map((s) => (
-                <option key={s.id} value={s.id}>{s.name}</option>
-              ))}
+              {sites
+                .filter((s) => s.kind !== "lab")
+                .map((s) => (
+                  <option key={s.id} value={s.id}>
+                    {s.name}
+                  </option>
+                ))}
             </Select>
           </Field>
           <Field label="Removed on" htmlFor="removedOn" error={errors.removedOn}>
-            <Input id="removedOn" type="date" value={draft.removedOn ?? ""} onChange={(e) => patch({ removedOn: e.target.value || null })} />
+            <Input
+              id="removedOn"
+              type="date"
+              value={draft.removedOn ?? ""}
+              onChange={(e) => patch({ removedOn: e.target.value || null })}
+            />
           </Field>
           <Field label="Car reporting mark" htmlFor="carMark" error={errors.carMark}>
-            <Input id="carMark" autoCapitalize="characters" placeholder="SRRL" value={draft.carMark ?? ""} onChange={(e) => patch({ carMark: e.target.value.toUpperCase() })} />
+            <Input
+              id="carMark"
+              autoCapitalize="characters"
+              placeholder="SRRL"
+              value={draft.carMark ?? ""}
+              onChange={(e) => patch({ carMark: e.target.value.toUpperCase() })}
+            />
           </Field>
           <Field label="Car number" htmlFor="carNumber" error={errors.carNumber}>
-            <Input id="carNumber" inputMode="numeric" placeholder="204518" value={draft.carNumber ?? ""} onChange={(e) => patch({ carNumber: e.target.value })} />
+            <Input
+              id="carNumber"
+              inputMode="numeric"
+              placeholder="204518"
+              value={draft.carNumber ?? ""}
+              onChange={(e) => patch({ carNumber: e.target.value })}
+            />
           </Field>
         </div>
         <div className="mt-5">
           <p className="mb-2 text-sm font-medium text-ink-2">
-            Wheelset position {draft.axle && draft.side ? <span className="ml-1 rounded bg-accent-soft px-1.5 py-0.5 text-accent">{draft.axle}{draft.side}</span> : null}
+            Wheelset position{" "}
+            {draft.axle && draft.side ? (
+              <span className="ml-1 rounded bg-accent-soft px-1.5 py-0.5 text-accent">
+                {draft.axle}
+                {draft.side}
+              </span>
+            ) : null}
           </p>
           <div data-field="axle">
             <AxlePicker axle={draft.axle} side={draft.side} onPick={(axle, side) => patch({ axle, side })} />
@@ -161,8 +214,24 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
         <div className="mt-4">
           <p className="mb-1.5 text-sm font-medium text-ink-2">Wheel diameter</p>
           <div className="flex flex-wrap items-center gap-2">
-            <ChoiceChips label="Wheel diameter" size="sm" value={String(draft.wheelDiameterIn ?? "")} onChange={(v) => patch({ wheelDiameterIn: Number(v) })} options={[{ value: "33", label: "33 in" }, { value: "36", label: "36 in" }, { value: "38", label: "38 in" }]} />
-            <Input aria-label="Wheel diameter in inches" className="!w-24" inputMode="decimal" value={draft.wheelDiameterIn ?? ""} onChange={(e) => patch({ wheelDiameterIn: e.target.value === "" ? null : Number(e.target.value) })} />
+            <ChoiceChips
+              label="Wheel diameter"
+              size="sm"
+              value={String(draft.wheelDiameterIn ?? "")}
+              onChange={(v) => patch({ wheelDiameterIn: Number(v) })}
+              options={[
+                { value: "33", label: "33 in" },
+                { value: "36", label: "36 in" },
+                { value: "38", label: "38 in" },
+              ]}
+            />
+            <Input
+              aria-label="Wheel diameter in inches"
+              className="!w-24"
+              inputMode="decimal"
+              value={draft.wheelDiameterIn ?? ""}
+              onChange={(e) => patch({ wheelDiameterIn: e.target.value === "" ? null : Number(e.target.value) })}
+            />
           </div>
         </div>
       </Card>
@@ -171,23 +240,32 @@ export function RemovalForm({ mode, sites, initial, caseId, version, defaultSite
 
       <div className="flex flex-col-reverse items-stretch gap-3 sm:flex-row sm:items-center sm:justify-between">
         <p className="text-sm text-muted" role="status" data-testid="save-state">
-          {autosave.state.kind === "saving" ? "Saving…" : autosave.state.message ?? (mode === "new" ? "Drafts are kept on this device until you file." : "Changes save automatically.")}
+          {autosave.state.kind === "saving"
+            ? "Saving…"
+            : (autosave.state.message ??
+              (mode === "new" ? "Drafts are kept on this device until you file." : "Changes save automatically."))}
         </p>
         {mode === "new" ? (
           <Button size="lg" onClick={file} disabled={filing}>
             {filing ? "Sending…" : "File removal report"}
           </Button>
         ) : (
-          <Button size="lg" variant="secondary" onClick={() => void autosave.saveNow()}>Save now</Button>
+          <Button size="lg" variant="secondary" onClick={() => void autosave.saveNow()}>
+            Save now
+          </Button>
         )}
       </div>
       {autosave.state.kind === "conflict" ? (
         <div role="alert" className="rounded-lg border border-danger/40 bg-danger-soft p-3 text-sm text-danger">
           {autosave.state.message} Your edits are kept on this device.
-          <button type="button" className="ml-2 font-semibold underline" onClick={() => location.reload()}>Reload</button>
+          <button type="button" className="ml-2 font-semibold underline" onClick={() => location.reload()}>
+            Reload
+          </button>
         </div>
       ) : autosave.state.kind === "error" ? (
-        <p role="alert" className="rounded-lg border border-danger/40 bg-danger-soft p-3 text-sm text-danger">{autosave.state.message}</p>
+        <p role="alert" className="rounded-lg border border-danger/40 bg-danger-soft p-3 text-sm text-danger">
+          {autosave.state.message}
+        </p>
       ) : null}
     </form>
   );

@@ -5,7 +5,19 @@ import { Field, Input, Select } from "@/components/ui/field";
 
 type Detail = Record<string, string | number | boolean | null>;
 
-export function TriggerDetails({ trigger, detail, onTrigger, onDetail, errors }: { trigger: string; detail: Detail; onTrigger: (t: string) => void; onDetail: (d: Detail) => void; errors: Record<string, string> }) {
+export function TriggerDetails({
+  trigger,
+  detail,
+  onTrigger,
+  onDetail,
+  errors,
+}: {
+  trigger: string;
+  detail: Detail;
+  onTrigger: (t: string) => void;
+  onDetail: (d: Detail) => void;
+  errors: Record<string, string>;
+}) {
   const info = TRIGGERS.find((t) => t.code === trigger);
   return (
     <div className="flex flex-col gap-4">
@@ -13,7 +25,9 @@ export function TriggerDetails({ trigger, detail, onTrigger, onDetail, errors }:
         <Select id="trigger" value={trigger} onChange={(e) => onTrigger(e.target.value)} aria-invalid={!!errors.trigger}>
           <option value="">Choose…</option>
           {TRIGGERS.map((t) => (
-            <option key={t.code} value={t.code}>{t.label}</option>
+            <option key={t.code} value={t.code}>
+              {t.label}
+            </option>
           ))}
         </Select>
       </Field>
@@ -24,12 +38,20 @@ export function TriggerDetails({ trigger, detail, onTrigger, onDetail, errors }:
             const id = `detail-${f.key}`;
             const v = detail[f.key];
             return (
-              <Field key={f.key} label={`${f.label}${f.unit ? ` (${f.unit})` : ""}${f.required ? "" : " — optional"}`} htmlFor={id} hint={f.help} error={errors[`triggerDetail.${f.key}`]}>
+              <Field
+                key={f.key}
+                label={`${f.label}${f.unit ? ` (${f.unit})` : ""}${f.required ? "" : " — optional"}`}
+                htmlFor={id}
+                hint={f.help}
+                error={errors[`triggerDetail.${f.key}`]}
+              >
                 {f.kind === "choice" ? (
                   <Select id={id} value={String(v ?? "")} onChange={(e) => onDetail({ ...detail, [f.key]: e.target.value || null })}>
                     <option value="">—</option>
                     {f.options?.map((o) => (
-                      <option key={o.code} value={o.code}>{o.label}</option>
+                      <option key={o.code} value={o.code}>
+                        {o.label}
+                      </option>
                     ))}
                   </Select>
                 ) : (

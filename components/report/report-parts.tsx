@@ -41,7 +41,13 @@ export function Table({ head, rows, align = [] }: { head: string[]; rows: ReactN
         <thead>
           <tr className="bg-surface-2">
             {head.map((h, i) => (
-              <th key={h} scope="col" className={`whitespace-nowrap px-2 py-1.5 text-[10.5px] font-semibold uppercase tracking-wide text-muted ${cls(i)}`}>{h}</th>
+              <th
+                key={h}
+                scope="col"
+                className={`whitespace-nowrap px-2 py-1.5 text-[10.5px] font-semibold uppercase tracking-wide text-muted ${cls(i)}`}
+              >
+                {h}
+              </th>
             ))}
           </tr>
         </thead>
@@ -49,7 +55,9 @@ export function Table({ head, rows, align = [] }: { head: string[]; rows: ReactN
           {rows.map((r, i) => (
             <tr key={i} className="tl-keep border-b border-line align-top">
               {r.map((cell, j) => (
-                <td key={j} className={`px-2 py-1.5 ${cls(j)}`}>{cell}</td>
+                <td key={j} className={`px-2 py-1.5 ${cls(j)}`}>
+                  {cell}
+                </td>
               ))}
             </tr>
           ))}
@@ -59,7 +67,12 @@ export function Table({ head, rows, align = [] }: { head: string[]; rows: ReactN
   );
 }
 
-const LEVEL = { remove: ["Remove", "text-danger"], error: ["Error", "text-danger"], warn: ["Check", "text-warn"], info: ["Note", "text-muted"] } as const;
+const LEVEL = {
+  remove: ["Remove", "text-danger"],
+  error: ["Error", "text-danger"],
+  warn: ["Check", "text-warn"],
+  info: ["Note", "text-muted"],
+} as const;
 
 export function Notes({ items }: { items: Note[] }) {
   if (!items.length) return null;
@@ -76,7 +89,11 @@ export function Notes({ items }: { items: Note[] }) {
 }
 
 export function Callout({ tone, title, children }: { tone: "ok" | "warn" | "danger"; title: string; children?: ReactNode }) {
-  const t = { ok: "border-ok bg-ok-soft text-ok", warn: "border-warn bg-warn-soft text-warn", danger: "border-danger bg-danger-soft text-danger" }[tone];
+  const t = {
+    ok: "border-ok bg-ok-soft text-ok",
+    warn: "border-warn bg-warn-soft text-warn",
+    danger: "border-danger bg-danger-soft text-danger",
+  }[tone];
   return (
     <div className={`tl-keep mt-3 rounded-md border-l-[3px] px-4 py-3 ${t}`}>
       <p className="text-[13.5px] font-semibold">{title}</p>

@@ -21,10 +21,14 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
           <NavLinks items={items} layout="side" />
         </div>
         <div className="border-t border-white/10 px-3 pt-4 text-sm">
-          <p className="truncate font-medium text-white" data-testid="current-user">{user.name}</p>
+          <p className="truncate font-medium text-white" data-testid="current-user">
+            {user.name}
+          </p>
           <p className="truncate text-xs text-slate-400">{ROLE_LABELS[user.role]}</p>
           <div className="mt-3 flex gap-3 text-xs">
-            <Link href="/profile" className="text-slate-400 hover:text-white">Notices</Link>
+            <Link href="/profile" className="text-slate-400 hover:text-white">
+              Notices
+            </Link>
             <SignOutButton className="text-slate-400 hover:text-white" />
           </div>
         </div>
@@ -40,7 +44,11 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
               items={items}
               footer={
                 <>
-                  <Link href="/profile" className="inline-flex min-h-11 items-center truncate text-ink-2 underline-offset-4 hover:underline" title="Your notices">
+                  <Link
+                    href="/profile"
+                    className="inline-flex min-h-11 items-center truncate text-ink-2 underline-offset-4 hover:underline"
+                    title="Your notices"
+                  >
                     {user.name} · {ROLE_LABELS[user.role]}
                   </Link>
                   <SignOutButton className="inline-flex min-h-11 items-center rounded-lg border border-line px-3 text-ink-2" />

@@ -26,7 +26,16 @@ export function NavLinks({ items, layout }: { items: NavItem[]; layout: "side" |
             : `flex min-h-12 items-center gap-3 rounded-lg border px-3 text-[15px] font-medium ${active ? "border-accent bg-accent text-accent-ink" : "border-line text-ink hover:bg-surface-2"}`
         }
       >
-        <svg viewBox="0 0 24 24" className="h-5 w-5 shrink-0" fill="none" stroke="currentColor" strokeWidth="1.8" strokeLinecap="round" strokeLinejoin="round" aria-hidden>
+        <svg
+          viewBox="0 0 24 24"
+          className="h-5 w-5 shrink-0"
+          fill="none"
+          stroke="currentColor"
+          strokeWidth="1.8"
+          strokeLinecap="round"
+          strokeLinejoin="round"
+          aria-hidden
+        >
           <path d={i.icon} />
         </svg>
         {i.label}
@@ -44,7 +53,9 @@ export function NavLinks({ items, layout }: { items: NavItem[]; layout: "side" |
   return (
     <nav aria-label="Main" className="flex flex-col gap-1">
       {main.map(link)}
-      {admin.length ? <p className="mt-5 px-3 pb-1 text-[11px] font-semibold uppercase tracking-widest text-slate-500">Administration</p> : null}
+      {admin.length ? (
+        <p className="mt-5 px-3 pb-1 text-[11px] font-semibold uppercase tracking-widest text-slate-500">Administration</p>
+      ) : null}
       {admin.map(link)}
     </nav>
   );

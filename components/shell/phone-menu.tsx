@@ -30,7 +30,11 @@ export function PhoneMenu({ items, footer }: { items: NavItem[]; footer: React.R
         Menu
       </button>
       {open ? (
-        <div id="phone-menu" onClick={(e) => (e.target as HTMLElement).closest("a") && setOpen(false)} className="absolute inset-x-0 top-full z-30 max-h-[calc(100dvh-4rem)] overflow-y-auto border-b border-line bg-surface px-3 pb-4 pt-2 shadow-lg">
+        <div
+          id="phone-menu"
+          onClick={(e) => (e.target as HTMLElement).closest("a") && setOpen(false)}
+          className="absolute inset-x-0 top-full z-30 max-h-[calc(100dvh-4rem)] overflow-y-auto border-b border-line bg-surface px-3 pb-4 pt-2 shadow-lg"
+        >
           <NavLinks items={items} layout="bar" />
           <div className="mt-3 flex items-center justify-between border-t border-line px-1 pt-3 text-sm">{footer}</div>
         </div>

@@ -16,7 +16,7 @@ async function orThrow<T>(pending: Promise<ApiResult<T>>): Promise<T> {
   return r.data;
 }
 
-export const getJson = <T,>(url: string) => getOrThrow<T>(url);
+export const getJson = <T>(url: string) => getOrThrow<T>(url);
 
 export function linkCase(caseId: string, relatedId: string, note: string) {
   return orThrow(callApi<LinksAnswer>("POST", linksKey(caseId), { json: { relatedId, note } }));

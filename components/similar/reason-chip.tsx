@@ -14,9 +14,14 @@ const tone: Record<SimilarityReason["kind"], string> = {
 export function ReasonChip({ reason }: { reason: SimilarityReason }) {
   const points = Math.round(reason.weight * 100);
   return (
-    <li className={`inline-flex max-w-full items-baseline gap-1.5 rounded-md px-2 py-0.5 text-xs ring-1 ring-inset ${tone[reason.kind]}`} data-kind={reason.kind}>
+    <li
+      className={`inline-flex max-w-full items-baseline gap-1.5 rounded-md px-2 py-0.5 text-xs ring-1 ring-inset ${tone[reason.kind]}`}
+      data-kind={reason.kind}
+    >
       <span className="min-w-0 break-words">{reason.text}</span>
-      <span className="shrink-0 font-semibold tabular text-muted" title="Points this reason adds to the score (of 100)">+{points}</span>
+      <span className="shrink-0 font-semibold tabular text-muted" title="Points this reason adds to the score (of 100)">
+        +{points}
+      </span>
     </li>
   );
 }
@@ -26,7 +31,10 @@ export function ScoreBar({ score }: { score: number }) {
   const pct = Math.round(score * 100);
   return (
     <div className="flex w-full items-center gap-2 sm:w-28 sm:flex-col sm:items-end sm:gap-1" aria-label={`Similarity ${pct} of 100`}>
-      <span className="text-lg font-semibold tabular text-ink sm:text-xl">{pct}<span className="text-xs font-normal text-muted">/100</span></span>
+      <span className="text-lg font-semibold tabular text-ink sm:text-xl">
+        {pct}
+        <span className="text-xs font-normal text-muted">/100</span>
+      </span>
       <span className="h-1.5 flex-1 overflow-hidden rounded-full bg-surface-2 ring-1 ring-inset ring-line sm:w-full sm:flex-none">
         <span className="block h-full rounded-full bg-accent" style={{ width: `${pct}%` }} />
       </span>

@@ -17,11 +17,20 @@ function LinkControl({ caseId, item, onLinked }: { caseId: string; item: Similar
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   if (item.linked) {
-    return <span className="inline-flex items-center gap-1 text-xs font-medium text-ok" data-testid="linked-mark">✓ Linked as related</span>;
+    return (
+      <span className="inline-flex items-center gap-1 text-xs font-medium text-ok" data-testid="linked-mark">
+        ✓ Linked as related
+      </span>
+    );
   }
   if (!open) {
     return (
-      <button type="button" onClick={() => setOpen(true)} className="h-11 lg:h-9 rounded-lg border border-line-strong bg-surface px-3 text-xs font-medium text-ink-2 hover:bg-surface-2" data-testid="link-related">
+      <button
+        type="button"
+        onClick={() => setOpen(true)}
+        className="h-11 lg:h-9 rounded-lg border border-line-strong bg-surface px-3 text-xs font-medium text-ink-2 hover:bg-surface-2"
+        data-testid="link-related"
+      >
         Link as related
       </button>
     );
@@ -39,35 +48,92 @@ function LinkControl({ caseId, item, onLinked }: { caseId: string; item: Similar
     }
   };
   return (
-    <form className="flex w-full flex-col gap-1.5 sm:flex-row sm:items-center" onSubmit={(e) => { e.preventDefault(); void submit(); }}>
-      <input value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} autoFocus placeholder="Why are they related? (optional)" aria-label="Note on the link"
-        className="h-11 lg:h-9 w-full min-w-0 sm:flex-1 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent" />
+    <form
+      className="flex w-full flex-col gap-1.5 sm:flex-row sm:items-center"
+      onSubmit={(e) => {
+        e.preventDefault();
+        void submit();
+      }}
+    >
+      <input
+        value={note}
+        onChange={(e) => setNote(e.target.value)}
+        maxLength={500}
+        autoFocus
+        placeholder="Why are they related? (optional)"
+        aria-label="Note on the link"
+        className="h-11 lg:h-9 w-full min-w-0 sm:flex-1 rounded-lg border border-line-strong bg-surface px-2.5 text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent"
+      />
       <div className="flex gap-1.5">
-        <button type="submit" disabled={busy} className="h-11 lg:h-9 rounded-lg bg-accent px-3 text-xs font-semibold text-accent-ink disabled:opacity-50">{busy ? "Linking…" : "Link"}</button>
-        <button type="button" onClick={() => setOpen(false)} className="h-11 lg:h-9 rounded-lg px-3 text-xs text-muted hover:bg-surface-2">Cancel</button>
+        <button
+          type="submit"
+          disabled={busy}
+          className="h-11 lg:h-9 rounded-lg bg-accent px-3 text-xs font-semibold text-accent-ink disabled:opacity-50"
+        >
+          {busy ? "Linking…" : "Link"}
+        </button>
+        <button type="button" onClick={() => setOpen(false)} className="h-11 lg:h-9 rounded-lg px-3 text-xs text-muted hover:bg-surface-2">
+          Cancel
+        </button>
       </div>
-      {error ? <p role="alert" className="text-xs text-danger sm:basis-full">{error}</p> : null}
+      {error ? (
+        <p role="alert" className="text-xs text-danger sm:basis-full">
+          {error}
+        </p>
+      ) : null}
     </form>
   );
 }
 
-function Row({ item, caseId, thisNumber, canLink, onLinked }: { item: SimilarCaseItem; caseId: string; thisNumber: string; canLink: boolean; onLinked: () => void }) {
+function Row({
+  item,
+  caseId,
+  thisNumber,
+  canLink,
+  onLinked,
+}: {
+  item: SimilarCaseItem;
+  caseId: string;
+  thisNumber: string;
+  canLink: boolean;
+  onLinked: () => void;
+}) {
   return (
     <li className="flex flex-col gap-3 py-4 first:pt-0 last:pb-0 sm:flex-row sm:gap-4" data-testid="similar-case">
       <ScoreBar score={item.score} />
       <div className="min-w-0 flex-1">
         <div className="flex flex-wrap items-center gap-2">
-          <Link href={`/cases/${item.number}`} className="inline-flex min-h-11 items-center font-semibold tabular text-ink hover:text-accent lg:min-h-0">{item.number}</Link>
+          <Link
+            href={`/cases/${item.number}`}
+            className="inline-flex min-h-11 items-center font-semibold tabular text-ink hover:text-accent lg:min-h-0"
+          >
+            {item.number}
+          </Link>
           <StageBadge stage={item.status} />
         </div>
         <p className="mt-0.5 text-xs text-muted">
-          {[item.triggerLabel, item.causeLabel ? `Cause: ${item.causeLabel}` : "No verdict yet", item.bearingClass ? `Class ${item.bearingClass}` : null, item.removedOn ? `removed ${item.removedOn}` : null, item.siteName]
-            .filter(Boolean).join(" · ")}
+          {[
+            item.triggerLabel,
+            item.causeLabel ? `Cause: ${item.causeLabel}` : "No verdict yet",
+            item.bearingClass ? `Class ${item.bearingClass}` : null,
+            item.removedOn ? `removed ${item.removedOn}` : null,
+            item.siteName,
+          ]
+            .filter(Boolean)
+            .join(" · ")}
         </p>
         <ul className="mt-2 flex flex-wrap gap-1.5" aria-label="Why it matched">
-          {item.reasons.map((r) => <ReasonChip key={r.text} reason={r} />)}
+          {item.reasons.map((r) => (
+            <ReasonChip key={r.text} reason={r} />
+          ))}
         </ul>
-        {canLink ? <div className="mt-2.5"><LinkControl caseId={caseId} item={item} onLinked={onLinked} /></div> : item.linked ? <p className="mt-2 text-xs font-medium text-ok">✓ Linked as related</p> : null}
+        {canLink ? (
+          <div className="mt-2.5">
+            <LinkControl caseId={caseId} item={item} onLinked={onLinked} />
+          </div>
+        ) : item.linked ? (
+          <p className="mt-2 text-xs font-medium text-ok">✓ Linked as related</p>
+        ) : null}
       </div>
       <SimilarPhotos item={item} thisNumber={thisNumber} />
     </li>
@@ -81,13 +147,24 @@ export function SimilarCases({ caseId, canLink }: { caseId: string; canLink: boo
   if (isLoading) {
     return (
       <ul className="flex flex-col gap-4" aria-busy="true" aria-label="Finding similar cases">
-        {[0, 1, 2].map((i) => <li key={i} className="h-16 animate-pulse rounded-lg bg-surface-2" />)}
+        {[0, 1, 2].map((i) => (
+          <li key={i} className="h-16 animate-pulse rounded-lg bg-surface-2" />
+        ))}
       </ul>
     );
   }
-  if (error) return <p role="alert" className="text-sm text-danger">Similar cases could not be loaded: {(error as Error).message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-sm text-danger">
+        Similar cases could not be loaded: {(error as Error).message}
+      </p>
+    );
   if (!data?.similar.length) {
-    return <p className="text-sm text-muted" data-testid="no-similar">No earlier case shares this one&apos;s findings, root cause or trigger and class yet.</p>;
+    return (
+      <p className="text-sm text-muted" data-testid="no-similar">
+        No earlier case shares this one&apos;s findings, root cause or trigger and class yet.
+      </p>
+    );
   }
   const onLinked = () => {
     void refresh();
@@ -96,9 +173,14 @@ export function SimilarCases({ caseId, canLink }: { caseId: string; canLink: boo
   };
   return (
     <div>
-      <p className="mb-3 text-sm text-muted">Earlier cases scored on the damage per part, root cause, trigger, bearing class and words in common. Points show what each reason adds.</p>
+      <p className="mb-3 text-sm text-muted">
+        Earlier cases scored on the damage per part, root cause, trigger, bearing class and words in common. Points show what each reason
+        adds.
+      </p>
       <ol className="divide-y divide-line" data-testid="similar-cases">
-        {data.similar.map((item) => <Row key={item.id} item={item} caseId={caseId} thisNumber={data.number} canLink={canLink} onLinked={onLinked} />)}
+        {data.similar.map((item) => (
+          <Row key={item.id} item={item} caseId={caseId} thisNumber={data.number} canLink={canLink} onLinked={onLinked} />
+        ))}
       </ol>
     </div>
   );

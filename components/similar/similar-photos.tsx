@@ -10,7 +10,12 @@ function Thumb({ id, caption }: { id: string; caption: string }) {
     <figure className="min-w-0">
       {/* A plain img: the bytes come from the session-checked photo route, not a static asset. */}
       {/* eslint-disable-next-line @next/next/no-img-element -- see above */}
-      <img src={thumb(id)} alt={caption} loading="lazy" className="aspect-[4/3] w-full rounded-md border border-line bg-surface-2 object-cover" />
+      <img
+        src={thumb(id)}
+        alt={caption}
+        loading="lazy"
+        className="aspect-[4/3] w-full rounded-md border border-line bg-surface-2 object-cover"
+      />
       <figcaption className="mt-0.5 truncate text-[11px] text-muted">{caption}</figcaption>
     </figure>
   );
@@ -25,14 +30,22 @@ export function SimilarPhotos({ item, thisNumber }: { item: SimilarCaseItem; thi
           <Thumb id={pair.a} caption={`${pair.componentLabel} · this case (${thisNumber})`} />
           <Thumb id={pair.b} caption={`${pair.componentLabel} · ${item.number}`} />
         </div>
-        <Link href={`/photos/compare?a=${encodeURIComponent(pair.a)}&b=${encodeURIComponent(pair.b)}`} className="mt-1 inline-block text-xs font-medium text-accent hover:underline" data-testid="compare-photos">
+        <Link
+          href={`/photos/compare?a=${encodeURIComponent(pair.a)}&b=${encodeURIComponent(pair.b)}`}
+          className="mt-1 inline-block text-xs font-medium text-accent hover:underline"
+          data-testid="compare-photos"
+        >
           Compare photos
         </Link>
       </div>
     );
   }
   if (item.photoId) {
-    return <div className="w-28"><Thumb id={item.photoId} caption={item.number} /></div>;
+    return (
+      <div className="w-28">
+        <Thumb id={item.photoId} caption={item.number} />
+      </div>
+    );
   }
   return null;
 }

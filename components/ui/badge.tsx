@@ -10,7 +10,11 @@ const tones = {
 } as const;
 
 export function Badge({ tone = "neutral", children }: { tone?: keyof typeof tones; children: ReactNode }) {
-  return <span className={`inline-flex items-center gap-1 rounded-md px-2 py-0.5 text-xs font-medium ring-1 ring-inset ${tones[tone]}`}>{children}</span>;
+  return (
+    <span className={`inline-flex items-center gap-1 rounded-md px-2 py-0.5 text-xs font-medium ring-1 ring-inset ${tones[tone]}`}>
+      {children}
+    </span>
+  );
 }
 
 const stageTone: Record<Stage, string> = {
@@ -23,7 +27,9 @@ const stageMark: Record<Stage, string> = { field: "○", bench: "◐", signoff: 
 
 export function StageBadge({ stage }: { stage: Stage }) {
   return (
-    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap rounded-full px-2.5 py-0.5 text-xs font-semibold ring-1 ring-inset ${stageTone[stage]}`}>
+    <span
+      className={`inline-flex items-center gap-1.5 whitespace-nowrap rounded-full px-2.5 py-0.5 text-xs font-semibold ring-1 ring-inset ${stageTone[stage]}`}
+    >
       <span aria-hidden>{stageMark[stage]}</span>
       {STAGE_LABELS[stage]}
     </span>

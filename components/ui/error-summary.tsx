@@ -49,9 +49,19 @@ export function ErrorSummary({ errors, labels = {}, message, focusFirst = true, 
   if (!entries.length && !message) return null;
   const count = entries.length;
   return (
-    <div ref={box} tabIndex={-1} role="alert" data-testid="error-summary" className="rounded-xl border-2 border-danger/60 bg-danger-soft p-4 text-ink outline-none focus:ring-2 focus:ring-danger">
+    <div
+      ref={box}
+      tabIndex={-1}
+      role="alert"
+      data-testid="error-summary"
+      className="rounded-xl border-2 border-danger/60 bg-danger-soft p-4 text-ink outline-none focus:ring-2 focus:ring-danger"
+    >
       <p className="text-base font-semibold text-danger">
-        {count > 1 ? `${count} things to fix before this can be saved` : count === 1 ? "One thing to fix before this can be saved" : message}
+        {count > 1
+          ? `${count} things to fix before this can be saved`
+          : count === 1
+            ? "One thing to fix before this can be saved"
+            : message}
       </p>
       {count ? (
         <ul className="mt-2 flex flex-col gap-1 text-[15px]">

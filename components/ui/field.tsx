@@ -3,7 +3,19 @@ import { Children, cloneElement, isValidElement, type ComponentProps, type React
 export const inputClass =
   "w-full h-11 sm:h-10 rounded-lg border border-line-strong bg-surface px-3 text-[15px] sm:text-sm text-ink placeholder:text-muted focus:outline-2 focus:outline-accent focus:border-transparent aria-[invalid=true]:border-2 aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger-soft/40";
 
-export function Field({ label, hint, error, children, htmlFor }: { label: string; hint?: ReactNode; error?: string; children: ReactNode; htmlFor?: string }) {
+export function Field({
+  label,
+  hint,
+  error,
+  children,
+  htmlFor,
+}: {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  children: ReactNode;
+  htmlFor?: string;
+}) {
   return (
     <div className="flex flex-col gap-1.5">
       <label htmlFor={htmlFor} className="text-sm font-medium text-ink-2">

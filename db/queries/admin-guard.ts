@@ -30,4 +30,3 @@ export async function suspendIn(tx: Tx, id: string, reason: string) {
   await tx.update(user).set({ banned: true, banReason: reason, updatedAt: new Date() }).where(eq(user.id, id));
   await tx.delete(session).where(eq(session.userId, id));
 }
-

@@ -27,5 +27,10 @@ export async function listAudit(f: AuditFilter) {
   }
   if (f.from) where.push(gte(auditLog.at, f.from));
   if (f.to) where.push(lt(auditLog.at, f.to));
-  return db.select().from(auditLog).where(where.length ? and(...where) : undefined).orderBy(desc(auditLog.at)).limit(f.limit);
+  return db
+    .select()
+    .from(auditLog)
+    .where(where.length ? and(...where) : undefined)
+    .orderBy(desc(auditLog.at))
+    .limit(f.limit);
 }

@@ -30,10 +30,15 @@ export async function listCaseLinks(caseId: string, viewer: CaseViewer): Promise
   const scope = readableCases(viewer, { createdBy: related.createdBy, siteId: related.siteId });
   const rows = await db
     .select({
-      id: related.id, number: related.number, status: related.status,
+      id: related.id,
+      number: related.number,
+      status: related.status,
       triggerLabel: sql<string>`coalesce(${triggerCode.label}, ${related.trigger})`,
       causeLabel: sql<string | null>`coalesce(${causeCode.label}, ${related.primaryCause})`,
-      removedOn: related.removedOn, note: caseLinks.note, linkedBy: user.name, linkedAt: caseLinks.createdAt,
+      removedOn: related.removedOn,
+      note: caseLinks.note,
+      linkedBy: user.name,
+      linkedAt: caseLinks.createdAt,
     })
     .from(caseLinks)
     .innerJoin(related, eq(related.id, caseLinks.relatedId))
@@ -56,16 +61,30 @@ const isUniqueViolation = (e: unknown) => {
 /** Locks both cases (in id order, so two linkers never deadlock), refuses a signed one and moves
  * both versions: a link is evidence, and a sign-off over a case whose links moved is refused as stale. */
 async function touchBothOpen(tx: Tx, a: CaseRef, b: CaseRef, actor: Actor) {
-  const rows = await tx.select({ id: cases.id, number: cases.number, status: cases.status }).from(cases).where(inArray(cases.id, [a.id, b.id])).orderBy(asc(cases.id)).for("update");
+  const rows = await tx
+    .select({ id: cases.id, number: cases.number, status: cases.status })
+    .from(cases)
+    .where(inArray(cases.id, [a.id, b.id]))
+    .orderBy(asc(cases.id))
+    .for("update");
   const signed = rows.find((r) => r.status === "signed");
-  if (signed) throw new WriteRefused(`${signed.number} is signed and read-only, so its links cannot change. An engineer can reopen it with a reason.`);
-  await tx.update(cases).set({ version: sql`${cases.version} + 1`, updatedBy: actor.id, updatedAt: new Date() }).where(inArray(cases.id, [a.id, b.id]));
+  if (signed)
+    throw new WriteRefused(
+      `${signed.number} is signed and read-only, so its links cannot change. An engineer can reopen it with a reason.`,
+    );
+  await tx
+    .update(cases)
+    .set({ version: sql`${cases.version} + 1`, updatedBy: actor.id, updatedAt: new Date() })
+    .where(inArray(cases.id, [a.id, b.id]));
 }
 
 export async function addCaseLink(a: CaseRef, b: CaseRef, note: string, actor: Actor): Promise<void> {
   try {
     await db.transaction(async (tx) => {
-      const existing = await tx.select({ n: sql<number>`1` }).from(caseLinks).where(and(eq(caseLinks.caseId, a.id), eq(caseLinks.relatedId, b.id)));
+      const existing = await tx
+        .select({ n: sql<number>`1` })
+        .from(caseLinks)
+        .where(and(eq(caseLinks.caseId, a.id), eq(caseLinks.relatedId, b.id)));
       if (existing.length) throw new WriteRefused(`${a.number} and ${b.number} are already linked.`);
       await touchBothOpen(tx, a, b, actor);
       await tx.insert(caseLinks).values([
@@ -73,8 +92,20 @@ export async function addCaseLink(a: CaseRef, b: CaseRef, note: string, actor: A
         { caseId: b.id, relatedId: a.id, note, createdBy: actor.id },
       ]);
       await tx.insert(caseEvents).values([
-        { caseId: a.id, userId: actor.id, action: "linked", changes: [{ field: "related", from: null, to: b.number }], reason: note || null },
-        { caseId: b.id, userId: actor.id, action: "linked", changes: [{ field: "related", from: null, to: a.number }], reason: note || null },
+        {
+          caseId: a.id,
+          userId: actor.id,
+          action: "linked",
+          changes: [{ field: "related", from: null, to: b.number }],
+          reason: note || null,
+        },
+        {
+          caseId: b.id,
+          userId: actor.id,
+          action: "linked",
+          changes: [{ field: "related", from: null, to: a.number }],
+          reason: note || null,
+        },
       ]);
     });
   } catch (e) {
@@ -88,7 +119,9 @@ export async function removeCaseLink(a: CaseRef, b: CaseRef, actor: Actor): Prom
   await db.transaction(async (tx) => {
     const removed = await tx
       .delete(caseLinks)
-      .where(or(and(eq(caseLinks.caseId, a.id), eq(caseLinks.relatedId, b.id)), and(eq(caseLinks.caseId, b.id), eq(caseLinks.relatedId, a.id))))
+      .where(
+        or(and(eq(caseLinks.caseId, a.id), eq(caseLinks.relatedId, b.id)), and(eq(caseLinks.caseId, b.id), eq(caseLinks.relatedId, a.id))),
+      )
       .returning({ caseId: caseLinks.caseId });
     if (removed.length === 0) throw new RowMissing(`A link between ${a.number} and ${b.number}`);
     await touchBothOpen(tx, a, b, actor);

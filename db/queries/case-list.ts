@@ -17,21 +17,39 @@ const triggerCode = alias(codeEntries, "trigger_code");
 const causeCode = alias(codeEntries, "cause_code");
 
 const rowColumns = {
-  id: cases.id, number: cases.number, status: cases.status, carMark: cases.carMark, carNumber: cases.carNumber,
-  axle: cases.axle, side: cases.side, serial: cases.serial, bearingClass: cases.bearingClass,
-  bearingClassOther: cases.bearingClassOther, trigger: cases.trigger,
+  id: cases.id,
+  number: cases.number,
+  status: cases.status,
+  carMark: cases.carMark,
+  carNumber: cases.carNumber,
+  axle: cases.axle,
+  side: cases.side,
+  serial: cases.serial,
+  bearingClass: cases.bearingClass,
+  bearingClassOther: cases.bearingClassOther,
+  trigger: cases.trigger,
   triggerLabel: sql<string>`coalesce(${triggerCode.label}, ${cases.trigger})`,
-  fieldCall: cases.fieldCall, endPlayMeanIn: cases.endPlayMeanIn, removedOn: cases.removedOn,
-  siteCode: sites.code, siteName: sites.name, primaryCause: cases.primaryCause,
+  fieldCall: cases.fieldCall,
+  endPlayMeanIn: cases.endPlayMeanIn,
+  removedOn: cases.removedOn,
+  siteCode: sites.code,
+  siteName: sites.name,
+  primaryCause: cases.primaryCause,
   causeLabel: sql<string | null>`coalesce(${causeCode.label}, ${cases.primaryCause})`,
-  removalConfirmed: cases.removalConfirmed, serviceMonths: cases.serviceMonths, updatedAt: cases.updatedAt,
+  removalConfirmed: cases.removalConfirmed,
+  serviceMonths: cases.serviceMonths,
+  updatedAt: cases.updatedAt,
 };
 
 const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 function textMatch(q: string): SQL[] {
   const hay = sql`concat_ws(' ', ${cases.number}, ${cases.serial}, ${cases.carMark}, ${cases.carNumber}, ${cases.carMark} || ${cases.carNumber})`;
-  return q.split(/\s+/).filter(Boolean).slice(0, 8).map((term) => sql`${hay} ilike ${`%${likeEscape(term)}%`}`);
+  return q
+    .split(/\s+/)
+    .filter(Boolean)
+    .slice(0, 8)
+    .map((term) => sql`${hay} ilike ${`%${likeEscape(term)}%`}`);
 }
 
 type FilterColumns = { [K in "createdBy" | "siteId" | "status" | "trigger" | "primaryCause" | "bearingClass"]: AnyPgColumn };
@@ -92,7 +110,12 @@ const toRow = ({ updatedAt, ...r }: RawRow): CaseListRow => ({ ...r, updatedAt: 
 export async function unknownFilterCodes(f: CaseFilters): Promise<string[]> {
   const missing = (asked: string[] | undefined, found: { code: string }[]) => (asked ?? []).filter((c) => !found.some((x) => x.code === c));
   const listCodes = (list: "trigger" | "cause", asked?: string[]) =>
-    asked?.length ? db.select({ code: codeEntries.code }).from(codeEntries).where(and(eq(codeEntries.list, list), inArray(codeEntries.code, asked))) : [];
+    asked?.length
+      ? db
+          .select({ code: codeEntries.code })
+          .from(codeEntries)
+          .where(and(eq(codeEntries.list, list), inArray(codeEntries.code, asked)))
+      : [];
   const [foundSites, foundTriggers, foundCauses] = await Promise.all([
     f.site?.length ? db.select({ code: sites.code }).from(sites).where(inArray(sites.code, f.site)) : [],
     listCodes("trigger", f.trigger),
@@ -122,13 +145,24 @@ export async function countCases(filters: CaseFilters, viewer: CaseListViewer): 
   }
   const where = caseListWhere(filters, viewer);
   const [row] = filters.site?.length
-    ? await db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(cases).innerJoin(sites, onSite).where(where)
-    : await db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(cases).where(where);
+    ? await db
+        .select({ n: sql<number>`count(*)`.mapWith(Number) })
+        .from(cases)
+        .innerJoin(sites, onSite)
+        .where(where)
+    : await db
+        .select({ n: sql<number>`count(*)`.mapWith(Number) })
+        .from(cases)
+        .where(where);
   return row.n;
 }
 
 export async function listCases(
-  filters: CaseFilters, sort: CaseSort, page: number, pageSize: number, viewer: CaseListViewer,
+  filters: CaseFilters,
+  sort: CaseSort,
+  page: number,
+  pageSize: number,
+  viewer: CaseListViewer,
 ): Promise<{ rows: CaseListRow[]; total: number }> {
   const where = caseListWhere(filters, viewer);
   // The page and the total side by side: a window count would make PostgreSQL read and sort every
@@ -141,7 +175,12 @@ export async function listCases(
   if (needsSite) pick = pick.leftJoin(sites, onSite);
   if (sort.field === "trigger") pick = pick.leftJoin(triggerCode, onTrigger);
   if (sort.field === "cause") pick = pick.leftJoin(causeCode, onCause);
-  const onPage = pick.where(where).orderBy(...caseListOrder(sort)).limit(pageSize).offset((page - 1) * pageSize).as("on_page");
+  const onPage = pick
+    .where(where)
+    .orderBy(...caseListOrder(sort))
+    .limit(pageSize)
+    .offset((page - 1) * pageSize)
+    .as("on_page");
   const [found, total] = await Promise.all([
     db
       .select(rowColumns)
@@ -163,7 +202,10 @@ export type CaseExport = { total: number; capped: boolean; cap: number; batches:
  * then read in batches so a large export never sits whole in memory.
  */
 export async function exportCases(
-  filters: CaseFilters, sort: CaseSort, viewer: CaseListViewer, opts: { cap?: number; batchSize?: number } = {},
+  filters: CaseFilters,
+  sort: CaseSort,
+  viewer: CaseListViewer,
+  opts: { cap?: number; batchSize?: number } = {},
 ): Promise<CaseExport> {
   const cap = opts.cap ?? EXPORT_CAP;
   const batchSize = opts.batchSize ?? 1000;
@@ -197,7 +239,10 @@ export async function exportCases(
 
 /** The export as CSV bytes: a UTF-8 byte-order mark (so spreadsheets read accents), the header, the rows. */
 export async function streamCasesCsv(
-  filters: CaseFilters, sort: CaseSort, viewer: CaseListViewer, opts: { cap?: number } = {},
+  filters: CaseFilters,
+  sort: CaseSort,
+  viewer: CaseListViewer,
+  opts: { cap?: number } = {},
 ): Promise<Omit<CaseExport, "batches"> & { stream: ReadableStream<Uint8Array> }> {
   const { batches, ...info } = await exportCases(filters, sort, viewer, opts);
   const encoder = new TextEncoder();

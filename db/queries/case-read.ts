@@ -20,7 +20,10 @@ export function caseKey(key: string) {
 export async function findReadableCase(key: string, viewer: CaseViewer) {
   const where = caseKey(key);
   if (!where) return null;
-  const [row] = await db.select().from(cases).where(and(where, readableCases(viewer)));
+  const [row] = await db
+    .select()
+    .from(cases)
+    .where(and(where, readableCases(viewer)));
   return row ?? null;
 }
 
@@ -38,7 +41,12 @@ export async function getCaseDetail(key: string, viewer: CaseViewer) {
     .select({
       c: cases,
       siteName: removalSite.name,
-      sitePolicy: { endPlayMaxIn: removalSite.endPlayMaxIn, dialSpreadIn: removalSite.dialSpreadIn, tapeSpreadIn: removalSite.tapeSpreadIn, plausibleMaxIn: removalSite.plausibleMaxIn },
+      sitePolicy: {
+        endPlayMaxIn: removalSite.endPlayMaxIn,
+        dialSpreadIn: removalSite.dialSpreadIn,
+        tapeSpreadIn: removalSite.tapeSpreadIn,
+        plausibleMaxIn: removalSite.plausibleMaxIn,
+      },
       labName: labSite.name,
       createdByName: creator.name,
       proposedByName: proposer.name,
@@ -55,14 +63,31 @@ export async function getCaseDetail(key: string, viewer: CaseViewer) {
     .where(and(where, readableCases(viewer)));
   if (!row) return null;
   const caseFindings = await db.select().from(findings).where(eq(findings.caseId, row.c.id)).orderBy(asc(findings.createdAt));
-  return { ...row.c, siteName: row.siteName, labName: row.labName, sitePolicy: row.sitePolicy, createdByName: row.createdByName, proposedByName: row.proposedByName, signedByName: row.signedByName, updatedByName: row.updatedByName, findings: caseFindings };
+  return {
+    ...row.c,
+    siteName: row.siteName,
+    labName: row.labName,
+    sitePolicy: row.sitePolicy,
+    createdByName: row.createdByName,
+    proposedByName: row.proposedByName,
+    signedByName: row.signedByName,
+    updatedByName: row.updatedByName,
+    findings: caseFindings,
+  };
 }
 
 export type CaseDetail = NonNullable<Awaited<ReturnType<typeof getCaseDetail>>>;
 
 export async function listCaseHistory(caseId: string) {
   return db
-    .select({ id: caseEvents.id, at: caseEvents.at, action: caseEvents.action, changes: caseEvents.changes, reason: caseEvents.reason, userName: user.name })
+    .select({
+      id: caseEvents.id,
+      at: caseEvents.at,
+      action: caseEvents.action,
+      changes: caseEvents.changes,
+      reason: caseEvents.reason,
+      userName: user.name,
+    })
     .from(caseEvents)
     .leftJoin(user, eq(user.id, caseEvents.userId))
     .where(eq(caseEvents.caseId, caseId))
@@ -71,6 +96,15 @@ export async function listCaseHistory(caseId: string) {
 
 export async function sitePolicy(siteId: string | null | undefined) {
   if (!siteId) return null;
-  const [s] = await db.select({ maxIn: sites.endPlayMaxIn, dialSpreadIn: sites.dialSpreadIn, tapeSpreadIn: sites.tapeSpreadIn, plausibleMaxIn: sites.plausibleMaxIn, kind: sites.kind }).from(sites).where(eq(sites.id, siteId));
+  const [s] = await db
+    .select({
+      maxIn: sites.endPlayMaxIn,
+      dialSpreadIn: sites.dialSpreadIn,
+      tapeSpreadIn: sites.tapeSpreadIn,
+      plausibleMaxIn: sites.plausibleMaxIn,
+      kind: sites.kind,
+    })
+    .from(sites)
+    .where(eq(sites.id, siteId));
   return s ?? null;
 }

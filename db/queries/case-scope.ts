@@ -14,7 +14,10 @@ export type CaseViewer = { id: string; role: string; siteId: string | null };
 type ScopeColumns = { createdBy: AnyPgColumn | SQL; siteId: AnyPgColumn | SQL };
 
 /** The viewer's reach over any table with a case's created_by and site_id; undefined means every case. */
-export function readableCases(viewer: CaseViewer, on: ScopeColumns = { createdBy: cases.createdBy, siteId: cases.siteId }): SQL | undefined {
+export function readableCases(
+  viewer: CaseViewer,
+  on: ScopeColumns = { createdBy: cases.createdBy, siteId: cases.siteId },
+): SQL | undefined {
   if (can(viewer.role, "case:read-all")) return undefined;
   if (!can(viewer.role, "case:read")) return sql`false`;
   const own = sql`${on.createdBy} = ${viewer.id}`;
@@ -30,7 +33,9 @@ export function readableIn(viewer: CaseViewer, alias: string): SQL | undefined {
 /** Which of these case numbers the viewer may read (for history lines that name another case). */
 export async function readableNumbers(numbers: string[], viewer: CaseViewer): Promise<Set<string>> {
   if (numbers.length === 0) return new Set();
-  const rows = await db.select({ number: cases.number }).from(cases).where(and(inArray(cases.number, numbers), readableCases(viewer)));
+  const rows = await db
+    .select({ number: cases.number })
+    .from(cases)
+    .where(and(inArray(cases.number, numbers), readableCases(viewer)));
   return new Set(rows.map((r) => r.number));
 }
-

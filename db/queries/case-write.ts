@@ -19,7 +19,10 @@ export async function insertCase(values: CaseValues, actor: Actor): Promise<Case
   return db.transaction(async (tx) => {
     const year = Number((values.removedOn ?? new Date().toISOString()).slice(0, 4));
     const number = await nextCaseNumber(tx, year);
-    const [row] = await tx.insert(cases).values({ ...values, number, status: "field", createdBy: actor.id, updatedBy: actor.id }).returning();
+    const [row] = await tx
+      .insert(cases)
+      .values({ ...values, number, status: "field", createdBy: actor.id, updatedBy: actor.id })
+      .returning();
     const changes = diffFields({}, values as Record<string, unknown>).filter((c) => c.to !== null && c.to !== "");
     await record(tx, row.id, actor.id, "created", changes);
     return row;
@@ -32,7 +35,13 @@ function isCreateKeyClash(e: unknown): boolean {
 }
 
 const findByCreateKey = async (userId: string, key: string) =>
-  (await db.select().from(cases).where(and(eq(cases.createdBy, userId), eq(cases.createKey, key))).limit(1))[0];
+  (
+    await db
+      .select()
+      .from(cases)
+      .where(and(eq(cases.createdBy, userId), eq(cases.createKey, key)))
+      .limit(1)
+  )[0];
 
 /**
  * Files a case at most once per (person, key). The unique index in PostgreSQL is the judge, so a replay
@@ -69,7 +78,15 @@ async function lockAtVersion(tx: Tx, caseId: string, version: number, attempted:
 }
 
 /** `alsoInTx` runs in the same transaction after the row is written (the step's notice is queued there). */
-export async function updateCase(caseId: string, version: number, patch: CaseValues, actor: Actor, action: string, reason?: string, alsoInTx?: (tx: Tx, row: Case) => Promise<void>) {
+export async function updateCase(
+  caseId: string,
+  version: number,
+  patch: CaseValues,
+  actor: Actor,
+  action: string,
+  reason?: string,
+  alsoInTx?: (tx: Tx, row: Case) => Promise<void>,
+) {
   return db.transaction(async (tx) => {
     const current = await lockAtVersion(tx, caseId, version, Object.keys(patch));
     const changes = diffFields(current as Record<string, unknown>, patch as Record<string, unknown>);
@@ -90,17 +107,34 @@ type FindingValues = Omit<typeof findings.$inferInsert, "caseId" | "id">;
 export async function addFinding(caseId: string, version: number, values: FindingValues, actor: Actor) {
   return db.transaction(async (tx) => {
     const current = await lockAtVersion(tx, caseId, version, []);
-    const [f] = await tx.insert(findings).values({ ...values, caseId, createdBy: actor.id }).returning();
-    await tx.update(cases).set({ version: current.version + 1, updatedBy: actor.id, updatedAt: new Date() }).where(eq(cases.id, caseId));
-    await record(tx, caseId, actor.id, "finding-added", [{ field: `finding ${values.component}`, from: null, to: `${values.damageCode} (severity ${values.severity})` }]);
+    const [f] = await tx
+      .insert(findings)
+      .values({ ...values, caseId, createdBy: actor.id })
+      .returning();
+    await tx
+      .update(cases)
+      .set({ version: current.version + 1, updatedBy: actor.id, updatedAt: new Date() })
+      .where(eq(cases.id, caseId));
+    await record(tx, caseId, actor.id, "finding-added", [
+      { field: `finding ${values.component}`, from: null, to: `${values.damageCode} (severity ${values.severity})` },
+    ]);
     return { finding: f, version: current.version + 1 };
   });
 }
 
-export async function changeFinding(caseId: string, findingId: string, version: number, values: Partial<FindingValues> | null, actor: Actor) {
+export async function changeFinding(
+  caseId: string,
+  findingId: string,
+  version: number,
+  values: Partial<FindingValues> | null,
+  actor: Actor,
+) {
   return db.transaction(async (tx) => {
     const current = await lockAtVersion(tx, caseId, version, []);
-    const [before] = await tx.select().from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
+    const [before] = await tx
+      .select()
+      .from(findings)
+      .where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
     if (!before) throw new RowMissing("That finding");
     let changes: FieldChange[];
     let after = null;
@@ -109,28 +143,43 @@ export async function changeFinding(caseId: string, findingId: string, version: 
       changes = [{ field: `finding ${before.component}`, from: `${before.damageCode} (severity ${before.severity})`, to: null }];
     } else {
       [after] = await tx.update(findings).set(values).where(eq(findings.id, findingId)).returning();
-      changes = diffFields(before as Record<string, unknown>, values as Record<string, unknown>).map((c) => ({ ...c, field: `finding ${before.component}: ${c.field}` }));
+      changes = diffFields(before as Record<string, unknown>, values as Record<string, unknown>).map((c) => ({
+        ...c,
+        field: `finding ${before.component}: ${c.field}`,
+      }));
     }
-    await tx.update(cases).set({ version: current.version + 1, updatedBy: actor.id, updatedAt: new Date() }).where(eq(cases.id, caseId));
+    await tx
+      .update(cases)
+      .set({ version: current.version + 1, updatedBy: actor.id, updatedAt: new Date() })
+      .where(eq(cases.id, caseId));
     await record(tx, caseId, actor.id, values === null ? "finding-removed" : "finding-changed", changes);
     return { finding: after, version: current.version + 1 };
   });
 }
 
 export async function countFindings(caseId: string): Promise<number> {
-  const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(findings).where(eq(findings.caseId, caseId));
+  const [{ n }] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(findings)
+    .where(eq(findings.caseId, caseId));
   return n;
 }
 
 /** The damage code a finding of this case has now, or null when there is no such finding. */
 export async function findingCode(caseId: string, findingId: string): Promise<string | null> {
-  const [f] = await db.select({ code: findings.damageCode }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
+  const [f] = await db
+    .select({ code: findings.damageCode })
+    .from(findings)
+    .where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
   return f?.code ?? null;
 }
 
 /** The case, if its latest change is `action` by `userId` taken at `fromVersion` (so it now stands one above). */
 export async function stepAlreadyTaken(caseId: string, fromVersion: number, action: string, userId: string): Promise<Case | null> {
-  const [row] = await db.select().from(cases).where(and(eq(cases.id, caseId), eq(cases.version, fromVersion + 1)));
+  const [row] = await db
+    .select()
+    .from(cases)
+    .where(and(eq(cases.id, caseId), eq(cases.version, fromVersion + 1)));
   if (!row) return null;
   const [last] = await db
     .select({ action: caseEvents.action, userId: caseEvents.userId })

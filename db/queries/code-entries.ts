@@ -14,14 +14,20 @@ export async function listCodeEntries(list?: CodeListName, opts: { includeRetire
 }
 
 export async function getCodeEntry(list: CodeListName, code: string) {
-  const [row] = await db.select().from(codeEntries).where(and(eq(codeEntries.list, list), eq(codeEntries.code, code)));
+  const [row] = await db
+    .select()
+    .from(codeEntries)
+    .where(and(eq(codeEntries.list, list), eq(codeEntries.code, code)));
   return row ?? null;
 }
 
 /** A new code goes to the end of its list. */
 export async function insertCodeEntry(values: Omit<typeof codeEntries.$inferInsert, "sortOrder">) {
   return db.transaction(async (tx) => {
-    const [{ last }] = await tx.select({ last: max(codeEntries.sortOrder) }).from(codeEntries).where(eq(codeEntries.list, values.list));
+    const [{ last }] = await tx
+      .select({ last: max(codeEntries.sortOrder) })
+      .from(codeEntries)
+      .where(eq(codeEntries.list, values.list));
     const [row] = await tx
       .insert(codeEntries)
       .values({ ...values, sortOrder: (last ?? -1) + 1 })
@@ -43,13 +49,14 @@ export async function updateCodeEntry(list: CodeListName, code: string, values: 
 /** How many cases use a code: damage codes through findings, causes and triggers on the case. */
 export async function casesUsingCode(list: CodeListName, code: string): Promise<number> {
   if (list === "damage") {
-    const [row] = await db.select({ n: countDistinct(findings.caseId) }).from(findings).where(eq(findings.damageCode, code));
+    const [row] = await db
+      .select({ n: countDistinct(findings.caseId) })
+      .from(findings)
+      .where(eq(findings.damageCode, code));
     return row.n;
   }
   const where =
-    list === "cause"
-      ? or(eq(cases.primaryCause, code), sql`${code} = any(${cases.contributingCauses})`)
-      : eq(cases.trigger, code);
+    list === "cause" ? or(eq(cases.primaryCause, code), sql`${code} = any(${cases.contributingCauses})`) : eq(cases.trigger, code);
   const [row] = await db.select({ n: count() }).from(cases).where(where);
   return row.n;
 }
@@ -58,17 +65,20 @@ export async function casesUsingCode(list: CodeListName, code: string): Promise<
 export async function codeUsageCounts(list: CodeListName): Promise<Map<string, number>> {
   const rows =
     list === "damage"
-      ? await db.select({ code: findings.damageCode, n: countDistinct(findings.caseId) }).from(findings).groupBy(findings.damageCode)
+      ? await db
+          .select({ code: findings.damageCode, n: countDistinct(findings.caseId) })
+          .from(findings)
+          .groupBy(findings.damageCode)
       : list === "trigger"
         ? await db.select({ code: cases.trigger, n: count() }).from(cases).groupBy(cases.trigger)
-        : ((
+        : (
             await db.execute<{ code: string; n: string }>(sql`
               select code, count(distinct id) as n from (
                 select id, primary_cause as code from cases where primary_cause is not null
                 union all
                 select id, unnest(contributing_causes) as code from cases
               ) used group by code`)
-          ).rows.map((r) => ({ code: r.code, n: Number(r.n) })));
+          ).rows.map((r) => ({ code: r.code, n: Number(r.n) }));
   return new Map(rows.map((r) => [r.code as string, Number(r.n)]));
 }
 

@@ -24,7 +24,14 @@ export async function findOpenInvitation(tokenHash: string) {
   const [row] = await db
     .select()
     .from(invitations)
-    .where(and(eq(invitations.tokenHash, tokenHash), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())));
+    .where(
+      and(
+        eq(invitations.tokenHash, tokenHash),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+        gt(invitations.expiresAt, new Date()),
+      ),
+    );
   return row ?? null;
 }
 
@@ -43,7 +50,15 @@ export async function revokeInvitation(id: string) {
 
 export async function listPendingInvitations() {
   return db
-    .select({ id: invitations.id, email: invitations.email, name: invitations.name, role: invitations.role, siteId: invitations.siteId, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt })
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      name: invitations.name,
+      role: invitations.role,
+      siteId: invitations.siteId,
+      expiresAt: invitations.expiresAt,
+      createdAt: invitations.createdAt,
+    })
     .from(invitations)
     .where(and(isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())))
     .orderBy(desc(invitations.createdAt));

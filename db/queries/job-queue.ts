@@ -4,12 +4,26 @@ import { sql } from "drizzle-orm";
 import { db } from "@/db";
 import { QUEUES, type QueueName } from "@/lib/jobs/queues";
 
-export type QueueState = { queue: QueueName; waiting: number; running: number; failed: number; lastDone: Date | null; lastError: string | null };
+export type QueueState = {
+  queue: QueueName;
+  waiting: number;
+  running: number;
+  failed: number;
+  lastDone: Date | null;
+  lastError: string | null;
+};
 
 export async function jobQueueStates(): Promise<QueueState[] | null> {
   const { rows: exists } = await db.execute<{ t: string | null }>(sql`select to_regclass('pgboss.job')::text as t`);
   if (!exists[0]?.t) return null; // the queue has not started yet
-  const { rows } = await db.execute<{ name: string; waiting: number; running: number; failed: number; last_done: string | null; last_error: string | null }>(sql`
+  const { rows } = await db.execute<{
+    name: string;
+    waiting: number;
+    running: number;
+    failed: number;
+    last_done: string | null;
+    last_error: string | null;
+  }>(sql`
     select name,
       count(*) filter (where state in ('created', 'retry'))::int as waiting,
       count(*) filter (where state = 'active')::int as running,
@@ -21,6 +35,13 @@ export async function jobQueueStates(): Promise<QueueState[] | null> {
     group by name`);
   return Object.values(QUEUES).map((queue) => {
     const r = rows.find((x) => x.name === queue);
-    return { queue, waiting: r?.waiting ?? 0, running: r?.running ?? 0, failed: r?.failed ?? 0, lastDone: r?.last_done ? new Date(r.last_done) : null, lastError: r?.last_error ?? null };
+    return {
+      queue,
+      waiting: r?.waiting ?? 0,
+      running: r?.running ?? 0,
+      failed: r?.failed ?? 0,
+      lastDone: r?.last_done ? new Date(r.last_done) : null,
+      lastError: r?.last_error ?? null,
+    };
   });
 }

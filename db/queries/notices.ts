@@ -6,7 +6,14 @@ import { codeEntries, user } from "@/db/schema";
 import type { CodeListName } from "@/db/schema";
 import type { NoticeCandidate, NoticePrefs } from "@/lib/notify/notice-kinds";
 
-const candidateColumns = { id: user.id, email: user.email, name: user.name, role: user.role, noticePrefs: user.noticePrefs, banned: user.banned };
+const candidateColumns = {
+  id: user.id,
+  email: user.email,
+  name: user.name,
+  role: user.role,
+  noticePrefs: user.noticePrefs,
+  banned: user.banned,
+};
 export type NoticePerson = NoticeCandidate & { name: string };
 
 export async function peopleWithRoles(roles: string[]): Promise<NoticePerson[]> {

@@ -29,7 +29,10 @@ export async function listOutbox(status?: OutboxStatus, limit = 100) {
 export type OutboxRow = Awaited<ReturnType<typeof listOutbox>>[number];
 
 export async function outboxCounts(): Promise<Record<OutboxStatus, number>> {
-  const rows = await db.select({ status: mailOutbox.status, n: sql<number>`count(*)::int` }).from(mailOutbox).groupBy(mailOutbox.status);
+  const rows = await db
+    .select({ status: mailOutbox.status, n: sql<number>`count(*)::int` })
+    .from(mailOutbox)
+    .groupBy(mailOutbox.status);
   const out: Record<OutboxStatus, number> = { pending: 0, failed: 0, sent: 0 };
   for (const r of rows) out[r.status] = r.n;
   return out;

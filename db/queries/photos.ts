@@ -11,7 +11,8 @@ import { diffFields } from "@/lib/cases/diff";
 import { readableCases, type CaseViewer } from "./case-scope";
 import { findingLabel } from "@/lib/photos/grouping";
 
-export const SIGNED_REFUSAL = "This case is signed and read-only, so its photos cannot be added, changed or deleted. An engineer can reopen it with a reason.";
+export const SIGNED_REFUSAL =
+  "This case is signed and read-only, so its photos cannot be added, changed or deleted. An engineer can reopen it with a reason.";
 
 /** Locks the case, refuses a signed one, and moves its version: a photo is evidence, so a sign-off
  * at the version the engineer saw before this change is refused as stale. */
@@ -19,13 +20,23 @@ async function touchOpenCase(tx: Tx, caseId: string, actorId: string) {
   const [c] = await tx.select({ status: cases.status }).from(cases).where(eq(cases.id, caseId)).for("update");
   if (!c) throw new RowMissing("That case");
   if (c.status === "signed") throw new WriteRefused(SIGNED_REFUSAL);
-  await tx.update(cases).set({ version: sql`${cases.version} + 1`, updatedBy: actorId, updatedAt: new Date() }).where(eq(cases.id, caseId));
+  await tx
+    .update(cases)
+    .set({ version: sql`${cases.version} + 1`, updatedBy: actorId, updatedAt: new Date() })
+    .where(eq(cases.id, caseId));
 }
 
 const photoLabel = (p: Pick<Photo, "fileName" | "sha256">) => `${p.fileName || "photo"} (${p.sha256.slice(0, 12)})`;
 
 async function findByHash(tx: Tx | typeof db, caseId: string, sha256: string): Promise<Photo | null> {
-  return (await tx.select().from(photos).where(and(eq(photos.caseId, caseId), eq(photos.sha256, sha256))))[0] ?? null;
+  return (
+    (
+      await tx
+        .select()
+        .from(photos)
+        .where(and(eq(photos.caseId, caseId), eq(photos.sha256, sha256)))
+    )[0] ?? null
+  );
 }
 
 export const photoRows: PhotoRowStore<Photo> = {
@@ -39,7 +50,12 @@ export const photoRows: PhotoRowStore<Photo> = {
         insert: async (values: NewPhotoRow) => {
           await touchOpenCase(tx, values.caseId, values.uploadedBy);
           const [row] = await tx.insert(photos).values(values).returning();
-          await tx.insert(caseEvents).values({ caseId: values.caseId, userId: values.uploadedBy, action: "photo-added", changes: [{ field: "photo", from: null, to: photoLabel(row) }] });
+          await tx.insert(caseEvents).values({
+            caseId: values.caseId,
+            userId: values.uploadedBy,
+            action: "photo-added",
+            changes: [{ field: "photo", from: null, to: photoLabel(row) }],
+          });
           return row;
         },
       });
@@ -53,7 +69,10 @@ export async function listCasePhotos(caseId: string): Promise<Photo[]> {
 /** A photo with its case's stage and number, only if the viewer may read that case. */
 export async function getReadablePhoto(photoId: string, viewer: CaseViewer) {
   const [row] = await db
-    .select({ photo: photos, caseRow: { id: cases.id, number: cases.number, status: cases.status, siteId: cases.siteId, createdBy: cases.createdBy } })
+    .select({
+      photo: photos,
+      caseRow: { id: cases.id, number: cases.number, status: cases.status, siteId: cases.siteId, createdBy: cases.createdBy },
+    })
     .from(photos)
     .innerJoin(cases, eq(cases.id, photos.caseId))
     .where(and(eq(photos.id, photoId), readableCases(viewer)));
@@ -61,7 +80,10 @@ export async function getReadablePhoto(photoId: string, viewer: CaseViewer) {
 }
 
 export async function findingInCase(findingId: string, caseId: string): Promise<boolean> {
-  const [f] = await db.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
+  const [f] = await db
+    .select({ id: findings.id })
+    .from(findings)
+    .where(and(eq(findings.id, findingId), eq(findings.caseId, caseId)));
   return Boolean(f);
 }
 
@@ -69,7 +91,10 @@ export async function updatePhotoTags(photoId: string, tags: PhotoTags, actorId:
   return db.transaction(async (tx) => {
     const [before] = await tx.select().from(photos).where(eq(photos.id, photoId)).for("update");
     if (!before) throw new RowMissing("That photo");
-    const changes = diffFields(before as Record<string, unknown>, tags as Record<string, unknown>).map((c) => ({ ...c, field: `photo ${photoLabel(before)}: ${c.field}` }));
+    const changes = diffFields(before as Record<string, unknown>, tags as Record<string, unknown>).map((c) => ({
+      ...c,
+      field: `photo ${photoLabel(before)}: ${c.field}`,
+    }));
     if (!changes.length) return before;
     await touchOpenCase(tx, before.caseId, actorId);
     const [after] = await tx.update(photos).set(tags).where(eq(photos.id, photoId)).returning();
@@ -85,7 +110,12 @@ export async function deletePhotoRow(photoId: string, actorId: string): Promise<
     if (!before) throw new RowMissing("That photo");
     await touchOpenCase(tx, before.caseId, actorId);
     await tx.delete(photos).where(eq(photos.id, photoId));
-    await tx.insert(caseEvents).values({ caseId: before.caseId, userId: actorId, action: "photo-removed", changes: [{ field: "photo", from: photoLabel(before), to: null }] });
+    await tx.insert(caseEvents).values({
+      caseId: before.caseId,
+      userId: actorId,
+      action: "photo-removed",
+      changes: [{ field: "photo", from: photoLabel(before), to: null }],
+    });
     return before;
   });
 }
@@ -97,6 +127,9 @@ export async function findingOptions(caseId: string): Promise<{ id: string; labe
 }
 
 export async function photoRowExists(caseId: string, sha256: string): Promise<boolean> {
-  const [r] = await db.select({ id: photos.id }).from(photos).where(and(eq(photos.caseId, caseId), eq(photos.sha256, sha256)));
+  const [r] = await db
+    .select({ id: photos.id })
+    .from(photos)
+    .where(and(eq(photos.caseId, caseId), eq(photos.sha256, sha256)));
   return Boolean(r);
 }

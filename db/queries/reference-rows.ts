@@ -7,7 +7,10 @@ import { codeEntries, sites, type CodeListName } from "@/db/schema";
 /** code -> retired? for the given codes of one list; a code missing from the map is not in the list. */
 export async function codeStates(list: CodeListName, codes: string[]): Promise<Map<string, boolean>> {
   if (codes.length === 0) return new Map();
-  const rows = await db.select({ code: codeEntries.code, retiredAt: codeEntries.retiredAt }).from(codeEntries).where(and(eq(codeEntries.list, list), inArray(codeEntries.code, codes)));
+  const rows = await db
+    .select({ code: codeEntries.code, retiredAt: codeEntries.retiredAt })
+    .from(codeEntries)
+    .where(and(eq(codeEntries.list, list), inArray(codeEntries.code, codes)));
   return new Map(rows.map((r) => [r.code, r.retiredAt !== null]));
 }
 

@@ -8,7 +8,15 @@ import { readableCases, type CaseViewer } from "./case-scope";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-export type PhotoObjectKeys = { id: string; sha256: string; fileName: string; contentType: string; originalKey: string; screenKey: string; thumbKey: string };
+export type PhotoObjectKeys = {
+  id: string;
+  sha256: string;
+  fileName: string;
+  contentType: string;
+  originalKey: string;
+  screenKey: string;
+  thumbKey: string;
+};
 export type LoadedReport = {
   source: ReportSource;
   objects: PhotoObjectKeys[];
@@ -24,7 +32,10 @@ async function labelMaps(): Promise<NonNullable<ReportSource["labels"]>> {
 /** Loads a case by its id (UUID) or its number (TL-26-00042); null when there is none the viewer may read. */
 export async function loadCaseReport(key: { id: string } | { number: string }, viewer: CaseViewer): Promise<LoadedReport | null> {
   if ("id" in key && !UUID.test(key.id)) return null;
-  const [c] = await db.select().from(cases).where(and("id" in key ? eq(cases.id, key.id) : eq(cases.number, key.number), readableCases(viewer)));
+  const [c] = await db
+    .select()
+    .from(cases)
+    .where(and("id" in key ? eq(cases.id, key.id) : eq(cases.number, key.number), readableCases(viewer)));
   if (!c) return null;
 
   const lab = aliasedTable(sites, "lab");
@@ -36,7 +47,13 @@ export async function loadCaseReport(key: { id: string } | { number: string }, v
     db.select().from(findings).where(eq(findings.caseId, c.id)).orderBy(asc(findings.createdAt), asc(findings.id)),
     db.select().from(photos).where(eq(photos.caseId, c.id)).orderBy(asc(photos.createdAt), asc(photos.id)),
     db
-      .select({ number: cases.number, status: cases.status, primaryCause: cases.primaryCause, removedOn: cases.removedOn, note: caseLinks.note })
+      .select({
+        number: cases.number,
+        status: cases.status,
+        primaryCause: cases.primaryCause,
+        removedOn: cases.removedOn,
+        note: caseLinks.note,
+      })
       .from(caseLinks)
       .innerJoin(cases, eq(cases.id, caseLinks.relatedId))
       // Related cases the reader may not read are left out, not masked: their number is news.
@@ -50,7 +67,16 @@ export async function loadCaseReport(key: { id: string } | { number: string }, v
   return {
     source: {
       case: c,
-      site: site ? { code: site.code, name: site.name, endPlayMaxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn, plausibleMaxIn: site.plausibleMaxIn } : null,
+      site: site
+        ? {
+            code: site.code,
+            name: site.name,
+            endPlayMaxIn: site.endPlayMaxIn,
+            dialSpreadIn: site.dialSpreadIn,
+            tapeSpreadIn: site.tapeSpreadIn,
+            plausibleMaxIn: site.plausibleMaxIn,
+          }
+        : null,
       lab: labRows[0] ?? null,
       people: { createdBy: name(c.createdBy), receivedBy: name(c.receivedBy), proposedBy: name(c.proposedBy), signedBy: name(c.signedBy) },
       findings: findingRows,
@@ -59,6 +85,14 @@ export async function loadCaseReport(key: { id: string } | { number: string }, v
       labels,
       generatedAt: new Date(),
     },
-    objects: photoRows.map((p) => ({ id: p.id, sha256: p.sha256, fileName: p.fileName, contentType: p.contentType, originalKey: p.originalKey, screenKey: p.screenKey, thumbKey: p.thumbKey })),
+    objects: photoRows.map((p) => ({
+      id: p.id,
+      sha256: p.sha256,
+      fileName: p.fileName,
+      contentType: p.contentType,
+      originalKey: p.originalKey,
+      screenKey: p.screenKey,
+      thumbKey: p.thumbKey,
+    })),
   };
 }

@@ -18,7 +18,12 @@ export interface FacetValue {
 type FacetRow = { facet: string; value: string | null; n: number };
 
 // Short enough for the sidebar; the full wording of the 0–4 scale is on the case page.
-const SEVERITY_SHORT: Record<number, string> = { 4: "4 · bearing condemned", 3: "3+ · part condemned", 2: "2+ · minor or worse", 1: "1+ · any damage" };
+const SEVERITY_SHORT: Record<number, string> = {
+  4: "4 · bearing condemned",
+  3: "3+ · part condemned",
+  2: "2+ · minor or worse",
+  1: "1+ · any damage",
+};
 
 const FACETS: FacetKey[] = ["status", "trigger", "cause", "code", "component", "class", "site", "severity"];
 
@@ -53,8 +58,9 @@ export function labelFacets(rows: readonly FacetRow[], p: SearchParams, lookups:
   const atLeast = (k: number) => [...perLevel].filter(([v]) => Number(v) >= k).reduce((n, [, c]) => n + c, 0);
 
   const out = {
-    status: list("status", (v) => STAGE_LABELS[v as keyof typeof STAGE_LABELS] ?? v)
-      .sort((a, b) => STAGES.indexOf(a.value as never) - STAGES.indexOf(b.value as never)),
+    status: list("status", (v) => STAGE_LABELS[v as keyof typeof STAGE_LABELS] ?? v).sort(
+      (a, b) => STAGES.indexOf(a.value as never) - STAGES.indexOf(b.value as never),
+    ),
     trigger: byCount(list("trigger", (v) => lookups.labels.trigger.get(v) ?? v)),
     cause: byCount(list("cause", (v) => lookups.labels.cause.get(v) ?? v)),
     code: byCount(list("code", (v) => lookups.labels.damage.get(v) ?? v)),
@@ -62,7 +68,12 @@ export function labelFacets(rows: readonly FacetRow[], p: SearchParams, lookups:
     class: byCount(list("class", (v) => bearingClassLabel(v))),
     site: byCount([...siteCounts].map(([value, count]) => ({ value, label: siteName(value), count, selected: p.site.includes(value) }))),
     severity: SEVERITIES.filter((s) => s.code > 0)
-      .map((s) => ({ value: String(s.code), label: SEVERITY_SHORT[s.code] ?? `${s.code} or worse`, count: atLeast(s.code), selected: p.severity === s.code }))
+      .map((s) => ({
+        value: String(s.code),
+        label: SEVERITY_SHORT[s.code] ?? `${s.code} or worse`,
+        count: atLeast(s.code),
+        selected: p.severity === s.code,
+      }))
       .reverse(),
   } satisfies Record<FacetKey, FacetValue[]>;
   return Object.fromEntries(FACETS.map((f) => [f, out[f]])) as Record<FacetKey, FacetValue[]>;

@@ -44,23 +44,43 @@ const SNIPPETS_SHOWN = 2;
 const PLAIN_PREVIEW = 180;
 
 export async function loadHits(
-  page: readonly { id: string; rank: number }[], clauses: readonly PreparedClause[], lookups: SearchLookups, hasQuery: boolean,
+  page: readonly { id: string; rank: number }[],
+  clauses: readonly PreparedClause[],
+  lookups: SearchLookups,
+  hasQuery: boolean,
 ): Promise<SearchHit[]> {
   if (page.length === 0) return [];
   const ids = page.map((p) => p.id);
   const [rows, findingRows] = await Promise.all([
     db
       .select({
-        id: cases.id, number: cases.number, status: cases.status, serial: cases.serial, carMark: cases.carMark, carNumber: cases.carNumber,
-        trigger: cases.trigger, primaryCause: cases.primaryCause, bearingClass: cases.bearingClass, removedOn: cases.removedOn,
-        siteName: sites.name, fieldNotes: cases.fieldNotes, teardownNotes: cases.teardownNotes, verdictNotes: cases.verdictNotes,
+        id: cases.id,
+        number: cases.number,
+        status: cases.status,
+        serial: cases.serial,
+        carMark: cases.carMark,
+        carNumber: cases.carNumber,
+        trigger: cases.trigger,
+        primaryCause: cases.primaryCause,
+        bearingClass: cases.bearingClass,
+        removedOn: cases.removedOn,
+        siteName: sites.name,
+        fieldNotes: cases.fieldNotes,
+        teardownNotes: cases.teardownNotes,
+        verdictNotes: cases.verdictNotes,
         correctiveAction: cases.correctiveAction,
       })
       .from(cases)
       .leftJoin(sites, eq(sites.id, cases.siteId))
       .where(inArray(cases.id, ids)),
     db
-      .select({ caseId: findings.caseId, component: findings.component, code: findings.damageCode, severity: findings.severity, notes: findings.notes })
+      .select({
+        caseId: findings.caseId,
+        component: findings.component,
+        code: findings.damageCode,
+        severity: findings.severity,
+        notes: findings.notes,
+      })
       .from(findings)
       .where(inArray(findings.caseId, ids))
       .orderBy(asc(findings.createdAt)),
@@ -98,17 +118,32 @@ export async function loadHits(
     const hitFindings = fs
       .filter((f) => !seen.has(`${f.component}|${f.code}`) && seen.add(`${f.component}|${f.code}`))
       .map((f) => ({
-        component: f.component, componentLabel: componentLabel(f.component), code: f.code,
-        label: lookups.labels.damage.get(f.code) ?? f.code, severity: f.severity,
+        component: f.component,
+        componentLabel: componentLabel(f.component),
+        code: f.code,
+        label: lookups.labels.damage.get(f.code) ?? f.code,
+        severity: f.severity,
         matched: namedCodes.has(f.code) || (f.code !== "none" && namedParts.has(f.component)),
       }));
-    return [{
-      id, caseNumber: r.number, number: highlightSubstrings(r.number, idNeedles), status: r.status,
-      serial: highlightSubstrings(r.serial, idNeedles), car: highlightSubstrings(`${r.carMark} ${r.carNumber}`.trim(), idNeedles),
-      trigger: r.trigger, triggerLabel: lookups.labels.trigger.get(r.trigger) ?? r.trigger,
-      causeLabel: r.primaryCause ? (lookups.labels.cause.get(r.primaryCause) ?? r.primaryCause) : null,
-      bearingClass: r.bearingClass, removedOn: r.removedOn, siteName: r.siteName,
-      maxSeverity: fs.reduce((m, f) => Math.max(m, f.severity), 0), score: Number(rank), findings: hitFindings, snippets,
-    }];
+    return [
+      {
+        id,
+        caseNumber: r.number,
+        number: highlightSubstrings(r.number, idNeedles),
+        status: r.status,
+        serial: highlightSubstrings(r.serial, idNeedles),
+        car: highlightSubstrings(`${r.carMark} ${r.carNumber}`.trim(), idNeedles),
+        trigger: r.trigger,
+        triggerLabel: lookups.labels.trigger.get(r.trigger) ?? r.trigger,
+        causeLabel: r.primaryCause ? (lookups.labels.cause.get(r.primaryCause) ?? r.primaryCause) : null,
+        bearingClass: r.bearingClass,
+        removedOn: r.removedOn,
+        siteName: r.siteName,
+        maxSeverity: fs.reduce((m, f) => Math.max(m, f.severity), 0),
+        score: Number(rank),
+        findings: hitFindings,
+        snippets,
+      },
+    ];
   });
 }

@@ -15,7 +15,13 @@ export interface SearchLookups {
 export async function loadSearchLookups(): Promise<SearchLookups> {
   const [entries, siteRows] = await Promise.all([
     db
-      .select({ list: codeEntries.list, code: codeEntries.code, label: codeEntries.label, synonyms: codeEntries.synonyms, retiredAt: codeEntries.retiredAt })
+      .select({
+        list: codeEntries.list,
+        code: codeEntries.code,
+        label: codeEntries.label,
+        synonyms: codeEntries.synonyms,
+        retiredAt: codeEntries.retiredAt,
+      })
       .from(codeEntries)
       .orderBy(asc(codeEntries.list), asc(codeEntries.sortOrder)),
     db.select({ id: sites.id, code: sites.code, name: sites.name }).from(sites).orderBy(asc(sites.name)),
@@ -23,7 +29,9 @@ export async function loadSearchLookups(): Promise<SearchLookups> {
   const labelsOf = (list: string) => new Map(entries.filter((e) => e.list === list).map((e) => [e.code, e.label]));
   return {
     // Retired codes stay searchable: old cases still carry them.
-    damageEntries: entries.filter((e) => e.list === "damage").map((e) => ({ code: e.code, label: e.label, synonyms: e.synonyms, retired: !!e.retiredAt })),
+    damageEntries: entries
+      .filter((e) => e.list === "damage")
+      .map((e) => ({ code: e.code, label: e.label, synonyms: e.synonyms, retired: !!e.retiredAt })),
     labels: { trigger: labelsOf("trigger"), cause: labelsOf("cause"), damage: labelsOf("damage") },
     sites: siteRows,
   };

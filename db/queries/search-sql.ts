@@ -36,12 +36,18 @@ export const isCaseField = (c: PreparedClause) => c.triggers.length > 0 || c.cla
 
 /** Every word clause at once, answered by the narrative index (or only those given). */
 export function documentQuery(clauses: readonly PreparedClause[]): string {
-  return clauses.filter((c) => c.kind !== "identifier" && !isCaseField(c)).map(clauseTsquery).filter(Boolean).join(" & ");
+  return clauses
+    .filter((c) => c.kind !== "identifier" && !isCaseField(c))
+    .map(clauseTsquery)
+    .filter(Boolean)
+    .join(" & ");
 }
 
 /** A trigger or class clause: the case's field, or (where the narrative is at hand) its words. */
 export function caseFieldSql(c: PreparedClause, withText: boolean): SQL {
-  const field = c.triggers.length ? sql`s.trigger = ANY(${param(c.triggers)}::text[])` : sql`s.bearing_class = ANY(${param(c.classes)}::text[])`;
+  const field = c.triggers.length
+    ? sql`s.trigger = ANY(${param(c.triggers)}::text[])`
+    : sql`s.bearing_class = ANY(${param(c.classes)}::text[])`;
   return withText && c.tsquery ? sql`(${field} OR s.document @@ ${c.tsquery}::tsquery)` : field;
 }
 
@@ -82,7 +88,11 @@ export function wordMatchSql(clauses: readonly PreparedClause[]): { match: SQL |
   if (!ids) return { match: textAll, structured: null, join: null };
   const rest = documentQuery(clauses.filter((c) => !namesFinding(c)));
   const byFinding = rest ? sql`(${STRUCTURED_HIT} AND s.document @@ ${rest}::tsquery)` : STRUCTURED_HIT;
-  return { match: textAll ? sql`(${textAll} OR ${byFinding})` : byFinding, structured: STRUCTURED_HIT, join: sql`LEFT JOIN (${ids}) sf ON sf.case_id = s.case_id` };
+  return {
+    match: textAll ? sql`(${textAll} OR ${byFinding})` : byFinding,
+    structured: STRUCTURED_HIT,
+    join: sql`LEFT JOIN (${ids}) sf ON sf.case_id = s.case_id`,
+  };
 }
 
 /** A serial, car or case number in part; or the same token in the narrative ("1/16"). */
@@ -98,7 +108,10 @@ export function identifierSql(c: PreparedClause): SQL {
  * a case holding the very finding the words name (part, row, zone and damage together) first.
  */
 export function rankSql(clauses: readonly PreparedClause[], withText: boolean, structured: SQL | null = null): SQL {
-  const tsqueries = clauses.filter((c) => c.kind !== "identifier").map((c) => c.tsquery).filter(Boolean);
+  const tsqueries = clauses
+    .filter((c) => c.kind !== "identifier")
+    .map((c) => c.tsquery)
+    .filter(Boolean);
   const codes = [...new Set(clauses.flatMap((c) => c.codes))];
   const components = [...new Set(clauses.flatMap((c) => c.components))];
   const pairs = components.flatMap((p) => codes.map((code) => `${p}|${code}`));
@@ -117,7 +130,16 @@ export type FacetKey = MultiFacet | "severity";
 
 /** The column each facet counts by, on case_search rows under the given alias. */
 export function facetColumn(f: FacetKey, alias: string): SQL {
-  const column = { trigger: "trigger", cause: "primary_cause", class: "bearing_class", site: "site_id::text", status: "status", severity: "max_severity::text", code: "damage_codes", component: "components" }[f];
+  const column = {
+    trigger: "trigger",
+    cause: "primary_cause",
+    class: "bearing_class",
+    site: "site_id::text",
+    status: "status",
+    severity: "max_severity::text",
+    code: "damage_codes",
+    component: "components",
+  }[f];
   return sql.raw(`${alias}.${column}`);
 }
 

@@ -47,8 +47,10 @@ export async function prepareClauses(clauses: readonly SearchClause[]): Promise<
   return rows.map((r) => {
     const clause = clauses[r.i - 1];
     const best = r.similarities[0] ?? 0;
-    const kept = r.corrections.map((word, k) => ({ word, sim: r.similarities[k], tsquery: r.alternatives[k] }))
-      .filter((x) => x.sim >= best - NEAR_BEST).slice(0, MAX_CORRECTIONS);
+    const kept = r.corrections
+      .map((word, k) => ({ word, sim: r.similarities[k], tsquery: r.alternatives[k] }))
+      .filter((x) => x.sim >= best - NEAR_BEST)
+      .slice(0, MAX_CORRECTIONS);
     const parts = [r.base, ...kept.map((x) => x.tsquery)].filter((q) => q.trim() !== "");
     const tsquery = parts.length > 1 ? parts.map((q) => `( ${q} )`).join(" | ") : (parts[0] ?? "");
     return {
@@ -62,4 +64,12 @@ export async function prepareClauses(clauses: readonly SearchClause[]): Promise<
 
 /** Clauses that can still match something: PostgreSQL may drop a word as a stop word. */
 export const usableClauses = (prepared: readonly PreparedClause[]) =>
-  prepared.filter((c) => c.kind === "identifier" || c.tsquery !== "" || c.codes.length > 0 || c.components.length > 0 || c.triggers.length > 0 || c.classes.length > 0);
+  prepared.filter(
+    (c) =>
+      c.kind === "identifier" ||
+      c.tsquery !== "" ||
+      c.codes.length > 0 ||
+      c.components.length > 0 ||
+      c.triggers.length > 0 ||
+      c.classes.length > 0,
+  );

@@ -11,7 +11,18 @@ import { M_COLUMNS, activeFacetsSql, and, passiveArrayFacetsSql, passiveScalarFa
 import { labelFacets, type FacetValue } from "./search-facets";
 import { loadHits, type SearchHit } from "./search-hits";
 import { loadSearchLookups } from "./search-lookups";
-import { caseFieldSql, documentQuery, facetFilters, identifierSql, isCaseField, orderSql, rankSql, wordMatchSql, type FacetKey, type SearchViewer } from "./search-sql";
+import {
+  caseFieldSql,
+  documentQuery,
+  facetFilters,
+  identifierSql,
+  isCaseField,
+  orderSql,
+  rankSql,
+  wordMatchSql,
+  type FacetKey,
+  type SearchViewer,
+} from "./search-sql";
 import { readableIn } from "./case-scope";
 import { prepareClauses, usableClauses } from "./search-terms";
 
@@ -25,7 +36,15 @@ export interface SearchResult {
   readonly hits: SearchHit[];
   readonly facets: Record<FacetKey, FacetValue[]>;
   /** How the query was read: the clauses, the codes their shop words named, any corrections. */
-  readonly understood: { text: string; kind: string; codes: { code: string; label: string }[]; corrections: string[]; reading: string; role: string; without: string }[];
+  readonly understood: {
+    text: string;
+    kind: string;
+    codes: { code: string; label: string }[];
+    corrections: string[];
+    reading: string;
+    role: string;
+    without: string;
+  }[];
 }
 
 type PageRow = { id: string; rank: number };
@@ -54,9 +73,25 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
   const rank = ranked ? rankSql(prepared, docQuery !== "", words.structured) : sql`0`;
   const limit = sql`LIMIT ${PAGE_SIZE} OFFSET ${(params.page - 1) * PAGE_SIZE}`;
 
-  const key = JSON.stringify([viewer.role, viewer.id, viewer.siteId, docQuery, prepared.map((c) => [c.rows, c.zones, c.triggers, c.classes, c.codes, c.components]), identifiers.map((c) => c.text), params.from, params.to, params.severity, MULTI_FACETS.map((f) => params[f])]);
+  const key = JSON.stringify([
+    viewer.role,
+    viewer.id,
+    viewer.siteId,
+    docQuery,
+    prepared.map((c) => [c.rows, c.zones, c.triggers, c.classes, c.codes, c.components]),
+    identifiers.map((c) => c.text),
+    params.from,
+    params.to,
+    params.severity,
+    MULTI_FACETS.map((f) => params[f]),
+  ]);
   const cached = cachedFacets(key, revision);
-  const pageOnly = () => db.execute<PageRow>(sql`SELECT s.case_id AS id, ${rank}::real AS rank FROM ${from} WHERE ${where} ORDER BY ${orderSql(params.sort, ranked)} ${limit}`).then((r) => r.rows);
+  const pageOnly = () =>
+    db
+      .execute<PageRow>(
+        sql`SELECT s.case_id AS id, ${rank}::real AS rank FROM ${from} WHERE ${where} ORDER BY ${orderSql(params.sort, ranked)} ${limit}`,
+      )
+      .then((r) => r.rows);
 
   let page: PageRow[];
   let facetRows: FacetRow[];
@@ -67,11 +102,14 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
     // counts; without, the page comes straight off the date index. Codes and parts are counted
     // by a statement of their own, and each chosen facet too, all at once on their own connections.
     const scalars = docQuery
-      ? db.execute<{ facets: FacetRow[]; page: PageRow[] }>(sql`
+      ? db
+          .execute<{ facets: FacetRow[]; page: PageRow[] }>(
+            sql`
           WITH m AS MATERIALIZED (SELECT ${M_COLUMNS}, ${rank}::real AS rank FROM ${from} WHERE ${where}),
           facets AS (${passiveScalarFacetsSql(filters)}),
           page AS (SELECT m.case_id AS id, m.rank FROM m ORDER BY ${orderSql(params.sort, ranked, "m")} ${limit})
-          SELECT (SELECT coalesce(json_agg(facets), '[]') FROM facets) AS facets, (SELECT coalesce(json_agg(page), '[]') FROM page) AS page`)
+          SELECT (SELECT coalesce(json_agg(facets), '[]') FROM facets) AS facets, (SELECT coalesce(json_agg(page), '[]') FROM page) AS page`,
+          )
           .then((r) => r.rows[0])
       : Promise.all([
           db.execute<{ facets: FacetRow[] }>(sql`
@@ -81,7 +119,9 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
         ]).then(([c, p]) => ({ facets: c.rows[0].facets, page: p }));
     const arrays = passiveArrayFacetsSql(filters);
     const arrayCounts = arrays
-      ? db.execute<FacetRow>(sql`WITH m AS MATERIALIZED (SELECT s.damage_codes, s.components FROM ${from} WHERE ${where}) ${arrays}`).then((r) => r.rows)
+      ? db
+          .execute<FacetRow>(sql`WITH m AS MATERIALIZED (SELECT s.damage_codes, s.components FROM ${from} WHERE ${where}) ${arrays}`)
+          .then((r) => r.rows)
       : Promise.resolve([]);
     const active = activeFacetsSql(from, base, filters).map((q) => db.execute<FacetRow>(q).then((r) => r.rows));
     const [first, ...counted] = await Promise.all([scalars, arrayCounts, ...active]);
@@ -97,7 +137,11 @@ export async function searchCases(params: SearchParams, viewer: SearchViewer): P
     hits: await loadHits(page, prepared, lookups, params.q.trim() !== ""),
     facets: labelFacets(facetRows, params, lookups),
     understood: prepared.map((c, i) => ({
-      text: c.text, kind: c.kind, corrections: [...c.corrections], reading: c.reading, role: roleOf(c),
+      text: c.text,
+      kind: c.kind,
+      corrections: [...c.corrections],
+      reading: c.reading,
+      role: roleOf(c),
       without: queryWithout(prepared, i),
       codes: c.codes.map((code) => ({ code, label: lookups.labels.damage.get(code) ?? code })),
     })),

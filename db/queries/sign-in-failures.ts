@@ -14,9 +14,10 @@ export async function readCounters(keys: string[]): Promise<Map<string, Counter>
  * that has run out starts again at one. Locks the key for lockMinutes once it reaches lockAt.
  */
 export async function addFailure(key: string, windowSeconds: number, lockAt: number | null, lockMinutes: number): Promise<Counter> {
-  const lockClause = lockAt === null
-    ? sql`null`
-    : sql`case when (case when ${signInFailures.windowStart} < now() - make_interval(secs => ${windowSeconds}) then 1 else ${signInFailures.failures} + 1 end) >= ${lockAt} then now() + make_interval(mins => ${lockMinutes}) else ${signInFailures.lockedUntil} end`;
+  const lockClause =
+    lockAt === null
+      ? sql`null`
+      : sql`case when (case when ${signInFailures.windowStart} < now() - make_interval(secs => ${windowSeconds}) then 1 else ${signInFailures.failures} + 1 end) >= ${lockAt} then now() + make_interval(mins => ${lockMinutes}) else ${signInFailures.lockedUntil} end`;
   const [row] = await db
     .insert(signInFailures)
     .values({ key, failures: 1, lockedUntil: lockAt !== null && lockAt <= 1 ? sql`now() + make_interval(mins => ${lockMinutes})` : null })

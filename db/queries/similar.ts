@@ -28,13 +28,32 @@ export type SimilarDetails = {
 export async function similarDetails(caseId: string, topIds: string[]): Promise<SimilarDetails> {
   const [rows, photoRows, links, labels] = await Promise.all([
     db
-      .select({ id: cases.id, number: cases.number, status: cases.status, trigger: cases.trigger, primaryCause: cases.primaryCause, bearingClass: cases.bearingClass, removedOn: cases.removedOn, siteName: sites.name })
-      .from(cases).leftJoin(sites, eq(sites.id, cases.siteId)).where(inArray(cases.id, topIds)),
+      .select({
+        id: cases.id,
+        number: cases.number,
+        status: cases.status,
+        trigger: cases.trigger,
+        primaryCause: cases.primaryCause,
+        bearingClass: cases.bearingClass,
+        removedOn: cases.removedOn,
+        siteName: sites.name,
+      })
+      .from(cases)
+      .leftJoin(sites, eq(sites.id, cases.siteId))
+      .where(inArray(cases.id, topIds)),
     db
       .select({ id: photos.id, caseId: photos.caseId, component: photos.component })
-      .from(photos).where(inArray(photos.caseId, [caseId, ...topIds])).orderBy(asc(photos.createdAt), asc(photos.id)),
-    db.select({ relatedId: caseLinks.relatedId }).from(caseLinks).where(and(eq(caseLinks.caseId, caseId), inArray(caseLinks.relatedId, topIds))),
-    db.select({ list: codeEntries.list, code: codeEntries.code, label: codeEntries.label }).from(codeEntries).where(inArray(codeEntries.list, ["trigger", "cause"])),
+      .from(photos)
+      .where(inArray(photos.caseId, [caseId, ...topIds]))
+      .orderBy(asc(photos.createdAt), asc(photos.id)),
+    db
+      .select({ relatedId: caseLinks.relatedId })
+      .from(caseLinks)
+      .where(and(eq(caseLinks.caseId, caseId), inArray(caseLinks.relatedId, topIds))),
+    db
+      .select({ list: codeEntries.list, code: codeEntries.code, label: codeEntries.label })
+      .from(codeEntries)
+      .where(inArray(codeEntries.list, ["trigger", "cause"])),
   ]);
   return { rows, photos: photoRows, linkedIds: links.map((l) => l.relatedId), labels };
 }

@@ -32,14 +32,21 @@ export async function insertSite(values: typeof sites.$inferInsert) {
 }
 
 export async function updateSite(id: string, values: Partial<typeof sites.$inferInsert>) {
-  const [row] = await db.update(sites).set({ ...values, updatedAt: new Date() }).where(eq(sites.id, id)).returning();
+  const [row] = await db
+    .update(sites)
+    .set({ ...values, updatedAt: new Date() })
+    .where(eq(sites.id, id))
+    .returning();
   return row ?? null;
 }
 
 /** How many records point at a site: any of them keeps it from being deleted. */
 export async function siteUsage(id: string) {
   const [[c], [u], [i]] = await Promise.all([
-    db.select({ n: count() }).from(cases).where(or(eq(cases.siteId, id), eq(cases.labSiteId, id))),
+    db
+      .select({ n: count() })
+      .from(cases)
+      .where(or(eq(cases.siteId, id), eq(cases.labSiteId, id))),
     db.select({ n: count() }).from(user).where(eq(user.siteId, id)),
     db.select({ n: count() }).from(invitations).where(eq(invitations.siteId, id)),
   ]);
@@ -50,7 +57,11 @@ export async function siteUsage(id: string) {
 export async function siteUsageCounts() {
   const [removed, tornDown, userRows] = await Promise.all([
     db.select({ siteId: cases.siteId, n: count() }).from(cases).groupBy(cases.siteId),
-    db.select({ siteId: cases.labSiteId, n: count() }).from(cases).where(or(isNull(cases.siteId), ne(cases.labSiteId, cases.siteId))).groupBy(cases.labSiteId),
+    db
+      .select({ siteId: cases.labSiteId, n: count() })
+      .from(cases)
+      .where(or(isNull(cases.siteId), ne(cases.labSiteId, cases.siteId)))
+      .groupBy(cases.labSiteId),
     db.select({ siteId: user.siteId, n: count() }).from(user).groupBy(user.siteId),
   ]);
   const out = new Map<string, { cases: number; users: number }>();

@@ -91,8 +91,18 @@ export const cases = pgTable(
     index("cases_list_removed_desc_idx").on(t.removedOn.desc().nullsLast(), t.number.desc()),
     index("cases_list_removed_asc_idx").on(t.removedOn.asc().nullsLast(), t.number.desc()),
     // The car order (mark, then the number by length so 9 comes before 10), each way.
-    index("cases_list_car_asc_idx").on(sql`nullif(${t.carMark}, '') asc nulls last`, sql`length(${t.carNumber}) asc nulls last`, sql`${t.carNumber} asc nulls last`, t.number.desc().nullsLast()),
-    index("cases_list_car_desc_idx").on(sql`nullif(${t.carMark}, '') desc nulls last`, sql`length(${t.carNumber}) desc nulls last`, sql`${t.carNumber} desc nulls last`, t.number.desc().nullsLast()),
+    index("cases_list_car_asc_idx").on(
+      sql`nullif(${t.carMark}, '') asc nulls last`,
+      sql`length(${t.carNumber}) asc nulls last`,
+      sql`${t.carNumber} asc nulls last`,
+      t.number.desc().nullsLast(),
+    ),
+    index("cases_list_car_desc_idx").on(
+      sql`nullif(${t.carMark}, '') desc nulls last`,
+      sql`length(${t.carNumber}) desc nulls last`,
+      sql`${t.carNumber} desc nulls last`,
+      t.number.desc().nullsLast(),
+    ),
     uniqueIndex("cases_create_key_idx").on(t.createdBy, t.createKey),
     // later removals of the same car and position (missed keep calls)
     index("cases_position_idx").on(t.carMark, t.carNumber, t.axle, t.side, t.removedOn),

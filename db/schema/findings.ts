@@ -7,7 +7,9 @@ export const findings = pgTable(
   "findings",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    caseId: uuid("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
+    caseId: uuid("case_id")
+      .notNull()
+      .references(() => cases.id, { onDelete: "cascade" }),
     component: text("component").notNull(),
     row: text("row").$type<"inboard" | "outboard">(),
     damageCode: text("damage_code").notNull(),

@@ -9,7 +9,9 @@ export const caseEvents = pgTable(
   "case_events",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    caseId: uuid("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
+    caseId: uuid("case_id")
+      .notNull()
+      .references(() => cases.id, { onDelete: "cascade" }),
     at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
     userId: text("user_id").references(() => user.id),
     action: text("action").notNull(),
@@ -23,8 +25,12 @@ export const caseEvents = pgTable(
 export const caseLinks = pgTable(
   "case_links",
   {
-    caseId: uuid("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
-    relatedId: uuid("related_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
+    caseId: uuid("case_id")
+      .notNull()
+      .references(() => cases.id, { onDelete: "cascade" }),
+    relatedId: uuid("related_id")
+      .notNull()
+      .references(() => cases.id, { onDelete: "cascade" }),
     note: text("note").notNull().default(""),
     createdBy: text("created_by").references(() => user.id),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),

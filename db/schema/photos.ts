@@ -8,7 +8,9 @@ export const photos = pgTable(
   "photos",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    caseId: uuid("case_id").notNull().references(() => cases.id, { onDelete: "cascade" }),
+    caseId: uuid("case_id")
+      .notNull()
+      .references(() => cases.id, { onDelete: "cascade" }),
     component: text("component"),
     row: text("row"),
     findingId: uuid("finding_id").references(() => findings.id, { onDelete: "set null" }),

@@ -11,7 +11,9 @@ const tsvector = customType<{ data: string }>({ dataType: () => "tsvector" });
 
 /** The columns both search tables carry (fresh builders for each table). */
 const searchColumns = () => ({
-  caseId: uuid("case_id").primaryKey().references(() => cases.id, { onDelete: "cascade" }),
+  caseId: uuid("case_id")
+    .primaryKey()
+    .references(() => cases.id, { onDelete: "cascade" }),
   number: text("number").notNull(),
   status: text("status").notNull(),
   trigger: text("trigger").notNull(),
@@ -48,17 +50,13 @@ export const caseSearch = pgTable("case_search", searchColumns(), (t) => [
 
 // The narrative of each case: identifiers (weight A), teardown, findings and verdict (B),
 // field notes and corrective action (C), and its damage codes and parts as "dc:"/"pc:" lexemes.
-export const caseSearchText = pgTable(
-  "case_search_text",
-  { ...searchColumns(), document: tsvector("document").notNull() },
-  (t) => [index("case_search_text_document_idx").using("gin", t.document)],
-);
+export const caseSearchText = pgTable("case_search_text", { ...searchColumns(), document: tsvector("document").notNull() }, (t) => [
+  index("case_search_text_document_idx").using("gin", t.document),
+]);
 
 // Distinct words seen in case narratives: a typo's nearest known words come from here.
-export const searchWords = pgTable(
-  "search_words",
-  { word: text("word").primaryKey() },
-  (t) => [index("search_words_trgm_idx").using("gin", t.word.op("gin_trgm_ops"))],
-);
+export const searchWords = pgTable("search_words", { word: text("word").primaryKey() }, (t) => [
+  index("search_words_trgm_idx").using("gin", t.word.op("gin_trgm_ops")),
+]);
 
 export type CaseSearchRow = typeof caseSearch.$inferSelect;

@@ -18,5 +18,7 @@ export const tallyCells = pgTable(
     outcome: text("outcome"),
     n: integer("n").notNull(),
   },
-  (t) => [unique("tally_cells_key").on(t.month, t.siteId, t.bearingClass, t.trigger, t.signed, t.primaryCause, t.outcome).nullsNotDistinct()],
+  (t) => [
+    unique("tally_cells_key").on(t.month, t.siteId, t.bearingClass, t.trigger, t.signed, t.primaryCause, t.outcome).nullsNotDistinct(),
+  ],
 );

@@ -17,7 +17,9 @@ export const yieldCells = pgTable(
     outcome: text("outcome").notNull(),
     n: integer("n").notNull(),
   },
-  (t) => [unique("yield_cells_key").on(t.month, t.siteId, t.bearingClass, t.trigger, t.createdBy, t.removeCall, t.outcome).nullsNotDistinct()],
+  (t) => [
+    unique("yield_cells_key").on(t.month, t.siteId, t.bearingClass, t.trigger, t.createdBy, t.removeCall, t.outcome).nullsNotDistinct(),
+  ],
 );
 
 /**
@@ -43,7 +45,20 @@ export const yieldAlarmCells = pgTable(
   },
   (t) => [
     unique("yield_alarm_cells_key")
-      .on(t.month, t.siteId, t.bearingClass, t.trigger, t.createdBy, t.signed, t.outcome, t.margin, t.reading, t.alarmLevel, t.detectorId, t.detectorLocation)
+      .on(
+        t.month,
+        t.siteId,
+        t.bearingClass,
+        t.trigger,
+        t.createdBy,
+        t.signed,
+        t.outcome,
+        t.margin,
+        t.reading,
+        t.alarmLevel,
+        t.detectorId,
+        t.detectorLocation,
+      )
       .nullsNotDistinct(),
   ],
 );

@@ -5,7 +5,9 @@ export type PolicyUnit = "in" | "mm";
 
 /** Plain decimal text without trailing zeros: 0.06250 → "0.0625". */
 function trimmed(value: number, decimals: number): string {
-  return roundTo(value, decimals).toFixed(decimals).replace(/\.?0+$/, "");
+  return roundTo(value, decimals)
+    .toFixed(decimals)
+    .replace(/\.?0+$/, "");
 }
 
 /** Inches to 5 places (the stored scale); millimetres to 4 (1/16 in = 1.5875 mm exactly). */

@@ -42,7 +42,14 @@ export const auth = betterAuth({
   rateLimit: { enabled: process.env.TEARLINE_TEST !== "1", window: 60, max: 100, customRules: { "/sign-in/email": false } },
   // The library's own account endpoints would skip Tearline's rules (password length, invitations,
   // no self-demotion, history kept); the app's routes do that work, so these are switched off over HTTP.
-  disabledPaths: ["/admin/create-user", "/admin/set-user-password", "/admin/set-role", "/admin/remove-user", "/admin/impersonate-user", "/admin/update-user"],
+  disabledPaths: [
+    "/admin/create-user",
+    "/admin/set-user-password",
+    "/admin/set-role",
+    "/admin/remove-user",
+    "/admin/impersonate-user",
+    "/admin/update-user",
+  ],
   plugins: [admin({ ac, roles: authRoles, defaultRole: "inspector", adminRoles: ["admin"] }), nextCookies()],
 });
 

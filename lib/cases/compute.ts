@@ -1,5 +1,14 @@
 // What Tearline works out from a case's entries: the field call, end-play mean and service time.
-import { decideFieldCall, evaluateEndPlay, evaluateHandRoll, monthsBetween, unconfirmedSafety, type EndPlayPolicy, type HandRollGrid, type VisualFinding } from "@/lib/field";
+import {
+  decideFieldCall,
+  evaluateEndPlay,
+  evaluateHandRoll,
+  monthsBetween,
+  unconfirmedSafety,
+  type EndPlayPolicy,
+  type HandRollGrid,
+  type VisualFinding,
+} from "@/lib/field";
 import type { FieldChecks } from "./schemas";
 
 export type FieldCallSummary = {
@@ -14,7 +23,14 @@ export function evaluateFieldChecks(checks: FieldChecks, policy: EndPlayPolicy, 
   const endPlay = checks.endPlay && checks.endPlay.trials.length ? evaluateEndPlay(checks.endPlay, policy) : undefined;
   const safetyUnconfirmed = unconfirmedSafety(checks.confirmations, trigger);
   const endPlayRequired = !(trigger && policy.endPlayOptionalFor?.includes(trigger));
-  const call = decideFieldCall({ handRoll, endPlay, visual: checks.visual as VisualFinding[], waysideAlarmConfirmed: checks.waysideAlarmConfirmed, endPlayRequired, safetyUnconfirmed });
+  const call = decideFieldCall({
+    handRoll,
+    endPlay,
+    visual: checks.visual as VisualFinding[],
+    waysideAlarmConfirmed: checks.waysideAlarmConfirmed,
+    endPlayRequired,
+    safetyUnconfirmed,
+  });
   return { handRoll, endPlay, call, safetyUnconfirmed };
 }
 

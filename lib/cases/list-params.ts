@@ -70,7 +70,12 @@ const whole = ({ what, min, max, fallback }: (typeof WHOLE_RULES)[keyof typeof W
   const words = wholeWords(what);
   return z.preprocess(
     blank,
-    z.coerce.number({ message: words.notNumber }).int(words.notWhole).min(min, words.below(min)).max(max, words.above(max)).default(fallback),
+    z.coerce
+      .number({ message: words.notNumber })
+      .int(words.notWhole)
+      .min(min, words.below(min))
+      .max(max, words.above(max))
+      .default(fallback),
   );
 };
 
@@ -103,4 +108,3 @@ type QueryInput = Parameters<typeof flattenQuery>[0];
 export function parseListParams(input: QueryInput): ListParams {
   return listParamsSchema.parse(flattenQuery(input));
 }
-

@@ -42,17 +42,44 @@ const same = (s: string) => s;
 /** Each comma-list filter: what it names, which items it takes, and what to say about the others. */
 export const LIST_RULES: Record<ListKey, ListRule> = {
   status: { what: "stage", ok: (s) => (STAGES as readonly string[]).includes(s), hint: `use ${STAGES.join(", ")}.`, normalise: same },
-  trigger: { what: "trigger", ok: (s) => CODE.test(s), hint: "trigger codes are lower-case words joined by hyphens, like wayside-hot.", normalise: same },
-  cause: { what: "cause", ok: (s) => CODE.test(s), hint: "cause codes are lower-case words joined by hyphens, like water-ingress.", normalise: same },
-  class: { what: "bearing class", ok: (s) => (BEARING_CLASSES as readonly string[]).includes(s), hint: `use ${BEARING_CLASSES.join(", ")}.`, normalise: same },
-  site: { what: "site", ok: (s) => SITE_CODE.test(s), hint: "site codes are letters and digits, like MJC.", normalise: (s) => s.toUpperCase() },
+  trigger: {
+    what: "trigger",
+    ok: (s) => CODE.test(s),
+    hint: "trigger codes are lower-case words joined by hyphens, like wayside-hot.",
+    normalise: same,
+  },
+  cause: {
+    what: "cause",
+    ok: (s) => CODE.test(s),
+    hint: "cause codes are lower-case words joined by hyphens, like water-ingress.",
+    normalise: same,
+  },
+  class: {
+    what: "bearing class",
+    ok: (s) => (BEARING_CLASSES as readonly string[]).includes(s),
+    hint: `use ${BEARING_CLASSES.join(", ")}.`,
+    normalise: same,
+  },
+  site: {
+    what: "site",
+    ok: (s) => SITE_CODE.test(s),
+    hint: "site codes are letters and digits, like MJC.",
+    normalise: (s) => s.toUpperCase(),
+  },
 };
 export const LIST_MAX_CHARS = 2000;
 export const listTooLong = (what: string) => `${what}: the list is too long.`;
 
 /** The items of a comma list, trimmed and normalised, repeats and blanks dropped; or the refusal naming the unknown ones. */
 export function splitList(rule: ListRule, raw: string): { items: string[] } | { error: string } {
-  const items = [...new Set(raw.split(",").map((s) => rule.normalise(s.trim())).filter(Boolean))];
+  const items = [
+    ...new Set(
+      raw
+        .split(",")
+        .map((s) => rule.normalise(s.trim()))
+        .filter(Boolean),
+    ),
+  ];
   const bad = items.filter((i) => !rule.ok(i));
   return bad.length ? { error: `Unknown ${rule.what} ${bad.map((b) => `"${b}"`).join(", ")}; ${rule.hint}` } : { items };
 }
@@ -130,7 +157,10 @@ function readQuery(flat: Record<string, string>): ListParams {
     if ("error" in read) throw new Refused(read.error);
     if (read.items.length) (filters as Record<string, string[]>)[key] = read.items;
   }
-  for (const [key, what] of [["from", "From"], ["to", "To"]] as const) {
+  for (const [key, what] of [
+    ["from", "From"],
+    ["to", "To"],
+  ] as const) {
     const raw = given(key);
     if (raw === undefined) continue;
     if (raw.length > DAY_MAX_CHARS) throw new Refused(dayTooLong(what));

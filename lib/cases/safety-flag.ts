@@ -12,4 +12,5 @@ export function safetyFlagOf(fieldChecks: unknown, trigger: string | null | unde
 }
 
 export const SAFETY_FLAG_TITLE = "Safety flag: confirmations left unticked at filing";
-export const SAFETY_FLAG_DEFERRAL = "Check with the shop that the work was done under the employer's procedures, the applicable interchange rules and local codes.";
+export const SAFETY_FLAG_DEFERRAL =
+  "Check with the shop that the work was done under the employer's procedures, the applicable interchange rules and local codes.";

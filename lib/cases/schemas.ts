@@ -8,7 +8,12 @@ const codes = <T extends { code: string }>(list: readonly T[]) => list.map((x) =
 const text = (max: number, what: string) => z.string().trim().max(max, `${what}: at most ${max} characters.`);
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-03-14.");
 const optionalNumber = (min: number, max: number, what: string) =>
-  z.number({ message: `${what} must be a number.` }).min(min, `${what} must be at least ${min}.`).max(max, `${what} must be at most ${max}.`).nullable().optional();
+  z
+    .number({ message: `${what} must be a number.` })
+    .min(min, `${what} must be at least ${min}.`)
+    .max(max, `${what} must be at most ${max}.`)
+    .nullable()
+    .optional();
 
 const feel = z.enum(["smooth", "stiff", "rough", "catch"]).nullable();
 const cell = z.object({ feel, revolutions: z.number().min(0).max(20).optional() });
@@ -17,7 +22,11 @@ const direction = z.object({ pull: cell.optional(), push: cell.optional() });
 export const handRollSchema = z.object({
   grid: z.object({ "0": direction.optional(), "120": direction.optional(), "240": direction.optional() }).default({}),
   procedure: z
-    .object({ turnedBy: z.enum(["hand", "foot"]).optional(), oneDirection: z.boolean().optional(), judgedBy: z.enum(["feel", "ear"]).optional() })
+    .object({
+      turnedBy: z.enum(["hand", "foot"]).optional(),
+      oneDirection: z.boolean().optional(),
+      judgedBy: z.enum(["feel", "ear"]).optional(),
+    })
     .default({}),
 });
 
@@ -34,10 +43,18 @@ export const endPlaySchema = z.object({
 export const fieldChecksSchema = z.object({
   handRoll: handRollSchema.optional(),
   endPlay: endPlaySchema.optional(),
-  visual: z.array(z.object({ code: z.enum(codes(VISUAL_FINDINGS)), note: text(500, "Note").optional() })).max(20).default([]),
+  visual: z
+    .array(z.object({ code: z.enum(codes(VISUAL_FINDINGS)), note: text(500, "Note").optional() }))
+    .max(20)
+    .default([]),
   waysideAlarmConfirmed: z.boolean().optional(),
   confirmations: z
-    .object({ ppe: z.boolean().optional(), blueSignal: z.boolean().optional(), wheelsetSecured: z.boolean().optional(), cooled: z.boolean().optional() })
+    .object({
+      ppe: z.boolean().optional(),
+      blueSignal: z.boolean().optional(),
+      wheelsetSecured: z.boolean().optional(),
+      cooled: z.boolean().optional(),
+    })
     .default({}),
 });
 export type FieldChecks = z.infer<typeof fieldChecksSchema>;
@@ -45,38 +62,60 @@ export type FieldChecks = z.infer<typeof fieldChecksSchema>;
 export { BEARING_CLASSES };
 
 /** The field report: bearing, removal and the shop checks. Every key optional so drafts can autosave. */
-export const fieldReportSchema = z.object({
-  serial: text(40, "Serial"),
-  bearingClass: z.enum(BEARING_CLASSES, { message: "Choose a bearing class (or other)." }),
-  bearingClassOther: text(40, "Other class").nullable(),
-  makerCode: text(40, "Maker code"),
-  manufacturedYm: z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, "Use year and month like 2019-07.").nullable(),
-  lot: text(40, "Lot").nullable(),
-  timesReconditioned: z.number().int("Times reconditioned is a whole number.").min(0).max(20).nullable(),
-  mountedOn: isoDate.nullable(),
-  carMark: z.string().trim().toUpperCase().regex(/^[A-Z]{2,4}$/, "Reporting mark is 2 to 4 letters, like SRRL.").or(z.literal("")),
-  carNumber: z.string().trim().regex(/^\d{1,6}$/, "Car number is up to 6 digits.").or(z.literal("")),
-  axle: z.number().int().min(1, "Axle is 1 to 4.").max(4, "Axle is 1 to 4.").nullable(),
-  side: z.enum(["L", "R"], { message: "Side is L or R." }).nullable(),
-  wheelDiameterIn: optionalNumber(20, 50, "Wheel diameter (in)"),
-  removedOn: isoDate.nullable(),
-  siteId: z.string().uuid("Choose the removal site from the list.").nullable(),
-  labSiteId: z.string().uuid("Choose the lab from the list.").nullable(),
-  trigger: z.string().min(1, "Choose what triggered the removal.").max(40, "Choose a trigger from the list."),
-  triggerDetail: z.record(z.string(), z.union([z.string().max(200), z.number(), z.boolean(), z.null()])),
-  serviceMiles: z.number().int().min(0).max(10_000_000).nullable(),
-  ratingC: optionalNumber(1, 1e9, "Dynamic load rating C"),
-  loadP: optionalNumber(1, 1e9, "Equivalent load P"),
-  fieldChecks: fieldChecksSchema,
-  fieldNotes: text(4000, "Notes"),
-}).partial();
+export const fieldReportSchema = z
+  .object({
+    serial: text(40, "Serial"),
+    bearingClass: z.enum(BEARING_CLASSES, { message: "Choose a bearing class (or other)." }),
+    bearingClassOther: text(40, "Other class").nullable(),
+    makerCode: text(40, "Maker code"),
+    manufacturedYm: z
+      .string()
+      .regex(/^\d{4}-(0[1-9]|1[0-2])$/, "Use year and month like 2019-07.")
+      .nullable(),
+    lot: text(40, "Lot").nullable(),
+    timesReconditioned: z.number().int("Times reconditioned is a whole number.").min(0).max(20).nullable(),
+    mountedOn: isoDate.nullable(),
+    carMark: z
+      .string()
+      .trim()
+      .toUpperCase()
+      .regex(/^[A-Z]{2,4}$/, "Reporting mark is 2 to 4 letters, like SRRL.")
+      .or(z.literal("")),
+    carNumber: z
+      .string()
+      .trim()
+      .regex(/^\d{1,6}$/, "Car number is up to 6 digits.")
+      .or(z.literal("")),
+    axle: z.number().int().min(1, "Axle is 1 to 4.").max(4, "Axle is 1 to 4.").nullable(),
+    side: z.enum(["L", "R"], { message: "Side is L or R." }).nullable(),
+    wheelDiameterIn: optionalNumber(20, 50, "Wheel diameter (in)"),
+    removedOn: isoDate.nullable(),
+    siteId: z.string().uuid("Choose the removal site from the list.").nullable(),
+    labSiteId: z.string().uuid("Choose the lab from the list.").nullable(),
+    trigger: z.string().min(1, "Choose what triggered the removal.").max(40, "Choose a trigger from the list."),
+    triggerDetail: z.record(z.string(), z.union([z.string().max(200), z.number(), z.boolean(), z.null()])),
+    serviceMiles: z.number().int().min(0).max(10_000_000).nullable(),
+    ratingC: optionalNumber(1, 1e9, "Dynamic load rating C"),
+    loadP: optionalNumber(1, 1e9, "Equivalent load P"),
+    fieldChecks: fieldChecksSchema,
+    fieldNotes: text(4000, "Notes"),
+  })
+  .partial();
 export type FieldReportInput = z.infer<typeof fieldReportSchema>;
 
-export const teardownSchema = z.object({
-  lubricant: z.object({ conditions: z.array(z.enum(codes(LUBRICANT_CONDITIONS))).max(10).optional(), notes: text(2000, "Lubricant notes").optional() }),
-  dispositions: z.partialRecord(z.enum(codes(COMPONENTS)), z.enum(codes(DISPOSITIONS))),
-  teardownNotes: text(8000, "Teardown notes"),
-}).partial();
+export const teardownSchema = z
+  .object({
+    lubricant: z.object({
+      conditions: z
+        .array(z.enum(codes(LUBRICANT_CONDITIONS)))
+        .max(10)
+        .optional(),
+      notes: text(2000, "Lubricant notes").optional(),
+    }),
+    dispositions: z.partialRecord(z.enum(codes(COMPONENTS)), z.enum(codes(DISPOSITIONS))),
+    teardownNotes: text(8000, "Teardown notes"),
+  })
+  .partial();
 
 export const findingSchema = z.object({
   component: z.enum(codes(COMPONENTS), { message: "Choose the part the finding is on." }),
@@ -92,14 +131,16 @@ export const findingSchema = z.object({
 });
 export type FindingInput = z.infer<typeof findingSchema>;
 
-export const verdictSchema = z.object({
-  primaryCause: z.string().min(1, "Choose the primary root cause.").max(40, "Choose a root cause from the list.").nullable(),
-  contributingCauses: z.array(z.string().min(1)).max(6, "At most 6 contributing causes."),
-  confidence: z.enum(codes(CONFIDENCES) as ["confirmed", "probable", "undetermined"]).nullable(),
-  removalConfirmed: z.enum(["confirmed", "no-defect"]).nullable(),
-  correctiveAction: text(4000, "Corrective action"),
-  verdictNotes: text(8000, "Verdict notes"),
-}).partial();
+export const verdictSchema = z
+  .object({
+    primaryCause: z.string().min(1, "Choose the primary root cause.").max(40, "Choose a root cause from the list.").nullable(),
+    contributingCauses: z.array(z.string().min(1)).max(6, "At most 6 contributing causes."),
+    confidence: z.enum(codes(CONFIDENCES) as ["confirmed", "probable", "undetermined"]).nullable(),
+    removalConfirmed: z.enum(["confirmed", "no-defect"]).nullable(),
+    correctiveAction: text(4000, "Corrective action"),
+    verdictNotes: text(8000, "Verdict notes"),
+  })
+  .partial();
 
 export const reasonSchema = z.object({ reason: z.string().trim().min(5, "Give a reason of at least a few words.").max(2000) });
 

@@ -12,23 +12,60 @@ import type { CaseDetail } from "./types";
 import { DEFAULT_END_PLAY_POLICY, evaluateEndPlay, type EndPlayPolicy } from "@/lib/field";
 import { HttpError, badRequest, forbidden, notFound } from "@/lib/http/errors";
 import { serviceMonthsOf, summariseFieldChecks } from "./compute";
-import { fieldChecksSchema, parseNewRemoval, fieldReportSchema, findingSchema, teardownSchema, verdictSchema, type FieldReportInput } from "./schemas";
+import {
+  fieldChecksSchema,
+  parseNewRemoval,
+  fieldReportSchema,
+  findingSchema,
+  teardownSchema,
+  verdictSchema,
+  type FieldReportInput,
+} from "./schemas";
 import { canEditSection, checkTransition, editRefusal, type Section, type WorkflowAction } from "./workflow";
 import { stepReplay, writeStep } from "./step-write";
 import { linkedNumbers, maskUnreadableLinks } from "./history-view";
 import { codeProblem, siteProblem, type CodeUse, type SiteUse } from "./reference-rules";
 
 /** Codes and sites a save names must exist; retired codes only where the case already has them. */
-async function checkReferences(values: Record<string, unknown>, current: Partial<Case> | null, findingCode?: { code: string; current: string | null }) {
+async function checkReferences(
+  values: Record<string, unknown>,
+  current: Partial<Case> | null,
+  findingCode?: { code: string; current: string | null },
+) {
   const codes: CodeUse[] = [];
-  if (typeof values.trigger === "string") codes.push({ list: "trigger", field: "trigger", code: values.trigger, current: current?.trigger ? [current.trigger] : [] });
+  if (typeof values.trigger === "string")
+    codes.push({ list: "trigger", field: "trigger", code: values.trigger, current: current?.trigger ? [current.trigger] : [] });
   const causesNow = [current?.primaryCause, ...(current?.contributingCauses ?? [])].filter((c): c is string => Boolean(c));
-  if (typeof values.primaryCause === "string") codes.push({ list: "cause", field: "primaryCause", code: values.primaryCause, current: causesNow });
-  if (Array.isArray(values.contributingCauses)) for (const c of values.contributingCauses as string[]) codes.push({ list: "cause", field: "contributingCauses", code: c, current: causesNow });
-  if (findingCode) codes.push({ list: "damage", field: "finding.damageCode", code: findingCode.code, current: findingCode.current ? [findingCode.current] : [] });
+  if (typeof values.primaryCause === "string")
+    codes.push({ list: "cause", field: "primaryCause", code: values.primaryCause, current: causesNow });
+  if (Array.isArray(values.contributingCauses))
+    for (const c of values.contributingCauses as string[])
+      codes.push({ list: "cause", field: "contributingCauses", code: c, current: causesNow });
+  if (findingCode)
+    codes.push({
+      list: "damage",
+      field: "finding.damageCode",
+      code: findingCode.code,
+      current: findingCode.current ? [findingCode.current] : [],
+    });
   const lists = ["trigger", "cause", "damage"] as const;
-  const states = Object.fromEntries(await Promise.all(lists.map(async (l) => [l, await codeStates(l, codes.filter((c) => c.list === l).map((c) => c.code))] as const))) as Record<(typeof lists)[number], Map<string, boolean>>;
-  const sitesNamed: SiteUse[] = (["siteId", "labSiteId"] as const).filter((f) => typeof values[f] === "string").map((f) => ({ field: f, id: values[f] as string }));
+  const states = Object.fromEntries(
+    await Promise.all(
+      lists.map(
+        async (l) =>
+          [
+            l,
+            await codeStates(
+              l,
+              codes.filter((c) => c.list === l).map((c) => c.code),
+            ),
+          ] as const,
+      ),
+    ),
+  ) as Record<(typeof lists)[number], Map<string, boolean>>;
+  const sitesNamed: SiteUse[] = (["siteId", "labSiteId"] as const)
+    .filter((f) => typeof values[f] === "string")
+    .map((f) => ({ field: f, id: values[f] as string }));
   const problem = codeProblem(codes, states) ?? siteProblem(sitesNamed, await siteKinds(sitesNamed.map((u) => u.id)));
   if (problem) throw badRequest(problem.message, { fields: { [problem.field]: problem.message } });
 }
@@ -66,7 +103,9 @@ export async function readableHistory(caseId: string, user: CurrentUser) {
 
 async function policyFor(siteId: string | null | undefined): Promise<EndPlayPolicy> {
   const s = await sitePolicy(siteId);
-  return s ? { maxIn: s.maxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn, plausibleMaxIn: s.plausibleMaxIn } : DEFAULT_END_PLAY_POLICY;
+  return s
+    ? { maxIn: s.maxIn, dialSpreadIn: s.dialSpreadIn, tapeSpreadIn: s.tapeSpreadIn, plausibleMaxIn: s.plausibleMaxIn }
+    : DEFAULT_END_PLAY_POLICY;
 }
 
 /** Field-report values plus what Tearline computes from them. */
@@ -125,7 +164,8 @@ export async function saveSection(current: Case, body: unknown, user: CurrentUse
 }
 
 function assertEditable(section: Section, c: Case, user: CurrentUser) {
-  if (!canEditSection(section, c.status, user.role)) throw new HttpError(c.status === "signed" || c.status === "signoff" ? 409 : 403, "not-editable", editRefusal(section, c.status));
+  if (!canEditSection(section, c.status, user.role))
+    throw new HttpError(c.status === "signed" || c.status === "signoff" ? 409 : 403, "not-editable", editRefusal(section, c.status));
 }
 
 const findingBody = z.object({ version: z.number().int().positive(), finding: findingSchema });
@@ -162,17 +202,28 @@ export async function transitionCase(c: Case, body: unknown, user: CurrentUser) 
   const { version, action, reason, labSiteId } = transitionSchema.parse(body);
   const done = await stepReplay(c, version, action, user);
   if (done) return done;
-  const check = checkTransition(action as WorkflowAction, c.status, user.role, reason, {
-    primaryCause: c.primaryCause,
-    confidence: c.confidence,
-    removalConfirmed: c.removalConfirmed,
-    findingCount: action === "propose" ? await countFindings(c.id) : 0,
-  }, { actorId: user.id, proposedBy: c.proposedBy });
-  if (!check.ok) throw check.status === 400 ? badRequest(check.message) : new HttpError(check.status, check.status === 403 ? "forbidden" : "conflict", check.message);
+  const check = checkTransition(
+    action as WorkflowAction,
+    c.status,
+    user.role,
+    reason,
+    {
+      primaryCause: c.primaryCause,
+      confidence: c.confidence,
+      removalConfirmed: c.removalConfirmed,
+      findingCount: action === "propose" ? await countFindings(c.id) : 0,
+    },
+    { actorId: user.id, proposedBy: c.proposedBy },
+  );
+  if (!check.ok)
+    throw check.status === 400
+      ? badRequest(check.message)
+      : new HttpError(check.status, check.status === 403 ? "forbidden" : "conflict", check.message);
   if (labSiteId) await checkReferences({ labSiteId }, c);
   const now = new Date();
   const patch: Partial<Case> = { status: check.to };
-  if (action === "receive") Object.assign(patch, { receivedAt: now, receivedBy: user.id, labSiteId: labSiteId ?? c.labSiteId ?? user.siteId });
+  if (action === "receive")
+    Object.assign(patch, { receivedAt: now, receivedBy: user.id, labSiteId: labSiteId ?? c.labSiteId ?? user.siteId });
   if (action === "propose") Object.assign(patch, { proposedAt: now, proposedBy: user.id, returnReason: null });
   if (action === "sign") Object.assign(patch, { signedAt: now, signedBy: user.id });
   if (action === "return") Object.assign(patch, { returnReason: reason });

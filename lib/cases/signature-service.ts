@@ -31,20 +31,38 @@ export async function contentOf(c: Case): Promise<SignedContent> {
   return {
     caseNumber: c.number,
     verdict: {
-      primaryCause: c.primaryCause, contributingCauses: c.contributingCauses, confidence: c.confidence,
-      removalConfirmed: c.removalConfirmed, correctiveAction: c.correctiveAction, verdictNotes: c.verdictNotes,
+      primaryCause: c.primaryCause,
+      contributingCauses: c.contributingCauses,
+      confidence: c.confidence,
+      removalConfirmed: c.removalConfirmed,
+      correctiveAction: c.correctiveAction,
+      verdictNotes: c.verdictNotes,
     },
     ...parts,
   };
 }
 
-export type SignatureCheck = { signedBy: string | null; signedAt: Date | null; meaning: string | null; hash: string; currentHash: string; matches: boolean };
+export type SignatureCheck = {
+  signedBy: string | null;
+  signedAt: Date | null;
+  meaning: string | null;
+  hash: string;
+  currentHash: string;
+  matches: boolean;
+};
 
 /** For a signed case: does it still hold exactly what was signed? */
 export async function checkSignature(c: Case): Promise<SignatureCheck | null> {
   if (c.status !== "signed" || !c.signedContentHash) return null;
   const currentHash = contentHash(await contentOf(c));
-  return { signedBy: c.signedBy, signedAt: c.signedAt, meaning: c.signedMeaning, hash: c.signedContentHash, currentHash, matches: currentHash === c.signedContentHash };
+  return {
+    signedBy: c.signedBy,
+    signedAt: c.signedAt,
+    meaning: c.signedMeaning,
+    hash: c.signedContentHash,
+    currentHash,
+    matches: currentHash === c.signedContentHash,
+  };
 }
 
 export async function signCase(c: Case, body: unknown, user: CurrentUser): Promise<Case> {
@@ -52,8 +70,18 @@ export async function signCase(c: Case, body: unknown, user: CurrentUser): Promi
   // A doubled or retried signature (same version, same signer) answers with the one already made.
   const done = await stepReplay(c, input.version, "sign", user);
   if (done) return done;
-  const check = checkTransition("sign", c.status, user.role, undefined, { primaryCause: c.primaryCause, confidence: c.confidence, removalConfirmed: c.removalConfirmed, findingCount: 0 }, { actorId: user.id, proposedBy: c.proposedBy });
-  if (!check.ok) throw check.status === 400 ? badRequest(check.message) : new HttpError(check.status, check.status === 403 ? "forbidden" : "conflict", check.message);
+  const check = checkTransition(
+    "sign",
+    c.status,
+    user.role,
+    undefined,
+    { primaryCause: c.primaryCause, confidence: c.confidence, removalConfirmed: c.removalConfirmed, findingCount: 0 },
+    { actorId: user.id, proposedBy: c.proposedBy },
+  );
+  if (!check.ok)
+    throw check.status === 400
+      ? badRequest(check.message)
+      : new HttpError(check.status, check.status === 403 ? "forbidden" : "conflict", check.message);
   if (c.version !== input.version) throw conflict("The case changed since you opened it; reload to see what you are signing.");
 
   const key_ = slipKey(user.id);
@@ -71,5 +99,11 @@ export async function signCase(c: Case, body: unknown, user: CurrentUser): Promi
 
   const signedHash = contentHash(await contentOf(c));
   if (signedHash !== input.contentHash) throw conflict("The case changed while you were reading it; reload and look again before signing.");
-  return writeStep(c, input.version, "sign", { status: check.to, signedAt: now, signedBy: user.id, signedMeaning: SIGNATURE_MEANING, signedContentHash: signedHash }, user);
+  return writeStep(
+    c,
+    input.version,
+    "sign",
+    { status: check.to, signedAt: now, signedBy: user.id, signedMeaning: SIGNATURE_MEANING, signedContentHash: signedHash },
+    user,
+  );
 }

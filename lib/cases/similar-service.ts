@@ -39,10 +39,17 @@ export async function findSimilarCases(caseId: string, viewer: Viewer, limit = S
   const all = await similarityCases([caseId, ...ids]);
   const target = all.find((c) => c.id === caseId);
   if (!target) return [];
-  const ranked = rankSimilar(target, all.filter((c) => c.id !== caseId), limit);
+  const ranked = rankSimilar(
+    target,
+    all.filter((c) => c.id !== caseId),
+    limit,
+  );
   if (ranked.length === 0) return [];
 
-  const details = await similarDetails(caseId, ranked.map((r) => r.candidate.id));
+  const details = await similarDetails(
+    caseId,
+    ranked.map((r) => r.candidate.id),
+  );
   const byId = new Map(details.rows.map((r) => [r.id, r]));
   const label = (list: string, code: string) => details.labels.find((l) => l.list === list && l.code === code)?.label ?? code;
   const photosOf = (id: string): PhotoRef[] => details.photos.filter((p) => p.caseId === id);
@@ -52,13 +59,23 @@ export async function findSimilarCases(caseId: string, viewer: Viewer, limit = S
     const r = byId.get(candidate.id);
     if (!r) return [];
     const pair = pickPhotoPair(photosOf(caseId), photosOf(r.id), partsToCompare(target.findings, candidate.findings));
-    return [{
-      id: r.id, number: r.number, status: r.status, triggerLabel: label("trigger", r.trigger),
-      causeLabel: r.primaryCause ? label("cause", r.primaryCause) : null, bearingClass: r.bearingClass,
-      removedOn: r.removedOn, siteName: r.siteName, score, reasons, linked: linked.has(r.id),
-      photoId: photosOf(r.id)[0]?.id ?? null,
-      photoPair: pair ? { ...pair, componentLabel: componentLabel(pair.component) } : null,
-    }];
+    return [
+      {
+        id: r.id,
+        number: r.number,
+        status: r.status,
+        triggerLabel: label("trigger", r.trigger),
+        causeLabel: r.primaryCause ? label("cause", r.primaryCause) : null,
+        bearingClass: r.bearingClass,
+        removedOn: r.removedOn,
+        siteName: r.siteName,
+        score,
+        reasons,
+        linked: linked.has(r.id),
+        photoId: photosOf(r.id)[0]?.id ?? null,
+        photoPair: pair ? { ...pair, componentLabel: componentLabel(pair.component) } : null,
+      },
+    ];
   });
 }
 

@@ -15,9 +15,18 @@ export async function stepReplay(c: Case, version: number, action: WorkflowActio
   return c.version === version ? null : stepAlreadyTaken(c.id, version, action, user.id);
 }
 
-export async function writeStep(c: Case, version: number, action: WorkflowAction, patch: Partial<Case>, user: CurrentUser, reason?: string): Promise<Case> {
+export async function writeStep(
+  c: Case,
+  version: number,
+  action: WorkflowAction,
+  patch: Partial<Case>,
+  user: CurrentUser,
+  reason?: string,
+): Promise<Case> {
   try {
-    const row = await updateCase(c.id, version, patch, user, action, reason, (tx, saved) => queueStepNotice(tx, action, saved, user, reason));
+    const row = await updateCase(c.id, version, patch, user, action, reason, (tx, saved) =>
+      queueStepNotice(tx, action, saved, user, reason),
+    );
     nudgeMail();
     return row;
   } catch (err) {

@@ -43,7 +43,14 @@ export type TransitionCheck = { ok: true; to: Stage } | { ok: false; status: 403
 /** Who is acting, and who proposed the verdict now on the case. */
 export type TransitionPeople = { actorId: string; proposedBy: string | null };
 
-export function checkTransition(action: WorkflowAction, stage: Stage, role: Role, reason: string | undefined, verdict: VerdictFields, people: TransitionPeople): TransitionCheck {
+export function checkTransition(
+  action: WorkflowAction,
+  stage: Stage,
+  role: Role,
+  reason: string | undefined,
+  verdict: VerdictFields,
+  people: TransitionPeople,
+): TransitionCheck {
   const rule = WORKFLOW[action];
   if (!can(role, rule.permission)) return { ok: false, status: 403, message: `Your role cannot ${rule.label.toLowerCase()}.` };
   // A signature is a second person's check: whoever proposed the verdict cannot also sign it.
@@ -73,7 +80,11 @@ const stageWords: Record<Stage, string> = {
 export type Section = "field" | "teardown" | "verdict";
 
 /** The permission each section's save exercises (the field section at the bench is the lab's, see canEditSection). */
-export const SECTION_PERMISSIONS: Record<Section, Permission> = { field: "case:edit-field", teardown: "case:edit-teardown", verdict: "case:propose" };
+export const SECTION_PERMISSIONS: Record<Section, Permission> = {
+  field: "case:edit-field",
+  teardown: "case:edit-teardown",
+  verdict: "case:propose",
+};
 
 /** Which stages let which roles edit which section. A signed case is read-only. */
 export function canEditSection(section: Section, stage: Stage, role: Role): boolean {

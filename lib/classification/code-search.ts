@@ -40,7 +40,11 @@ interface Row {
 // A description match is weaker evidence than a name the user would type.
 const FIELD_WEIGHT: Record<MatchedOn, number> = { code: 1, label: 1, synonym: 0.97, description: 0.7 };
 // Relevance tiers for non-fuzzy hits; fuzzy relevance is capped below them.
-const EXACT = 1, SAME_STEMS = 0.95, PREFIX = 0.9, WORD_START = 0.86, FUZZY_CAP = 0.85;
+const EXACT = 1,
+  SAME_STEMS = 0.95,
+  PREFIX = 0.9,
+  WORD_START = 0.86,
+  FUZZY_CAP = 0.85;
 // Fuzzy hits weaker than this are noise (a long description always contains something close).
 const MIN_FUZZY = 0.6;
 // Multi-word queries whose words match separately count a little less than a phrase hit.
@@ -116,7 +120,10 @@ export function createCodeSearch<E extends CodeSearchEntry>(entries: readonly E[
         if (relevance > (combined.get(index)?.relevance ?? 0)) combined.set(index, { relevance, row: strongest.row });
       }
       hits = [...combined].map(([index, { relevance, row }]) => ({
-        index, score: Math.round(relevance * 1e6) / 1e6, matchedOn: row.field, matchedText: row.text,
+        index,
+        score: Math.round(relevance * 1e6) / 1e6,
+        matchedOn: row.field,
+        matchedText: row.text,
       }));
     }
     return hits

@@ -13,14 +13,34 @@ const ROOT_CAUSE_LIST = [
   { code: "debris-ingress", label: "Debris ingress", description: "Grease contaminated by particles", confirmsRemoval: true },
   { code: "lubrication", label: "Lubrication", description: "Too little or degraded grease", confirmsRemoval: true },
   { code: "seal", label: "Seal", description: "Seal damage or failure", confirmsRemoval: true },
-  { code: "electrical", label: "Electrical current", description: "Electric current through the bearing (welding, return current)", confirmsRemoval: true },
-  { code: "impact", label: "Impact or overload", description: "Impact or overload from wheel or track (flats, shelled tread, derailment)", confirmsRemoval: true },
+  {
+    code: "electrical",
+    label: "Electrical current",
+    description: "Electric current through the bearing (welding, return current)",
+    confirmsRemoval: true,
+  },
+  {
+    code: "impact",
+    label: "Impact or overload",
+    description: "Impact or overload from wheel or track (flats, shelled tread, derailment)",
+    confirmsRemoval: true,
+  },
   { code: "mounting", label: "Mounting", description: "Improper mounting or fastening", confirmsRemoval: true },
-  { code: "handling", label: "Handling", description: "Handling or transport damage, including vibration at standstill", confirmsRemoval: true },
+  {
+    code: "handling",
+    label: "Handling",
+    description: "Handling or transport damage, including vibration at standstill",
+    confirmsRemoval: true,
+  },
   { code: "reconditioning", label: "Reconditioning", description: "Reconditioning or assembly workmanship", confirmsRemoval: true },
   { code: "material", label: "Material or manufacture", description: "Material or manufacturing defect", confirmsRemoval: true },
   { code: "end-of-life", label: "End of life", description: "Rolling-contact fatigue at the end of a normal life", confirmsRemoval: true },
-  { code: "no-defect", label: "No defect found", description: "Teardown found no defect: the removal was not confirmed", confirmsRemoval: false },
+  {
+    code: "no-defect",
+    label: "No defect found",
+    description: "Teardown found no defect: the removal was not confirmed",
+    confirmsRemoval: false,
+  },
   { code: "undetermined", label: "Undetermined", description: "Evidence not enough to decide", confirmsRemoval: true },
 ] as const satisfies readonly RootCauseInfo[];
 

@@ -70,8 +70,12 @@ export function stripPrefixes(fields: Record<string, string>, prefixes: string[]
 export function problemFrom(status: number, body: unknown, opts: ProblemOptions = {}): ApiProblem {
   const b = isRecord(body) ? body : {};
   const details = b.details;
-  const fields = stripPrefixes({ ...stringFields(isRecord(details) ? details.fields : undefined), ...stringFields(b.fields) }, opts.fieldPrefixes);
-  const said = typeof b.error === "string" && b.error.trim() ? b.error : typeof b.message === "string" && b.message.trim() ? b.message : null;
+  const fields = stripPrefixes(
+    { ...stringFields(isRecord(details) ? details.fields : undefined), ...stringFields(b.fields) },
+    opts.fieldPrefixes,
+  );
+  const said =
+    typeof b.error === "string" && b.error.trim() ? b.error : typeof b.message === "string" && b.message.trim() ? b.message : null;
   return {
     status,
     message: said ?? opts.fallback ?? fallbackFor(status),

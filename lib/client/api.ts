@@ -1,6 +1,15 @@
 // The one way browser code calls Tearline's API: JSON or a form, a time limit, and every refusal
 // read the same way (see api-problem.ts). A weak signal ends in a message, never a spinner forever.
-import { ApiError, clientTimeoutMs, UPLOAD_TIMEOUT_MS, noAnswerProblem, problemFrom, type ApiResult, type NoAnswer, type ProblemOptions } from "./api-problem";
+import {
+  ApiError,
+  clientTimeoutMs,
+  UPLOAD_TIMEOUT_MS,
+  noAnswerProblem,
+  problemFrom,
+  type ApiResult,
+  type NoAnswer,
+  type ProblemOptions,
+} from "./api-problem";
 
 export * from "./api-problem";
 

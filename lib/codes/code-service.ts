@@ -1,7 +1,15 @@
 // The classification lists (damage codes, root causes, triggers): read for pickers and pages,
 // and kept by admins. Adding, editing and deleting check the code first and are audited.
 import "server-only";
-import { casesUsingCode, codeUsageCounts, deleteUnusedCodeEntry, getCodeEntry, insertCodeEntry, listCodeEntries, updateCodeEntry } from "@/db/queries/code-entries";
+import {
+  casesUsingCode,
+  codeUsageCounts,
+  deleteUnusedCodeEntry,
+  getCodeEntry,
+  insertCodeEntry,
+  listCodeEntries,
+  updateCodeEntry,
+} from "@/db/queries/code-entries";
 import type { CodeListName } from "@/db/schema/code-lists";
 import type { CurrentUser } from "@/lib/auth/session";
 import { familyOfCode } from "@/lib/classification/damage-families";
@@ -54,7 +62,11 @@ export async function editCode(row: CodeRow, patch: CodePatchInput, user: Curren
   if (rest.isoMode && row.list !== "damage") throw conflict("Only damage codes carry an ISO 15243 mode.");
   const retiredAt = retired === undefined ? undefined : retired ? (row.retiredAt ?? new Date()) : null;
   const updated = await updateCodeEntry(row.list, row.code, { ...rest, ...(retiredAt !== undefined ? { retiredAt } : {}) });
-  await audit("code-list", user, { subject: `${row.list} ${row.code}`, headers, detail: { action: "edit", changed: Object.keys({ ...rest, ...(retired !== undefined ? { retired } : {}) }) } });
+  await audit("code-list", user, {
+    subject: `${row.list} ${row.code}`,
+    headers,
+    detail: { action: "edit", changed: Object.keys({ ...rest, ...(retired !== undefined ? { retired } : {}) }) },
+  });
   return updated;
 }
 

@@ -5,7 +5,6 @@
 export const RINGS = ["cup-outboard", "cup-inboard", "cone-outboard", "cone-inboard"] as const;
 export type RingId = (typeof RINGS)[number];
 
-
 export type PlaceableFinding = {
   component: string;
   row?: string | null;
@@ -77,7 +76,10 @@ export function sumSpanGroups(groups: readonly SpanGroup[], sectorDeg = 10): Sec
 export type SectorCell = { ring: RingId; sector: number; findings: number; maxSeverity: number };
 
 /** Places one case's findings (or any list) on the rings; findings off the raceways or without a clock position are counted aside. */
-export function binFindings(findings: readonly PlaceableFinding[], sectorDeg = 10): { sectors: SectorCell[]; placed: number; unplaced: number } {
+export function binFindings(
+  findings: readonly PlaceableFinding[],
+  sectorDeg = 10,
+): { sectors: SectorCell[]; placed: number; unplaced: number } {
   const groups: SpanGroup[] = [];
   let placed = 0;
   let unplaced = 0;

@@ -8,7 +8,9 @@ import { lastDigestSentAt, sendDigest } from "./send";
 
 export async function sendDigestIfDue(now = new Date()): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const { rows } = await tx.execute<{ locked: boolean }>(sql`select pg_try_advisory_xact_lock(hashtext('tearline.weekly-digest')) as locked`);
+    const { rows } = await tx.execute<{ locked: boolean }>(
+      sql`select pg_try_advisory_xact_lock(hashtext('tearline.weekly-digest')) as locked`,
+    );
     if (!rows[0]?.locked) return false;
     if (!digestDue(now, await lastDigestSentAt())) return false;
     await sendDigest(now);

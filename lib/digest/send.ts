@@ -22,7 +22,12 @@ export async function digestRecipients(): Promise<string[]> {
 }
 
 export async function lastDigestSentAt(): Promise<Date | null> {
-  const [row] = await db.select({ at: mailOutbox.createdAt }).from(mailOutbox).where(eq(mailOutbox.kind, DIGEST_KIND)).orderBy(desc(mailOutbox.createdAt)).limit(1);
+  const [row] = await db
+    .select({ at: mailOutbox.createdAt })
+    .from(mailOutbox)
+    .where(eq(mailOutbox.kind, DIGEST_KIND))
+    .orderBy(desc(mailOutbox.createdAt))
+    .limit(1);
   return row?.at ?? null;
 }
 
@@ -33,7 +38,11 @@ export async function sendDigest(now = new Date()): Promise<{ recipients: number
   const filters = { ...DEFAULT_FILTERS, from: addMonths(thisMonth, -11), to: thisMonth };
   const since = new Date(now.getTime() - 7 * 86_400_000);
   // The digest speaks for the whole fleet, as a manager sees it.
-  const [tallies, week, recipients] = await Promise.all([loadTallies(filters, { id: "", role: "manager", siteId: null }), weekCounts(since), digestRecipients()]);
+  const [tallies, week, recipients] = await Promise.all([
+    loadTallies(filters, { id: "", role: "manager", siteId: null }),
+    weekCounts(since),
+    digestRecipients(),
+  ]);
   const mail = buildDigest({
     tallies,
     week: { ...week, from: ymd(since), to: ymd(now) },

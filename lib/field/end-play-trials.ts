@@ -30,11 +30,7 @@ function both(value: number, unit: LengthUnit): string {
  * Dial: end play = reading − zero (the cup pushed toward the wheel and zeroed, then pulled
  * toward the end cap). Tape: the reading is the end play; any zero given is not used.
  */
-export function parseTrials(
-  method: EndPlayMethod,
-  unit: LengthUnit,
-  trials: readonly EndPlayTrialInput[],
-): ParsedTrials {
+export function parseTrials(method: EndPlayMethod, unit: LengthUnit, trials: readonly EndPlayTrialInput[]): ParsedTrials {
   const values: EndPlayTrialValue[] = [];
   const errors: FieldMessage[] = [];
 

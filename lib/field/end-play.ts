@@ -1,12 +1,6 @@
 // Mounted end play: from dial or tape trials to a mean, a spread and a call against the policy.
 
-import {
-  assertValidPolicy,
-  COMPARE_SLACK_IN,
-  DEFAULT_END_PLAY_POLICY,
-  ZERO_END_PLAY_IN,
-  type EndPlayPolicy,
-} from "./end-play-policy";
+import { assertValidPolicy, COMPARE_SLACK_IN, DEFAULT_END_PLAY_POLICY, ZERO_END_PLAY_IN, type EndPlayPolicy } from "./end-play-policy";
 import { parseTrials, type EndPlayMethod, type EndPlayTrialInput, type EndPlayTrialValue, type LengthUnit } from "./end-play-trials";
 import { listInWords, message, type FieldMessage } from "./messages";
 import { checkPlausibility } from "./plausibility";
@@ -57,13 +51,15 @@ export function evaluateEndPlay(input: EndPlayInput, policy: EndPlayPolicy = DEF
   const messages: FieldMessage[] = [...errors];
   if (input.method === "tape") {
     messages.push(
-      message("info", "tape-less-precise", "A metal tape is accepted, but a dial indicator is far more precise. Use a dial indicator when one is at hand."),
+      message(
+        "info",
+        "tape-less-precise",
+        "A metal tape is accepted, but a dial indicator is far more precise. Use a dial indicator when one is at hand.",
+      ),
     );
   }
   if (values.length === 0) {
-    messages.unshift(
-      message("error", "no-usable-trial", "No usable end-play trial: enter at least one reading that can be read."),
-    );
+    messages.unshift(message("error", "no-usable-trial", "No usable end-play trial: enter at least one reading that can be read."));
     return { call: "incomplete", removes: false, count: 0, trials: [], messages };
   }
 
@@ -72,7 +68,13 @@ export function evaluateEndPlay(input: EndPlayInput, policy: EndPlayPolicy = DEF
   // Refused until confirmed or corrected: a slip of the hand must not remove or keep a bearing.
   if (plausibility.needsConfirmation) return { call: "incomplete", removes: false, count: 0, trials: [], messages };
   if (input.rollersSeated === false) {
-    messages.unshift(message("error", "not-seated", "The bearing was not turned to seat the rollers before measuring, so the reading is not valid. Turn it, then measure again."));
+    messages.unshift(
+      message(
+        "error",
+        "not-seated",
+        "The bearing was not turned to seat the rollers before measuring, so the reading is not valid. Turn it, then measure again.",
+      ),
+    );
     return { call: "incomplete", removes: false, count: 0, trials: [], messages };
   }
   if (input.rollersSeated === undefined) {
@@ -112,18 +114,30 @@ export function evaluateEndPlay(input: EndPlayInput, policy: EndPlayPolicy = DEF
   if (measured.meanIn <= ZERO_END_PLAY_IN) {
     if (input.turnsByHand === false) {
       messages.unshift(
-        message("remove", "tight-remove", `End play is zero (${meanText}) and the bearing does not turn easily by hand: remove the wheelset from service.`),
+        message(
+          "remove",
+          "tight-remove",
+          `End play is zero (${meanText}) and the bearing does not turn easily by hand: remove the wheelset from service.`,
+        ),
       );
       return { call: "tight-remove", removes: true, ...measured, messages };
     }
     if (input.turnsByHand === true) {
       messages.unshift(
-        message("warn", "tight-remeasure", `End play reads zero (${meanText}) but the bearing turns freely by hand. Turn it so the rollers seat and measure again; this alone is not a reason to remove.`),
+        message(
+          "warn",
+          "tight-remeasure",
+          `End play reads zero (${meanText}) but the bearing turns freely by hand. Turn it so the rollers seat and measure again; this alone is not a reason to remove.`,
+        ),
       );
       return { call: "tight-remeasure", removes: false, ...measured, messages };
     }
     messages.unshift(
-      message("warn", "tight-unknown", `End play reads zero (${meanText}). Say whether the bearing turns easily by hand: if it does not, the wheelset must come out of service.`),
+      message(
+        "warn",
+        "tight-unknown",
+        `End play reads zero (${meanText}). Say whether the bearing turns easily by hand: if it does not, the wheelset must come out of service.`,
+      ),
     );
     return { call: "tight-unknown", removes: false, ...measured, messages };
   }
@@ -139,7 +153,11 @@ export function evaluateEndPlay(input: EndPlayInput, policy: EndPlayPolicy = DEF
   const overTrials = values.filter((v) => v.in > policy.maxIn + COMPARE_SLACK_IN).map((v) => `trial ${v.trial}`);
   if (overTrials.length > 0) {
     messages.push(
-      message("warn", "trial-over-limit", `The mean is within the limit, but ${listInWords(overTrials)} read over ${limitText}. Re-measure before keeping the bearing.`),
+      message(
+        "warn",
+        "trial-over-limit",
+        `The mean is within the limit, but ${listInWords(overTrials)} read over ${limitText}. Re-measure before keeping the bearing.`,
+      ),
     );
   }
   messages.unshift(message("info", "within", `End play ${meanText} is within the ${limitText} limit.`));

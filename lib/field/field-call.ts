@@ -34,7 +34,8 @@ function endPlayBlock(endPlay: EndPlayResult): string | null {
   const has = (code: string) => endPlay.messages.some((m) => m.code === code);
   if (has("implausible-reading")) return "An end-play reading is more than a bearing can show: correct it or confirm it as typed.";
   if (has("not-seated")) return "Undecided — re-measure: the rollers were not seated before measuring.";
-  if (endPlay.messages.some((m) => m.level === "error")) return "Some end-play trials could not be used: correct or delete them before deciding.";
+  if (endPlay.messages.some((m) => m.level === "error"))
+    return "Some end-play trials could not be used: correct or delete them before deciding.";
   if (has("trial-over-limit")) return "Undecided — re-measure: a trial read over the end-play limit.";
   if (has("spread-too-large") || has("outlier-trial")) return "Undecided — re-measure: the trials do not agree.";
   if (has("seating-unstated")) return "Say whether the rollers were seated before measuring; until then end play cannot clear the bearing.";
@@ -60,7 +61,12 @@ export function decideFieldCall(input: FieldCallInput): FieldCall {
       blockers.push({ source: "hand-roll", level: "warn", code: `hand-roll-${handRoll.result}`, text: HAND_ROLL_BLOCK[handRoll.result] });
     }
   } else {
-    blockers.push({ source: "hand-roll", level: "warn", code: "hand-roll-missing", text: "No hand roll is recorded; the bearing cannot be kept without one." });
+    blockers.push({
+      source: "hand-roll",
+      level: "warn",
+      code: "hand-roll-missing",
+      text: "No hand roll is recorded; the bearing cannot be kept without one.",
+    });
   }
 
   if (endPlay) {
@@ -68,9 +74,19 @@ export function decideFieldCall(input: FieldCallInput): FieldCall {
     const block = endPlayBlock(endPlay);
     if (block) blockers.push({ source: "end-play", level: "warn", code: "end-play-unsettled", text: block });
   } else if (input.endPlayRequired === false) {
-    add("end-play", "info", "end-play-not-measured", "End play was not measured; the site policy lets this trigger rest on the other checks.");
+    add(
+      "end-play",
+      "info",
+      "end-play-not-measured",
+      "End play was not measured; the site policy lets this trigger rest on the other checks.",
+    );
   } else {
-    blockers.push({ source: "end-play", level: "warn", code: "end-play-not-measured", text: "End play was not measured, so the bearing cannot be kept on the other checks alone. Measure it." });
+    blockers.push({
+      source: "end-play",
+      level: "warn",
+      code: "end-play-not-measured",
+      text: "End play was not measured, so the bearing cannot be kept on the other checks alone. Measure it.",
+    });
   }
 
   for (const item of input.safetyUnconfirmed ?? []) {
@@ -83,7 +99,12 @@ export function decideFieldCall(input: FieldCallInput): FieldCall {
     if (definition.removes) {
       add("visual", "remove", finding.code, `${definition.label}${note}: remove the wheelset from service.`);
     } else {
-      blockers.push({ source: "visual", level: "warn", code: finding.code, text: `${definition.label}${note}. Judge this finding by the employer's procedures and interchange rules; it is not decided here.` });
+      blockers.push({
+        source: "visual",
+        level: "warn",
+        code: finding.code,
+        text: `${definition.label}${note}. Judge this finding by the employer's procedures and interchange rules; it is not decided here.`,
+      });
     }
   }
 

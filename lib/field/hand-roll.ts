@@ -43,7 +43,13 @@ function procedureMessages(procedure: Partial<HandRollProcedure>): { faults: Fie
     faults.push(message("error", "turned-by-foot", "Turned by foot: a foot cannot feel roughness or a catch. Turn the bearing by hand."));
   } else if (procedure.turnedBy === undefined) unstated.push("whether it was turned by hand");
   if (procedure.oneDirection === false) {
-    faults.push(message("error", "oscillated", "Oscillated back and forth: unloaded rollers click as they reverse and mislead. Turn in one direction only."));
+    faults.push(
+      message(
+        "error",
+        "oscillated",
+        "Oscillated back and forth: unloaded rollers click as they reverse and mislead. Turn in one direction only.",
+      ),
+    );
   } else if (procedure.oneDirection === undefined) unstated.push("whether it was turned in one direction");
   if (procedure.judgedBy === "ear") {
     faults.push(message("error", "judged-by-ear", "Judged by ear: sounds mislead. Judge by the feel in your hands."));
@@ -85,10 +91,18 @@ export function evaluateHandRoll(grid: HandRollGrid, procedure: Partial<HandRoll
     messages.push(message("warn", "procedure-unstated", `Confirm how the check was done: ${listInWords(unstated)}.`));
   }
   if (missing.length > 0) {
-    messages.push(message("warn", "cells-missing", `Not yet checked: ${listInWords(missing)}. Each axle position needs the cup pulled and pushed.`));
+    messages.push(
+      message("warn", "cells-missing", `Not yet checked: ${listInWords(missing)}. Each axle position needs the cup pulled and pushed.`),
+    );
   }
   if (short.length > 0) {
-    messages.push(message("warn", "too-few-revolutions", `Fewer than two full revolutions at ${listInWords(short)}. Turn two full revolutions each way.`));
+    messages.push(
+      message(
+        "warn",
+        "too-few-revolutions",
+        `Fewer than two full revolutions at ${listInWords(short)}. Turn two full revolutions each way.`,
+      ),
+    );
   }
   if (uncounted.length > 0) {
     messages.push(message("warn", "revolutions-missing", `Enter the revolutions turned at ${listInWords(uncounted)}.`));
@@ -99,7 +113,13 @@ export function evaluateHandRoll(grid: HandRollGrid, procedure: Partial<HandRoll
 
   if (faults.length > 0) {
     if (rough.length > 0) {
-      messages.push(message("warn", "recheck-roughness", `Roughness was reported at ${roughText}, but the check was not done properly. Re-check by hand, one direction, by feel, before deciding.`));
+      messages.push(
+        message(
+          "warn",
+          "recheck-roughness",
+          `Roughness was reported at ${roughText}, but the check was not done properly. Re-check by hand, one direction, by feel, before deciding.`,
+        ),
+      );
     }
     return { valid, complete, result: "not-valid", messages };
   }
@@ -108,12 +128,22 @@ export function evaluateHandRoll(grid: HandRollGrid, procedure: Partial<HandRoll
     return { valid, complete, result: "remove", messages };
   }
   if (rough.length > 0) {
-    messages.push(message("warn", "recheck-roughness", `Roughness was reported at ${roughText}. Confirm the check was done by hand, one direction, by feel, to settle it.`));
+    messages.push(
+      message(
+        "warn",
+        "recheck-roughness",
+        `Roughness was reported at ${roughText}. Confirm the check was done by hand, one direction, by feel, to settle it.`,
+      ),
+    );
   }
   if (stiff.length > 0 && rough.length === 0) {
-    messages.push(message("info", "stiff-only", `Stiff at ${listInWords(stiff)}: stiff turning on a cold day or from seal drag alone is not damage.`));
+    messages.push(
+      message("info", "stiff-only", `Stiff at ${listInWords(stiff)}: stiff turning on a cold day or from seal drag alone is not damage.`),
+    );
   }
   if (!valid || !complete) return { valid, complete, result: "incomplete", messages };
-  messages.unshift(message("info", "hand-roll-clear", "No roughness or catch felt at any of the three axle positions, cup pulled and pushed."));
+  messages.unshift(
+    message("info", "hand-roll-clear", "No roughness or catch felt at any of the three axle positions, cup pulled and pushed."),
+  );
   return { valid, complete, result: "keep", messages };
 }

@@ -43,7 +43,11 @@ export function checkPlausibility(
   for (const v of implausible) {
     messages.push(
       confirmedAsTyped
-        ? message("warn", "implausible-confirmed", `Trial ${v.trial}: ${both(v.in)} is more than a journal bearing should show (${both(limit)}); it was confirmed as typed.`)
+        ? message(
+            "warn",
+            "implausible-confirmed",
+            `Trial ${v.trial}: ${both(v.in)} is more than a journal bearing should show (${both(limit)}); it was confirmed as typed.`,
+          )
         : message(
             "error",
             "implausible-reading",
@@ -57,7 +61,11 @@ export function checkPlausibility(
     const far = values.reduce((a, b) => (Math.abs(b.in - m) > Math.abs(a.in - m) ? b : a));
     if (Math.abs(far.in - m) > OUTLIER_SPREADS * allowed + COMPARE_SLACK_IN && !implausible.includes(far)) {
       messages.push(
-        message("warn", "outlier-trial", `Trial ${far.trial} (${both(far.in)}) is far from the others (middle value ${both(m)}). Check it was read right, or re-measure.`),
+        message(
+          "warn",
+          "outlier-trial",
+          `Trial ${far.trial} (${both(far.in)}) is far from the others (middle value ${both(m)}). Check it was read right, or re-measure.`,
+        ),
       );
     }
   }

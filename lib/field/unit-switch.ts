@@ -20,10 +20,17 @@ export function convertLengthText(value: number | string | undefined, from: Leng
 
 /** Does switching need the question at all? Only when some trial holds a number. */
 export function unitSwitchNeedsChoice(trials: readonly EndPlayTrialInput[]): boolean {
-  return trials.some((t) => String(t.reading ?? "").trim() !== "" || (t.zero !== undefined && String(t.zero).trim() !== "" && Number(t.zero) !== 0));
+  return trials.some(
+    (t) => String(t.reading ?? "").trim() !== "" || (t.zero !== undefined && String(t.zero).trim() !== "" && Number(t.zero) !== 0),
+  );
 }
 
-export function switchTrialUnit(trials: readonly EndPlayTrialInput[], from: LengthUnit, to: LengthUnit, how: UnitSwitch): EndPlayTrialInput[] {
+export function switchTrialUnit(
+  trials: readonly EndPlayTrialInput[],
+  from: LengthUnit,
+  to: LengthUnit,
+  how: UnitSwitch,
+): EndPlayTrialInput[] {
   if (how === "reinterpret") return trials.map((t) => ({ ...t }));
   return trials.map((t) => ({ ...t, zero: convertLengthText(t.zero, from, to), reading: convertLengthText(t.reading, from, to) ?? "" }));
 }

@@ -24,9 +24,7 @@ const FRACTION = /^([+-])?(?:(\d+)(?:\s+|-))?(\d+)\/(\d+)$/;
  */
 export function parseLength(input: number | string): ParsedLength {
   if (typeof input === "number") {
-    return Number.isFinite(input)
-      ? { ok: true, value: input }
-      : { ok: false, error: "The value is not a finite number." };
+    return Number.isFinite(input) ? { ok: true, value: input } : { ok: false, error: "The value is not a finite number." };
   }
   const text = input.trim().replace(/\s+/g, " ");
   if (text === "") return { ok: false, error: "Nothing was entered." };

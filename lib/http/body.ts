@@ -47,7 +47,9 @@ export async function readTextLimited(req: Request, maxBytes: number, what?: str
 export async function readFormLimited(req: Request, maxBytes: number, what?: string): Promise<FormData> {
   const bytes = await readBodyLimited(req, maxBytes, what);
   try {
-    return await new Response(bytes as Uint8Array<ArrayBuffer>, { headers: { "content-type": req.headers.get("content-type") ?? "" } }).formData();
+    return await new Response(bytes as Uint8Array<ArrayBuffer>, {
+      headers: { "content-type": req.headers.get("content-type") ?? "" },
+    }).formData();
   } catch {
     throw new HttpError(400, "bad-request", "The upload arrived incomplete and could not be read; send it again.");
   }

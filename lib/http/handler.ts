@@ -29,7 +29,8 @@ export function errorResponse(err: unknown): NextResponse {
     return NextResponse.json({ error: err.message, code: err.code, details: err.details }, { status: err.status });
   }
   if (err instanceof RowMissing) return NextResponse.json({ error: err.message, code: "not-found" }, { status: 404 });
-  if (err instanceof WriteRefused) return NextResponse.json({ error: err.message, code: "conflict", details: err.details }, { status: 409 });
+  if (err instanceof WriteRefused)
+    return NextResponse.json({ error: err.message, code: "conflict", details: err.details }, { status: 409 });
   if (err instanceof z.ZodError) {
     const { message, fields } = zodMessage(err);
     return NextResponse.json({ error: message, code: "bad-request", fields }, { status: 400 });
@@ -38,7 +39,10 @@ export function errorResponse(err: unknown): NextResponse {
   if (service) {
     // Expected during an outage or restart: one line in the log, a plain 503 to the caller.
     console.error(`${service} unavailable: ${err instanceof Error ? err.message : String(err)}`);
-    return NextResponse.json({ error: UNAVAILABLE_MESSAGES[service], code: "unavailable", service }, { status: 503, headers: { "retry-after": "30" } });
+    return NextResponse.json(
+      { error: UNAVAILABLE_MESSAGES[service], code: "unavailable", service },
+      { status: 503, headers: { "retry-after": "30" } },
+    );
   }
   console.error(err);
   return NextResponse.json({ error: "Something went wrong on the server; nothing was changed.", code: "internal" }, { status: 500 });
@@ -59,10 +63,7 @@ export function parseQuery<T>(req: NextRequest, schema: ZodType<T>): T {
   return schema.parse(Object.fromEntries(req.nextUrl.searchParams.entries()));
 }
 
-export function withRole<P = Record<string, string>>(
-  permission: Permission | null,
-  handler: (ctx: Ctx<P>) => Promise<Response>,
-) {
+export function withRole<P = Record<string, string>>(permission: Permission | null, handler: (ctx: Ctx<P>) => Promise<Response>) {
   return async (req: NextRequest, route: { params: Promise<P> }): Promise<Response> => {
     try {
       const user = await requireApiUser(permission ?? undefined);

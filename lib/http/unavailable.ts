@@ -5,16 +5,41 @@
 export type UnavailableService = "database" | "object-store";
 
 // Network errors a socket raises when the other side is down, restarting or too slow.
-const NETWORK_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "EHOSTUNREACH", "ENETUNREACH", "EAI_AGAIN", "ENOTFOUND"]);
+const NETWORK_CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "ETIMEDOUT",
+  "EPIPE",
+  "EHOSTUNREACH",
+  "ENETUNREACH",
+  "EAI_AGAIN",
+  "ENOTFOUND",
+]);
 // PostgreSQL SQLSTATEs: class 08 connection exceptions; 57P01-57P03 shutdown / starting up;
 // 53300 too many connections; 57014 cancelled by the statement timeout.
 const PG_CODES = /^(08...|57P0[123]|53300|57014)$/;
 // What node-postgres throws when the server goes away or the pool waits too long.
-const PG_MESSAGES = /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated due to connection timeout|Query read timeout/i;
+const PG_MESSAGES =
+  /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|Connection terminated due to connection timeout|Query read timeout/i;
 // The AWS SDK's names for a request that never got an answer.
-const S3_NAMES = new Set(["TimeoutError", "RequestTimeout", "RequestTimeoutException", "NetworkingError", "ServiceUnavailable", "SlowDown"]);
+const S3_NAMES = new Set([
+  "TimeoutError",
+  "RequestTimeout",
+  "RequestTimeoutException",
+  "NetworkingError",
+  "ServiceUnavailable",
+  "SlowDown",
+]);
 
-type ErrorLike = { name?: unknown; code?: unknown; message?: unknown; cause?: unknown; errors?: unknown; $metadata?: unknown; $service?: unknown };
+type ErrorLike = {
+  name?: unknown;
+  code?: unknown;
+  message?: unknown;
+  cause?: unknown;
+  errors?: unknown;
+  $metadata?: unknown;
+  $service?: unknown;
+};
 
 /** The error itself, then what it wraps (cause, AggregateError members), a few levels deep. */
 function* chain(err: unknown, depth = 0): Generator<ErrorLike> {
@@ -60,6 +85,8 @@ export function isObjectStoreOutage(err: unknown): boolean {
 }
 
 export const UNAVAILABLE_MESSAGES: Record<UnavailableService, string> = {
-  database: "Tearline cannot reach its database right now, so nothing was saved or changed. Try again in a minute; if it keeps happening, tell your administrator.",
-  "object-store": "Tearline cannot reach its photo store right now, so the photo was not added and nothing was changed. Try again in a minute; if it keeps happening, tell your administrator.",
+  database:
+    "Tearline cannot reach its database right now, so nothing was saved or changed. Try again in a minute; if it keeps happening, tell your administrator.",
+  "object-store":
+    "Tearline cannot reach its photo store right now, so the photo was not added and nothing was changed. Try again in a minute; if it keeps happening, tell your administrator.",
 };

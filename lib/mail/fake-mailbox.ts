@@ -13,7 +13,9 @@ export async function readFakeMailbox(limit = 25): Promise<{ messages: FakeMessa
     if (!res.ok) return { error: `the mail fake answered HTTP ${res.status}` };
     const all = (await res.json()) as FakeMessage[];
     // The fake can be told to refuse mail (to exercise retries); say so, or the outbox looks broken.
-    const health = await fetch(`${base}/health`, { cache: "no-store", signal: AbortSignal.timeout(3_000) }).then((r) => r.json() as Promise<{ refuse?: boolean }>).catch(() => ({}) as { refuse?: boolean });
+    const health = await fetch(`${base}/health`, { cache: "no-store", signal: AbortSignal.timeout(3_000) })
+      .then((r) => r.json() as Promise<{ refuse?: boolean }>)
+      .catch(() => ({}) as { refuse?: boolean });
     return { messages: all.slice(-limit).reverse(), refusing: health.refuse === true };
   } catch (err) {
     return { error: `the mail fake at ${base} cannot be reached (${err instanceof Error ? err.message : String(err)})` };

@@ -45,7 +45,10 @@ async function send(mail: OutboxMail): Promise<boolean> {
   try {
     await mailTransport().sendMail({ from: env().MAIL_FROM, to: mail.to, subject: mail.subject, html: mail.html, text: mail.text });
     const redact = ONE_TIME_LINK_KINDS.has(mail.kind) ? { html: redactOneTimeLinks(mail.html), text: redactOneTimeLinks(mail.text) } : {};
-    await db.update(mailOutbox).set({ status: "sent", sentAt: new Date(), lastError: null, ...redact }).where(eq(mailOutbox.id, mail.id));
+    await db
+      .update(mailOutbox)
+      .set({ status: "sent", sentAt: new Date(), lastError: null, ...redact })
+      .where(eq(mailOutbox.id, mail.id));
     return true;
   } catch (err) {
     const failed = mail.attempts >= MAX_ATTEMPTS;
@@ -64,7 +67,10 @@ async function send(mail: OutboxMail): Promise<boolean> {
 /** Sends every pending mail that is due; `force` ignores the back-off (admin "retry now"). */
 export async function deliverDue(force = false): Promise<{ sent: number; failed: number }> {
   if (force) {
-    await db.update(mailOutbox).set({ nextAttemptAt: sql`now()`, status: "pending" }).where(sql`${mailOutbox.status} <> 'sent'`);
+    await db
+      .update(mailOutbox)
+      .set({ nextAttemptAt: sql`now()`, status: "pending" })
+      .where(sql`${mailOutbox.status} <> 'sent'`);
   }
   const due = await db
     .select({ id: mailOutbox.id })

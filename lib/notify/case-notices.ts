@@ -47,43 +47,75 @@ async function safely(kind: NoticeKind, c: NoticeCase, work: () => Promise<strin
 
 /** To every engineer who wants it: a verdict on this case waits for sign-off. */
 export function notifySignoffRequested(c: NoticeCase, proposer?: NoticeActor, into?: Tx): Promise<string | null> {
-  return safely("signoff-requested", c, async () => {
-    const analyst = proposer ?? (await peopleByIds([c.proposedBy]))[0];
-    const to = pickRecipients(await peopleWithRoles(["engineer"]), "signoff-requested", analyst?.id ?? c.proposedBy);
-    const mail = signoffRequested({
-      caseNumber: c.number,
-      url: caseUrl(c),
-      analystName: analyst?.name ?? "An analyst",
-      primaryCauseLabel: await causeLabel(c.primaryCause),
-      trigger: await triggerLabel(c.trigger),
-    });
-    return enqueueMail("signoff-requested", to, mail, into);
-  }, into);
+  return safely(
+    "signoff-requested",
+    c,
+    async () => {
+      const analyst = proposer ?? (await peopleByIds([c.proposedBy]))[0];
+      const to = pickRecipients(await peopleWithRoles(["engineer"]), "signoff-requested", analyst?.id ?? c.proposedBy);
+      const mail = signoffRequested({
+        caseNumber: c.number,
+        url: caseUrl(c),
+        analystName: analyst?.name ?? "An analyst",
+        primaryCauseLabel: await causeLabel(c.primaryCause),
+        trigger: await triggerLabel(c.trigger),
+      });
+      return enqueueMail("signoff-requested", to, mail, into);
+    },
+    into,
+  );
 }
 
 /** To the analyst who proposed and the inspector who filed: the verdict is signed. */
 export function notifyVerdictSigned(c: NoticeCase, signer: NoticeActor, into?: Tx): Promise<string | null> {
-  return safely("verdict-signed", c, async () => {
-    const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy]), "verdict-signed", signer.id);
-    const confidence = c.confidence ? confidenceLabel(c.confidence) : "not given";
-    const mail = verdictSigned({ caseNumber: c.number, url: caseUrl(c), signerName: signer.name, primaryCauseLabel: await causeLabel(c.primaryCause), confidence });
-    return enqueueMail("verdict-signed", to, mail, into);
-  }, into);
+  return safely(
+    "verdict-signed",
+    c,
+    async () => {
+      const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy]), "verdict-signed", signer.id);
+      const confidence = c.confidence ? confidenceLabel(c.confidence) : "not given";
+      const mail = verdictSigned({
+        caseNumber: c.number,
+        url: caseUrl(c),
+        signerName: signer.name,
+        primaryCauseLabel: await causeLabel(c.primaryCause),
+        confidence,
+      });
+      return enqueueMail("verdict-signed", to, mail, into);
+    },
+    into,
+  );
 }
 
 /** To the analyst who proposed and the inspector who filed: the verdict went back to the bench. */
 export function notifyVerdictReturned(c: NoticeCase, by: NoticeActor, reason: string, into?: Tx): Promise<string | null> {
-  return safely("verdict-returned", c, async () => {
-    const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy]), "verdict-returned", by.id);
-    const mail = verdictReturned({ caseNumber: c.number, url: caseUrl(c), returnedBy: by.name, reason, primaryCauseLabel: await causeLabel(c.primaryCause) });
-    return enqueueMail("verdict-returned", to, mail, into);
-  }, into);
+  return safely(
+    "verdict-returned",
+    c,
+    async () => {
+      const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy]), "verdict-returned", by.id);
+      const mail = verdictReturned({
+        caseNumber: c.number,
+        url: caseUrl(c),
+        returnedBy: by.name,
+        reason,
+        primaryCauseLabel: await causeLabel(c.primaryCause),
+      });
+      return enqueueMail("verdict-returned", to, mail, into);
+    },
+    into,
+  );
 }
 
 /** To the analyst, the inspector and the engineer who had signed: a signed case was reopened. */
 export function notifyCaseReopened(c: NoticeCase, by: NoticeActor, reason: string, into?: Tx): Promise<string | null> {
-  return safely("case-reopened", c, async () => {
-    const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy, c.signedBy]), "case-reopened", by.id);
-    return enqueueMail("case-reopened", to, caseReopened({ caseNumber: c.number, url: caseUrl(c), reopenedBy: by.name, reason }), into);
-  }, into);
+  return safely(
+    "case-reopened",
+    c,
+    async () => {
+      const to = pickRecipients(await peopleByIds([c.proposedBy, c.createdBy, c.signedBy]), "case-reopened", by.id);
+      return enqueueMail("case-reopened", to, caseReopened({ caseNumber: c.number, url: caseUrl(c), reopenedBy: by.name, reason }), into);
+    },
+    into,
+  );
 }

@@ -37,7 +37,10 @@ const serwist = new Serwist({
     },
     {
       matcher: ({ request, url, sameOrigin }) =>
-        sameOrigin && request.method === "GET" && !url.pathname.startsWith("/api/") && (request.mode === "navigate" || request.headers.get("RSC") === "1"),
+        sameOrigin &&
+        request.method === "GET" &&
+        !url.pathname.startsWith("/api/") &&
+        (request.mode === "navigate" || request.headers.get("RSC") === "1"),
       handler: new NetworkFirst({
         cacheName: PAGES,
         networkTimeoutSeconds: PAGE_WAIT_SECONDS,
@@ -56,7 +59,8 @@ self.addEventListener("install", (event) => {
       Promise.all(
         OFFLINE_PAGES.map(async (path) => {
           const res = await fetch(new Request(path, { credentials: "same-origin" })).catch(() => null);
-          if (res && (await onlyGoodPages.cacheWillUpdate!({ response: res, request: new Request(path), event, state: undefined }))) await cache.put(path, res);
+          if (res && (await onlyGoodPages.cacheWillUpdate!({ response: res, request: new Request(path), event, state: undefined })))
+            await cache.put(path, res);
         }),
       ),
     ),
@@ -66,7 +70,9 @@ self.addEventListener("install", (event) => {
 // Caches of earlier Tearline workers go; Serwist's own are left to Serwist.
 self.addEventListener("activate", (event) => {
   const keep = new Set([PAGES, ASSETS]);
-  event.waitUntil(caches.keys().then((keys) => Promise.all(keys.filter((k) => k.startsWith("tearline-") && !keep.has(k)).map((k) => caches.delete(k)))));
+  event.waitUntil(
+    caches.keys().then((keys) => Promise.all(keys.filter((k) => k.startsWith("tearline-") && !keep.has(k)).map((k) => caches.delete(k)))),
+  );
 });
 
 serwist.addEventListeners();

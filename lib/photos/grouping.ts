@@ -14,7 +14,9 @@ export function componentLabel(code: string | null | undefined): string {
   return labelOfComponent(code);
 }
 
-export function groupByComponent<P extends { component: string | null; takenAt: string | null; createdAt: string }>(photos: P[]): PhotoGroup<P>[] {
+export function groupByComponent<P extends { component: string | null; takenAt: string | null; createdAt: string }>(
+  photos: P[],
+): PhotoGroup<P>[] {
   const groups = new Map<string, P[]>();
   for (const p of photos) {
     const key = p.component ?? UNTAGGED;
@@ -41,6 +43,12 @@ type FindingLike = { id: string; component: string; row: string | null; damageCo
 /** "Cup · Subsurface spall · severity 3 · 3 o'clock (90°)": how a finding is named in the photo tags. */
 export function findingLabel(f: FindingLike): string {
   const damage = damageLabel(f.damageCode);
-  const parts = [componentLabel(f.component), f.row && !componentLabel(f.component).toLowerCase().includes(f.row) ? `${f.row} row` : null, damage, `severity ${f.severity}`, f.clockDeg !== null ? clockWords(f.clockDeg) : null];
+  const parts = [
+    componentLabel(f.component),
+    f.row && !componentLabel(f.component).toLowerCase().includes(f.row) ? `${f.row} row` : null,
+    damage,
+    `severity ${f.severity}`,
+    f.clockDeg !== null ? clockWords(f.clockDeg) : null,
+  ];
   return parts.filter(Boolean).join(" · ");
 }

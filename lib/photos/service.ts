@@ -1,7 +1,17 @@
 // Photo operations as routes and pages call them: who may touch which case, then ingest,
 // tag and remove with the real bucket and database.
 import "server-only";
-import { deletePhotoRow, findingInCase, findingOptions, getReadablePhoto, listCasePhotos, photoRowExists, photoRows, SIGNED_REFUSAL, updatePhotoTags } from "@/db/queries/photos";
+import {
+  deletePhotoRow,
+  findingInCase,
+  findingOptions,
+  getReadablePhoto,
+  listCasePhotos,
+  photoRowExists,
+  photoRows,
+  SIGNED_REFUSAL,
+  updatePhotoTags,
+} from "@/db/queries/photos";
 import type { Case, Photo } from "@/db/schema";
 import type { CurrentUser } from "@/lib/auth/session";
 import { badRequest, conflict, forbidden, notFound } from "@/lib/http/errors";
@@ -39,7 +49,8 @@ export async function loadReadablePhoto(photoId: string, user: CurrentUser) {
 }
 
 async function checkFinding(tags: PhotoTags, caseId: string) {
-  if (tags.findingId && !(await findingInCase(tags.findingId, caseId))) throw badRequest("That finding belongs to another case; choose one of this case's findings.");
+  if (tags.findingId && !(await findingInCase(tags.findingId, caseId)))
+    throw badRequest("That finding belongs to another case; choose one of this case's findings.");
 }
 
 export async function uploadPhoto(c: Case, file: { bytes: Buffer; name: string }, tags: PhotoTags, user: CurrentUser) {

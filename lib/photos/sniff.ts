@@ -3,8 +3,20 @@
 import { refuse } from "./refusal";
 
 export type SniffedKind =
-  | "jpeg" | "png" | "webp" | "heif"
-  | "svg" | "gif" | "tiff" | "bmp" | "pdf" | "zip" | "html" | "text" | "empty" | "unknown";
+  | "jpeg"
+  | "png"
+  | "webp"
+  | "heif"
+  | "svg"
+  | "gif"
+  | "tiff"
+  | "bmp"
+  | "pdf"
+  | "zip"
+  | "html"
+  | "text"
+  | "empty"
+  | "unknown";
 
 export type Sniffed = { kind: SniffedKind; brand?: string };
 export type AcceptedKind = "jpeg" | "png" | "webp" | "heif";
@@ -50,7 +62,11 @@ export function sniffImage(buf: Uint8Array): Sniffed {
 
   const head = buf.subarray(0, 4096);
   if (looksLikeText(head)) {
-    const text = new TextDecoder().decode(head).replace(/^\uFEFF/, "").trimStart().toLowerCase();
+    const text = new TextDecoder()
+      .decode(head)
+      .replace(/^\uFEFF/, "")
+      .trimStart()
+      .toLowerCase();
     if (text.startsWith("<") && text.includes("<svg")) return { kind: "svg" };
     if (text.startsWith("<!doctype html") || text.startsWith("<html")) return { kind: "html" };
     return { kind: "text" };

@@ -17,7 +17,15 @@ export const photoTagsSchema = z
     component: z.preprocess(blankToNull, z.enum(componentCodes, { error: "Choose a part from the list." }).nullable()).optional(),
     row: z.preprocess(blankToNull, z.enum(rowCodes, { error: "Row is inboard or outboard." }).nullable()).optional(),
     clockDeg: z
-      .preprocess(blankToNull, z.coerce.number({ error: "Clock position is a number of degrees." }).int("Clock position is a whole number of degrees.").min(0, "Clock position is 0–359°.").max(359, "Clock position is 0–359°.").nullable())
+      .preprocess(
+        blankToNull,
+        z.coerce
+          .number({ error: "Clock position is a number of degrees." })
+          .int("Clock position is a whole number of degrees.")
+          .min(0, "Clock position is 0–359°.")
+          .max(359, "Clock position is 0–359°.")
+          .nullable(),
+      )
       .optional(),
     findingId: z.preprocess(blankToNull, z.string().uuid("Choose a finding of this case.").nullable()).optional(),
     caption: z.string().trim().max(CAPTION_MAX, `A caption is at most ${CAPTION_MAX} characters.`).optional(),

@@ -15,14 +15,37 @@ function signatureRows(s: ReportSource): Row[] {
   if (c.status !== "signed" || !c.signedContentHash) return [];
   const now = contentHash({
     caseNumber: c.number,
-    verdict: { primaryCause: c.primaryCause, contributingCauses: c.contributingCauses, confidence: c.confidence, removalConfirmed: c.removalConfirmed, correctiveAction: c.correctiveAction, verdictNotes: c.verdictNotes },
-    findings: s.findings.map((f) => ({ component: f.component, row: f.row, zone: f.zone, damageCode: f.damageCode, severity: f.severity, clockDeg: f.clockDeg, arcDeg: f.arcDeg, lengthMm: f.lengthMm, widthMm: f.widthMm, notes: f.notes })),
+    verdict: {
+      primaryCause: c.primaryCause,
+      contributingCauses: c.contributingCauses,
+      confidence: c.confidence,
+      removalConfirmed: c.removalConfirmed,
+      correctiveAction: c.correctiveAction,
+      verdictNotes: c.verdictNotes,
+    },
+    findings: s.findings.map((f) => ({
+      component: f.component,
+      row: f.row,
+      zone: f.zone,
+      damageCode: f.damageCode,
+      severity: f.severity,
+      clockDeg: f.clockDeg,
+      arcDeg: f.arcDeg,
+      lengthMm: f.lengthMm,
+      widthMm: f.widthMm,
+      notes: f.notes,
+    })),
     photoHashes: s.photos.map((p) => p.sha256),
   });
   return [
     ["Signature means", c.signedMeaning ?? DASH],
     ["Signed content (SHA-256)", groupedHash(c.signedContentHash)],
-    ["Signature check", now === c.signedContentHash ? "Matches: the verdict, findings and photos are exactly as signed." : "Does not match: the verdict, findings or photos changed after signing."],
+    [
+      "Signature check",
+      now === c.signedContentHash
+        ? "Matches: the verdict, findings and photos are exactly as signed."
+        : "Does not match: the verdict, findings or photos changed after signing.",
+    ],
   ];
 }
 
@@ -64,7 +87,10 @@ function serviceRows(s: ReportSource): Row[] {
   ];
   if (c.serviceMiles !== null && c.wheelDiameterIn) {
     const revs = wheelRevolutions(c.serviceMiles, c.wheelDiameterIn);
-    rows.push(["Wheel revolutions", `${(revs / 1e6).toFixed(1)} million (${c.serviceMiles.toLocaleString("en-US")} mi on a ${c.wheelDiameterIn} in wheel)`]);
+    rows.push([
+      "Wheel revolutions",
+      `${(revs / 1e6).toFixed(1)} million (${c.serviceMiles.toLocaleString("en-US")} mi on a ${c.wheelDiameterIn} in wheel)`,
+    ]);
   }
   return rows;
 }
@@ -79,7 +105,8 @@ export function buildCaseReport(s: ReportSource): CaseReport {
   const position = c.axle ? `Axle ${c.axle}${c.side ? `, ${c.side === "L" ? "left" : "right"} side` : ""}` : DASH;
   const trigger = triggerLabel(c.trigger, labels.trigger);
   const cause = c.primaryCause ? causeLabel(c.primaryCause, labels.cause) : "Not proposed yet";
-  const removal = c.removalConfirmed === "confirmed" ? "Confirmed by teardown" : c.removalConfirmed === "no-defect" ? "No defect found" : DASH;
+  const removal =
+    c.removalConfirmed === "confirmed" ? "Confirmed by teardown" : c.removalConfirmed === "no-defect" ? "No defect found" : DASH;
 
   return {
     number: c.number,
@@ -115,7 +142,10 @@ export function buildCaseReport(s: ReportSource): CaseReport {
     teardown: {
       rows: [
         ["Lab", s.lab ? `${s.lab.name} (${s.lab.code})` : DASH],
-        ["Received", c.receivedAt ? `${formatDateTime(c.receivedAt)}${s.people.receivedBy ? ` by ${s.people.receivedBy}` : ""}` : "Not received yet"],
+        [
+          "Received",
+          c.receivedAt ? `${formatDateTime(c.receivedAt)}${s.people.receivedBy ? ` by ${s.people.receivedBy}` : ""}` : "Not received yet",
+        ],
         ["Lubricant", c.lubricant?.conditions?.length ? c.lubricant.conditions.map((x) => lubricantLabel(x)).join(", ") : DASH],
         ["Lubricant notes", text(c.lubricant?.notes?.trim())],
       ],
@@ -127,7 +157,10 @@ export function buildCaseReport(s: ReportSource): CaseReport {
     verdict: {
       rows: [
         ["Primary root cause", cause],
-        ["Contributing causes", c.contributingCauses.length ? c.contributingCauses.map((x) => causeLabel(x, labels.cause)).join(", ") : DASH],
+        [
+          "Contributing causes",
+          c.contributingCauses.length ? c.contributingCauses.map((x) => causeLabel(x, labels.cause)).join(", ") : DASH,
+        ],
         ["Confidence", confidenceLabel(c.confidence)],
         ["Removal", removal],
         ["Proposed by", s.people.proposedBy ? `${s.people.proposedBy} · ${formatDateTime(c.proposedAt)}` : "Not proposed yet"],

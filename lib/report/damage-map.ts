@@ -8,7 +8,10 @@ import type { DamageArc, ReportSourceFinding } from "./types";
  * Arcs for the findings that can be placed: on the cup or a cone, with a clock position (the same
  * placing rule as the tallies' map, lib/damage-map/rings.ts). A cup finding with no row is drawn on both rows.
  */
-export function damageArcs(findings: readonly ReportSourceFinding[], label: (f: ReportSourceFinding) => string): { arcs: DamageArc[]; offMap: number } {
+export function damageArcs(
+  findings: readonly ReportSourceFinding[],
+  label: (f: ReportSourceFinding) => string,
+): { arcs: DamageArc[]; offMap: number } {
   const arcs: DamageArc[] = [];
   let offMap = 0;
   for (const f of findings) {

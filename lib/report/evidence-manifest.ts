@@ -1,7 +1,14 @@
 // The evidence bundle's file names, its SHA256SUMS list (the format `sha256sum -c` checks) and README.
 import type { CaseReport, ReportPhoto } from "./types";
 
-const EXT: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/heic": "heic", "image/heif": "heif", "image/webp": "webp", "image/tiff": "tif" };
+const EXT: Record<string, string> = {
+  "image/jpeg": "jpg",
+  "image/png": "png",
+  "image/heic": "heic",
+  "image/heif": "heif",
+  "image/webp": "webp",
+  "image/tiff": "tif",
+};
 
 /** "photos/03-seal-lip.jpg": numbered like the report, the original name made safe for any file system. */
 export function evidencePhotoPath(p: Pick<ReportPhoto, "number" | "fileName" | "contentType" | "sha256">): string {
@@ -20,7 +27,12 @@ export function sha256Sums(entries: { path: string; sha256: string }[]): string 
   return entries.map((e) => `${e.sha256}  ${e.path}\n`).join("");
 }
 
-export function evidenceReadme(r: CaseReport, files: { path: string; stored: string; actual: string }[], madeBy: string, madeAt: string): string {
+export function evidenceReadme(
+  r: CaseReport,
+  files: { path: string; stored: string; actual: string }[],
+  madeBy: string,
+  madeAt: string,
+): string {
   const mismatches = files.filter((f) => f.stored !== f.actual);
   return [
     `Tearline evidence bundle for case ${r.number}`,

@@ -15,7 +15,7 @@ import type { CaseReport } from "./types";
 // archiver 7 exports one factory function; its installed type package describes the later class API.
 type ZipArchiver = archiverModule.Archiver;
 type Factory = (format: "zip", options: archiverModule.ZipOptions) => ZipArchiver;
-const archiver: Factory = ((archiverModule as unknown as { default?: Factory }).default ?? (archiverModule as unknown as Factory));
+const archiver: Factory = (archiverModule as unknown as { default?: Factory }).default ?? (archiverModule as unknown as Factory);
 
 const sha256 = (b: Buffer) => createHash("sha256").update(b).digest("hex");
 
@@ -23,8 +23,20 @@ const sha256 = (b: Buffer) => createHash("sha256").update(b).digest("hex");
 export async function assertOriginalsStored(report: CaseReport, objects: PhotoObjectKeys[]): Promise<void> {
   for (const photo of report.photos) {
     const key = objects.find((o) => o.id === photo.id)?.originalKey;
-    const found = key ? await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key })).then(() => true, () => false) : false;
-    if (!found) throw new HttpError(500, "evidence-incomplete", `The original of photo ${photo.number} (${photo.fileName || photo.caption}) is missing from storage, so the evidence bundle would be incomplete. Tell your administrator.`);
+    const found = key
+      ? await s3()
+          .send(new HeadObjectCommand({ Bucket: bucket(), Key: key }))
+          .then(
+            () => true,
+            () => false,
+          )
+      : false;
+    if (!found)
+      throw new HttpError(
+        500,
+        "evidence-incomplete",
+        `The original of photo ${photo.number} (${photo.fileName || photo.caption}) is missing from storage, so the evidence bundle would be incomplete. Tell your administrator.`,
+      );
   }
 }
 

@@ -68,7 +68,12 @@ function handRollSection(hr: NonNullable<Checks["handRoll"]>, evaluation: HandRo
       ["Direction", yesNo(p.oneDirection, "One direction", "Oscillated (not a valid check)")],
       ["Judged by", p.judgedBy === undefined ? "Not stated" : p.judgedBy === "feel" ? "Feel" : "Ear (not a valid check)"],
     ],
-    result: { keep: "No roughness or catch", remove: "Roughness or catch: remove", "not-valid": "Not a valid check", incomplete: "Not complete" }[evaluation.result],
+    result: {
+      keep: "No roughness or catch",
+      remove: "Roughness or catch: remove",
+      "not-valid": "Not a valid check",
+      incomplete: "Not complete",
+    }[evaluation.result],
     notes: notes(evaluation.messages),
   };
 }
@@ -92,8 +97,14 @@ function endPlaySection(ep: EndPlayInput, result: EndPlayResult, policy: EndPlay
     result.call === "incomplete"
       ? []
       : [
-          ["Mean of usable trials", `${formatInches(result.meanIn)} = ${formatMm(result.meanMm)} (${result.count} ${result.count === 1 ? "trial" : "trials"})`],
-          ["Spread (largest − smallest)", `${formatInches(result.spreadIn)} = ${formatMm(result.spreadMm)}; repeat limit ${formatInches(allowed)}`],
+          [
+            "Mean of usable trials",
+            `${formatInches(result.meanIn)} = ${formatMm(result.meanMm)} (${result.count} ${result.count === 1 ? "trial" : "trials"})`,
+          ],
+          [
+            "Spread (largest − smallest)",
+            `${formatInches(result.spreadIn)} = ${formatMm(result.spreadMm)}; repeat limit ${formatInches(allowed)}`,
+          ],
           ["Limit", `${formatInches(policy.maxIn)} = ${formatMm(inToMm(policy.maxIn))} (${nearestSixtyFourth(policy.maxIn)})`],
         ];
   return {
@@ -113,13 +124,21 @@ export function buildFieldSection(
   stored: { fieldCall: string | null; fieldNotes: string; trigger?: string | null },
 ): FieldSection {
   const checks = raw as Checks;
-  const policy: EndPlayPolicy = site ? { maxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn, plausibleMaxIn: site.plausibleMaxIn } : DEFAULT_END_PLAY_POLICY;
+  const policy: EndPlayPolicy = site
+    ? { maxIn: site.endPlayMaxIn, dialSpreadIn: site.dialSpreadIn, tapeSpreadIn: site.tapeSpreadIn, plausibleMaxIn: site.plausibleMaxIn }
+    : DEFAULT_END_PLAY_POLICY;
   const handRoll = checks.handRoll ? evaluateHandRoll(checks.handRoll.grid ?? {}, checks.handRoll.procedure ?? {}) : undefined;
   const hasTrials = Array.isArray(checks.endPlay?.trials) && checks.endPlay.trials.length > 0;
   const endPlay = checks.endPlay && hasTrials ? evaluateEndPlay(checks.endPlay, policy) : undefined;
   const visual = (Array.isArray(checks.visual) ? checks.visual : []).filter((v) => VISUAL_FINDINGS.some((d) => d.code === v?.code));
   const safetyFlag = safetyFlagOf(raw, stored.trigger);
-  const call = decideFieldCall({ handRoll, endPlay, visual, waysideAlarmConfirmed: checks.waysideAlarmConfirmed, safetyUnconfirmed: safetyFlag });
+  const call = decideFieldCall({
+    handRoll,
+    endPlay,
+    visual,
+    waysideAlarmConfirmed: checks.waysideAlarmConfirmed,
+    safetyUnconfirmed: safetyFlag,
+  });
   const confirmations = checks.confirmations ?? {};
   return {
     handRoll: checks.handRoll && handRoll ? handRollSection(checks.handRoll, handRoll) : null,
@@ -127,7 +146,10 @@ export function buildFieldSection(
     visual: visual.map((v) => [visualFindingDefinition(v.code).label, v.note?.trim() || DASH]),
     confirmations: CONFIRMATIONS.map(([key, label]) => [label, confirmations[key] === true ? "Confirmed" : "Not confirmed"]),
     call: { call: call.call, label: CALL_LABEL[call.call], reasons: call.reasons.map((r) => ({ level: r.level, text: r.text })) },
-    storedCallDiffers: stored.fieldCall && stored.fieldCall !== call.call ? CALL_LABEL[stored.fieldCall as keyof typeof CALL_LABEL] ?? stored.fieldCall : null,
+    storedCallDiffers:
+      stored.fieldCall && stored.fieldCall !== call.call
+        ? (CALL_LABEL[stored.fieldCall as keyof typeof CALL_LABEL] ?? stored.fieldCall)
+        : null,
     notes: stored.fieldNotes.trim(),
     safetyFlag: safetyFlag.map((f) => f.text),
   };

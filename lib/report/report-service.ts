@@ -22,7 +22,10 @@ export async function reportPhotoImages(objects: PhotoObjectKeys[]): Promise<Pho
   for (const o of objects) {
     try {
       const screen = await getObject(o.screenKey);
-      images.set(o.id, await sharp(screen).resize({ width: 900, height: 900, fit: "inside", withoutEnlargement: true }).jpeg({ quality: 80 }).toBuffer());
+      images.set(
+        o.id,
+        await sharp(screen).resize({ width: 900, height: 900, fit: "inside", withoutEnlargement: true }).jpeg({ quality: 80 }).toBuffer(),
+      );
     } catch (err) {
       console.error(`report: photo ${o.id} image not drawn:`, err instanceof Error ? err.message : err);
     }

@@ -79,7 +79,14 @@ export type ReportSourcePhoto = {
   takenAt: DateLike;
 };
 
-export type ReportSourceSite = { code: string; name: string; endPlayMaxIn: number; dialSpreadIn: number; tapeSpreadIn: number; plausibleMaxIn?: number };
+export type ReportSourceSite = {
+  code: string;
+  name: string;
+  endPlayMaxIn: number;
+  dialSpreadIn: number;
+  tapeSpreadIn: number;
+  plausibleMaxIn?: number;
+};
 
 export type ReportSource = {
   case: ReportSourceCase;
@@ -157,9 +164,23 @@ export type ReportPhoto = {
   bytes: number;
 };
 
-export type ComponentSection = { code: string; label: string; disposition: string | null; findings: ReportFinding[]; photos: ReportPhoto[] };
+export type ComponentSection = {
+  code: string;
+  label: string;
+  disposition: string | null;
+  findings: ReportFinding[];
+  photos: ReportPhoto[];
+};
 
-export type DamageArc = { ring: "cup" | "cone"; row: "inboard" | "outboard"; startDeg: number; endDeg: number; severity: number; label: string; estimated: boolean };
+export type DamageArc = {
+  ring: "cup" | "cone";
+  row: "inboard" | "outboard";
+  startDeg: number;
+  endDeg: number;
+  severity: number;
+  label: string;
+  estimated: boolean;
+};
 
 export type CaseReport = {
   number: string;

@@ -17,7 +17,11 @@ interface Token {
   readonly stem: string;
 }
 
-const normalise = (w: string) => w.normalize("NFKD").replace(/[\u0300-\u036f]/g, "").toLowerCase();
+const normalise = (w: string) =>
+  w
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase();
 
 /** Stem sequences, longest first so "water etch" wins over "water". */
 export function compileTerms(terms: readonly string[]): CompiledTerms {
@@ -38,7 +42,9 @@ export function compileTerms(terms: readonly string[]): CompiledTerms {
 
 function tokens(text: string): Token[] {
   return [...text.matchAll(/[\p{L}\p{N}]+/gu)].map((m) => ({
-    start: m.index, end: m.index + m[0].length, stem: stem(normalise(m[0])),
+    start: m.index,
+    end: m.index + m[0].length,
+    stem: stem(normalise(m[0])),
   }));
 }
 

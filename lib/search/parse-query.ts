@@ -69,10 +69,17 @@ function clauseFor(run: readonly string[], entries: readonly CodeSearchEntry[]):
   if (field) {
     const ws = field.role === "row" && run[run.length - 1] === "row" ? run.slice(0, -1) : run;
     return {
-      kind: "words", text: run.join(" "), words: [...ws], codes: [], components: [], correctable: false,
+      kind: "words",
+      text: run.join(" "),
+      words: [...ws],
+      codes: [],
+      components: [],
+      correctable: false,
       highlight: [ws.join(" ")],
-      rows: field.role === "row" ? field.codes : [], zones: field.role === "zone" ? field.codes : [],
-      triggers: field.role === "trigger" ? field.codes : [], classes: field.role === "class" ? field.codes : [],
+      rows: field.role === "row" ? field.codes : [],
+      zones: field.role === "zone" ? field.codes : [],
+      triggers: field.role === "trigger" ? field.codes : [],
+      classes: field.role === "class" ? field.codes : [],
       searchText: field.role === "class" ? "" : ws.join(" "),
       reading: field.label,
     };
@@ -133,8 +140,16 @@ export function parseSearchText(raw: string, entries: readonly CodeSearchEntry[]
       else if (ws.length > 1) {
         const named = entriesForRun(ws, entries);
         clauses.push({
-          kind: "phrase", text: ws.join(" "), words: ws, codes: named.map((e) => e.code), components: [],
-          correctable: false, highlight: [ws.join(" ")], ...NO_FIELDS, searchText: ws.join(" "), reading: `“${ws.join(" ")}”`,
+          kind: "phrase",
+          text: ws.join(" "),
+          words: ws,
+          codes: named.map((e) => e.code),
+          components: [],
+          correctable: false,
+          highlight: [ws.join(" ")],
+          ...NO_FIELDS,
+          searchText: ws.join(" "),
+          reading: `“${ws.join(" ")}”`,
         });
       }
       continue;
@@ -143,7 +158,18 @@ export function parseSearchText(raw: string, entries: readonly CodeSearchEntry[]
     if (/\d/.test(token)) {
       flush();
       const id = token.slice(0, IDENTIFIER_MAX);
-      clauses.push({ kind: "identifier", text: id, words: words(id), codes: [], components: [], correctable: false, highlight: [id], ...NO_FIELDS, searchText: words(id).join(" "), reading: id });
+      clauses.push({
+        kind: "identifier",
+        text: id,
+        words: words(id),
+        codes: [],
+        components: [],
+        correctable: false,
+        highlight: [id],
+        ...NO_FIELDS,
+        searchText: words(id).join(" "),
+        reading: id,
+      });
     } else pending.push(...words(token));
   }
   flush();
@@ -152,11 +178,15 @@ export function parseSearchText(raw: string, entries: readonly CodeSearchEntry[]
 
 /** The search text without one clause: what "drop this part of the reading" links to. */
 export function queryWithout(clauses: readonly SearchClause[], index: number): string {
-  return clauses.filter((_, i) => i !== index).map((c) => (c.kind === "phrase" ? `"${c.text}"` : c.text)).join(" ");
+  return clauses
+    .filter((_, i) => i !== index)
+    .map((c) => (c.kind === "phrase" ? `"${c.text}"` : c.text))
+    .join(" ");
 }
 
 /** Clauses that name something a finding records: a damage, a part, a row or a zone. */
-export const namesFinding = (c: SearchClause) => c.kind === "words" && (c.codes.length > 0 || c.components.length > 0 || c.rows.length > 0 || c.zones.length > 0);
+export const namesFinding = (c: SearchClause) =>
+  c.kind === "words" && (c.codes.length > 0 || c.components.length > 0 || c.rows.length > 0 || c.zones.length > 0);
 
 /** Every damage code the query names, for ranking boosts and chips. */
 export const codesIn = (clauses: readonly SearchClause[]) => [...new Set(clauses.flatMap((c) => c.codes))];

@@ -25,7 +25,8 @@ const damaged = (fs: readonly FindingRef[]) => fs.filter((f) => f.damageCode !==
 
 /** Parts in order of how telling a side-by-side of them is. */
 export function partsToCompare(a: readonly FindingRef[], b: readonly FindingRef[]): string[] {
-  const da = damaged(a), db = damaged(b);
+  const da = damaged(a),
+    db = damaged(b);
   const sameCode = da.filter((f) => db.some((g) => g.component === f.component && g.damageCode === f.damageCode)).map((f) => f.component);
   const sameFamily = da
     .filter((f) => db.some((g) => g.component === f.component && familyOfCode(g.damageCode) === familyOfCode(f.damageCode)))
@@ -35,11 +36,16 @@ export function partsToCompare(a: readonly FindingRef[], b: readonly FindingRef[
 }
 
 /** Photos are given oldest first; null when the two cases have no photographed part in common. */
-export function pickPhotoPair(aPhotos: readonly PhotoRef[], bPhotos: readonly PhotoRef[], preferredParts: readonly string[]): PhotoPair | null {
+export function pickPhotoPair(
+  aPhotos: readonly PhotoRef[],
+  bPhotos: readonly PhotoRef[],
+  preferredParts: readonly string[],
+): PhotoPair | null {
   const first = (photos: readonly PhotoRef[], part: string) => photos.find((p) => p.component === part);
   const shared = aPhotos.map((p) => p.component).filter((c): c is string => !!c && bPhotos.some((q) => q.component === c));
   for (const part of [...preferredParts, ...shared]) {
-    const a = first(aPhotos, part), b = first(bPhotos, part);
+    const a = first(aPhotos, part),
+      b = first(bPhotos, part);
     if (a && b) return { component: part, a: a.id, b: b.id };
   }
   return null;

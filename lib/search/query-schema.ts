@@ -13,15 +13,30 @@ export const PAGE_SIZE = 20;
 const MAX_PAGE = 500;
 const MAX_VALUES = 40;
 
-const value = z.string().trim().min(1).max(80).regex(/^[\p{L}\p{N}][\p{L}\p{N} ._|/-]*$/u, "unexpected characters");
+const value = z
+  .string()
+  .trim()
+  .min(1)
+  .max(80)
+  .regex(/^[\p{L}\p{N}][\p{L}\p{N} ._|/-]*$/u, "unexpected characters");
 
 /** "a,b" or ["a", "b,c"] → ["a", "b", "c"], without repeats. */
 const list = z
   .union([z.string().max(2000), z.array(z.string().max(400)).max(100)])
-  .transform((v) => [...new Set((Array.isArray(v) ? v : [v]).flatMap((s) => s.split(",")).map((s) => s.trim()).filter(Boolean))])
+  .transform((v) => [
+    ...new Set(
+      (Array.isArray(v) ? v : [v])
+        .flatMap((s) => s.split(","))
+        .map((s) => s.trim())
+        .filter(Boolean),
+    ),
+  ])
   .pipe(z.array(value).max(MAX_VALUES));
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "use YYYY-MM-DD").refine((s) => !Number.isNaN(Date.parse(s)), "not a date");
+const isoDate = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "use YYYY-MM-DD")
+  .refine((s) => !Number.isNaN(Date.parse(s)), "not a date");
 
 const fields = {
   q: z.string().max(200, "keep the search under 200 characters").default(""),
@@ -46,7 +61,9 @@ type RawParams = Record<string, string | string[] | undefined>;
 
 /** An empty field of a form ("from=") means the same as no field. */
 function withoutEmpty(raw: RawParams): RawParams {
-  return Object.fromEntries(Object.entries(raw).filter(([, v]) => v !== undefined && v !== "" && !(Array.isArray(v) && v.every((x) => x === ""))));
+  return Object.fromEntries(
+    Object.entries(raw).filter(([, v]) => v !== undefined && v !== "" && !(Array.isArray(v) && v.every((x) => x === ""))),
+  );
 }
 
 /** Strict: for the API, where a bad parameter is the caller's mistake (400). */

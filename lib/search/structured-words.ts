@@ -66,8 +66,10 @@ export function oneEditApart(a: string, b: string): boolean {
   if (Math.abs(a.length - b.length) > 1) return false;
   let i = 0;
   while (i < a.length && i < b.length && a[i] === b[i]) i++;
-  const ra = a.slice(i), rb = b.slice(i);
-  if (ra.length === rb.length) return ra.slice(1) === rb.slice(1) || (ra.length >= 2 && ra[0] === rb[1] && ra[1] === rb[0] && ra.slice(2) === rb.slice(2));
+  const ra = a.slice(i),
+    rb = b.slice(i);
+  if (ra.length === rb.length)
+    return ra.slice(1) === rb.slice(1) || (ra.length >= 2 && ra[0] === rb[1] && ra[1] === rb[0] && ra.slice(2) === rb.slice(2));
   return ra.length > rb.length ? ra.slice(1) === rb : rb.slice(1) === ra;
 }
 

@@ -37,7 +37,9 @@ export function toggleValue(p: SearchParams, facet: MultiFacet, value: string): 
 export function clearFilters(p: SearchParams): SearchParams {
   return withChange(p, {
     ...Object.fromEntries(MULTI_FACETS.map((f) => [f, []])),
-    severity: undefined, from: undefined, to: undefined,
+    severity: undefined,
+    from: undefined,
+    to: undefined,
   } as Partial<SearchParams>);
 }
 

@@ -2,10 +2,17 @@
 import { z } from "@/lib/validation/zod";
 import { AUDIT_KIND_VALUES } from "./audit-kinds";
 
-const day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-03-31.").optional().or(z.literal("").transform(() => undefined));
+const day = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-03-31.")
+  .optional()
+  .or(z.literal("").transform(() => undefined));
 
 export const auditQuerySchema = z.object({
-  kind: z.enum(AUDIT_KIND_VALUES, "Choose a kind from the list.").optional().or(z.literal("").transform(() => undefined)),
+  kind: z
+    .enum(AUDIT_KIND_VALUES, "Choose a kind from the list.")
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
   person: z.string().trim().max(200, "Keep the name or e-mail under 200 characters.").optional(),
   from: day,
   to: day,

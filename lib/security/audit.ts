@@ -9,7 +9,11 @@ import { clientAddress } from "./client-address";
 
 type Who = { id: string; email: string } | null;
 
-export async function audit(kind: AuditKind, who: Who, opts: { subject?: string | null; headers?: Headers; detail?: Record<string, unknown>; tx?: Tx } = {}) {
+export async function audit(
+  kind: AuditKind,
+  who: Who,
+  opts: { subject?: string | null; headers?: Headers; detail?: Record<string, unknown>; tx?: Tx } = {},
+) {
   const entry = {
     kind,
     actorId: who?.id ?? null,

@@ -14,8 +14,11 @@ export function trustedProxyHops(): number {
 export function clientAddress(headers: Headers, hops = trustedProxyHops()): string {
   const peer = headers.get(PEER_HEADER)?.trim() || "unknown";
   if (hops === 0) return peer;
-  const chain = (headers.get("x-forwarded-for") ?? "").split(",").map((s) => s.trim()).filter(Boolean);
-  return chain.length >= hops ? chain[chain.length - hops] : chain[0] ?? peer;
+  const chain = (headers.get("x-forwarded-for") ?? "")
+    .split(",")
+    .map((s) => s.trim())
+    .filter(Boolean);
+  return chain.length >= hops ? chain[chain.length - hops] : (chain[0] ?? peer);
 }
 
 /** Whether the browser reached us over HTTPS: the request URL, or a trusted proxy's X-Forwarded-Proto. */

@@ -10,13 +10,18 @@ function allowedTypes(path: string): string[] {
 
 export type Refusal = { status: 403 | 415; code: string; message: string };
 
-const changesState = (method: string, path: string) => STATE_CHANGING.has(method) && path.startsWith("/api/") && !path.startsWith("/api/auth/");
+const changesState = (method: string, path: string) =>
+  STATE_CHANGING.has(method) && path.startsWith("/api/") && !path.startsWith("/api/auth/");
 
 /** Checked in proxy.ts for every API call (better-auth checks the origin of its own endpoints itself). */
 export function checkOrigin(method: string, path: string, origin: string | null, allowedOrigins: string[]): Refusal | null {
   if (!changesState(method, path)) return null;
   if (origin && allowedOrigins.includes(origin)) return null;
-  return { status: 403, code: "bad-origin", message: "This request did not come from a Tearline page, so it was refused. Reload the page and try again." };
+  return {
+    status: 403,
+    code: "bad-origin",
+    message: "This request did not come from a Tearline page, so it was refused. Reload the page and try again.",
+  };
 }
 
 /** Checked in withRole once the caller is known, so a stranger learns "sign in" before anything else. */

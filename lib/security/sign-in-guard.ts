@@ -34,25 +34,45 @@ export function guardSignIn(handler: Handler): Handler {
     const locked = email ? accountLockedUntil(counters.get(accountKey(email)) ?? null, now) : null;
     if (locked) {
       await audit("sign-in-failed", null, { subject: email, headers: req.headers, detail: { reason: "account locked" } });
-      return refuse("account-locked", `This account is locked for ${minutesLeft(locked, now)} more minutes after ${SIGN_IN_LIMITS.accountFailures} failed sign-ins. An administrator can unlock it on the People page.`, locked);
+      return refuse(
+        "account-locked",
+        `This account is locked for ${minutesLeft(locked, now)} more minutes after ${SIGN_IN_LIMITS.accountFailures} failed sign-ins. An administrator can unlock it on the People page.`,
+        locked,
+      );
     }
     const blocked = addressBlockedUntil(counters.get(addressKey(address)) ?? null, now);
     if (blocked) {
       await audit("sign-in-failed", null, { subject: email, headers: req.headers, detail: { reason: "address limit" } });
-      return refuse("too-many-attempts", `Too many failed sign-ins from this address. Try again in ${minutesLeft(blocked, now)} minute${minutesLeft(blocked, now) === 1 ? "" : "s"}.`, blocked);
+      return refuse(
+        "too-many-attempts",
+        `Too many failed sign-ins from this address. Try again in ${minutesLeft(blocked, now)} minute${minutesLeft(blocked, now) === 1 ? "" : "s"}.`,
+        blocked,
+      );
     }
 
     const res = await handler(req);
     if (res.status === 200) {
       if (email) await clearCounter(accountKey(email));
-      const who = (await res.clone().json().catch(() => null)) as { user?: { id?: string; email?: string } } | null;
-      await audit("sign-in", who?.user?.id && who.user.email ? { id: who.user.id, email: who.user.email } : null, { subject: email, headers: req.headers });
+      const who = (await res
+        .clone()
+        .json()
+        .catch(() => null)) as { user?: { id?: string; email?: string } } | null;
+      await audit("sign-in", who?.user?.id && who.user.email ? { id: who.user.id, email: who.user.email } : null, {
+        subject: email,
+        headers: req.headers,
+      });
     } else if (res.status === 401) {
       // Only a wrong e-mail or password counts; a suspended account (403) gave the right one.
       await addFailure(addressKey(address), SIGN_IN_LIMITS.addressWindowSeconds, null, 0);
       if (email) {
-        const c = await addFailure(accountKey(email), SIGN_IN_LIMITS.accountWindowSeconds, SIGN_IN_LIMITS.accountFailures, SIGN_IN_LIMITS.lockMinutes);
-        if (c.failures === SIGN_IN_LIMITS.accountFailures) await audit("account-locked", null, { subject: email, headers: req.headers, detail: { failures: c.failures } });
+        const c = await addFailure(
+          accountKey(email),
+          SIGN_IN_LIMITS.accountWindowSeconds,
+          SIGN_IN_LIMITS.accountFailures,
+          SIGN_IN_LIMITS.lockMinutes,
+        );
+        if (c.failures === SIGN_IN_LIMITS.accountFailures)
+          await audit("account-locked", null, { subject: email, headers: req.headers, detail: { failures: c.failures } });
       }
       await audit("sign-in-failed", null, { subject: email, headers: req.headers, detail: { status: res.status } });
     }

@@ -10,7 +10,8 @@ export function auditSignOut(handler: Handler): Handler {
     if (!new URL(req.url).pathname.endsWith("/sign-out")) return handler(req);
     const session = await auth.api.getSession({ headers: req.headers }).catch(() => null);
     const res = await handler(req);
-    if (res.ok && session) await audit("sign-out", { id: session.user.id, email: session.user.email }, { subject: session.user.email, headers: req.headers });
+    if (res.ok && session)
+      await audit("sign-out", { id: session.user.id, email: session.user.email }, { subject: session.user.email, headers: req.headers });
     return res;
   };
 }

@@ -16,14 +16,18 @@ const SEP = "|";
 
 export function findingReasons(a: readonly SimilarityFinding[], b: readonly SimilarityFinding[]): SimilarityReason[] {
   const damageOf = (fs: readonly SimilarityFinding[]) => fs.filter((f) => f.damageCode && f.damageCode !== NO_DAMAGE);
-  const fa = damageOf(a), fb = damageOf(b);
+  const fa = damageOf(a),
+    fb = damageOf(b);
   const weight = (f: SimilarityFinding) => severityWeight(f.severity);
 
   const pairs = weightedJaccard(
     maxBag(fa, (f) => f.component + SEP + f.damageCode, weight),
     maxBag(fb, (f) => f.component + SEP + f.damageCode, weight),
   );
-  const codes = weightedJaccard(maxBag(fa, (f) => f.damageCode, weight), maxBag(fb, (f) => f.damageCode, weight));
+  const codes = weightedJaccard(
+    maxBag(fa, (f) => f.damageCode, weight),
+    maxBag(fb, (f) => f.damageCode, weight),
+  );
   const familyKey = (f: SimilarityFinding) => f.component + SEP + familyOfCode(f.damageCode);
   const families = weightedJaccard(maxBag(fa, familyKey, weight), maxBag(fb, familyKey, weight));
 
@@ -43,7 +47,11 @@ export function findingReasons(a: readonly SimilarityFinding[], b: readonly Simi
     }
     const partsIn = (fs: readonly SimilarityFinding[]) =>
       [...new Set(fs.filter((f) => f.damageCode === code).map((f) => componentPhrase(f.component)))].join(", ");
-    extra.push({ kind: "same-code", weight: W.sameCode * share, text: `${damageLabel(code)} in both, on different parts (${partsIn(fa)} / ${partsIn(fb)})` });
+    extra.push({
+      kind: "same-code",
+      weight: W.sameCode * share,
+      text: `${damageLabel(code)} in both, on different parts (${partsIn(fa)} / ${partsIn(fb)})`,
+    });
   }
 
   for (const { key, share } of families.shared) {
@@ -59,7 +67,8 @@ export function findingReasons(a: readonly SimilarityFinding[], b: readonly Simi
     const labelsIn = (fs: readonly SimilarityFinding[]) =>
       [...new Set(fs.filter((f) => familyKey(f) === key).map((f) => damageLabel(f.damageCode)))].join(", ");
     extra.push({
-      kind: "same-family", weight: W.sameFamily * share,
+      kind: "same-family",
+      weight: W.sameFamily * share,
       text: `${familyLabel(family)}${onPart(component)} in both (${labelsIn(fa)} / ${labelsIn(fb)})`,
     });
   }

@@ -16,6 +16,9 @@ export function rankSimilar<C extends SimilarityCase>(target: SimilarityCase, ca
     .filter((c) => c !== target && c.id !== target.id)
     .map((candidate) => ({ candidate, ...similarity(target, candidate) }))
     .filter((r) => r.score > 0)
-    .sort((x, y) => roundForTie(y.score) - roundForTie(x.score) || (x.candidate.id < y.candidate.id ? -1 : x.candidate.id > y.candidate.id ? 1 : 0))
+    .sort(
+      (x, y) =>
+        roundForTie(y.score) - roundForTie(x.score) || (x.candidate.id < y.candidate.id ? -1 : x.candidate.id > y.candidate.id ? 1 : 0),
+    )
     .slice(0, Math.max(0, limit));
 }

@@ -23,7 +23,13 @@ export interface SimilarityCase {
 }
 
 export type SimilarityReasonKind =
-  | "same-finding" | "same-code" | "same-family" | "same-cause" | "same-trigger" | "same-bearing-class" | "shared-words";
+  | "same-finding"
+  | "same-code"
+  | "same-family"
+  | "same-cause"
+  | "same-trigger"
+  | "same-bearing-class"
+  | "shared-words";
 
 export interface SimilarityReason {
   readonly kind: SimilarityReasonKind;

@@ -7,10 +7,7 @@ export interface SharedKey {
   readonly share: number;
 }
 
-export function weightedJaccard(
-  a: ReadonlyMap<string, number>,
-  b: ReadonlyMap<string, number>,
-): { value: number; shared: SharedKey[] } {
+export function weightedJaccard(a: ReadonlyMap<string, number>, b: ReadonlyMap<string, number>): { value: number; shared: SharedKey[] } {
   const keys = [...new Set([...a.keys(), ...b.keys()])].sort();
   let sumMax = 0;
   for (const k of keys) sumMax += Math.max(a.get(k) ?? 0, b.get(k) ?? 0);

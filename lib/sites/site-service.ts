@@ -1,7 +1,17 @@
 // Sites (shops and labs) with their end-play policy: the pickers' short list, the forms' options,
 // and the admin's add, edit and delete (a site in use is never deleted; it is marked inactive).
 import "server-only";
-import { deleteSite, findSiteByCode, getSite, insertSite, listSiteChoices, listSites, siteUsage, siteUsageCounts, updateSite } from "@/db/queries/sites";
+import {
+  deleteSite,
+  findSiteByCode,
+  getSite,
+  insertSite,
+  listSiteChoices,
+  listSites,
+  siteUsage,
+  siteUsageCounts,
+  updateSite,
+} from "@/db/queries/sites";
 import { siteNameOf } from "@/db/queries/profile";
 import { siteOptions } from "@/db/queries/site-options";
 import type { CurrentUser } from "@/lib/auth/session";
@@ -35,8 +45,12 @@ export async function sitesWithUsage() {
 }
 
 export async function addSite(input: SiteCreateInput, user: CurrentUser, headers: Headers) {
-  if (await findSiteByCode(input.code)) throw conflict(`A site with the code ${input.code} already exists.`, { fields: { code: "This code is taken." } });
-  const order = policyOrderProblems({ endPlayMaxIn: input.endPlayMaxIn ?? DEFAULT_END_PLAY_POLICY.maxIn, plausibleMaxIn: input.plausibleMaxIn ?? DEFAULT_PLAUSIBLE_MAX_IN });
+  if (await findSiteByCode(input.code))
+    throw conflict(`A site with the code ${input.code} already exists.`, { fields: { code: "This code is taken." } });
+  const order = policyOrderProblems({
+    endPlayMaxIn: input.endPlayMaxIn ?? DEFAULT_END_PLAY_POLICY.maxIn,
+    plausibleMaxIn: input.plausibleMaxIn ?? DEFAULT_PLAUSIBLE_MAX_IN,
+  });
   if (order.plausibleMaxIn) throw badRequest(order.plausibleMaxIn, { fields: order });
   const site = await insertSite(input);
   await audit("site-policy", user, { subject: input.code, headers, detail: { action: "add" } });
@@ -49,7 +63,10 @@ export async function editSite(id: string, input: SitePatchInput, user: CurrentU
   if (input.code && input.code !== site.code && (await findSiteByCode(input.code))) {
     throw conflict(`A site with the code ${input.code} already exists.`, { fields: { code: "This code is taken." } });
   }
-  const order = policyOrderProblems({ endPlayMaxIn: input.endPlayMaxIn ?? site.endPlayMaxIn, plausibleMaxIn: input.plausibleMaxIn ?? site.plausibleMaxIn });
+  const order = policyOrderProblems({
+    endPlayMaxIn: input.endPlayMaxIn ?? site.endPlayMaxIn,
+    plausibleMaxIn: input.plausibleMaxIn ?? site.plausibleMaxIn,
+  });
   if (order.plausibleMaxIn) throw badRequest(order.plausibleMaxIn, { fields: order });
   const updated = await updateSite(id, input);
   await audit("site-policy", user, { subject: site.code, headers, detail: { changed: Object.keys(input) } });

@@ -55,7 +55,11 @@ function checkPoints(points: readonly BinomialPoint[]): void {
 
 /** Information matrix entries (sum n p (1-p) [1, x; x, x^2]) and the score at (a, b). */
 function scoreAndInformation(points: readonly BinomialPoint[], a: number, b: number) {
-  let g0 = 0, g1 = 0, i00 = 0, i01 = 0, i11 = 0;
+  let g0 = 0,
+    g1 = 0,
+    i00 = 0,
+    i01 = 0,
+    i11 = 0;
   for (const p of points) {
     const mu = logistic(a + b * p.x);
     const r = p.y - p.n * mu;
@@ -129,7 +133,10 @@ export function fitLogistic(points: readonly BinomialPoint[]): LogisticFit | nul
   return {
     intercept,
     slope,
-    covariance: [[v00, v01], [v01, v11]],
+    covariance: [
+      [v00, v01],
+      [v01, v11],
+    ],
     seIntercept: Math.sqrt(v00),
     seSlope: Math.sqrt(v11),
     loglik,
@@ -172,7 +179,8 @@ function profileLoglik(points: readonly BinomialPoint[], which: Coefficient, val
   };
   let ll = at(other);
   for (let i = 0; i < 100; i++) {
-    let g = 0, h = 0;
+    let g = 0,
+      h = 0;
     for (let j = 0; j < points.length; j++) {
       const p = points[j];
       const eta = which === "slope" ? other + value * p.x : value + other * p.x;
@@ -201,7 +209,12 @@ function profileLoglik(points: readonly BinomialPoint[], which: Coefficient, val
  * chi2_1(confidence)/2 of the maximum. A bound that does not close within 50 standard errors is
  * reported as -Infinity or Infinity.
  */
-export function profileInterval(points: readonly BinomialPoint[], fit: LogisticFit, which: Coefficient, confidence = 0.95): CoefficientInterval {
+export function profileInterval(
+  points: readonly BinomialPoint[],
+  fit: LogisticFit,
+  which: Coefficient,
+  confidence = 0.95,
+): CoefficientInterval {
   checkPoints(points);
   const used = points.filter((p) => p.n > 0);
   const cut = chiSquareQuantile(confidence, 1) / 2;

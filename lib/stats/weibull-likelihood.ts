@@ -46,9 +46,7 @@ export function weibullLogLik(d: LikelihoodData, beta: number, eta: number): num
   const logEta = Math.log(eta);
   let cumulativeHazard = 0;
   for (let i = 0; i < d.logTimes.length; i++) cumulativeHazard += d.counts[i] * Math.exp(beta * (d.logTimes[i] - logEta));
-  return (
-    d.failures * (Math.log(beta) - beta * logEta) + (beta - 1) * d.sumLogFailureTimes - cumulativeHazard
-  );
+  return d.failures * (Math.log(beta) - beta * logEta) + (beta - 1) * d.sumLogFailureTimes - cumulativeHazard;
 }
 
 /** For a given beta the likelihood is maximised by eta = (sum t^beta / r)^(1/beta). */

@@ -77,10 +77,7 @@ export function fisherBounds(d: LikelihoodData, fit: WeibullMle, confidence = 0.
   const gBeta = -Math.log(-Math.log(0.9)) / (beta * beta);
   const gEta = 1 / eta;
   const seLogB10 = Math.sqrt(gBeta * gBeta * varBeta + 2 * gBeta * gEta * covBetaEta + gEta * gEta * varEta);
-  const logBound = (value: number, seLog: number): Interval => [
-    value * Math.exp(-z * seLog),
-    value * Math.exp(z * seLog),
-  ];
+  const logBound = (value: number, seLog: number): Interval => [value * Math.exp(-z * seLog), value * Math.exp(z * seLog)];
   return {
     confidence,
     seBeta,

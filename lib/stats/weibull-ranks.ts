@@ -46,7 +46,10 @@ export function johnsonPlotPointsCounted(groups: readonly CountedUnit[]): Plotte
 export type PlottedFailure = RankedFailure & { y: number };
 
 /** Calls `emit` for every failure in time order with its adjusted and median rank. */
-export function eachAdjustedRank(groups: readonly CountedUnit[], emit: (time: number, adjustedRank: number, medianRank: number) => void): void {
+export function eachAdjustedRank(
+  groups: readonly CountedUnit[],
+  emit: (time: number, adjustedRank: number, medianRank: number) => void,
+): void {
   const sorted = sortForRanking(groups);
   const n = sorted.reduce((s, g) => s + g.count, 0);
   let previous = 0;

@@ -53,7 +53,10 @@ export function rankRegressionOf(points: readonly (RankedFailure & { y?: number 
  * Rank regression of counted units and at most `maxPoints` evenly spaced plotted failures (the
  * first and last always among them), in one pass and without an object per failure.
  */
-export function rankRegressionAndPlot(groups: readonly CountedUnit[], maxPoints: number): { regression: RankRegressionResult; points: PlottedFailure[]; failures: number } {
+export function rankRegressionAndPlot(
+  groups: readonly CountedUnit[],
+  maxPoints: number,
+): { regression: RankRegressionResult; points: PlottedFailure[]; failures: number } {
   let m = 0;
   for (const g of groups) if (g.failed) m += g.count;
   const xs = new Float64Array(m);

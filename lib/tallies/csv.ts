@@ -5,7 +5,10 @@ export type Cell = string | number | boolean | null | undefined;
 
 /** Chart tables say yes/no for flags, the way a manager reads them in a spreadsheet. */
 export function toCsv(header: readonly string[], rows: readonly (readonly Cell[])[]): string {
-  return writeCsv(header, rows.map((row) => row.map((c) => (typeof c === "boolean" ? (c ? "yes" : "no") : c))));
+  return writeCsv(
+    header,
+    rows.map((row) => row.map((c) => (typeof c === "boolean" ? (c ? "yes" : "no") : c))),
+  );
 }
 
 /**
@@ -32,6 +35,9 @@ export function parseCsv(input: string): string[][] {
 
 /** A file name safe on every system: "tearline-cause-pareto-2026-03.csv". */
 export function downloadName(chart: string, ext: "csv" | "png", stamp = new Date().toISOString().slice(0, 10)): string {
-  const slug = chart.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "");
+  const slug = chart
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-|-$/g, "");
   return `tearline-${slug}-${stamp}.${ext}`;
 }

@@ -5,9 +5,7 @@ import { CLUSTER_KEYS, DEFAULT_FILTERS, type TallyFilters } from "./filter-query
 
 export * from "./filter-query";
 
-const month = z
-  .string()
-  .regex(/^\d{4}-(0[1-9]|1[0-2])$/, "Use a month written YYYY-MM.");
+const month = z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, "Use a month written YYYY-MM.");
 
 const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
 
@@ -21,7 +19,10 @@ export const tallyFiltersSchema = z
     cluster: z.preprocess(blankToUndefined, z.enum(CLUSTER_KEYS).default("site")),
     window: z.preprocess(blankToUndefined, z.coerce.number().int().min(1).max(365).default(30)),
   })
-  .refine((f) => !f.from || !f.to || f.from <= f.to, { message: "The period must start before it ends.", path: ["to"] }) satisfies z.ZodType<TallyFilters>;
+  .refine((f) => !f.from || !f.to || f.from <= f.to, {
+    message: "The period must start before it ends.",
+    path: ["to"],
+  }) satisfies z.ZodType<TallyFilters>;
 
 /** Accepts a URLSearchParams-like record (Next's searchParams give string | string[]). */
 export function parseTallyFilters(params: Record<string, string | string[] | undefined>): TallyFilters {
@@ -41,4 +42,3 @@ export function readTallyFilters(params: Record<string, string | string[] | unde
     return DEFAULT_FILTERS;
   }
 }
-

@@ -11,10 +11,14 @@ const REQUIRED = ["serial", "bearing_class", "as_of"] as const;
 export const MAX_FLEET_ROWS = 200_000;
 
 // One message per bad date: the format first, then whether the day exists.
-const isoDate = z.string().max(10, "write the date as YYYY-MM-DD").superRefine((s, ctx) => {
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(s)) ctx.addIssue({ code: "custom", message: "write the date as YYYY-MM-DD" });
-  else if (Number.isNaN(Date.parse(`${s}T00:00:00Z`)) || !new Date(`${s}T00:00:00Z`).toISOString().startsWith(s)) ctx.addIssue({ code: "custom", message: "not a real calendar date" });
-});
+const isoDate = z
+  .string()
+  .max(10, "write the date as YYYY-MM-DD")
+  .superRefine((s, ctx) => {
+    if (!/^\d{4}-\d{2}-\d{2}$/.test(s)) ctx.addIssue({ code: "custom", message: "write the date as YYYY-MM-DD" });
+    else if (Number.isNaN(Date.parse(`${s}T00:00:00Z`)) || !new Date(`${s}T00:00:00Z`).toISOString().startsWith(s))
+      ctx.addIssue({ code: "custom", message: "not a real calendar date" });
+  });
 const optionalNumber = (max: number, label: string, integer = false) =>
   z.preprocess(
     (v) => (v === "" ? undefined : Number(String(v).replace(/[ _]/g, ""))),
@@ -35,17 +39,29 @@ export const fleetRowSchema = z
     service_miles: optionalNumber(50_000_000, "service_miles", true),
   })
   .superRefine((r, ctx) => {
-    if (r.mounted_on && r.mounted_on > r.as_of) ctx.addIssue({ code: "custom", path: ["mounted_on"], message: "mounted_on is after as_of" });
+    if (r.mounted_on && r.mounted_on > r.as_of)
+      ctx.addIssue({ code: "custom", path: ["mounted_on"], message: "mounted_on is after as_of" });
     if (r.service_months === undefined && r.service_miles === undefined && !r.mounted_on) {
       ctx.addIssue({ code: "custom", path: ["service_months"], message: "give service_months, service_miles or mounted_on" });
     }
   });
 
-export type FleetRow = { serial: string; bearingClass: string; mountedOn: string | null; asOf: string; serviceMonths: number | null; serviceMiles: number | null };
+export type FleetRow = {
+  serial: string;
+  bearingClass: string;
+  mountedOn: string | null;
+  asOf: string;
+  serviceMonths: number | null;
+  serviceMiles: number | null;
+};
 export type FleetRowError = { row: number; column: string | null; message: string };
 export type FleetParseResult = { ok: true; rows: FleetRow[] } | { ok: false; errors: FleetRowError[]; errorCount: number };
 
-const normaliseHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, "_");
+const normaliseHeader = (h: string) =>
+  h
+    .trim()
+    .toLowerCase()
+    .replace(/[\s-]+/g, "_");
 
 export function parseFleetCsv(text: string, maxErrors = 100): FleetParseResult {
   const table = parseCsv(text).filter((r) => r.some((c) => c.trim() !== ""));
@@ -53,10 +69,22 @@ export function parseFleetCsv(text: string, maxErrors = 100): FleetParseResult {
   const header = table[0].map(normaliseHeader);
   const missing = REQUIRED.filter((c) => !header.includes(c));
   if (missing.length) {
-    return { ok: false, errors: [{ row: 1, column: null, message: `The header row lacks ${missing.join(", ")}. Expected columns: ${FLEET_COLUMNS.join(", ")}.` }], errorCount: 1 };
+    return {
+      ok: false,
+      errors: [
+        { row: 1, column: null, message: `The header row lacks ${missing.join(", ")}. Expected columns: ${FLEET_COLUMNS.join(", ")}.` },
+      ],
+      errorCount: 1,
+    };
   }
   if (table.length - 1 > MAX_FLEET_ROWS) {
-    return { ok: false, errors: [{ row: 1, column: null, message: `The file has ${table.length - 1} rows; at most ${MAX_FLEET_ROWS} can be uploaded at once.` }], errorCount: 1 };
+    return {
+      ok: false,
+      errors: [
+        { row: 1, column: null, message: `The file has ${table.length - 1} rows; at most ${MAX_FLEET_ROWS} can be uploaded at once.` },
+      ],
+      errorCount: 1,
+    };
   }
   const rows: FleetRow[] = [];
   const errors: FleetRowError[] = [];
@@ -76,9 +104,17 @@ export function parseFleetCsv(text: string, maxErrors = 100): FleetParseResult {
     }
     const r = parsed.data;
     const months = r.service_months ?? (r.mounted_on ? Math.round(monthsBetween(r.mounted_on, r.as_of) * 100) / 100 : null);
-    rows.push({ serial: r.serial, bearingClass: r.bearing_class, mountedOn: r.mounted_on ?? null, asOf: r.as_of, serviceMonths: months, serviceMiles: r.service_miles ?? null });
+    rows.push({
+      serial: r.serial,
+      bearingClass: r.bearing_class,
+      mountedOn: r.mounted_on ?? null,
+      asOf: r.as_of,
+      serviceMonths: months,
+      serviceMiles: r.service_miles ?? null,
+    });
   });
-  if (rows.length === 0 && errorCount === 0) return { ok: false, errors: [{ row: 2, column: null, message: "The file has a header but no units." }], errorCount: 1 };
+  if (rows.length === 0 && errorCount === 0)
+    return { ok: false, errors: [{ row: 2, column: null, message: "The file has a header but no units." }], errorCount: 1 };
   return errorCount ? { ok: false, errors, errorCount } : { ok: true, rows };
 }
 

@@ -32,7 +32,15 @@ export type LifeSummary = {
   label: string;
   failures: number;
   suspensions: number;
-  fit: null | { beta: number; eta: number; b10: number; betaBounds: Bounds; etaBounds: Bounds; b10Bounds: Bounds; shapeReading: ShapeReading };
+  fit: null | {
+    beta: number;
+    eta: number;
+    b10: number;
+    betaBounds: Bounds;
+    etaBounds: Bounds;
+    b10Bounds: Bounds;
+    shapeReading: ShapeReading;
+  };
   /** Why no fit was made, in words. */
   note: string | null;
   /** Longest service life among the units (failures and suspensions alike). */
@@ -80,7 +88,8 @@ export function unitsFor(cause: string, rows: readonly LifeCountRow[], fleet: re
 }
 
 /** The order of the cause table: most failures first, then by name. */
-const causeOrder = (a: { cause: string; failures: number }, b: { cause: string; failures: number }) => b.failures - a.failures || a.cause.localeCompare(b.cause);
+const causeOrder = (a: { cause: string; failures: number }, b: { cause: string; failures: number }) =>
+  b.failures - a.failures || a.cause.localeCompare(b.cause);
 
 export function lifeCauses(rows: readonly LifeCountRow[]): { cause: string; failures: number }[] {
   const totals = new Map<string, number>();
@@ -97,7 +106,16 @@ export function summariseCause(cause: string, units: readonly LifeUnit[], confid
   try {
     assertFittable(units);
   } catch (err) {
-    return { cause, label: causeLabel(cause), failures, suspensions: units.length - failures, longestLife, fit: null, note: noteFor(err), cautions: [] };
+    return {
+      cause,
+      label: causeLabel(cause),
+      failures,
+      suspensions: units.length - failures,
+      longestLife,
+      fit: null,
+      note: noteFor(err),
+      cautions: [],
+    };
   }
   return summariseData(cause, prepareLikelihoodData(units), { total: units.length, longestLife, confidence, unit });
 }
@@ -136,12 +154,22 @@ export function lifeTotalsOf(rows: readonly LifeCountRow[]): Omit<LifeTotals, "o
  * (its removals failed, the rest suspended), so one table of distinct lives serves them all and a
  * cause costs only its failure count and sum of log lives: the casebook is read once, not per cause.
  */
-export function summariseEveryCause(rows: readonly LifeCountRow[], fleet: readonly FleetCountRow[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary[] {
+export function summariseEveryCause(
+  rows: readonly LifeCountRow[],
+  fleet: readonly FleetCountRow[],
+  confidence = 0.95,
+  unit: LifeMeasure = "months",
+): LifeSummary[] {
   return summariseTotals(lifeTotalsOf(rows), fleet, confidence, unit);
 }
 
 /** summariseEveryCause from the totals the database counted. */
-export function summariseTotals(totals: Pick<LifeTotals, "byTime" | "causes">, fleet: readonly FleetCountRow[], confidence = 0.95, unit: LifeMeasure = "months"): LifeSummary[] {
+export function summariseTotals(
+  totals: Pick<LifeTotals, "byTime" | "causes">,
+  fleet: readonly FleetCountRow[],
+  confidence = 0.95,
+  unit: LifeMeasure = "months",
+): LifeSummary[] {
   const byTime = new Map<number, number>();
   for (const b of totals.byTime) if (b.time > 0) byTime.set(b.time, (byTime.get(b.time) ?? 0) + b.count);
   for (const f of fleet) if (f.time > 0) byTime.set(f.time, (byTime.get(f.time) ?? 0) + f.count);
@@ -161,14 +189,28 @@ export function summariseTotals(totals: Pick<LifeTotals, "byTime" | "causes">, f
     const cause = c.cause;
     // The rules of assertFittable, on counts.
     const note = unfittableReason(c.failures, c.first === c.last);
-    if (note) return { cause, label: causeLabel(cause), failures: c.failures, suspensions: total - c.failures, longestLife, fit: null, note, cautions: [] };
+    if (note)
+      return {
+        cause,
+        label: causeLabel(cause),
+        failures: c.failures,
+        suspensions: total - c.failures,
+        longestLife,
+        fit: null,
+        note,
+        cautions: [],
+      };
     const data: LikelihoodData = { logTimes, counts, maxLogTime, failures: c.failures, sumLogFailureTimes: c.sumLog };
     return summariseData(cause, data, { total, longestLife, confidence, unit });
   });
 }
 
 /** One cause's lives as counted groups from the totals: its own lives failed, every other life (and the fleet) suspended. */
-export function countedFromTotals(own: readonly FleetCountRow[], byTime: readonly FleetCountRow[], fleet: readonly FleetCountRow[]): CountedUnit[] {
+export function countedFromTotals(
+  own: readonly FleetCountRow[],
+  byTime: readonly FleetCountRow[],
+  fleet: readonly FleetCountRow[],
+): CountedUnit[] {
   const failed = new Map<number, number>();
   const running = new Map<number, number>();
   const add = (m: Map<number, number>, t: number, n: number) => m.set(t, (m.get(t) ?? 0) + n);
@@ -181,24 +223,63 @@ export function countedFromTotals(own: readonly FleetCountRow[], byTime: readonl
   ];
 }
 
-function summariseCounted(cause: string, groups: readonly CountedUnit[], total: number, confidence: number, unit: LifeMeasure): LifeSummary {
+function summariseCounted(
+  cause: string,
+  groups: readonly CountedUnit[],
+  total: number,
+  confidence: number,
+  unit: LifeMeasure,
+): LifeSummary {
   const rows = groups.map((g) => ({ cause: g.failed ? cause : null, time: g.time, count: g.count }));
-  return summariseEveryCause(rows, [], confidence, unit).find((s) => s.cause === cause) ?? {
-    cause, label: causeLabel(cause), failures: 0, suspensions: total, longestLife: groups.reduce((m, g) => Math.max(m, g.time), 0), fit: null,
-    note: unfittableReason(0, false), cautions: [],
-  };
+  return (
+    summariseEveryCause(rows, [], confidence, unit).find((s) => s.cause === cause) ?? {
+      cause,
+      label: causeLabel(cause),
+      failures: 0,
+      suspensions: total,
+      longestLife: groups.reduce((m, g) => Math.max(m, g.time), 0),
+      fit: null,
+      note: unfittableReason(0, false),
+      cautions: [],
+    }
+  );
 }
 
-function summariseData(cause: string, data: LikelihoodData, o: { total: number; longestLife: number; confidence: number; unit: LifeMeasure }): LifeSummary {
-  const base = { cause, label: causeLabel(cause), failures: data.failures, suspensions: o.total - data.failures, longestLife: o.longestLife };
+function summariseData(
+  cause: string,
+  data: LikelihoodData,
+  o: { total: number; longestLife: number; confidence: number; unit: LifeMeasure },
+): LifeSummary {
+  const base = {
+    cause,
+    label: causeLabel(cause),
+    failures: data.failures,
+    suspensions: o.total - data.failures,
+    longestLife: o.longestLife,
+  };
   try {
     const fit = weibullMleFromData(data);
     const fisher = fisherBounds(data, fit, o.confidence);
     return {
       ...base,
-      fit: { beta: fit.beta, eta: fit.eta, b10: fit.b10, betaBounds: fisher.beta, etaBounds: fisher.eta, b10Bounds: fisher.b10, shapeReading: readShape(fit.beta, fisher.beta).reading },
+      fit: {
+        beta: fit.beta,
+        eta: fit.eta,
+        b10: fit.b10,
+        betaBounds: fisher.beta,
+        etaBounds: fisher.eta,
+        b10Bounds: fisher.b10,
+        shapeReading: readShape(fit.beta, fisher.beta).reading,
+      },
       note: null,
-      cautions: lifeCautions({ failures: base.failures, suspensions: base.suspensions, eta: fit.eta, b10: fit.b10, longestLife: o.longestLife, unit: o.unit }),
+      cautions: lifeCautions({
+        failures: base.failures,
+        suspensions: base.suspensions,
+        eta: fit.eta,
+        b10: fit.b10,
+        longestLife: o.longestLife,
+        unit: o.unit,
+      }),
     };
   } catch (err) {
     return { ...base, fit: null, note: noteFor(err), cautions: [] };
@@ -235,8 +316,18 @@ export function analyseCause(
   const small = total <= (opts.lrLimit ?? LR_LIMIT);
   const units = small ? groups.flatMap((g) => Array.from({ length: g.count }, () => ({ time: g.time, failed: g.failed }))) : null;
   // a large set's summary is the one the cause table already made, when the caller has it
-  const summary = units ? summariseCause(cause, units, confidence, opts.unit) : (opts.summary ?? summariseCounted(cause, groups, total, confidence, opts.unit ?? "months"));
-  const empty = { rankRegression: null, mle: null, likelihoodRatio: null, shapeExplanation: "", plotPoints: [], fittedLine: [], thinnedFrom: null };
+  const summary = units
+    ? summariseCause(cause, units, confidence, opts.unit)
+    : (opts.summary ?? summariseCounted(cause, groups, total, confidence, opts.unit ?? "months"));
+  const empty = {
+    rankRegression: null,
+    mle: null,
+    likelihoodRatio: null,
+    shapeExplanation: "",
+    plotPoints: [],
+    fittedLine: [],
+    thinnedFrom: null,
+  };
   if (!summary.fit) return { ...summary, ...empty };
   const full = units ? fitWeibull(units, { confidence }) : null;
   const maxPoints = opts.maxPlotPoints ?? 300;
@@ -257,8 +348,15 @@ export function analyseCause(
   return {
     ...summary,
     rankRegression: { beta: rr.beta, eta: rr.eta, b10: rr.b10, r2: rr.r2 },
-    mle: { beta, eta, b10: summary.fit.b10, fisher: { beta: summary.fit.betaBounds, eta: summary.fit.etaBounds, b10: summary.fit.b10Bounds } },
-    likelihoodRatio: full ? { beta: full.mle.likelihoodRatio.beta, eta: full.mle.likelihoodRatio.eta, b10: full.mle.likelihoodRatio.b10 } : null,
+    mle: {
+      beta,
+      eta,
+      b10: summary.fit.b10,
+      fisher: { beta: summary.fit.betaBounds, eta: summary.fit.etaBounds, b10: summary.fit.b10Bounds },
+    },
+    likelihoodRatio: full
+      ? { beta: full.mle.likelihoodRatio.beta, eta: full.mle.likelihoodRatio.eta, b10: full.mle.likelihoodRatio.b10 }
+      : null,
     shapeExplanation: shape.explanation,
     plotPoints: plotted.map((p) => ({ time: p.time, medianRank: p.medianRank, y: p.y })),
     fittedLine: line(beta, eta, tMin, tMax),

@@ -8,7 +8,8 @@ export function outOfControl(t: MonthlyTally): { series: string; month: string; 
   const out: { series: string; month: string; count: number; side: "above" | "below"; limit: number }[] = [];
   for (const s of t.series) {
     s.beyond.forEach((b, i) => {
-      if (b) out.push({ series: s.label, month: t.months[i], count: s.counts[i], side: b, limit: b === "above" ? s.upperLimit : s.lowerLimit });
+      if (b)
+        out.push({ series: s.label, month: t.months[i], count: s.counts[i], side: b, limit: b === "above" ? s.upperLimit : s.lowerLimit });
     });
   }
   return out.sort((a, b) => b.month.localeCompare(a.month) || a.series.localeCompare(b.series));

@@ -23,11 +23,31 @@ export function causeSiteTally(cells: readonly VerdictCell[], siteLabel: (id: st
 
   const residuals: (number | null)[][] = sites.map(() => causes.map(() => null));
   if (sites.length === 0 || causes.length === 0) {
-    return { sites, causes, counts, residuals, statistic: null, df: 0, pValue: null, gStatistic: null, gPValue: null, cramersV: null, strength: null, warnings: [], notes: [], summary: "No signed verdicts to compare." };
+    return {
+      sites,
+      causes,
+      counts,
+      residuals,
+      statistic: null,
+      df: 0,
+      pValue: null,
+      gStatistic: null,
+      gPValue: null,
+      cramersV: null,
+      strength: null,
+      warnings: [],
+      notes: [],
+      summary: "No signed verdicts to compare.",
+    };
   }
   const test = chiSquareTest(counts);
   test.adjustedResiduals.forEach((row, i) => row.forEach((r, j) => (residuals[test.rowIndices[i]][test.colIndices[j]] = r)));
-  const notes = describeResiduals(test, sites.map((s) => s.label), causes.map((c) => c.label.toLowerCase()), { threshold }).map((d) => ({
+  const notes = describeResiduals(
+    test,
+    sites.map((s) => s.label),
+    causes.map((c) => c.label.toLowerCase()),
+    { threshold },
+  ).map((d) => ({
     site: d.row,
     cause: d.col,
     observed: d.observed,
@@ -36,16 +56,29 @@ export function causeSiteTally(cells: readonly VerdictCell[], siteLabel: (id: st
     sentence: d.sentence,
   }));
   const strength = association(test);
-  return { sites, causes, counts, residuals, statistic: test.statistic, df: test.df, pValue: test.pValue, ...strength, warnings: test.warnings, notes, summary: plainSummary(test.pValue, sites.length) };
+  return {
+    sites,
+    causes,
+    counts,
+    residuals,
+    statistic: test.statistic,
+    df: test.df,
+    pValue: test.pValue,
+    ...strength,
+    warnings: test.warnings,
+    notes,
+    summary: plainSummary(test.pValue, sites.length),
+  };
 }
 
 /** What the p-value means for a manager, without the jargon. */
 export function plainSummary(pValue: number | null, siteCount: number): string {
   if (pValue === null) {
-    return siteCount < 2 ? "Only one site in view: choose a wider filter to compare sites." : "Too few verdicts to compare the sites' mixes of causes.";
+    return siteCount < 2
+      ? "Only one site in view: choose a wider filter to compare sites."
+      : "Too few verdicts to compare the sites' mixes of causes.";
   }
   if (pValue < 0.001) return "The sites' mixes of causes clearly differ (a difference this large would almost never arise by chance).";
   if (pValue < 0.05) return "The sites' mixes of causes differ more than chance alone would usually explain.";
   return "The sites' mixes of causes look alike: the differences are within what chance alone produces.";
 }
-

@@ -24,7 +24,10 @@ function series(id: string, label: string, months: string[], countOf: (m: string
  * Causes are ordered by their total, largest first.
  */
 export function monthlyTally(cells: readonly MonthCell[], first?: string, last?: string, inProgress?: string): MonthlyTally {
-  const seen = cells.filter((c) => c.count > 0).map((c) => c.month).sort();
+  const seen = cells
+    .filter((c) => c.count > 0)
+    .map((c) => c.month)
+    .sort();
   const start = first ?? seen[0];
   const end = last ?? seen[seen.length - 1];
   if (!start || !end) return { months: [], series: [], partialMonth: null };
@@ -58,4 +61,3 @@ export function monthlyTally(cells: readonly MonthCell[], first?: string, last?:
     ],
   };
 }
-

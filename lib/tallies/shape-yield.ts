@@ -27,7 +27,17 @@ export const SMALL_GROUP = 10;
 export const SMALL_FIT = 30;
 
 export function rateRow(c: OutcomeCell, label: string): RateRow {
-  return { id: c.key, label, n: c.n, confirmed: c.confirmed, noDefect: c.noDefect, rate: wilsonInterval(c.confirmed, c.n), costUsd: c.costUsd, uncosted: c.uncosted, small: c.n < SMALL_GROUP };
+  return {
+    id: c.key,
+    label,
+    n: c.n,
+    confirmed: c.confirmed,
+    noDefect: c.noDefect,
+    rate: wilsonInterval(c.confirmed, c.n),
+    costUsd: c.costUsd,
+    uncosted: c.uncosted,
+    small: c.n < SMALL_GROUP,
+  };
 }
 
 const round = (x: number, d = 4) => Math.round(x * 10 ** d) / 10 ** d;
@@ -53,7 +63,11 @@ export function readingFit(cells: readonly HotCell[], basis: "margin" | "reading
   const fit = fitLogistic(points);
   let shaped: ReadingFit["fit"] = null;
   let noFit: string | null = null;
-  if (!fit) noFit = confirmed === 0 || confirmed === n ? "Every alarm had the same outcome, so there is no curve to fit." : "All readings are the same, so there is no curve to fit.";
+  if (!fit)
+    noFit =
+      confirmed === 0 || confirmed === n
+        ? "Every alarm had the same outcome, so there is no curve to fit."
+        : "All readings are the same, so there is no curve to fit.";
   else if (fit.separated) noFit = "The outcomes split cleanly at one reading, so the curve cannot be estimated; see the bands.";
   else {
     const steps = 48;
@@ -114,7 +128,8 @@ export function detectorRows(cells: readonly DetectorCell[], triggerLabel: (code
   // a detector that gives both hot-bearing and acoustic alarms appears once per kind, named so
   const kinds = new Map<string, number>();
   for (const c of cells) kinds.set(c.key, (kinds.get(c.key) ?? 0) + 1);
-  const nameOf = (c: DetectorCell) => ((kinds.get(c.key) ?? 0) > 1 ? `${c.key} · ${c.trigger === "wayside-acoustic" ? "acoustic" : "hot-bearing"}` : c.key);
+  const nameOf = (c: DetectorCell) =>
+    (kinds.get(c.key) ?? 0) > 1 ? `${c.key} · ${c.trigger === "wayside-acoustic" ? "acoustic" : "hot-bearing"}` : c.key;
   const rows: DetectorRow[] = cells.map((c) => ({
     ...rateRow(c, nameOf(c)),
     trigger: triggerLabel(c.trigger),
@@ -138,7 +153,10 @@ export function callRows(cells: readonly OutcomeCell[], keeps: readonly KeepCell
   return rows.sort((a, b) => (a.rate.p ?? 2) - (b.rate.p ?? 2) || a.label.localeCompare(b.label));
 }
 
-export function quarterSeries(cells: readonly CallCell[], siteLabel: (id: string) => string): { quarters: QuarterSeries[]; quarterList: string[] } {
+export function quarterSeries(
+  cells: readonly CallCell[],
+  siteLabel: (id: string) => string,
+): { quarters: QuarterSeries[]; quarterList: string[] } {
   const quarterList = [...new Set(cells.map((c) => c.quarter!))].sort();
   const bySite = new Map<string, CallCell[]>();
   for (const c of cells) bySite.set(c.siteId!, [...(bySite.get(c.siteId!) ?? []), c]);
@@ -164,14 +182,20 @@ export function readingFits(cells: readonly HotCell[]): ReadingFits {
 export type ReadingFits = { margin: ReadingFit; reading: ReadingFit };
 
 /** `fits`, when given, must be `readingFits(counts.hot)`. */
-export function shapeYield(counts: YieldCounts, labels: YieldLabels, fits: ReadingFits = readingFits(counts.hot)): Omit<YieldData, "filters" | "missWindow" | "siteLimit" | "ownCallsOnly" | "namesShown" | "generatedAt"> {
+export function shapeYield(
+  counts: YieldCounts,
+  labels: YieldLabels,
+  fits: ReadingFits = readingFits(counts.hot),
+): Omit<YieldData, "filters" | "missWindow" | "siteLimit" | "ownCallsOnly" | "namesShown" | "generatedAt"> {
   const { margin, reading } = fits;
   const detectors = detectorRows(counts.detectors, labels.trigger);
   const shops = callRows(counts.callsByShop, counts.keepsByShop, labels.site);
   const inspectors = callRows(counts.callsByInspector, counts.keepsByInspector, labels.person);
   const callN = counts.callsByShop.reduce((s, c) => s + c.n, 0);
   const callY = counts.callsByShop.reduce((s, c) => s + c.confirmed, 0);
-  const byTrigger = counts.triggers.filter((c) => c.n > 0).map((c) => rateRow(c, labels.trigger(c.key)))
+  const byTrigger = counts.triggers
+    .filter((c) => c.n > 0)
+    .map((c) => rateRow(c, labels.trigger(c.key)))
     // the label settles ties (triggers with no no-defect removals), whatever order the counts came in
     .sort((a, b) => b.costUsd - a.costUsd || b.noDefect - a.noDefect || a.label.localeCompare(b.label));
   const byDetector = detectors.rows.filter((r) => r.noDefect > 0).sort((a, b) => b.costUsd - a.costUsd || b.noDefect - a.noDefect);
@@ -188,26 +212,41 @@ export function shapeYield(counts: YieldCounts, labels: YieldLabels, fits: Readi
     hot: { margin, reading, withoutReading: counts.hotWithoutReading },
     acoustic: counts.acoustic.filter((c) => c.n > 0).map((c) => rateRow(c, c.key)),
     detectors,
-    calls: { shops, inspectors, ...quarterSeries(counts.callsByQuarter, labels.site), overall: { ...wilsonInterval(callY, callN), n: callN } },
+    calls: {
+      shops,
+      inspectors,
+      ...quarterSeries(counts.callsByQuarter, labels.site),
+      overall: { ...wilsonInterval(callY, callN), n: callN },
+    },
     cost,
   };
 }
-
 
 function summaryLines(margin: ReadingFit, detectors: DetectorRow[], shops: CallRow[], cost: YieldData["cost"]): string[] {
   const out: string[] = [];
   const s = margin.split;
   if (s) {
-    out.push(`Hot-bearing alarms more than ${s.at} °F over the owner's threshold were confirmed at teardown ${percent(s.above.p)} of the time (${s.above.n} removals); at ${s.at} °F over or less, ${percent(s.below.p)} (${s.below.n}).`);
+    out.push(
+      `Hot-bearing alarms more than ${s.at} °F over the owner's threshold were confirmed at teardown ${percent(s.above.p)} of the time (${s.above.n} removals); at ${s.at} °F over or less, ${percent(s.below.p)} (${s.below.n}).`,
+    );
   } else if (margin.n) {
     out.push(`${margin.n} hot-bearing alarms with a reading were torn down; ${percent(margin.confirmed / margin.n)} were confirmed.`);
   }
-  if (margin.fit?.at50) out.push(`Half of these removals are expected to be confirmed at about ${margin.fit.at50.x} °F over the threshold${margin.fit.at50.lower !== null ? ` (95%: ${margin.fit.at50.lower} to ${margin.fit.at50.upper} °F)` : " (the interval is open: the data do not pin it down)"}.`);
+  if (margin.fit?.at50)
+    out.push(
+      `Half of these removals are expected to be confirmed at about ${margin.fit.at50.x} °F over the threshold${margin.fit.at50.lower !== null ? ` (95%: ${margin.fit.at50.lower} to ${margin.fit.at50.upper} °F)` : " (the interval is open: the data do not pin it down)"}.`,
+    );
   const low = detectors.filter((d) => d.position === "below-998" || d.position === "below-95");
-  if (low.length) out.push(`${low.length === 1 ? "Detector" : "Detectors"} ${low.map((d) => d.label).join(", ")} ${low.length === 1 ? "has" : "have"} alarms confirmed less often than the fleet, beyond what chance explains at ${low.length === 1 ? "its" : "their"} number of alarms: worth checking.`);
+  if (low.length)
+    out.push(
+      `${low.length === 1 ? "Detector" : "Detectors"} ${low.map((d) => d.label).join(", ")} ${low.length === 1 ? "has" : "have"} alarms confirmed less often than the fleet, beyond what chance explains at ${low.length === 1 ? "its" : "their"} number of alarms: worth checking.`,
+    );
   const weak = shops.filter((r) => r.n >= SMALL_GROUP).sort((a, b) => (a.rate.p ?? 1) - (b.rate.p ?? 1))[0];
   if (weak && shops.length > 1) out.push(`${weak.label}'s remove calls were confirmed least often: ${percent(weak.rate.p)} of ${weak.n}.`);
-  if (cost.noDefect) out.push(`${cost.noDefect} signed removals found no defect${cost.totalUsd ? `, about ${usd(cost.totalUsd)} at the sites' cost per removal` : ""}${cost.uncosted ? ` (${cost.uncosted} at sites with no cost set)` : ""}.`);
+  if (cost.noDefect)
+    out.push(
+      `${cost.noDefect} signed removals found no defect${cost.totalUsd ? `, about ${usd(cost.totalUsd)} at the sites' cost per removal` : ""}${cost.uncosted ? ` (${cost.uncosted} at sites with no cost set)` : ""}.`,
+    );
   return out;
 }
 
@@ -215,7 +254,13 @@ function cautionLines(margin: ReadingFit, detectors: DetectorRow[], withoutReadi
   const out: string[] = [];
   if (margin.n > 0 && margin.n < SMALL_FIT) out.push(`The curve rests on ${margin.n} hot-bearing alarms; read it as a rough guide.`);
   const few = detectors.filter((d) => d.n > 0 && d.n < SMALL_GROUP).length;
-  if (few) out.push(`${few} ${few === 1 ? "detector has" : "detectors have"} fewer than ${SMALL_GROUP} torn-down alarms; their shares can swing widely — the funnel shows how widely.`);
-  if (withoutReading) out.push(`${withoutReading} hot-bearing ${withoutReading === 1 ? "alarm has" : "alarms have"} no reading or threshold recorded and ${withoutReading === 1 ? "is" : "are"} left out of the curve.`);
+  if (few)
+    out.push(
+      `${few} ${few === 1 ? "detector has" : "detectors have"} fewer than ${SMALL_GROUP} torn-down alarms; their shares can swing widely — the funnel shows how widely.`,
+    );
+  if (withoutReading)
+    out.push(
+      `${withoutReading} hot-bearing ${withoutReading === 1 ? "alarm has" : "alarms have"} no reading or threshold recorded and ${withoutReading === 1 ? "is" : "are"} left out of the curve.`,
+    );
   return out;
 }

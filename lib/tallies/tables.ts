@@ -20,7 +20,16 @@ export function paretoTable(d: TalliesData): DataTable {
 export function triggerVerdictTable(d: TalliesData): DataTable {
   return {
     columns: ["Trigger", "Confirmed", "No defect", "Outcome not recorded", "Total", "Confirmed %", "95% low %", "95% high %"],
-    rows: d.triggerVerdict.map((t) => [t.label, t.confirmed, t.noDefect, t.notRecorded, t.total, pct(t.rate.p), pct(t.rate.lower), pct(t.rate.upper)]),
+    rows: d.triggerVerdict.map((t) => [
+      t.label,
+      t.confirmed,
+      t.noDefect,
+      t.notRecorded,
+      t.total,
+      pct(t.rate.p),
+      pct(t.rate.lower),
+      pct(t.rate.upper),
+    ]),
   };
 }
 
@@ -75,11 +84,35 @@ export function damageTable(d: Pick<TalliesData, "damage">): DataTable {
 
 export function lifeTable(l: LifeData): DataTable {
   return {
-    columns: ["Root cause", "Failures", "Suspensions", "Shape beta", "beta low (Fisher 95%)", "beta high (Fisher 95%)", "Scale eta", "B10", "B10 low", "B10 high", "Reading (from the Fisher bounds)", "Longest life", "Cautions"],
+    columns: [
+      "Root cause",
+      "Failures",
+      "Suspensions",
+      "Shape beta",
+      "beta low (Fisher 95%)",
+      "beta high (Fisher 95%)",
+      "Scale eta",
+      "B10",
+      "B10 low",
+      "B10 high",
+      "Reading (from the Fisher bounds)",
+      "Longest life",
+      "Cautions",
+    ],
     rows: l.causes.map((c) => [
-      c.label, c.failures, c.suspensions, r3(c.fit?.beta), r3(c.fit?.betaBounds[0]), r3(c.fit?.betaBounds[1]),
-      r3(c.fit?.eta), r3(c.fit?.b10), r3(c.fit?.b10Bounds[0]), r3(c.fit?.b10Bounds[1]), c.fit?.shapeReading ?? c.note ?? "",
-      r3(c.longestLife), c.cautions.map((x) => x.text).join(" "),
+      c.label,
+      c.failures,
+      c.suspensions,
+      r3(c.fit?.beta),
+      r3(c.fit?.betaBounds[0]),
+      r3(c.fit?.betaBounds[1]),
+      r3(c.fit?.eta),
+      r3(c.fit?.b10),
+      r3(c.fit?.b10Bounds[0]),
+      r3(c.fit?.b10Bounds[1]),
+      c.fit?.shapeReading ?? c.note ?? "",
+      r3(c.longestLife),
+      c.cautions.map((x) => x.text).join(" "),
     ]),
   };
 }

@@ -50,7 +50,11 @@ export type ControlSeries = {
   beyond: ("above" | "below" | null)[];
 };
 
-export type MonthlyTally = { months: string[]; series: ControlSeries[]; /** The current month, not yet complete: shown, not judged. */ partialMonth: string | null };
+export type MonthlyTally = {
+  months: string[];
+  series: ControlSeries[];
+  /** The current month, not yet complete: shown, not judged. */ partialMonth: string | null;
+};
 
 export type ResidualNote = { site: string; cause: string; observed: number; expected: number; residual: number; sentence: string };
 

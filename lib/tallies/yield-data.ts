@@ -3,7 +3,17 @@ import type { FunnelLimits, ProportionInterval } from "@/lib/stats";
 import type { TallyFilters } from "./filters";
 import type { RateBin } from "./yield-bins";
 
-export type RateRow = { id: string; label: string; n: number; confirmed: number; noDefect: number; rate: ProportionInterval; costUsd: number; uncosted: number; small: boolean };
+export type RateRow = {
+  id: string;
+  label: string;
+  n: number;
+  confirmed: number;
+  noDefect: number;
+  rate: ProportionInterval;
+  costUsd: number;
+  uncosted: number;
+  small: boolean;
+};
 
 export type CurvePoint = { x: number; p: number; lower: number; upper: number };
 
@@ -31,7 +41,12 @@ export type ReadingFit = {
   split: null | { at: number; above: ProportionInterval & { n: number }; below: ProportionInterval & { n: number } };
 };
 
-export type DetectorRow = RateRow & { trigger: string; location: string; alarms: number; position: "below-998" | "below-95" | "inside" | "above-95" | "above-998" | null };
+export type DetectorRow = RateRow & {
+  trigger: string;
+  location: string;
+  alarms: number;
+  position: "below-998" | "below-95" | "inside" | "above-95" | "above-998" | null;
+};
 
 export type CallRow = RateRow & { keeps: number; missed: number };
 
@@ -51,6 +66,12 @@ export type YieldData = {
   hot: { margin: ReadingFit; reading: ReadingFit; withoutReading: number };
   acoustic: RateRow[];
   detectors: { fleet: ProportionInterval & { n: number; confirmed: number }; rows: DetectorRow[]; funnel: FunnelLimits[] };
-  calls: { shops: CallRow[]; inspectors: CallRow[]; quarters: QuarterSeries[]; quarterList: string[]; overall: ProportionInterval & { n: number } };
+  calls: {
+    shops: CallRow[];
+    inspectors: CallRow[];
+    quarters: QuarterSeries[];
+    quarterList: string[];
+    overall: ProportionInterval & { n: number };
+  };
   cost: { byTrigger: RateRow[]; byDetector: DetectorRow[]; totalUsd: number; uncosted: number; noDefect: number };
 };

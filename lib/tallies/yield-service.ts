@@ -30,7 +30,14 @@ export async function loadYield(filters: TallyFilters, viewer: CallViewer, missW
   const people = [...new Set([...calls.byInspector.map((c) => c.key), ...keeps.byInspector.map((k) => k.key)])].sort();
   const names = new Map([...keeps.names, ...calls.names]);
   // Pseudonyms follow a fixed order (the ids), so the same person keeps a number while filters change.
-  const person = (id: string) => (id === viewer.id ? (namesShown ? `${names.get(id) ?? "You"} (you)` : "You") : namesShown ? (names.get(id) ?? "Unknown person") : `Inspector ${people.indexOf(id) + 1}`);
+  const person = (id: string) =>
+    id === viewer.id
+      ? namesShown
+        ? `${names.get(id) ?? "You"} (you)`
+        : "You"
+      : namesShown
+        ? (names.get(id) ?? "Unknown person")
+        : `Inspector ${people.indexOf(id) + 1}`;
   const siteById = new Map(sites.map((s) => [s.id, s]));
   const limitedTo = limit.limited && limit.siteId ? siteById.get(limit.siteId) : undefined;
 

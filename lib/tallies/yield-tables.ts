@@ -8,7 +8,16 @@ const unit = (basis: ReadingFit["basis"]) => (basis === "margin" ? "°F over thr
 
 export function readingBinsTable(f: ReadingFit): DataTable {
   return {
-    columns: [`From (${unit(f.basis)})`, "To (below)", "Torn down", "Confirmed", "Confirmed %", "95% low %", "95% high %", "Fitted % at band middle"],
+    columns: [
+      `From (${unit(f.basis)})`,
+      "To (below)",
+      "Torn down",
+      "Confirmed",
+      "Confirmed %",
+      "95% low %",
+      "95% high %",
+      "Fitted % at band middle",
+    ],
     rows: f.bins.map((b) => {
       const mid = (b.from + b.to) / 2;
       const near = f.fit?.curve.reduce((best, c) => (Math.abs(c.x - mid) < Math.abs(best.x - mid) ? c : best), f.fit.curve[0]);
@@ -20,7 +29,16 @@ export function readingBinsTable(f: ReadingFit): DataTable {
 export function rateTable(rows: RateRow[], groupName: string): DataTable {
   return {
     columns: [groupName, "Torn down", "Confirmed", "No defect", "Confirmed %", "95% low %", "95% high %", "Fewer than 10"],
-    rows: rows.map((r) => [r.label, r.n, r.confirmed, r.noDefect, pct(r.rate.p), pct(r.rate.lower), pct(r.rate.upper), r.small ? "yes" : ""]),
+    rows: rows.map((r) => [
+      r.label,
+      r.n,
+      r.confirmed,
+      r.noDefect,
+      pct(r.rate.p),
+      pct(r.rate.lower),
+      pct(r.rate.upper),
+      r.small ? "yes" : "",
+    ]),
   };
 }
 
@@ -34,9 +52,31 @@ const POSITION_WORDS: Record<NonNullable<DetectorRow["position"]>, string> = {
 
 export function detectorTable(d: YieldData["detectors"]): DataTable {
   return {
-    columns: ["Detector", "Location", "Trigger", "Alarms (any stage)", "Torn down", "Confirmed", "Confirmed %", "95% low %", "95% high %", "Against the fleet"],
+    columns: [
+      "Detector",
+      "Location",
+      "Trigger",
+      "Alarms (any stage)",
+      "Torn down",
+      "Confirmed",
+      "Confirmed %",
+      "95% low %",
+      "95% high %",
+      "Against the fleet",
+    ],
     rows: [
-      ...d.rows.map((r) => [r.label, r.location, r.trigger, r.alarms, r.n, r.confirmed, pct(r.rate.p), pct(r.rate.lower), pct(r.rate.upper), r.position ? POSITION_WORDS[r.position] : ""]),
+      ...d.rows.map((r) => [
+        r.label,
+        r.location,
+        r.trigger,
+        r.alarms,
+        r.n,
+        r.confirmed,
+        pct(r.rate.p),
+        pct(r.rate.lower),
+        pct(r.rate.upper),
+        r.position ? POSITION_WORDS[r.position] : "",
+      ]),
       ["Fleet", "", "", null, d.fleet.n, d.fleet.confirmed, pct(d.fleet.p), pct(d.fleet.lower), pct(d.fleet.upper), ""],
     ],
   };
@@ -46,8 +86,28 @@ export const positionWords = (p: DetectorRow["position"]) => (p ? POSITION_WORDS
 
 export function callTable(rows: CallRow[], groupName: string, window: number): DataTable {
   return {
-    columns: [groupName, "Remove calls torn down", "Confirmed", "Confirmed %", "95% low %", "95% high %", "Keep calls", `Removed again within ${window} days`, "Missed %"],
-    rows: rows.map((r) => [r.label, r.n, r.confirmed, pct(r.rate.p), pct(r.rate.lower), pct(r.rate.upper), r.keeps, r.missed, r.keeps ? pct(r.missed / r.keeps) : null]),
+    columns: [
+      groupName,
+      "Remove calls torn down",
+      "Confirmed",
+      "Confirmed %",
+      "95% low %",
+      "95% high %",
+      "Keep calls",
+      `Removed again within ${window} days`,
+      "Missed %",
+    ],
+    rows: rows.map((r) => [
+      r.label,
+      r.n,
+      r.confirmed,
+      pct(r.rate.p),
+      pct(r.rate.lower),
+      pct(r.rate.upper),
+      r.keeps,
+      r.missed,
+      r.keeps ? pct(r.missed / r.keeps) : null,
+    ]),
   };
 }
 
@@ -60,7 +120,13 @@ export function quarterTable(c: YieldData["calls"]): DataTable {
 
 export function costTable(rows: RateRow[], groupName: string): DataTable {
   return {
-    columns: [groupName, "Signed removals with outcome", "No defect found", "Cost of no-defect removals (USD)", "No-defect at sites with no cost set"],
+    columns: [
+      groupName,
+      "Signed removals with outcome",
+      "No defect found",
+      "Cost of no-defect removals (USD)",
+      "No-defect at sites with no cost set",
+    ],
     rows: rows.map((r) => [r.label, r.n, r.noDefect, money(r.costUsd), r.uncosted]),
   };
 }

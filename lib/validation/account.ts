@@ -4,7 +4,12 @@ import { ROLES } from "@/lib/auth/permissions";
 
 export const PASSWORD_MIN = 10;
 
-export const emailSchema = z.string().trim().toLowerCase().max(254, "Keep the e-mail address under 254 characters.").email("Enter a valid e-mail address, like name@railway.example.");
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254, "Keep the e-mail address under 254 characters.")
+  .email("Enter a valid e-mail address, like name@railway.example.");
 export const passwordSchema = z
   .string()
   .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters for the password.`)
@@ -25,7 +30,10 @@ export const inviteSchema = z.object({
 });
 
 export const acceptInvitationSchema = z.object({
-  token: z.string().min(20, "This invitation link is incomplete; open it again from the e-mail.").max(200, "This invitation link is not one of ours; open it again from the e-mail."),
+  token: z
+    .string()
+    .min(20, "This invitation link is incomplete; open it again from the e-mail.")
+    .max(200, "This invitation link is not one of ours; open it again from the e-mail."),
   password: passwordSchema,
 });
 

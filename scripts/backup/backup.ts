@@ -19,7 +19,15 @@ const tables = await withDb(async (client) => {
   await client.query("BEGIN ISOLATION LEVEL REPEATABLE READ READ ONLY");
   const { rows } = await client.query<{ snap: string }>("SELECT pg_export_snapshot() AS snap");
   const counts = await countRows(client);
-  await run(pgBin("pg_dump"), ["--format=custom", "--no-owner", "--no-privileges", `--snapshot=${rows[0].snap}`, "--file", path.join(folder, dumpFile), databaseUrl()]);
+  await run(pgBin("pg_dump"), [
+    "--format=custom",
+    "--no-owner",
+    "--no-privileges",
+    `--snapshot=${rows[0].snap}`,
+    "--file",
+    path.join(folder, dumpFile),
+    databaseUrl(),
+  ]);
   await client.query("COMMIT");
   return counts;
 });

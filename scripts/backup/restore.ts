@@ -23,9 +23,12 @@ for (const o of manifest.objects) {
 }
 
 const s = store();
-const tablesNow = await withDb((c) => c.query("SELECT count(*)::int AS n FROM pg_tables WHERE schemaname NOT IN ('pg_catalog', 'information_schema')"));
+const tablesNow = await withDb((c) =>
+  c.query("SELECT count(*)::int AS n FROM pg_tables WHERE schemaname NOT IN ('pg_catalog', 'information_schema')"),
+);
 if (tablesNow.rows[0].n > 0) fail("the database is not empty; stop Tearline, move its data folder aside and run the restore again");
-if ((await listKeys(s)).length > 0) fail(`the bucket ${s.bucket} is not empty; stop Tearline, move its data folder aside and run the restore again`);
+if ((await listKeys(s)).length > 0)
+  fail(`the bucket ${s.bucket} is not empty; stop Tearline, move its data folder aside and run the restore again`);
 
 await run(pgBin("pg_restore"), ["--no-owner", "--no-privileges", "--exit-on-error", "--dbname", databaseUrl(), dumpPath]);
 for (const o of manifest.objects) await putBytes(s, o.key, objectFile(o.key), o.contentType);
@@ -38,4 +41,6 @@ for (const key of await listKeys(s)) {
 const problems = [...compareTables(manifest.database.tables, await withDb(countRows)), ...compareObjects(manifest.objects, restored)];
 if (problems.length) fail(`the restored copy differs from the backup:\n  ${problems.join("\n  ")}`);
 const rows = Object.values(manifest.database.tables).reduce((a, b) => a + b, 0);
-console.log(`[tearline] restored ${folder}: ${Object.keys(manifest.database.tables).length} tables, ${rows} rows and ${manifest.objects.length} objects, all matching the manifest`);
+console.log(
+  `[tearline] restored ${folder}: ${Object.keys(manifest.database.tables).length} tables, ${rows} rows and ${manifest.objects.length} objects, all matching the manifest`,
+);

@@ -70,5 +70,7 @@ export async function getBytes(s: ReturnType<typeof store>, key: string): Promis
 }
 
 export async function putBytes(s: ReturnType<typeof store>, key: string, body: Buffer, contentType?: string) {
-  await s.client.send(new PutObjectCommand({ Bucket: s.bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.length }));
+  await s.client.send(
+    new PutObjectCommand({ Bucket: s.bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.length }),
+  );
 }

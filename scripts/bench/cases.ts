@@ -27,7 +27,10 @@ await runBench(async () => {
   const deepPage = Math.max(2, Math.floor(BENCH_CASES / 25 / 20)); // about 5 % into the list
 
   console.log(`case bench: ${BENCH_CASES.toLocaleString("en-US")} cases`);
-  await measure("case list, first page", [list("default", ""), list("default", "", "inspector"), list("100 rows", "pageSize=100")], { repeats: REPEATS * 2, target: TARGET_MS });
+  await measure("case list, first page", [list("default", ""), list("default", "", "inspector"), list("100 rows", "pageSize=100")], {
+    repeats: REPEATS * 2,
+    target: TARGET_MS,
+  });
   await measure(
     "case list, filtered and sorted",
     [
@@ -41,14 +44,22 @@ await runBench(async () => {
   );
   await measure(
     "case list, deep page",
-    [list(`page ${deepPage}`, `page=${deepPage}`), list(`signed page ${Math.ceil(deepPage / 2)}`, `status=signed&sort=removedOn:desc&page=${Math.ceil(deepPage / 2)}`)],
+    [
+      list(`page ${deepPage}`, `page=${deepPage}`),
+      list(`signed page ${Math.ceil(deepPage / 2)}`, `status=signed&sort=removedOn:desc&page=${Math.ceil(deepPage / 2)}`),
+    ],
     { repeats: REPEATS * 2, target: TARGET_MS },
   );
 
-  const { rows: picks } = await db.execute<{ id: string; number: string }>(sql`select id, number from cases order by md5(id::text) limit 20`);
+  const { rows: picks } = await db.execute<{ id: string; number: string }>(
+    sql`select id, number from cases order by md5(id::text) limit 20`,
+  );
   await measure(
     "case page data",
-    picks.map((p) => ({ label: p.number, run: async () => getCaseDetail((await findReadableCase(p.number, who.manager))!.id, who.manager) })),
+    picks.map((p) => ({
+      label: p.number,
+      run: async () => getCaseDetail((await findReadableCase(p.number, who.manager))!.id, who.manager),
+    })),
     { repeats: 2, target: TARGET_MS },
   );
 });

@@ -28,11 +28,15 @@ try {
   // Small tables are read whole by choice; the check means something at the full size only.
   if (GROWTH_PASS) process.exit(0);
   const who = await benchViewers();
-  const [{ id, number }] = (await db.execute<{ id: string; number: string }>(sql`select id, number from cases where status = 'signed' order by number limit 1`)).rows;
-  const list = (q: string, as: "manager" | "inspector" = "manager") => () => {
-    const p = parseListParams(new URLSearchParams(q));
-    return listCases(p.filters, p.sort, p.page, p.pageSize, who[as]);
-  };
+  const [{ id, number }] = (
+    await db.execute<{ id: string; number: string }>(sql`select id, number from cases where status = 'signed' order by number limit 1`)
+  ).rows;
+  const list =
+    (q: string, as: "manager" | "inspector" = "manager") =>
+    () => {
+      const p = parseListParams(new URLSearchParams(q));
+      return listCases(p.filters, p.sort, p.page, p.pageSize, who[as]);
+    };
   const paths: [string, () => Promise<unknown>][] = [
     ["case list, first page", list("")],
     ["case list, inspector", list("", "inspector")],
@@ -55,7 +59,9 @@ try {
       const { rows } = await pool.query({ text: `explain (format json) ${s.config.text}`, values: s.config.values });
       found.push(...seqScans((rows[0]["QUERY PLAN"] as { Plan: PlanNode }[])[0].Plan));
     }
-    console.log(`EXPLAIN ${name}: ${statements.length} statements, ${found.length ? `SEQ SCAN of ${[...new Set(found)].join(", ")} MISSED` : "no sequential scan of cases or findings OK"}`);
+    console.log(
+      `EXPLAIN ${name}: ${statements.length} statements, ${found.length ? `SEQ SCAN of ${[...new Set(found)].join(", ")} MISSED` : "no sequential scan of cases or findings OK"}`,
+    );
     if (found.length) bad++;
   }
   if (bad) process.exitCode = 1;

@@ -16,20 +16,29 @@ const TARGET_S = 1.0;
 
 /** 4000 × 3000 with softened noise: compresses like a phone photo (≈ 5–6 MB), with EXIF and GPS. */
 async function twelveMegapixelJpeg(): Promise<Buffer> {
-  const noisy = await sharp({ create: { width: 4000, height: 3000, channels: 3, background: "#000", noise: { type: "gaussian", mean: 120, sigma: 60 } } })
+  const noisy = await sharp({
+    create: { width: 4000, height: 3000, channels: 3, background: "#000", noise: { type: "gaussian", mean: 120, sigma: 60 } },
+  })
     .jpeg({ quality: 92 })
     .toBuffer();
   return sharp(noisy)
     .blur(0.8)
     .jpeg({ quality: 92 })
-    .withExif({ IFD0: { Make: "Bench", Model: "12MP" }, IFD2: { DateTimeOriginal: "2026:04:02 10:15:00" }, IFD3: { GPSLatitudeRef: "N", GPSLatitude: "45/1 30/1 0/1" } })
+    .withExif({
+      IFD0: { Make: "Bench", Model: "12MP" },
+      IFD2: { DateTimeOriginal: "2026:04:02 10:15:00" },
+      IFD3: { GPSLatitudeRef: "N", GPSLatitude: "45/1 30/1 0/1" },
+    })
     .withMetadata({ orientation: 6 })
     .toBuffer();
 }
 
 async function freshCase(): Promise<string> {
   const number = await nextCaseNumber(db, 2026);
-  const [row] = await db.insert(cases).values({ number, status: "bench", serial: `BENCH-${number}` }).returning({ id: cases.id });
+  const [row] = await db
+    .insert(cases)
+    .values({ number, status: "bench", serial: `BENCH-${number}` })
+    .returning({ id: cases.id });
   return row.id;
 }
 
@@ -43,7 +52,10 @@ try {
   const once = async () => {
     const caseId = await freshCase(); // a fresh case each run, so the file is never a duplicate
     const started = performance.now();
-    const res = await ingestPhoto({ caseId, file, fileName: "bench-12mp.jpg", tags: { component: "cup" }, uploadedBy: someone.id, limits }, { store: s3PhotoStore, rows: photoRows });
+    const res = await ingestPhoto(
+      { caseId, file, fileName: "bench-12mp.jpg", tags: { component: "cup" }, uploadedBy: someone.id, limits },
+      { store: s3PhotoStore, rows: photoRows },
+    );
     const seconds = (performance.now() - started) / 1000;
     if (res.duplicate) throw new Error("bench run was taken for a duplicate");
     return { seconds, caseId };
@@ -52,8 +64,18 @@ try {
   await once(); // warm-up: first sharp call, first bucket and database connections
   const times: number[] = [];
   for (let i = 0; i < RUNS; i++) times.push((await once()).seconds);
-  console.log(`photo ingest: ${meta.width}×${meta.height} JPEG, ${(file.length / 1024 / 1024).toFixed(1)} MB, ${RUNS} runs: ${times.map((t) => t.toFixed(2)).join(" ")} s`);
-  record({ name: "photo ingest, 12-megapixel JPEG", runs: RUNS, p50: percentile(times, 50), p95: percentile(times, 95), unit: "s", target: TARGET_S, targetOn: "p50" });
+  console.log(
+    `photo ingest: ${meta.width}×${meta.height} JPEG, ${(file.length / 1024 / 1024).toFixed(1)} MB, ${RUNS} runs: ${times.map((t) => t.toFixed(2)).join(" ")} s`,
+  );
+  record({
+    name: "photo ingest, 12-megapixel JPEG",
+    runs: RUNS,
+    p50: percentile(times, 50),
+    p95: percentile(times, 95),
+    unit: "s",
+    target: TARGET_S,
+    targetOn: "p50",
+  });
   const n = await db.$count(photos, eq(photos.fileName, "bench-12mp.jpg"));
   if (n < RUNS) throw new Error(`expected ${RUNS + 1} bench photos stored, found ${n}`);
 } finally {

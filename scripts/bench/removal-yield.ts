@@ -29,6 +29,9 @@ async function workload() {
 
 await runBench(async () => {
   const who = await benchViewers();
-  const calls = (await workload()).map((r) => ({ label: `${r.as} ${r.label}`, run: () => loadYield(parseTallyFilters(r.query), who[r.as], r.miss) }));
+  const calls = (await workload()).map((r) => ({
+    label: `${r.as} ${r.label}`,
+    run: () => loadYield(parseTallyFilters(r.query), who[r.as], r.miss),
+  }));
   await measure("removal-yield page data", calls, { repeats: REPEATS, target: TARGET_MS });
 });

@@ -20,7 +20,8 @@ await runBench(async () => {
   for (const [kind, queries] of Object.entries(kinds)) {
     const calls = queries.map((q) => ({
       label: `${q.asInspector ? "inspector " : ""}?${q.query}`,
-      run: () => searchCases(parseSearchParams(Object.fromEntries(new URLSearchParams(q.query))), q.asInspector ? who.inspector : who.engineer),
+      run: () =>
+        searchCases(parseSearchParams(Object.fromEntries(new URLSearchParams(q.query))), q.asInspector ? who.inspector : who.engineer),
     }));
     await measure(`search, ${kind}`, calls, { repeats: kind === "first view" ? 5 : 1, target: TARGET_MS, maxRatio: SEARCH_RATIO });
   }

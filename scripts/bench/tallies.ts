@@ -61,7 +61,10 @@ await runBench(async () => {
     const cause = causes[0].cause;
     await measure(
       `life section, one cause (${cause})`,
-      [{ label: cause, run: () => loadLife(parseTallyFilters({}), who.manager, "months", cause) }, { label: `${cause} 12 months`, run: () => loadLife(parseTallyFilters(runs[1].query), who.manager, "months", cause) }],
+      [
+        { label: cause, run: () => loadLife(parseTallyFilters({}), who.manager, "months", cause) },
+        { label: `${cause} 12 months`, run: () => loadLife(parseTallyFilters(runs[1].query), who.manager, "months", cause) },
+      ],
       { repeats: REPEATS * 2, target: TARGET_MS },
     );
   }
@@ -71,6 +74,13 @@ await runBench(async () => {
     fitWeibull(lives); // warm-up
     const ms: number[] = [];
     for (let i = 0; i < 20; i++) ms.push(await timed(async () => fitWeibull(lives)));
-    record({ name: "Weibull fit, 10,000 lives (half suspended)", runs: ms.length, p50: percentile(ms, 50), p95: percentile(ms, 95), unit: "ms", target: 50 });
+    record({
+      name: "Weibull fit, 10,000 lives (half suspended)",
+      runs: ms.length,
+      p50: percentile(ms, 50),
+      p95: percentile(ms, 95),
+      unit: "ms",
+      target: 50,
+    });
   }
 });

@@ -11,5 +11,7 @@ export async function bulkInsert(db: Db | Tx, table: "cases" | "findings", rows:
   const keys = Object.keys(rows[0]);
   const columns = sql.raw(keys.map((k) => `"${snake(k)}"`).join(", "));
   const payload = JSON.stringify(rows.map((r) => Object.fromEntries(keys.map((k) => [snake(k), r[k] ?? null]))));
-  await db.execute(sql`insert into ${sql.raw(table)} (${columns}) select ${columns} from json_populate_recordset(null::${sql.raw(table)}, ${payload}::json)`);
+  await db.execute(
+    sql`insert into ${sql.raw(table)} (${columns}) select ${columns} from json_populate_recordset(null::${sql.raw(table)}, ${payload}::json)`,
+  );
 }

@@ -49,7 +49,8 @@ export function buildCase(rng: Rng, spec: CaseSpec, ctx: SeedContext, teardownDo
   const hasVerdict = spec.status === "signoff" || spec.status === "signed" || !!spec.returned;
   const found = tornDown ? drawFindings(rng, spec.cause, spec.trigger) : [];
   const cause = ROOT_CAUSES.find((c) => c.code === spec.cause)!;
-  const removalConfirmed = spec.cause === "no-defect" ? "no-defect" : spec.cause === "undetermined" && rng.chance(0.4) ? "no-defect" : "confirmed";
+  const removalConfirmed =
+    spec.cause === "no-defect" ? "no-defect" : spec.cause === "undetermined" && rng.chance(0.4) ? "no-defect" : "confirmed";
   const last = times.signed ?? times.proposed ?? times.received ?? times.created;
 
   const values: BuiltCase["values"] = {
@@ -82,7 +83,15 @@ export function buildCase(rng: Rng, spec: CaseSpec, ctx: SeedContext, teardownDo
     teardownNotes: tornDown ? teardownNotesFor(rng, spec) : "",
     primaryCause: hasVerdict ? spec.cause : null,
     contributingCauses: hasVerdict ? contributingFor(rng, spec.cause) : [],
-    confidence: hasVerdict ? (spec.cause === "undetermined" ? "undetermined" : spec.cause === "no-defect" ? "confirmed" : rng.chance(0.68) ? "confirmed" : "probable") : null,
+    confidence: hasVerdict
+      ? spec.cause === "undetermined"
+        ? "undetermined"
+        : spec.cause === "no-defect"
+          ? "confirmed"
+          : rng.chance(0.68)
+            ? "confirmed"
+            : "probable"
+      : null,
     removalConfirmed: hasVerdict ? removalConfirmed : null,
     correctiveAction: hasVerdict ? correctiveActionFor(rng, spec) : "",
     verdictNotes: hasVerdict ? verdictNotesFor(rng, spec, cause.label) : "",

@@ -53,7 +53,10 @@ export async function seedDemoCases(db: Db, seed = DEMO_SEED): Promise<DemoSeedR
       const z = byKey.get(l.to)!;
       // Linked when the later case reached the lab.
       const base = { note: l.note, createdBy: ctx.engineer, createdAt: z.receivedAt ?? z.createdAt };
-      return [{ caseId: a.id, relatedId: z.id, ...base }, { caseId: z.id, relatedId: a.id, ...base }];
+      return [
+        { caseId: a.id, relatedId: z.id, ...base },
+        { caseId: z.id, relatedId: a.id, ...base },
+      ];
     });
     if (linkRows.length) await tx.insert(caseLinks).values(linkRows);
     return { cases: built.length, findings: findingRows.length, events: eventRows.length, links: linkRows.length / 2 };

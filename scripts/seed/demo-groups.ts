@@ -29,7 +29,11 @@ const LOT_FAILURES = ["2025-04-01", "2026-05-31"] as const;
 const LOT_WITHDRAWAL = ["2026-06-15", "2026-09-20"] as const;
 
 export const BAD_LOT: BearingOptions = { maker: "MK-C", lot: "C-2207", manufacturedYm: "2022-07", timesReconditioned: 0 };
-export const REPEAT_CARS = { three: { mark: "QVRX", number: "407120" }, two: { mark: "KMLX", number: "21907" }, wheels: { mark: "TNBX", number: "8830" } } as const;
+export const REPEAT_CARS = {
+  three: { mark: "QVRX", number: "407120" },
+  two: { mark: "KMLX", number: "21907" },
+  wheels: { mark: "TNBX", number: "8830" },
+} as const;
 
 const water = { cause: "water-ingress", story: "water-run", window: WATER_RUN } as const;
 const lot = { cause: "material", story: "bad-lot", bearing: BAD_LOT, window: LOT_FAILURES } as const;

@@ -2,7 +2,14 @@
 export const DEMO_PASSWORD = "tearline-demo";
 
 export const DEMO_SITES = [
-  { code: "MJC", name: "Marrow Junction car shop", kind: "car-shop", railway: "Sable River Rail", location: "Marrow Junction", removalCostUsd: 3850 },
+  {
+    code: "MJC",
+    name: "Marrow Junction car shop",
+    kind: "car-shop",
+    railway: "Sable River Rail",
+    location: "Marrow Junction",
+    removalCostUsd: 3850,
+  },
   { code: "PYC", name: "Pellham Yard car shop", kind: "car-shop", railway: "Sable River Rail", location: "Pellham", removalCostUsd: 3850 },
   { code: "OSW", name: "Osier wheel shop", kind: "wheel-shop", railway: "Sable River Rail", location: "Osier", removalCostUsd: 4400 },
   { code: "CFL", name: "Corby Flats bearing lab", kind: "lab", railway: "Sable River Rail", location: "Corby Flats" },

@@ -6,13 +6,26 @@ import { HISTORY_GROUPS, HISTORY_WINDOW, RECENT_GROUPS, RECENT_WINDOW, type Grou
 import type { Rng } from "./prng";
 
 /** How many of the newest removals sit in each open stage (the rest are signed). */
-export const OPEN_STAGES: readonly (readonly [Stage, number])[] = [["field", 8], ["bench", 8], ["signoff", 6]];
+export const OPEN_STAGES: readonly (readonly [Stage, number])[] = [
+  ["field", 8],
+  ["bench", 8],
+  ["signoff", 6],
+];
 
 function siteFor(rng: Rng, g: Group): RemovalSite {
   if (g.site) return g.site;
   // The wheel shop sees the wheelset removals and the programs; car shops the rest.
-  if (g.trigger === "wheel-removal" || g.trigger === "scheduled") return rng.weighted([["OSW", 55], ["MJC", 25], ["PYC", 20]]);
-  return rng.weighted([["MJC", 46], ["PYC", 36], ["OSW", 18]]);
+  if (g.trigger === "wheel-removal" || g.trigger === "scheduled")
+    return rng.weighted([
+      ["OSW", 55],
+      ["MJC", 25],
+      ["PYC", 20],
+    ]);
+  return rng.weighted([
+    ["MJC", 46],
+    ["PYC", 36],
+    ["OSW", 18],
+  ]);
 }
 
 function expand(rng: Rng, groups: readonly Group[], window: readonly [string, string], prefix: string): CaseSpec[] {

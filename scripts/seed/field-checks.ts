@@ -8,8 +8,15 @@ import type { Rng } from "./prng";
 
 /** How likely a damaged bearing also felt rough when turned by hand, by what damaged it (common practice, estimated). */
 const ROUGH_ODDS: Partial<Record<RootCauseCode, number>> = {
-  "end-of-life": 0.55, "debris-ingress": 0.45, lubrication: 0.5, material: 0.5, "water-ingress": 0.35,
-  impact: 0.4, electrical: 0.3, reconditioning: 0.3, undetermined: 0.2,
+  "end-of-life": 0.55,
+  "debris-ingress": 0.45,
+  lubrication: 0.5,
+  material: 0.5,
+  "water-ingress": 0.35,
+  impact: 0.4,
+  electrical: 0.3,
+  reconditioning: 0.3,
+  undetermined: 0.2,
 };
 
 /** End play grows as a bearing wears (common practice): worn causes read higher, still inside the limit. */
@@ -20,7 +27,10 @@ function normalEndPlayIn(rng: Rng, cause: RootCauseCode): number {
 
 function endPlayStyle(rng: Rng, spec: CaseSpec): EndPlayStyle {
   if (spec.site === "OSW") return rng.chance(0.7) ? "dial-mm" : "dial-in";
-  return rng.weighted([["dial-in", spec.site === "PYC" ? 70 : 85], ["tape", spec.site === "PYC" ? 30 : 15]]);
+  return rng.weighted([
+    ["dial-in", spec.site === "PYC" ? 70 : 85],
+    ["tape", spec.site === "PYC" ? 30 : 15],
+  ]);
 }
 
 export type FieldReport = { fieldChecks: FieldChecks; triggerDetail: Record<string, string | number | boolean | null>; fieldNotes: string };
@@ -32,14 +42,38 @@ export function buildFieldReport(rng: Rng, spec: CaseSpec, draft = false): Field
   let grid;
   let felt: "roughness" | "catch" | "both" | undefined;
   if (trigger === "hand-roll") {
-    felt = rng.weighted([["roughness", 55], ["catch", 30], ["both", 15]] as const);
+    felt = rng.weighted([
+      ["roughness", 55],
+      ["catch", 30],
+      ["both", 15],
+    ] as const);
     const feel = felt === "roughness" ? "rough" : felt;
-    grid = handRollGrid(rng, { rough: felt === "both" ? 2 : rng.weighted([[1, 60], [2, 30], [3, 10]]), feel, stiff: cause === "no-defect" ? rng.int(0, 2) : 0 });
+    grid = handRollGrid(rng, {
+      rough:
+        felt === "both"
+          ? 2
+          : rng.weighted([
+              [1, 60],
+              [2, 30],
+              [3, 10],
+            ]),
+      feel,
+      stiff: cause === "no-defect" ? rng.int(0, 2) : 0,
+    });
   } else if (trigger === "end-play-tight") {
     grid = handRollGrid(rng, { stiff: 6 });
   } else {
     const rough = defective && rng.chance(ROUGH_ODDS[cause] ?? 0.15) ? rng.int(1, 2) : 0;
-    grid = handRollGrid(rng, { rough, stiff: rough ? 0 : rng.weighted([[0, 80], [1, 15], [2, 5]]) });
+    grid = handRollGrid(rng, {
+      rough,
+      stiff: rough
+        ? 0
+        : rng.weighted([
+            [0, 80],
+            [1, 15],
+            [2, 5],
+          ]),
+    });
   }
   if (draft && trigger !== "hand-roll" && rng.chance(0.5)) grid = handRollGrid(rng, { checkedPositions: 1 });
 
@@ -57,5 +91,9 @@ export function buildFieldReport(rng: Rng, spec: CaseSpec, draft = false): Field
 
   if (trigger === "wayside-hot" || trigger === "wayside-acoustic") checks.waysideAlarmConfirmed = !spec.alarmNotConfirmed;
 
-  return { fieldChecks: checks, triggerDetail: triggerDetailFor(rng, spec, { felt, endPlay: checks.endPlay }), fieldNotes: fieldNoteFor(rng, spec) };
+  return {
+    fieldChecks: checks,
+    triggerDetail: triggerDetailFor(rng, spec, { felt, endPlay: checks.endPlay }),
+    fieldNotes: fieldNoteFor(rng, spec),
+  };
 }

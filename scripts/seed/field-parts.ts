@@ -6,7 +6,14 @@ type HandRoll = NonNullable<FieldChecks["handRoll"]>;
 type EndPlay = NonNullable<FieldChecks["endPlay"]>;
 type Feel = "smooth" | "stiff" | "rough" | "catch";
 
-const CELLS = [["0", "pull"], ["0", "push"], ["120", "pull"], ["120", "push"], ["240", "pull"], ["240", "push"]] as const;
+const CELLS = [
+  ["0", "pull"],
+  ["0", "push"],
+  ["120", "pull"],
+  ["120", "push"],
+  ["240", "pull"],
+  ["240", "push"],
+] as const;
 
 export type GridPlan = { rough?: number; feel?: "rough" | "catch" | "both"; stiff?: number; checkedPositions?: number };
 
@@ -44,7 +51,11 @@ export type EndPlayStyle = "dial-in" | "dial-mm" | "tape";
  * tape within one 1/64 graduation, common practice).
  */
 export function endPlayTrials(rng: Rng, targetIn: number, style: EndPlayStyle): EndPlay {
-  const count = rng.weighted([[2, 30], [3, 60], [4, 10]]);
+  const count = rng.weighted([
+    [2, 30],
+    [3, 60],
+    [4, 10],
+  ]);
   if (style === "tape") {
     // Over the limit on a tape means 5/64 or more; a graduation up now and then is normal.
     const over = targetIn > 0.0625;
@@ -65,5 +76,11 @@ export function endPlayTrials(rng: Rng, targetIn: number, style: EndPlayStyle): 
 
 /** Zero end play on a bearing that will not turn by hand. */
 export function tightEndPlay(rng: Rng): EndPlay {
-  return { method: "dial", unit: "in", trials: Array.from({ length: rng.int(2, 3) }, () => ({ zero: 0, reading: 0 })), turnsByHand: false, rollersSeated: true };
+  return {
+    method: "dial",
+    unit: "in",
+    trials: Array.from({ length: rng.int(2, 3) }, () => ({ zero: 0, reading: 0 })),
+    turnsByHand: false,
+    rollersSeated: true,
+  };
 }

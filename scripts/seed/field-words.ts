@@ -8,7 +8,15 @@ type Detail = Record<string, string | number | boolean | null>;
 type Visual = FieldChecks["visual"];
 
 const PLACES = ["Crane Hollow", "Tasker Bend", "Millford Siding", "Owl Creek", "Dunmore Flats", "Hessel Cut", "Barrow Point"];
-const WHEEL_DEFECTS = ["Shelled tread", "Slid flat, about 2 in", "Thin flange", "High flange", "Built-up tread", "Out of round, thumping", "Cracked rim"];
+const WHEEL_DEFECTS = [
+  "Shelled tread",
+  "Slid flat, about 2 in",
+  "Thin flange",
+  "High flange",
+  "Built-up tread",
+  "Out of round, thumping",
+  "Cracked rim",
+];
 
 /** The invented wayside detectors of the demo line; D-217 alarms more often than the others (the demo's over-alarming detector). */
 export const DEMO_DETECTORS = [
@@ -27,7 +35,13 @@ function detector(rng: Rng, noDefect: boolean): Detail {
   rng.int(12, 418);
   rng.int(0, 9);
   rng.pick(PLACES);
-  const d = noDefect ? (a % 4 !== 0 ? DEMO_DETECTORS[2] : DEMO_DETECTORS[[0, 1, 3, 4][a % 4]]) : a % 9 === 0 ? DEMO_DETECTORS[2] : DEMO_DETECTORS[[0, 1, 3, 4][a % 4]];
+  const d = noDefect
+    ? a % 4 !== 0
+      ? DEMO_DETECTORS[2]
+      : DEMO_DETECTORS[[0, 1, 3, 4][a % 4]]
+    : a % 9 === 0
+      ? DEMO_DETECTORS[2]
+      : DEMO_DETECTORS[[0, 1, 3, 4][a % 4]];
   return { detectorId: d.id, detectorLocation: d.location };
 }
 
@@ -35,11 +49,24 @@ export function visualFor(rng: Rng, spec: CaseSpec): Visual {
   const { trigger, cause } = spec;
   switch (trigger) {
     case "welding":
-      return [{ code: "welding-damage", note: rng.pick(["Arc strike on the cup beside the adapter", "Burn marks on the cup OD", "Spatter and a burn spot on the end cap"]) }];
+      return [
+        {
+          code: "welding-damage",
+          note: rng.pick([
+            "Arc strike on the cup beside the adapter",
+            "Burn marks on the cup OD",
+            "Spatter and a burn spot on the end cap",
+          ]),
+        },
+      ];
     case "cap-screws":
       return [{ code: rng.chance(0.7) ? "cap-screw-loose" : "cap-screw-missing" }];
     case "seal-grease":
-      return rng.pick([[{ code: "seal-damaged" }], [{ code: "grease-loss" }], [{ code: "seal-damaged" }, { code: "grease-loss" }]] as Visual[]);
+      return rng.pick([
+        [{ code: "seal-damaged" }],
+        [{ code: "grease-loss" }],
+        [{ code: "seal-damaged" }, { code: "grease-loss" }],
+      ] as Visual[]);
     case "backing-ring":
       return [{ code: "backing-ring-loose" }];
     case "visual-other":
@@ -56,7 +83,9 @@ export function visualFor(rng: Rng, spec: CaseSpec): Visual {
 
 function description(spec: CaseSpec): string {
   const map: Partial<Record<string, string>> = {
-    "water-ingress": "Water weeping from the inboard seal", lubrication: "Heat tint on the cup", material: "Cracked cup",
+    "water-ingress": "Water weeping from the inboard seal",
+    lubrication: "Heat tint on the cup",
+    material: "Cracked cup",
   };
   return map[spec.cause] ?? "Dark streaks on the cup";
 }
@@ -84,28 +113,61 @@ export function triggerDetailFor(rng: Rng, spec: CaseSpec, seen: { felt?: string
     case "seal-grease":
       return { side: rng.pick(["inboard", "inboard", "outboard", "both"]) };
     case "welding":
-      return { note: spec.story === "arc-cluster" ? "Car had body repair welding on track 4; ground clamp found on the side frame" : "Welding done on the car at a contract shop" };
+      return {
+        note:
+          spec.story === "arc-cluster"
+            ? "Car had body repair welding on track 4; ground clamp found on the side frame"
+            : "Welding done on the car at a contract shop",
+      };
     case "cap-screws":
       return { count: rng.int(1, 3) };
     case "backing-ring":
       return { note: "Backing ring moves when tapped" };
     case "wheel-removal":
-      return { wheelsetDefect: spec.cause === "impact" ? rng.pick(WHEEL_DEFECTS.slice(0, 2).concat("Out of round, thumping")) : rng.pick(WHEEL_DEFECTS) };
+      return {
+        wheelsetDefect:
+          spec.cause === "impact" ? rng.pick(WHEEL_DEFECTS.slice(0, 2).concat("Out of round, thumping")) : rng.pick(WHEEL_DEFECTS),
+      };
     case "accident":
-      return { reference: `SRR-IR-${spec.removedOn.slice(2, 4)}-${String(rng.int(3, 60)).padStart(3, "0")}`, note: "Car rerailed, wheelsets sent in for inspection" };
+      return {
+        reference: `SRR-IR-${spec.removedOn.slice(2, 4)}-${String(rng.int(3, 60)).padStart(3, "0")}`,
+        note: "Car rerailed, wheelsets sent in for inspection",
+      };
     case "visual-other":
       return { description: description(spec) };
     case "scheduled":
-      return { program: spec.story === "bad-lot" ? "Lot C-2207 withdrawal" : rng.pick(["Age limit since mounting", "Wheelset exchange program", "Lab sample program"]) };
+      return {
+        program:
+          spec.story === "bad-lot"
+            ? "Lot C-2207 withdrawal"
+            : rng.pick(["Age limit since mounting", "Wheelset exchange program", "Lab sample program"]),
+      };
     default:
-      return { description: rng.pick(["Dropped from the wheelset rack during a shop move", "Came back from a contract shop without paperwork", "Bearing taken for a lab study"]) };
+      return {
+        description: rng.pick([
+          "Dropped from the wheelset rack during a shop move",
+          "Came back from a contract shop without paperwork",
+          "Bearing taken for a lab study",
+        ]),
+      };
   }
 }
 
 const NOTES: Record<string, string[]> = {
-  "wayside-hot": ["Set out after the detector alarm. Bearing warm to the touch once cooled.", "Alarm from the hot-box detector; car set out and brought in.", "Set out on the detector; other side of the axle was cool."],
-  "wayside-acoustic": ["Acoustic alarm; car brought in at the next terminal.", "Flagged by the acoustic site, nothing seen on walk-around."],
-  "hand-roll": ["Felt it on the hand roll during the truck job.", "Rough spot on hand roll, second revolution.", "Found rough during wheel change inspection."],
+  "wayside-hot": [
+    "Set out after the detector alarm. Bearing warm to the touch once cooled.",
+    "Alarm from the hot-box detector; car set out and brought in.",
+    "Set out on the detector; other side of the axle was cool.",
+  ],
+  "wayside-acoustic": [
+    "Acoustic alarm; car brought in at the next terminal.",
+    "Flagged by the acoustic site, nothing seen on walk-around.",
+  ],
+  "hand-roll": [
+    "Felt it on the hand roll during the truck job.",
+    "Rough spot on hand roll, second revolution.",
+    "Found rough during wheel change inspection.",
+  ],
   "end-play-high": ["End play over the limit, re-measured to be sure.", "Cup moves too much, measured over the limit."],
   "end-play-tight": ["Zero end play and it will not turn.", "Locked up, no end play."],
   "seal-grease": ["Grease slung on the wheel web.", "Seal lip out of place, grease on the side frame."],

@@ -40,9 +40,25 @@ function draw(rng: Rng, r: Recipe): FindingDraft {
   const size = r.size ?? (damageCode === "none" || !r.place ? null : ([5, 30, 3, 12] as const));
   const lengthMm = size ? Number(rng.real(size[0], size[1]).toFixed(1)) : null;
   const widthMm = size ? Number(Math.min(lengthMm!, rng.real(size[2], size[3])).toFixed(1)) : null;
-  const row = "fixedRow" in info && info.fixedRow ? info.fixedRow : "hasRow" in info && info.hasRow ? rng.pick(["inboard", "outboard"] as const) : null;
+  const row =
+    "fixedRow" in info && info.fixedRow
+      ? info.fixedRow
+      : "hasRow" in info && info.hasRow
+        ? rng.pick(["inboard", "outboard"] as const)
+        : null;
   const note = rng.pick(r.notes).replace("{oclock}", clockDeg === null ? "the top" : oclock(clockDeg));
-  return { component, row, damageCode, severity: rng.int(r.sev[0], r.sev[1]), clockDeg, arcDeg, zone: r.zone ?? null, lengthMm, widthMm, notes: note };
+  return {
+    component,
+    row,
+    damageCode,
+    severity: rng.int(r.sev[0], r.sev[1]),
+    clockDeg,
+    arcDeg,
+    zone: r.zone ?? null,
+    lengthMm,
+    widthMm,
+    notes: note,
+  };
 }
 
 /** One to four findings; a part is described once per damage code. */
@@ -57,12 +73,24 @@ export function drawFindings(rng: Rng, cause: RootCauseCode, trigger: TriggerCod
 }
 
 const LUBE_FROM_FINDING: Record<string, string> = {
-  "lubricant.water": "water", "lubricant.debris": "debris", "lubricant.starved": "starved", "lubricant.degraded": "degraded",
+  "lubricant.water": "water",
+  "lubricant.debris": "debris",
+  "lubricant.starved": "starved",
+  "lubricant.degraded": "degraded",
 };
-const LUBE_BY_CAUSE: Partial<Record<RootCauseCode, string>> = { "end-of-life": "degraded", lubrication: "overheated", material: "debris", undetermined: "degraded", seal: "starved" };
+const LUBE_BY_CAUSE: Partial<Record<RootCauseCode, string>> = {
+  "end-of-life": "degraded",
+  lubrication: "overheated",
+  material: "debris",
+  undetermined: "degraded",
+  seal: "starved",
+};
 const LUBE_NOTES: Record<string, readonly string[]> = {
   normal: ["Clean grease, normal colour and fill.", "Grease looks and feels normal."],
-  water: ["Milky grease, water drained out of the cup when stood on end.", "Emulsified, grey-white and wet; free water near the inboard seal."],
+  water: [
+    "Milky grease, water drained out of the cup when stood on end.",
+    "Emulsified, grey-white and wet; free water near the inboard seal.",
+  ],
   debris: ["Gritty between the fingers; sand and some steel fines.", "Grease carries grit and metal flakes."],
   starved: ["Little grease left on the rollers; cage pockets dry.", "Fill well short; rollers nearly dry."],
   degraded: ["Dark and thick, gone stiff in places.", "Grease darkened and broken down."],
@@ -77,7 +105,15 @@ export function lubricantFor(rng: Rng, cause: RootCauseCode, found: FindingDraft
   return { conditions, notes: conditions.map((c) => rng.pick(LUBE_NOTES[c])).join(" ") };
 }
 
-const MAIN_PARTS: ComponentCode[] = ["cup", "cone-inboard", "cone-outboard", "rollers-inboard", "rollers-outboard", "seal-inboard", "seal-outboard"];
+const MAIN_PARTS: ComponentCode[] = [
+  "cup",
+  "cone-inboard",
+  "cone-outboard",
+  "rollers-inboard",
+  "rollers-outboard",
+  "seal-inboard",
+  "seal-outboard",
+];
 
 /** Worst severity per part decides: 0–1 reuse or recondition, 2 recondition, 3+ scrap; seals never go back. */
 export function dispositionsFor(rng: Rng, found: FindingDraft[]): Record<string, string> {

@@ -11,10 +11,27 @@ export const CAR_OWNERS = [
   { mark: "VEDX", weight: 8, digits: 6 },
 ] as const;
 
-export const MAKERS = [["MK-A", 34], ["MK-B", 24], ["MK-C", 20], ["MK-D", 14], ["MK-E", 8]] as const;
-export const CLASSES = [["F", 44], ["K", 18], ["E", 14], ["G", 16], ["D", 4], ["other", 4]] as const;
+export const MAKERS = [
+  ["MK-A", 34],
+  ["MK-B", 24],
+  ["MK-C", 20],
+  ["MK-D", 14],
+  ["MK-E", 8],
+] as const;
+export const CLASSES = [
+  ["F", 44],
+  ["K", 18],
+  ["E", 14],
+  ["G", 16],
+  ["D", 4],
+  ["other", 4],
+] as const;
 const OTHER_CLASSES = ["6×11 narrow housing", "5½×10 (older cars)", "7×12 metric cup"];
-const WHEEL_DIAMETERS = [[36, 55], [33, 30], [38, 15]] as const;
+const WHEEL_DIAMETERS = [
+  [36, 55],
+  [33, 30],
+  [38, 15],
+] as const;
 
 export type Car = { mark: string; number: string };
 
@@ -37,13 +54,19 @@ export function pickWheelDiameter(rng: Rng): number {
 export function serviceMonthsFor(rng: Rng, cause: RootCauseCode): number {
   const clamp = (x: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, x));
   switch (cause) {
-    case "end-of-life": return clamp(rng.weibull(3.4, 150), 60, 300);
+    case "end-of-life":
+      return clamp(rng.weibull(3.4, 150), 60, 300);
     case "reconditioning":
-    case "mounting": return clamp(rng.weibull(0.8, 9), 0.4, 60);
-    case "material": return clamp(rng.weibull(1.4, 30), 3, 120);
-    case "handling": return clamp(rng.weibull(1, 14), 0.5, 80);
-    case "no-defect": return rng.real(4, 200);
-    default: return clamp(rng.weibull(1.4, 72), 3, 240);
+    case "mounting":
+      return clamp(rng.weibull(0.8, 9), 0.4, 60);
+    case "material":
+      return clamp(rng.weibull(1.4, 30), 3, 120);
+    case "handling":
+      return clamp(rng.weibull(1, 14), 0.5, 80);
+    case "no-defect":
+      return rng.real(4, 200);
+    default:
+      return clamp(rng.weibull(1.4, 72), 3, 240);
   }
 }
 
@@ -61,8 +84,20 @@ export type BearingOptions = { maker?: string; lot?: string; manufacturedYm?: st
 /** A bearing with a history that fits the service time: made, maybe reconditioned, then mounted. */
 export function pickBearing(rng: Rng, cause: RootCauseCode, removedOn: string, months: number, opts: BearingOptions = {}): BearingIdentity {
   const mountedOn = addDays(removedOn, -Math.max(1, Math.round(months * DAYS_PER_MONTH)));
-  const timesReconditioned = opts.timesReconditioned ??
-    (cause === "reconditioning" ? rng.int(1, 3) : cause === "end-of-life" ? rng.weighted([[0, 70], [1, 30]]) : rng.weighted([[0, 55], [1, 30], [2, 15]]));
+  const timesReconditioned =
+    opts.timesReconditioned ??
+    (cause === "reconditioning"
+      ? rng.int(1, 3)
+      : cause === "end-of-life"
+        ? rng.weighted([
+            [0, 70],
+            [1, 30],
+          ])
+        : rng.weighted([
+            [0, 55],
+            [1, 30],
+            [2, 15],
+          ]));
   const makerCode = opts.maker ?? rng.weighted(MAKERS);
   const yearsBefore = timesReconditioned * rng.int(6, 10);
   const manufacturedYm = opts.manufacturedYm ?? yearMonth(addDays(mountedOn, -rng.int(20, 540) - yearsBefore * 365));

@@ -24,14 +24,21 @@ export type LargeSeedResult = { cases: number; findings: number; ms: number; cas
 function removalDays(rng: Rng, count: number, years: number): string[] {
   const span = Math.round(years * 365.25);
   const start = addDays(isoDay(DEMO_NOW), -span);
-  return Array.from({ length: count }, () => rng.int(0, span - 1)).sort((a, b) => a - b).map((d) => addDays(start, d));
+  return Array.from({ length: count }, () => rng.int(0, span - 1))
+    .sort((a, b) => a - b)
+    .map((d) => addDays(start, d));
 }
 
 function stageFor(rng: Rng, removedOn: string): Stage {
   const age = (DEMO_NOW.getTime() - Date.parse(`${removedOn}T00:00:00Z`)) / DAY_MS;
   if (age < 12) return "field";
   if (age < 35) return rng.chance(0.8) ? "bench" : "signoff";
-  if (age < 60) return rng.weighted([["bench", 15], ["signoff", 35], ["signed", 50]]);
+  if (age < 60)
+    return rng.weighted([
+      ["bench", 15],
+      ["signoff", 35],
+      ["signed", 50],
+    ]);
   return "signed";
 }
 
@@ -66,11 +73,17 @@ export async function seedLargeCases(db: Db, opts: LargeSeedOptions): Promise<La
   const caseIds: string[] = [];
   let findingCount = 0;
   const insert = async (built: BuiltCase[]) => {
-    const rows = built.flatMap((b) => b.findings.map((f) => ({ ...f, caseId: b.values.id, createdBy: ctx.analyst, createdAt: b.values.receivedAt ?? b.values.createdAt })));
+    const rows = built.flatMap((b) =>
+      b.findings.map((f) => ({ ...f, caseId: b.values.id, createdBy: ctx.analyst, createdAt: b.values.receivedAt ?? b.values.createdAt })),
+    );
     await db.transaction(async (tx) => {
       // Generated data can be made again: no need to wait for each batch to reach the disk.
       await tx.execute(sql`set local synchronous_commit to off`);
-      await bulkInsert(tx, "cases", built.map((b) => b.values));
+      await bulkInsert(
+        tx,
+        "cases",
+        built.map((b) => b.values),
+      );
       await bulkInsert(tx, "findings", rows);
     });
     findingCount += rows.length;
@@ -94,7 +107,10 @@ export async function seedLargeCases(db: Db, opts: LargeSeedOptions): Promise<La
 
   // New cases in these years continue after the generated numbers.
   for (const [year, last] of seq) {
-    await db.insert(caseCounters).values({ year, last }).onConflictDoUpdate({ target: caseCounters.year, set: { last: sql`greatest(${caseCounters.last}, ${last})` } });
+    await db
+      .insert(caseCounters)
+      .values({ year, last })
+      .onConflictDoUpdate({ target: caseCounters.year, set: { last: sql`greatest(${caseCounters.last}, ${last})` } });
   }
   await db.execute(sql`analyze cases`);
   await db.execute(sql`analyze findings`);

@@ -12,7 +12,10 @@ function email(role: string, site?: string): string {
 }
 
 export async function loadSeedContext(db: Db): Promise<SeedContext> {
-  const rows = await db.select().from(sites).where(inArray(sites.code, ["MJC", "PYC", "OSW", "CFL"]));
+  const rows = await db
+    .select()
+    .from(sites)
+    .where(inArray(sites.code, ["MJC", "PYC", "OSW", "CFL"]));
   const site = (code: string): SiteRef => {
     const s = rows.find((r) => r.code === code);
     if (!s) throw new Error(`site ${code} is missing: load the demo sites first (npm run seed:demo)`);
@@ -34,4 +37,3 @@ export async function loadSeedContext(db: Db): Promise<SeedContext> {
     engineer: await id(email("engineer")),
   };
 }
-

@@ -70,7 +70,12 @@ const BY_CAUSE: Record<RootCauseCode, readonly string[]> = {
   ],
 };
 
-const CLOSINGS = ["Photos of each raceway attached.", "Parts kept in the quarantine rack for a month.", "Cup and cones tagged with the case number.", "Spall sectioned for the metallurgist."];
+const CLOSINGS = [
+  "Photos of each raceway attached.",
+  "Parts kept in the quarantine rack for a month.",
+  "Cup and cones tagged with the case number.",
+  "Spall sectioned for the metallurgist.",
+];
 
 const STORY_LINES: Record<string, readonly string[]> = {
   "water-run": ["Another water case from this spring's run.", "Same water picture as the other spring removals."],
@@ -82,11 +87,15 @@ const STORY_LINES: Record<string, readonly string[]> = {
 
 export function teardownNotesFor(rng: Rng, spec: CaseSpec): string {
   const lines = [rng.pick(OPENINGS), rng.pick(BY_CAUSE[spec.cause])];
-  if (spec.cause === "electrical" && spec.trigger !== "welding") lines[1] = "Washboard fluting across the raceway: current leaking through the bearing over a long time.";
-  if (spec.cause === "mounting" && spec.trigger === "cap-screws") lines[1] = "Cap screws had backed off, so the end cap no longer clamped the cones; threads fretted.";
-  if (spec.cause === "mounting" && spec.trigger === "backing-ring") lines[1] = "Backing ring not seated on the fillet and fretted where it moved.";
+  if (spec.cause === "electrical" && spec.trigger !== "welding")
+    lines[1] = "Washboard fluting across the raceway: current leaking through the bearing over a long time.";
+  if (spec.cause === "mounting" && spec.trigger === "cap-screws")
+    lines[1] = "Cap screws had backed off, so the end cap no longer clamped the cones; threads fretted.";
+  if (spec.cause === "mounting" && spec.trigger === "backing-ring")
+    lines[1] = "Backing ring not seated on the fillet and fretted where it moved.";
   if (spec.story && STORY_LINES[spec.story]) lines.push(rng.pick(STORY_LINES[spec.story]));
-  if (lines.length < 4 && rng.chance(0.5)) lines.push(rng.pick(spec.cause === "end-of-life" || spec.cause === "material" ? CLOSINGS : CLOSINGS.slice(0, 3)));
+  if (lines.length < 4 && rng.chance(0.5))
+    lines.push(rng.pick(spec.cause === "end-of-life" || spec.cause === "material" ? CLOSINGS : CLOSINGS.slice(0, 3)));
   return lines.join(" ");
 }
 
@@ -109,7 +118,8 @@ const ACTIONS: Record<RootCauseCode, readonly string[]> = {
 export function correctiveActionFor(rng: Rng, spec: CaseSpec): string {
   if (spec.story === "arc-cluster") return "Ground clamps moved to the car body on track 4; welders briefed and the clamp point marked.";
   if (spec.story === "bad-lot") return "Lot C-2207 reported to the maker; remaining bearings of the lot to be pulled at next shopping.";
-  if (spec.story === "pellham-hand-roll") return "Hand-roll refresher for the Pellham crew: by hand, one direction, by feel, cup pulled and pushed.";
+  if (spec.story === "pellham-hand-roll")
+    return "Hand-roll refresher for the Pellham crew: by hand, one direction, by feel, cup pulled and pushed.";
   return rng.pick(ACTIONS[spec.cause]);
 }
 

@@ -65,7 +65,7 @@ const http = createServer((req, res) => {
         refuse = Boolean(JSON.parse(body || "{}").refuse);
         send(200, { refuse });
       } catch {
-        send(400, { error: "body must be JSON like {\"refuse\": true}" });
+        send(400, { error: 'body must be JSON like {"refuse": true}' });
       }
     });
     return;

@@ -9,7 +9,7 @@ import { browserPerFile } from "../support/browser-fixture";
 
 const ui = browserPerFile();
 
-const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
+const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);
 
 const PAGES = [
@@ -20,7 +20,10 @@ const PAGES = [
   { path: "/reference", heading: "Damage codes", shows: "ISO 15243:2017 clause" },
 ];
 
-for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
+for (const [label, viewport] of [
+  ["phone", PHONE],
+  ["desk", DESK],
+] as const) {
   test(`admin pages and the reference at ${label} size`, async () => {
     const page = await ui.signIn("admin", viewport);
     for (const p of PAGES) {
@@ -46,7 +49,9 @@ test("the reference finds a code from a misspelt shop word, on a phone", async (
 
 test("changing a site's limit in millimetres shows inches as you type, and refuses more than 1/4 in", async () => {
   const code = `B${randomBytes(3).toString("hex").toUpperCase()}`;
-  const made = await (await as("admin")).json("POST", "/api/admin/sites", { code, name: `Browser yard ${code}`, kind: "wheel-shop", railway: "Sable River Rail" });
+  const made = await (
+    await as("admin")
+  ).json("POST", "/api/admin/sites", { code, name: `Browser yard ${code}`, kind: "wheel-shop", railway: "Sable River Rail" });
   expect(made.status).toBe(201);
   const page = await ui.signIn("admin", PHONE);
   await page.goto("/admin/sites");

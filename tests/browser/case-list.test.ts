@@ -19,7 +19,7 @@ afterAll(async () => {
 }, 90_000);
 
 // The list loads in the browser after the page: give each check time on a busy machine.
-const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
+const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 const rowNumbers = (page: Page) => new CaseListPage(page).rowNumbers();
 const sorted = (xs: string[]) => [...xs].sort();
 const numbers = (keep: (b: Built) => boolean) => book.filter(keep).map((b) => b.number);
@@ -38,7 +38,10 @@ test("an engineer opens a shared link, sorts by a header and adds a filter", asy
   await header.locator("button").click();
   await page.waitForURL(/sort=removedOn:desc/);
   await poll(() => header.getAttribute("aria-sort")).toBe("descending");
-  const newestFirst = book.filter((b) => b.status === "signed").sort((a, b) => (a.removedOn! < b.removedOn! ? 1 : -1)).map((b) => b.number);
+  const newestFirst = book
+    .filter((b) => b.status === "signed")
+    .sort((a, b) => (a.removedOn! < b.removedOn! ? 1 : -1))
+    .map((b) => b.number);
   await poll(() => rowNumbers(page)).toEqual(newestFirst);
   await header.locator("button").click();
   await page.waitForURL(/sort=removedOn:asc/);

@@ -15,7 +15,9 @@ const LIMIT_MS = 1_500;
 
 test("a save the server never answers ends in the timeout message, the form usable again and nothing changed", async () => {
   const code = `N${randomBytes(3).toString("hex").toUpperCase()}`;
-  const made = await (await as("admin")).json("POST", "/api/admin/sites", { code, name: `Quiet yard ${code}`, kind: "wheel-shop", railway: "Sable River Rail" });
+  const made = await (
+    await as("admin")
+  ).json("POST", "/api/admin/sites", { code, name: `Quiet yard ${code}`, kind: "wheel-shop", railway: "Sable River Rail" });
   expect(made.status).toBe(201);
 
   const page = await ui.signIn("admin", PHONE);

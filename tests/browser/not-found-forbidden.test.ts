@@ -6,7 +6,10 @@ import { browserPerFile } from "../support/browser-fixture";
 
 const ui = browserPerFile();
 
-for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
+for (const [label, viewport] of [
+  ["phone", PHONE],
+  ["desk", DESK],
+] as const) {
   test(`an unknown address and an unknown case number show the branded not-found page with a way back (${label})`, async () => {
     const page = await ui.signIn("engineer", viewport);
     for (const path of ["/no-such-page-here", "/cases/TL-99-99999"]) {

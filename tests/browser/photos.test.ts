@@ -20,19 +20,29 @@ let otherPhotoId = "";
 let otherNumber = "";
 
 beforeAll(async () => {
-  const c = await createCase({ status: "bench", findings: [{ component: "cup", row: "inboard", damageCode: "fatigue.subsurface", severity: 3, clockDeg: 90 }] });
+  const c = await createCase({
+    status: "bench",
+    findings: [{ component: "cup", row: "inboard", damageCode: "fatigue.subsurface", severity: 3, clockDeg: 90 }],
+  });
   caseNumber = c.number;
   caseId = c.id;
   // A similar case with a photo already on it, for the side-by-side view.
   const other = await createCase({ status: "bench", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 3 }] });
-  const res = await upload(await as("analyst"), other.id, await racewayJpeg(40, { width: 1200, height: 900 }), "similar-spall.jpg", { component: "cup", row: "outboard", clockDeg: "60", caption: "Spall near the outboard rib" });
+  const res = await upload(await as("analyst"), other.id, await racewayJpeg(40, { width: 1200, height: 900 }), "similar-spall.jpg", {
+    component: "cup",
+    row: "outboard",
+    clockDeg: "60",
+    caption: "Spall near the outboard rib",
+  });
   otherPhotoId = res.body.photo!.id;
   otherNumber = other.number;
   await db.update(t.cases).set({ status: "signed", signedAt: new Date() }).where(eq(t.cases.id, other.id));
 });
 
 async function thumbsLoaded(page: Page) {
-  return page.$$eval('[data-testid="photo-tile"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).complete && (i as HTMLImageElement).naturalWidth > 0));
+  return page.$$eval('[data-testid="photo-tile"] img', (imgs) =>
+    imgs.every((i) => (i as HTMLImageElement).complete && (i as HTMLImageElement).naturalWidth > 0),
+  );
 }
 
 test("drop several photos, see each one's progress and result, then open the lightbox", async () => {
@@ -44,7 +54,13 @@ test("drop several photos, see each one's progress and result, then open the lig
   await page.click("text=Tags for the next photos");
   await page.selectOption('select[id$="-part"]', "cup");
   await page.selectOption('select[id$="-row"]', "inboard");
-  const files = await Promise.all([1, 2, 3].map(async (i) => ({ name: `cup-raceway-${i}.jpg`, mimeType: "image/jpeg", buffer: await racewayJpeg(i, { width: 1200, height: 900 }) })));
+  const files = await Promise.all(
+    [1, 2, 3].map(async (i) => ({
+      name: `cup-raceway-${i}.jpg`,
+      mimeType: "image/jpeg",
+      buffer: await racewayJpeg(i, { width: 1200, height: 900 }),
+    })),
+  );
   files.push({ name: "notes.jpg", mimeType: "image/jpeg", buffer: textAsJpeg() });
   await page.setInputFiles('[data-testid="photo-drop-input"]', files);
 
@@ -107,7 +123,9 @@ test("compare a photo of this case with a similar case's photo", async () => {
   await page.waitForURL(/b=/);
   await page.waitForSelector('[data-testid="compare-B"]');
   expect(await page.textContent('[data-testid="compare-B"]')).toContain("Spall near the outboard rib");
-  await expect.poll(() => page.$$eval('[data-testid^="compare-"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).naturalWidth > 0))).toBe(true);
+  await expect
+    .poll(() => page.$$eval('[data-testid^="compare-"] img', (imgs) => imgs.every((i) => (i as HTMLImageElement).naturalWidth > 0)))
+    .toBe(true);
   await ui.shot(page, "photos-compare-desk");
   await page.context().close();
 });

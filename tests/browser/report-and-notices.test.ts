@@ -19,8 +19,14 @@ const ui = browserPerFile();
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);
 
 test("a draft report shows its mark on screen and prints with numbered pages and no app chrome", async () => {
-  const c = await createCase({ status: "bench", findings: [{ component: "cup", damageCode: "corrosion.moisture", severity: 3, clockDeg: 30, arcDeg: 50 }] });
-  for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
+  const c = await createCase({
+    status: "bench",
+    findings: [{ component: "cup", damageCode: "corrosion.moisture", severity: 3, clockDeg: 30, arcDeg: 50 }],
+  });
+  for (const [label, viewport] of [
+    ["phone", PHONE],
+    ["desk", DESK],
+  ] as const) {
     const page = await ui.signIn("analyst", viewport);
     await new CasePage(page).goto(c.number, "report");
     await expect.poll(() => page.locator(".tl-watermark").innerText()).toBe("DRAFT — NOT SIGNED");
@@ -29,10 +35,12 @@ test("a draft report shows its mark on screen and prints with numbered pages and
     await ui.shot(page, `report-draft-${label}`);
     // Scrolled well down, the mark is still in view.
     await page.evaluate(() => window.scrollTo(0, 1600));
-    await expect.poll(async () => {
-      const box = await page.locator(".tl-watermark").boundingBox();
-      return box !== null && box.y > 0 && box.y < viewport.height;
-    }).toBe(true);
+    await expect
+      .poll(async () => {
+        const box = await page.locator(".tl-watermark").boundingBox();
+        return box !== null && box.y > 0 && box.y < viewport.height;
+      })
+      .toBe(true);
     await ui.shot(page, `report-draft-${label}-scrolled`, { fullPage: false });
     if (label === "desk") {
       const pdf = await page.pdf({ format: "Letter", printBackground: true });
@@ -52,7 +60,9 @@ test("a person switches a notice off on the Notices page and it stays off", asyn
   const email = `notices-${id.slice(0, 8)}@sable-river.example`;
   const password = `pw-${randomUUID()}`;
   await db.insert(t.user).values({ id, name: "Hana Kowalczyk", email, emailVerified: true, role: "analyst" });
-  await db.insert(t.account).values({ id: randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
+  await db
+    .insert(t.account)
+    .values({ id: randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
 
   const ctx = await ui.browser.newContext({ viewport: PHONE, baseURL: APP_URL });
   const page = await ctx.newPage();
@@ -76,7 +86,10 @@ test("a person switches a notice off on the Notices page and it stays off", asyn
 }, 60_000);
 
 test("the outbox lists mail with its status and shows what the mail fake received", async () => {
-  for (const [label, viewport] of [["phone", PHONE], ["desk", DESK]] as const) {
+  for (const [label, viewport] of [
+    ["phone", PHONE],
+    ["desk", DESK],
+  ] as const) {
     const page = await ui.signIn("admin", viewport);
     await page.goto("/admin/outbox");
     await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Outbox");

@@ -15,12 +15,24 @@ beforeAll(async () => {
   const p = await people();
   // Invented cases: two spalls (one written up, one only coded) and one unrelated.
   await caseWith(marker, {
-    siteId: p.mjc, trigger: "wayside-hot", primaryCause: "end-of-life",
+    siteId: p.mjc,
+    trigger: "wayside-hot",
+    primaryCause: "end-of-life",
     notes: "Deep spalling in the load zone of the cup outboard raceway, about 20 mm long. Rollers of the outboard row marked.",
     findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 4, notes: "Spalled area 20 x 8 mm at 12 o'clock." }],
   });
-  await caseWith(marker, { siteId: p.pyc, trigger: "hand-roll", notes: "Metal flaked from the inboard cone raceway.", findings: [{ component: "cone-inboard", damageCode: "fatigue.subsurface", severity: 3 }] });
-  await caseWith(marker, { siteId: p.mjc, trigger: "welding", notes: "Grey bands across the raceway.", findings: [{ component: "rollers-inboard", damageCode: "electrical.fluting", severity: 3 }] });
+  await caseWith(marker, {
+    siteId: p.pyc,
+    trigger: "hand-roll",
+    notes: "Metal flaked from the inboard cone raceway.",
+    findings: [{ component: "cone-inboard", damageCode: "fatigue.subsurface", severity: 3 }],
+  });
+  await caseWith(marker, {
+    siteId: p.mjc,
+    trigger: "welding",
+    notes: "Grey bands across the raceway.",
+    findings: [{ component: "rollers-inboard", damageCode: "electrical.fluting", severity: 3 }],
+  });
 });
 
 test("a shared search link shows the matching cases with the words marked (desktop)", async () => {
@@ -59,14 +71,31 @@ test("on a phone the hits fit the screen and the filters open as a drawer", asyn
 
 test("the damage finder picks a code out of a long list by a shop word", async () => {
   const wide = markerWord();
-  const codes = ["fatigue.surface", "corrosion.moisture", "corrosion.fretting", "electrical.arc", "deformation.debris", "cage.broken", "seal.leaking"];
-  for (const code of codes) await caseWith(wide, { notes: "Bench check.", findings: [{ component: "cup", damageCode: code, severity: 2 }] });
+  const codes = [
+    "fatigue.surface",
+    "corrosion.moisture",
+    "corrosion.fretting",
+    "electrical.arc",
+    "deformation.debris",
+    "cage.broken",
+    "seal.leaking",
+  ];
+  for (const code of codes)
+    await caseWith(wide, { notes: "Bench check.", findings: [{ component: "cup", damageCode: code, severity: 2 }] });
   const page = await ui.signIn("engineer", DESK);
   await new SearchPage(page).goto(wide);
   await page.waitForSelector('[data-testid="damage-finder"]');
   await page.fill('[data-testid="damage-finder"]', "rust");
   // "rust" is a shop word for water etch (common practice); fretting rust also names fretting.
-  await expect.poll(async () => (await page.locator('[data-testid="facet-panel"] section:has([data-testid="damage-finder"]) [data-testid="facet-value"]').allTextContents()).join("|")).toMatch(/^Water etch1/);
+  await expect
+    .poll(async () =>
+      (
+        await page
+          .locator('[data-testid="facet-panel"] section:has([data-testid="damage-finder"]) [data-testid="facet-value"]')
+          .allTextContents()
+      ).join("|"),
+    )
+    .toMatch(/^Water etch1/);
   await page.context().close();
 });
 

@@ -54,7 +54,10 @@ test("the inspector reopens a filed report for correction and the form loads wit
 test("a report filed with safety confirmations unticked shows the flag to the engineer", async () => {
   const inspector = await as("inspector");
   const base = await fieldReport();
-  const res = await inspector.request("POST", "/api/cases", { ...base, fieldChecks: { ...base.fieldChecks, confirmations: { ppe: true, blueSignal: true } } });
+  const res = await inspector.request("POST", "/api/cases", {
+    ...base,
+    fieldChecks: { ...base.fieldChecks, confirmations: { ppe: true, blueSignal: true } },
+  });
   expect(res.status).toBe(201);
   const { case: filed } = (await res.json()) as { case: { number: string } };
   for (const viewport of [PHONE, DESK]) {
@@ -124,7 +127,12 @@ test("axe-core finds no serious or critical problem on a signed case, the search
   const found: Record<string, unknown> = {};
   for (const viewport of [PHONE, DESK]) {
     const page = await ui.signIn("engineer", viewport);
-    for (const [path, ready] of [[signed, '[data-testid="photo-tile"]'], ["/search?q=spall+cup+outboard+row", '[data-testid="search-hit"]'], ["/tallies", "main h1"], ["/tallies/life", "[data-life-causes]"]] as const) {
+    for (const [path, ready] of [
+      [signed, '[data-testid="photo-tile"]'],
+      ["/search?q=spall+cup+outboard+row", '[data-testid="search-hit"]'],
+      ["/tallies", "main h1"],
+      ["/tallies/life", "[data-life-causes]"],
+    ] as const) {
       await page.goto(path);
       await page.locator(ready).first().waitFor();
       found[`${path} (${viewport.width} px)`] = await seriousAxeProblems(page);

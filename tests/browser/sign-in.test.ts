@@ -28,7 +28,10 @@ test("sign-in on a phone: wrong password refused with a message, right password 
 
   // Signing out from the phone menu ends the session: the casebook asks for a sign-in again.
   await page.getByRole("button", { name: /menu/i }).first().click();
-  await Promise.all([page.waitForURL((u) => u.pathname === "/sign-in", { timeout: 30_000 }), page.getByRole("button", { name: "Sign out" }).last().click()]);
+  await Promise.all([
+    page.waitForURL((u) => u.pathname === "/sign-in", { timeout: 30_000 }),
+    page.getByRole("button", { name: "Sign out" }).last().click(),
+  ]);
   await page.goto("/cases");
   expect(new URL(page.url()).pathname).toBe("/sign-in");
   expect((await page.context().cookies()).some((c) => c.name.includes("session_token") && c.value)).toBe(false);
@@ -39,8 +42,8 @@ test("empty fields get a message under each field", async () => {
   const page = await ui.open(PHONE);
   const signIn = await new SignInPage(page).goto();
   await signIn.submit();
-  await expect.poll(() => signIn.alerts().allTextContents(), { timeout: 10_000 }).toEqual(
-    expect.arrayContaining([expect.stringMatching(/valid e-mail/), expect.stringMatching(/Enter your password/)]),
-  );
+  await expect
+    .poll(() => signIn.alerts().allTextContents(), { timeout: 10_000 })
+    .toEqual(expect.arrayContaining([expect.stringMatching(/valid e-mail/), expect.stringMatching(/Enter your password/)]));
   await page.context().close();
 });

@@ -31,10 +31,35 @@ beforeAll(async () => {
     { component: "cup", damageCode: "corrosion.moisture", severity: 3 },
     { component: "lubricant", damageCode: "lubricant.water", severity: 2 },
   ];
-  twin = await caseWith(marker, { ...base, removedOn: "1984-04-02", notes: "Grease milky with water; cup etched at roller spacing.", findings: water });
-  await caseWith(marker, { ...base, trigger: "hand-roll", bearingClass: "G", removedOn: "1984-05-02", notes: "Stain on the cone.", findings: [{ component: "cone-outboard", damageCode: "corrosion.moisture", severity: 2 }] });
-  await caseWith(marker, { siteId: p.mjc, bearingClass: "E", trigger: "welding", primaryCause: "electrical", removedOn: "1984-06-02", notes: "Grey bands.", findings: [{ component: "rollers-inboard", damageCode: "electrical.fluting", severity: 3 }] });
-  target = await caseWith(marker, { ...base, removedOn: "1985-02-11", notes: "Milky grease behind the inboard seal; water etch on the cup at roller spacing.", findings: water });
+  twin = await caseWith(marker, {
+    ...base,
+    removedOn: "1984-04-02",
+    notes: "Grease milky with water; cup etched at roller spacing.",
+    findings: water,
+  });
+  await caseWith(marker, {
+    ...base,
+    trigger: "hand-roll",
+    bearingClass: "G",
+    removedOn: "1984-05-02",
+    notes: "Stain on the cone.",
+    findings: [{ component: "cone-outboard", damageCode: "corrosion.moisture", severity: 2 }],
+  });
+  await caseWith(marker, {
+    siteId: p.mjc,
+    bearingClass: "E",
+    trigger: "welding",
+    primaryCause: "electrical",
+    removedOn: "1984-06-02",
+    notes: "Grey bands.",
+    findings: [{ component: "rollers-inboard", damageCode: "electrical.fluting", severity: 3 }],
+  });
+  target = await caseWith(marker, {
+    ...base,
+    removedOn: "1985-02-11",
+    notes: "Milky grease behind the inboard seal; water etch on the cup at roller spacing.",
+    findings: water,
+  });
   await uploadCupPhoto(target.id, "#5b3a1e");
   await uploadCupPhoto(twin.id, "#3f2a17");
 });

@@ -16,7 +16,14 @@ const ui = browserPerFile();
 const CLASS = tag();
 
 // Cards whose chart is drawn by the chart library, and the two drawn as our own SVG.
-const RECHARTS_CARDS = ["Root causes", "Trigger and teardown verdict", "Confirmed share by trigger", "Confirmed share by shop", "Monthly trend with control limits", "Causes by site"];
+const RECHARTS_CARDS = [
+  "Root causes",
+  "Trigger and teardown verdict",
+  "Confirmed share by trigger",
+  "Confirmed share by shop",
+  "Monthly trend with control limits",
+  "Causes by site",
+];
 
 beforeAll(async () => {
   // The demo casebook is there already; a few more cases of our own make sure every chart has data.
@@ -25,15 +32,25 @@ beforeAll(async () => {
   // The NIST/SEMATECH 8.4.1.3 life data (fixture), for the Weibull plot.
   const nist = checkValues.weibull.nist_8_4_1_3;
   for (const [i, time] of (nist.times as number[]).entries()) {
-    await createCase({ bearingClass: `${CLASS}W`, status: "signed", primaryCause: nist.status[i] === 1 ? "water-ingress" : "seal", removalConfirmed: "confirmed", serviceMonths: time, removedOn: "1991-06-15" });
+    await createCase({
+      bearingClass: `${CLASS}W`,
+      status: "signed",
+      primaryCause: nist.status[i] === 1 ? "water-ingress" : "seal",
+      removalConfirmed: "confirmed",
+      serviceMonths: time,
+      removedOn: "1991-06-15",
+    });
   }
 });
 
-const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 30_000, interval: 150 });
+const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 30_000, interval: 150 });
 const card = (page: Page, title: string) => new TalliesPage(page).card(title);
 const fitsWidth = (page: Page, width: number) => page.evaluate((w) => document.documentElement.scrollWidth <= w, width);
 
-for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
+for (const [label, viewport] of [
+  ["desk", DESK],
+  ["phone", PHONE],
+] as const) {
   test(`every tally chart draws for a manager (${label})`, async () => {
     const page = await ui.signIn("manager", viewport);
     const tallies = await new TalliesPage(page).goto();
@@ -41,7 +58,9 @@ for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
     for (const title of RECHARTS_CARDS) {
       await poll(() => card(page, title).locator("svg.recharts-surface").count()).toBeGreaterThan(0);
       // something is drawn inside, not just an empty frame
-      await poll(() => card(page, title).locator("svg.recharts-surface path, svg.recharts-surface circle, svg.recharts-surface rect").count()).toBeGreaterThan(2);
+      await poll(() =>
+        card(page, title).locator("svg.recharts-surface path, svg.recharts-surface circle, svg.recharts-surface rect").count(),
+      ).toBeGreaterThan(2);
     }
     await poll(() => card(page, "Where damage sits").locator("svg[data-damage-map] path").count()).toBeGreaterThan(4);
     await poll(() => card(page, "Recurring causes").locator("[data-clusters], p").count()).toBeGreaterThan(0);
@@ -83,7 +102,10 @@ test("a chart's numbers are one click away, and it downloads as CSV and PNG", as
   await page.context().close();
 }, 120_000);
 
-for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
+for (const [label, viewport] of [
+  ["desk", DESK],
+  ["phone", PHONE],
+] as const) {
   test(`the life section draws the Weibull plot and its parameters (${label})`, async () => {
     const page = await ui.signIn("manager", viewport);
     await new TalliesPage(page).goto("life", `class=${CLASS}W&cause=water-ingress`);

@@ -20,10 +20,14 @@ const CARDS = [
   "What no-defect removals cost, by detector",
 ];
 
-const poll = <T,>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 30_000, interval: 150 });
-const card = (page: Page, title: string) => page.locator("section[data-chart-card]", { has: page.getByRole("heading", { name: title, exact: true }) });
+const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 30_000, interval: 150 });
+const card = (page: Page, title: string) =>
+  page.locator("section[data-chart-card]", { has: page.getByRole("heading", { name: title, exact: true }) });
 
-for (const [label, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
+for (const [label, viewport] of [
+  ["desk", DESK],
+  ["phone", PHONE],
+] as const) {
   test(`every removal-yield figure draws on the demo (${label})`, async () => {
     const page = await ui.signIn("manager", viewport);
     await new TalliesPage(page).goto("yield");

@@ -17,7 +17,14 @@ function pg(port: number, command: "start" | "stop" | "remove"): string {
   return execFileSync("bash", ["scripts/services/pg.sh", command], {
     cwd: clone,
     encoding: "utf8",
-    env: { ...process.env, TEARLINE_DATA_DIR: dataDir, PG_PORT: String(port), PG_PURPOSE: "probe", PG_PASSWORD: "probe-pw", PG_DB: "probe" },
+    env: {
+      ...process.env,
+      TEARLINE_DATA_DIR: dataDir,
+      PG_PORT: String(port),
+      PG_PURPOSE: "probe",
+      PG_PASSWORD: "probe-pw",
+      PG_DB: "probe",
+    },
   });
 }
 
@@ -31,7 +38,11 @@ function sql(port: number, query: string): string {
 
 afterAll(() => {
   if (existsSync(clone)) {
-    try { pg(0, "remove"); } catch { /* already gone */ }
+    try {
+      pg(0, "remove");
+    } catch {
+      /* already gone */
+    }
   }
   rmSync(parent, { recursive: true, force: true });
 });

@@ -26,7 +26,12 @@ export class ApiClient {
     });
     const set = res.headers.getSetCookie?.() ?? [];
     if (set.length) {
-      const jar = new Map(this.cookie.split("; ").filter(Boolean).map((c) => [c.split("=")[0], c] as const));
+      const jar = new Map(
+        this.cookie
+          .split("; ")
+          .filter(Boolean)
+          .map((c) => [c.split("=")[0], c] as const),
+      );
       for (const c of set) {
         const pair = c.split(";")[0];
         jar.set(pair.split("=")[0], pair);

@@ -11,7 +11,16 @@ export type AxeProblem = { id: string; impact: string; help: string; targets: st
 export async function seriousAxeProblems(page: Page): Promise<AxeProblem[]> {
   await page.evaluate(axeSource);
   return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: unknown) => Promise<{ violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] }> } }).axe;
+    const axe = (
+      window as unknown as {
+        axe: {
+          run: (
+            ctx: Document,
+            opts: unknown,
+          ) => Promise<{ violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] }>;
+        };
+      }
+    ).axe;
     const result = await axe.run(document, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"] } });
     return result.violations
       .filter((v) => v.impact === "serious" || v.impact === "critical")

@@ -45,7 +45,8 @@ export function browserPerFile(): BrowserFixture {
   };
   const fixture: BrowserFixture = {
     get browser() {
-      if (!browser) throw new Error("The browser is not running yet: call browserPerFile() at the top of the file and use it inside tests.");
+      if (!browser)
+        throw new Error("The browser is not running yet: call browserPerFile() at the top of the file and use it inside tests.");
       return browser;
     },
     open,

@@ -19,7 +19,9 @@ async function watchPolicy(ctx: BrowserContext) {
   });
   await ctx.addInitScript(() => {
     document.addEventListener("securitypolicyviolation", (e) => {
-      console.error(`securitypolicyviolation: ${e.violatedDirective} blocked ${e.blockedURI || "inline"} (${e.sourceFile}:${e.lineNumber})`);
+      console.error(
+        `securitypolicyviolation: ${e.violatedDirective} blocked ${e.blockedURI || "inline"} (${e.sourceFile}:${e.lineNumber})`,
+      );
     });
   });
 }
@@ -44,7 +46,16 @@ export function takeCspViolations(): string[] {
 function launchChromium(): Promise<Browser> {
   return chromium.launch({
     executablePath: CHROMIUM_PATH,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+      "--disable-dev-shm-usage",
+    ],
   });
 }
 

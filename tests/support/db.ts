@@ -5,8 +5,18 @@ export * as t from "../../db/schema";
 
 /** The tables a request can change through the API (sessions and the audit log move on reads, so they are left out). */
 export const TOUCHED_TABLES = [
-  "cases", "findings", "photos", "case_events", "case_links", "sites", "code_entries",
-  "invitations", "fleet_units", "user", "mail_outbox", "case_counters",
+  "cases",
+  "findings",
+  "photos",
+  "case_events",
+  "case_links",
+  "sites",
+  "code_entries",
+  "invitations",
+  "fleet_units",
+  "user",
+  "mail_outbox",
+  "case_counters",
 ] as const;
 
 /** Tables that background work rewrites on its own (mail delivery marks rows sent): only their row count is compared. */

@@ -5,7 +5,10 @@ import { db, t } from "./db";
 import { demoUser, type DemoRole } from "./api";
 
 export async function userId(role: DemoRole): Promise<string> {
-  const [u] = await db.select({ id: t.user.id }).from(t.user).where(eq(t.user.email, demoUser(role).email));
+  const [u] = await db
+    .select({ id: t.user.id })
+    .from(t.user)
+    .where(eq(t.user.email, demoUser(role).email));
   return u.id;
 }
 
@@ -24,7 +27,9 @@ export async function createCase(input: CaseInput = {}) {
     .insert(t.cases)
     .values({
       number,
-      serial: `TST${Math.floor(Math.random() * 1e7).toString().padStart(7, "0")}`,
+      serial: `TST${Math.floor(Math.random() * 1e7)
+        .toString()
+        .padStart(7, "0")}`,
       bearingClass: "F",
       carMark: "TSTX",
       carNumber: String(100000 + Math.floor(Math.random() * 899999)),
@@ -38,9 +43,9 @@ export async function createCase(input: CaseInput = {}) {
     })
     .returning();
   if (findings.length) {
-    await db.insert(t.findings).values(
-      findings.map((f) => ({ caseId: row.id, component: "cup", damageCode: "fatigue.subsurface", severity: 3, ...f })),
-    );
+    await db
+      .insert(t.findings)
+      .values(findings.map((f) => ({ caseId: row.id, component: "cup", damageCode: "fatigue.subsurface", severity: 3, ...f })));
   }
   return row;
 }

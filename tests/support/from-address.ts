@@ -5,12 +5,29 @@ import { APP_URL } from "./env";
 
 export type RawAnswer = { status: number; headers: http.IncomingHttpHeaders; body: string; json: Record<string, unknown> };
 
-export function requestFrom(localAddress: string, method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<RawAnswer> {
+export function requestFrom(
+  localAddress: string,
+  method: string,
+  path: string,
+  body?: unknown,
+  headers: Record<string, string> = {},
+): Promise<RawAnswer> {
   const url = new URL(path, APP_URL);
   const payload = body === undefined ? undefined : JSON.stringify(body);
   return new Promise((resolve, reject) => {
     const req = http.request(
-      { host: url.hostname, port: url.port, path: url.pathname + url.search, method, localAddress, headers: { origin: APP_URL, ...(payload ? { "content-type": "application/json", "content-length": Buffer.byteLength(payload) } : {}), ...headers } },
+      {
+        host: url.hostname,
+        port: url.port,
+        path: url.pathname + url.search,
+        method,
+        localAddress,
+        headers: {
+          origin: APP_URL,
+          ...(payload ? { "content-type": "application/json", "content-length": Buffer.byteLength(payload) } : {}),
+          ...headers,
+        },
+      },
       (res) => {
         const parts: Buffer[] = [];
         res.on("data", (c: Buffer) => parts.push(c));

@@ -7,16 +7,27 @@ export const GPS_EXIF = { GPSLatitudeRef: "N", GPSLatitude: "45/1 30/1 12/1", GP
 export const TAKEN_AT_EXIF = "2026:03:14 09:26:53";
 
 /** Left half red, right half blue, so a rotation shows in which half ends up on top. */
-export async function twoToneJpeg(opts: { width?: number; height?: number; orientation?: number; gps?: boolean; takenAt?: string; seed?: number } = {}) {
+export async function twoToneJpeg(
+  opts: { width?: number; height?: number; orientation?: number; gps?: boolean; takenAt?: string; seed?: number } = {},
+) {
   const width = opts.width ?? 400;
   const height = opts.height ?? 200;
   const half = Math.floor(width / 2);
-  const left = await sharp({ create: { width: half, height, channels: 3, background: { r: 220, g: 20, b: 20 } } }).png().toBuffer();
+  const left = await sharp({ create: { width: half, height, channels: 3, background: { r: 220, g: 20, b: 20 } } })
+    .png()
+    .toBuffer();
   // A seed colours a corner block so each seed makes a file with its own digest.
   const seed = opts.seed ?? 0;
-  const dot = await sharp({ create: { width: 8, height: 8, channels: 3, background: { r: (seed * 53) % 256, g: (seed * 101) % 256, b: (seed * 29) % 256 } } }).png().toBuffer();
+  const dot = await sharp({
+    create: { width: 8, height: 8, channels: 3, background: { r: (seed * 53) % 256, g: (seed * 101) % 256, b: (seed * 29) % 256 } },
+  })
+    .png()
+    .toBuffer();
   let img = sharp({ create: { width, height, channels: 3, background: { r: 20, g: 40, b: 220 } } })
-    .composite([{ input: left, left: 0, top: 0 }, { input: dot, left: width - 8, top: height - 8 }])
+    .composite([
+      { input: left, left: 0, top: 0 },
+      { input: dot, left: width - 8, top: height - 8 },
+    ])
     .jpeg({ quality: 92 });
   const exif: Record<string, Record<string, string>> = { IFD0: { Make: "TestCam", Model: "Bench 1" } };
   if (opts.takenAt) exif.IFD2 = { DateTimeOriginal: opts.takenAt };
@@ -34,11 +45,15 @@ export async function noisyJpeg(width = 4000, height = 3000, quality = 88): Prom
 }
 
 export async function smallPng(seed = 1): Promise<Buffer> {
-  return sharp({ create: { width: 64, height: 48, channels: 4, background: { r: seed % 256, g: 90, b: 160, alpha: 1 } } }).png().toBuffer();
+  return sharp({ create: { width: 64, height: 48, channels: 4, background: { r: seed % 256, g: 90, b: 160, alpha: 1 } } })
+    .png()
+    .toBuffer();
 }
 
 export async function smallWebp(seed = 1): Promise<Buffer> {
-  return sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 30, g: seed % 256, b: 60 } } }).webp().toBuffer();
+  return sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 30, g: seed % 256, b: 60 } } })
+    .webp()
+    .toBuffer();
 }
 
 /** A JPEG with its second half missing, as a broken transfer leaves it. */
@@ -50,7 +65,9 @@ export async function truncatedJpeg(): Promise<Buffer> {
 export const textAsJpeg = () => Buffer.from("Cup raceway looked fine, see notes.\nThis is a text file renamed to .jpg\n");
 
 export const svgDrawing = () =>
-  Buffer.from('<?xml version="1.0"?>\n<svg xmlns="http://www.w3.org/2000/svg" width="200" height="100"><circle cx="50" cy="50" r="40"/></svg>');
+  Buffer.from(
+    '<?xml version="1.0"?>\n<svg xmlns="http://www.w3.org/2000/svg" width="200" height="100"><circle cx="50" cy="50" r="40"/></svg>',
+  );
 
 function pngChunk(type: string, data: Buffer): Buffer {
   const len = Buffer.alloc(4);
@@ -85,13 +102,20 @@ export function pixelBombPng(side = 20_000): Buffer {
 
 /** The start of an HEVC-coded HEIC file (as iPhones write) with no decodable image in it. */
 export function heicHeaderOnly(): Buffer {
-  const ftyp = Buffer.concat([Buffer.from([0, 0, 0, 24]), Buffer.from("ftypheic", "latin1"), Buffer.alloc(4), Buffer.from("mif1heic", "latin1")]);
+  const ftyp = Buffer.concat([
+    Buffer.from([0, 0, 0, 24]),
+    Buffer.from("ftypheic", "latin1"),
+    Buffer.alloc(4),
+    Buffer.from("mif1heic", "latin1"),
+  ]);
   return Buffer.concat([ftyp, Buffer.alloc(2048, 0x11)]);
 }
 
 /** A one-colour AVIF (an AV1-coded HEIF), which the bundled libvips can decode. */
 export async function avifPhoto(): Promise<Buffer> {
-  return sharp({ create: { width: 96, height: 64, channels: 3, background: { r: 90, g: 120, b: 40 } } }).heif({ compression: "av1" }).toBuffer();
+  return sharp({ create: { width: 96, height: 64, channels: 3, background: { r: 90, g: 120, b: 40 } } })
+    .heif({ compression: "av1" })
+    .toBuffer();
 }
 
 /** The colour of the pixel at (x, y) of an image, as [r, g, b]. */
@@ -105,7 +129,7 @@ export async function pixelAt(image: Buffer, x: number, y: number): Promise<[num
 export async function racewayJpeg(seed: number, opts: { width?: number; height?: number; takenAt?: string } = {}): Promise<Buffer> {
   const w = opts.width ?? 1600;
   const h = opts.height ?? 1200;
-  const hue = 200 + (seed * 17) % 40;
+  const hue = 200 + ((seed * 17) % 40);
   const pitX = 0.3 + ((seed * 37) % 40) / 100;
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}">
     <defs>
@@ -121,10 +145,20 @@ export async function racewayJpeg(seed: number, opts: { width?: number; height?:
   </svg>`;
   const base = await sharp(Buffer.from(svg)).jpeg({ quality: 85 }).toBuffer();
   // Fine grain, like a real sensor, so files are photo-sized.
-  const grain = await sharp({ create: { width: w, height: h, channels: 3, background: "#000", noise: { type: "gaussian", mean: 128, sigma: 10 } } }).png().toBuffer();
+  const grain = await sharp({
+    create: { width: w, height: h, channels: 3, background: "#000", noise: { type: "gaussian", mean: 128, sigma: 10 } },
+  })
+    .png()
+    .toBuffer();
   return sharp(base)
     .composite([{ input: grain, blend: "overlay" }])
     .jpeg({ quality: 88 })
-    .withExif({ IFD0: { Make: "TestCam" }, IFD2: { DateTimeOriginal: opts.takenAt ?? `2026:05:${String(10 + (seed % 18)).padStart(2, "0")} 10:${String(seed % 60).padStart(2, "0")}:00` } })
+    .withExif({
+      IFD0: { Make: "TestCam" },
+      IFD2: {
+        DateTimeOriginal:
+          opts.takenAt ?? `2026:05:${String(10 + (seed % 18)).padStart(2, "0")} 10:${String(seed % 60).padStart(2, "0")}:00`,
+      },
+    })
     .toBuffer();
 }

@@ -73,7 +73,10 @@ export class Stack {
     await this.startPostgres();
     await this.startObjectStore();
     await run(bin("tsx"), ["scripts/migrate.ts"], { cwd: PROJECT, env: this.env() });
-    await run(bin("tsx"), ["--conditions=react-server", "scripts/seed-demo.ts", "--quiet", "--no-photos"], { cwd: PROJECT, env: this.env() });
+    await run(bin("tsx"), ["--conditions=react-server", "scripts/seed-demo.ts", "--quiet", "--no-photos"], {
+      cwd: PROJECT,
+      env: this.env(),
+    });
     await Promise.all(this.appPorts.map((_, i) => this.startApp(i)));
   }
 
@@ -87,7 +90,11 @@ export class Stack {
   async startObjectStore() {
     const log = openSync(path.join(this.dir, "logs", "s3.log"), "a");
     // node itself (not the tsx wrapper, which runs a child) so a signal reaches the server process.
-    this.s3Proc = spawn(process.execPath, ["--import", "tsx", "storage-fake/server.ts"], { cwd: PROJECT, env: this.env(), stdio: ["ignore", log, log] });
+    this.s3Proc = spawn(process.execPath, ["--import", "tsx", "storage-fake/server.ts"], {
+      cwd: PROJECT,
+      env: this.env(),
+      stdio: ["ignore", log, log],
+    });
     await waitUntil("the object store fake answered", answers(`${this.s3Endpoint}/`), 30);
   }
   /** Starts the mail fake on the stack's SMTP port (nobody listens there until this is called). */
@@ -95,7 +102,11 @@ export class Stack {
     this.mailHttpPort ||= await freePort();
     const log = openSync(path.join(this.dir, "logs", "mail.log"), "a");
     const env = { ...this.env(), MAIL_HTTP_PORT: String(this.mailHttpPort), MAIL_DIR: path.join(this.dir, "mail") };
-    this.mailProc = spawn(process.execPath, ["--import", "tsx", "scripts/services/mail-fake.ts"], { cwd: PROJECT, env, stdio: ["ignore", log, log] });
+    this.mailProc = spawn(process.execPath, ["--import", "tsx", "scripts/services/mail-fake.ts"], {
+      cwd: PROJECT,
+      env,
+      stdio: ["ignore", log, log],
+    });
     await waitUntil("the mail fake answered", answers(`http://127.0.0.1:${this.mailHttpPort}/health`), 30);
   }
   async killMail() {
@@ -114,11 +125,18 @@ export class Stack {
     this.s3Proc?.kill("SIGCONT");
   }
   async listKeys(prefix: string): Promise<string[]> {
-    const client = new S3Client({ region: "us-east-1", endpoint: this.s3Endpoint, forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
+    const client = new S3Client({
+      region: "us-east-1",
+      endpoint: this.s3Endpoint,
+      forcePathStyle: true,
+      credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" },
+    });
     const keys: string[] = [];
     let token: string | undefined;
     do {
-      const page = await client.send(new ListObjectsV2Command({ Bucket: process.env.S3_BUCKET ?? "tearline-photos", Prefix: prefix, ContinuationToken: token }));
+      const page = await client.send(
+        new ListObjectsV2Command({ Bucket: process.env.S3_BUCKET ?? "tearline-photos", Prefix: prefix, ContinuationToken: token }),
+      );
       keys.push(...(page.Contents ?? []).map((o) => o.Key!));
       token = page.IsTruncated ? page.NextContinuationToken : undefined;
     } while (token);
@@ -175,4 +193,3 @@ export class Stack {
     rmSync(this.dir, { recursive: true, force: true });
   }
 }
-

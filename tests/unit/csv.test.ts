@@ -73,7 +73,10 @@ describe("reading back", () => {
 
   it("reads the RFC's own examples", () => {
     // RFC 4180 §2.6 and §2.7 examples
-    expect(parseCsv('"aaa","b\r\nbb","ccc"\r\nzzz,yyy,xxx')).toEqual([["aaa", "b\r\nbb", "ccc"], ["zzz", "yyy", "xxx"]]);
+    expect(parseCsv('"aaa","b\r\nbb","ccc"\r\nzzz,yyy,xxx')).toEqual([
+      ["aaa", "b\r\nbb", "ccc"],
+      ["zzz", "yyy", "xxx"],
+    ]);
     expect(parseCsv('"aaa","b""bb","ccc"')).toEqual([["aaa", 'b"bb', "ccc"]]);
   });
 

@@ -6,7 +6,10 @@ import { expect, test } from "vitest";
 test("eslint reports no problem", () => {
   let output = "";
   try {
-    execFileSync("node_modules/.bin/eslint", [".", "--max-warnings", "0", "--cache", "--cache-location", ".eslintcache"], { encoding: "utf8", stdio: "pipe" });
+    execFileSync("node_modules/.bin/eslint", [".", "--max-warnings", "0", "--cache", "--cache-location", ".eslintcache"], {
+      encoding: "utf8",
+      stdio: "pipe",
+    });
   } catch (err) {
     output = String((err as { stdout?: string }).stdout ?? err);
   }

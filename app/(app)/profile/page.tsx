@@ -14,7 +14,12 @@ export default async function ProfilePage() {
   const user = await requirePageUser();
   const prefs = await noticePrefsOf(user.id);
   const siteName = await siteNameOf(user.siteId);
-  const switches = noticeKindsFor(user.role).map((k) => ({ kind: k.kind, label: k.label, description: k.description, on: prefs[k.kind] !== false }));
+  const switches = noticeKindsFor(user.role).map((k) => ({
+    kind: k.kind,
+    label: k.label,
+    description: k.description,
+    on: prefs[k.kind] !== false,
+  }));
 
   return (
     <div className="mx-auto max-w-2xl">
@@ -38,7 +43,9 @@ export default async function ProfilePage() {
             <dt className="text-muted">Home site</dt>
             <dd>{siteName ?? "None (all sites)"}</dd>
           </dl>
-          <p className="mt-4 text-xs text-muted">Mail about your account itself (invitations, password resets) is always sent. Your administrator changes names, roles and sites.</p>
+          <p className="mt-4 text-xs text-muted">
+            Mail about your account itself (invitations, password resets) is always sent. Your administrator changes names, roles and sites.
+          </p>
         </Card>
       </div>
     </div>

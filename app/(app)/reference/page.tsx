@@ -21,8 +21,14 @@ export default async function ReferencePage() {
   await requirePageUser();
   const rows = await codeEntries(undefined, { includeRetired: true });
   const entries: RefEntry[] = rows.map((r) => ({
-    list: r.list, code: r.code, label: r.label, description: r.description, family: r.family, isoMode: r.isoMode,
-    synonyms: r.synonyms, retired: r.retiredAt !== null,
+    list: r.list,
+    code: r.code,
+    label: r.label,
+    description: r.description,
+    family: r.family,
+    isoMode: r.isoMode,
+    synonyms: r.synonyms,
+    retired: r.retiredAt !== null,
   }));
 
   return (
@@ -33,7 +39,11 @@ export default async function ReferencePage() {
       />
       <nav aria-label="On this page" className="mb-5 flex gap-2 overflow-x-auto pb-1 text-sm [scrollbar-width:none]">
         {JUMPS.map(([href, label]) => (
-          <a key={href} href={href} className="shrink-0 rounded-full border border-line bg-surface px-3 py-1.5 font-medium text-ink-2 hover:border-line-strong hover:text-ink">
+          <a
+            key={href}
+            href={href}
+            className="shrink-0 rounded-full border border-line bg-surface px-3 py-1.5 font-medium text-ink-2 hover:border-line-strong hover:text-ink"
+          >
             {label}
           </a>
         ))}

@@ -17,7 +17,11 @@ import { NoResults, SearchIntro } from "./_components/search-tips";
 
 export const dynamic = "force-dynamic";
 
-export async function generateMetadata({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }): Promise<Metadata> {
+export async function generateMetadata({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}): Promise<Metadata> {
   const q = (await searchParams).q;
   return { title: typeof q === "string" && q.trim() ? `Search: ${q.trim().slice(0, 60)}` : "Search" };
 }
@@ -37,7 +41,9 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
       <PageHeader title="Search the casebook" subtitle={`Free text, shop words and filters over ${scope}.`} />
       <SearchForm params={params} autoFocus={!criteria} />
       {dropped.length ? (
-        <p role="status" className="mt-2 text-sm text-warn">Part of this link could not be read and was left out ({dropped.join(", ")}).</p>
+        <p role="status" className="mt-2 text-sm text-warn">
+          Part of this link could not be read and was left out ({dropped.join(", ")}).
+        </p>
       ) : null}
       <div className="mt-5 grid gap-5 lg:grid-cols-[260px_minmax(0,1fr)] lg:items-start">
         <FilterDrawer active={activeFilterCount(params)} total={result.total}>
@@ -51,7 +57,9 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
               <ResultsHeader params={params} result={result} />
               {!criteria ? <h2 className="sr-only">Latest cases</h2> : null}
               <ol className="flex flex-col gap-3" data-testid="search-results">
-                {result.hits.map((h) => <HitCard key={h.id} hit={h} />)}
+                {result.hits.map((h) => (
+                  <HitCard key={h.id} hit={h} />
+                ))}
               </ol>
               <Pagination params={params} total={result.total} pageSize={result.pageSize} />
             </>

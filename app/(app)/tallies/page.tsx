@@ -23,7 +23,10 @@ export default async function TalliesPage({ searchParams }: Props) {
   const options = filterOptions(sites);
   const siteName = filters.site ? (sites.find((s) => s.code === filters.site)?.name ?? filters.site) : null;
   const where = data.siteLimit ? data.siteLimit.name : (siteName ?? "all sites");
-  const when = filters.from || filters.to ? `${monthLabel(filters.from ?? data.monthly.months[0] ?? filters.to!)} – ${monthLabel(filters.to ?? data.monthly.months.at(-1) ?? filters.from!)}` : "all time";
+  const when =
+    filters.from || filters.to
+      ? `${monthLabel(filters.from ?? data.monthly.months[0] ?? filters.to!)} – ${monthLabel(filters.to ?? data.monthly.months.at(-1) ?? filters.from!)}`
+      : "all time";
   const months = filters.from && filters.to ? monthRange(filters.from, filters.to).length : null;
   return (
     <>
@@ -33,7 +36,12 @@ export default async function TalliesPage({ searchParams }: Props) {
         actions={can(user.role, "digest:send") ? <SendDigestButton /> : undefined}
       />
       <TallyTabs active="overview" query={filtersToQuery({ ...filters, cluster: "site", window: 30 })} />
-      <FilterBar filters={filters} {...options} siteLimit={data.siteLimit ? `${data.siteLimit.name} (your shop)` : null} currentMonth={currentMonth()} />
+      <FilterBar
+        filters={filters}
+        {...options}
+        siteLimit={data.siteLimit ? `${data.siteLimit.name} (your shop)` : null}
+        currentMonth={currentMonth()}
+      />
       <TalliesBoard data={data} scopeWords={`${where} · ${when}`} />
     </>
   );

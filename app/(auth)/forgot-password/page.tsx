@@ -20,7 +20,8 @@ export default function ForgotPasswordPage() {
     setPending(true);
     const { error: err } = await authClient.requestPasswordReset({ email: parsed.data, redirectTo: "/reset-password" });
     setPending(false);
-    if (err) return setError(err.status === 429 ? "Too many requests. Wait a minute and try again." : "The request could not be sent. Try again.");
+    if (err)
+      return setError(err.status === 429 ? "Too many requests. Wait a minute and try again." : "The request could not be sent. Try again.");
     setSent(true);
   }
 

@@ -15,8 +15,14 @@ export const GET = withRole(null, async ({ req }) => {
   const rows = await codeEntries(list, { includeRetired: includeRetired === "1" || includeRetired === "true" });
   return NextResponse.json({
     codes: rows.map((r) => ({
-      code: r.code, label: r.label, description: r.description, family: r.family, isoMode: r.isoMode,
-      synonyms: r.synonyms, sortOrder: r.sortOrder, retired: r.retiredAt !== null,
+      code: r.code,
+      label: r.label,
+      description: r.description,
+      family: r.family,
+      isoMode: r.isoMode,
+      synonyms: r.synonyms,
+      sortOrder: r.sortOrder,
+      retired: r.retiredAt !== null,
     })),
   });
 });

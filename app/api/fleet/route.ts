@@ -30,7 +30,12 @@ export const POST = withRole("fleet:upload", async ({ req, user }) => {
   const parsed = parseFleetCsv(await csvText(req));
   if (!parsed.ok) {
     return NextResponse.json(
-      { error: `The fleet list has ${parsed.errorCount} problem${parsed.errorCount === 1 ? "" : "s"}; nothing was stored.`, code: "invalid-rows", rows: parsed.errors, errorCount: parsed.errorCount },
+      {
+        error: `The fleet list has ${parsed.errorCount} problem${parsed.errorCount === 1 ? "" : "s"}; nothing was stored.`,
+        code: "invalid-rows",
+        rows: parsed.errors,
+        errorCount: parsed.errorCount,
+      },
       { status: 422 },
     );
   }

@@ -9,7 +9,15 @@ import { cases, recurrenceCarCounts, recurrenceLotCounts } from "@/db/schema";
 import type { ClusterKey, TallyFilters } from "@/lib/tallies/filters";
 import { tallyWhere, type TallyViewer } from "./scope";
 
-export type ClusterRow = { key: string; cause: string; firstDate: string; lastDate: string; size: number; caseNumbers: string[]; total: number };
+export type ClusterRow = {
+  key: string;
+  cause: string;
+  firstDate: string;
+  lastDate: string;
+  size: number;
+  caseNumbers: string[];
+  total: number;
+};
 
 /** Each cluster lists its newest cases; the size says how many there are in all. */
 export const NUMBERS_SHOWN = 24;
@@ -19,7 +27,12 @@ export const defaultMinSize = (kind: ClusterKey) => (kind === "site" ? 3 : 2);
 /** The columns that make a group's key, and the words shown for it. */
 function keyOf(kind: ClusterKey): { cols: SQL; label: SQL; match: SQL; present: SQL } {
   if (kind === "site") {
-    return { cols: sql`${cases.siteId}`, label: sql`c.site_id::text`, match: sql`${cases.siteId} = c.site_id`, present: sql`${cases.siteId} is not null` };
+    return {
+      cols: sql`${cases.siteId}`,
+      label: sql`c.site_id::text`,
+      match: sql`${cases.siteId} = c.site_id`,
+      present: sql`${cases.siteId} is not null`,
+    };
   }
   if (kind === "car") {
     return {
@@ -38,7 +51,11 @@ const KEY_NAMES: Record<ClusterKey, SQL> = {
   lot: sql.raw("lot"),
 };
 
-export async function recurringClusters(filters: TallyFilters, viewer: TallyViewer, limit = 50): Promise<{ rows: ClusterRow[]; minSize: number }> {
+export async function recurringClusters(
+  filters: TallyFilters,
+  viewer: TallyViewer,
+  limit = 50,
+): Promise<{ rows: ClusterRow[]; minSize: number }> {
   const minSize = defaultMinSize(filters.cluster);
   const window = sql.raw(`'${Math.trunc(filters.window)} days'::interval`);
   const { cols, label, match, present } = keyOf(filters.cluster);
@@ -55,7 +72,15 @@ export async function recurringClusters(filters: TallyFilters, viewer: TallyView
     filters.cluster === "site"
       ? sql`select ${cols}, ${cases.primaryCause} as cause, ${cases.removedOn} as d from ${cases} where ${where}`
       : sql`select ${cols}, ${cases.primaryCause} as cause, ${cases.removedOn} as d from ${cases} join ${repeated} big using (${k}, primary_cause) where ${where}`;
-  const result = await db.execute<{ k: string; cause: string; first_d: string; last_d: string; size: number; total: number; numbers: string[] }>(sql`
+  const result = await db.execute<{
+    k: string;
+    cause: string;
+    first_d: string;
+    last_d: string;
+    size: number;
+    total: number;
+    numbers: string[];
+  }>(sql`
     with days as (
       select ${k}, cause, d, count(*)::int as n from (${source}) src group by ${k}, cause, d
     ),
@@ -91,6 +116,14 @@ export async function recurringClusters(filters: TallyFilters, viewer: TallyView
     order by c.last_d desc, c.size desc, 1, c.cause`);
   return {
     minSize,
-    rows: result.rows.map((r) => ({ key: r.k, cause: r.cause, firstDate: r.first_d, lastDate: r.last_d, size: r.size, caseNumbers: r.numbers, total: r.total })),
+    rows: result.rows.map((r) => ({
+      key: r.k,
+      cause: r.cause,
+      firstDate: r.first_d,
+      lastDate: r.last_d,
+      size: r.size,
+      caseNumbers: r.numbers,
+      total: r.total,
+    })),
   };
 }

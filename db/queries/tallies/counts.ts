@@ -10,7 +10,16 @@ import type { TallyFilters } from "@/lib/tallies/filters";
 import type { MonthCell, Outcome, VerdictCell } from "@/lib/tallies/types";
 import { tallyCellWhere, type TallyViewer } from "./scope";
 
-type Row = { by_month: number; signed: boolean; site_id: string | null; trigger: string | null; cause: string | null; outcome: Outcome; month: string | null; count: number };
+type Row = {
+  by_month: number;
+  signed: boolean;
+  site_id: string | null;
+  trigger: string | null;
+  cause: string | null;
+  outcome: Outcome;
+  month: string | null;
+  count: number;
+};
 
 export async function tallyCounts(filters: TallyFilters, viewer: TallyViewer): Promise<{ cube: VerdictCell[]; months: MonthCell[] }> {
   const c = tallyCells;
@@ -29,7 +38,8 @@ export async function tallyCounts(filters: TallyFilters, viewer: TallyViewer): P
   const months: MonthCell[] = [];
   for (const r of rows) {
     if (!r.by_month) {
-      if (r.signed) cube.push({ siteId: r.site_id, trigger: r.trigger ?? "other", cause: r.cause, outcome: r.outcome ?? null, count: r.count });
+      if (r.signed)
+        cube.push({ siteId: r.site_id, trigger: r.trigger ?? "other", cause: r.cause, outcome: r.outcome ?? null, count: r.count });
     } else if (r.month) {
       // before a verdict is signed the removal has no cause yet
       months.push({ month: r.month, signed: r.signed, cause: r.signed ? r.cause : null, count: r.count });

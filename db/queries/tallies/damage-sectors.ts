@@ -38,7 +38,8 @@ export async function damageSectors(filters: TallyFilters, viewer: TallyViewer, 
   const groups: SpanGroup[] = [];
   for (const r of rows) {
     placed += r.findings;
-    for (const ring of ringsOf(r.part, r.row)) groups.push({ ring, severity: r.severity, first: r.first, count: r.count, findings: r.findings });
+    for (const ring of ringsOf(r.part, r.row))
+      groups.push({ ring, severity: r.severity, first: r.first, count: r.count, findings: r.findings });
   }
   return { sectorDeg, sectors: sumSpanGroups(groups, sectorDeg), placed };
 }

@@ -11,7 +11,15 @@ import { tallyWhere, type TallyViewer } from "./scope";
 
 const lifeOf = (measure: LifeMeasure) => (measure === "months" ? sql`${cases.serviceMonths}::float8` : sql`${cases.serviceMiles}::float8`);
 
-type TotalsRow = { kind: "c" | "t" | "o" | "w"; cause: string | null; t: number | null; n: number; sum_log: number | null; first: number | null; last: number | null };
+type TotalsRow = {
+  kind: "c" | "t" | "o" | "w";
+  cause: string | null;
+  t: number | null;
+  n: number;
+  sum_log: number | null;
+  first: number | null;
+  last: number | null;
+};
 
 /**
  * The life section's counts in one pass over the signed cases in view: lives by service life, per
@@ -19,10 +27,19 @@ type TotalsRow = { kind: "c" | "t" | "o" | "w"; cause: string | null; t: number 
  * lives of one cause: `wanted` when it can fail a bearing, else the cause the table lists first
  * among those that can be fitted (the service checks the pick and asks again for another).
  */
-export async function lifeTotals(filters: TallyFilters, viewer: TallyViewer, measure: LifeMeasure, wanted: string | undefined, notFailures: readonly string[]): Promise<LifeTotals> {
+export async function lifeTotals(
+  filters: TallyFilters,
+  viewer: TallyViewer,
+  measure: LifeMeasure,
+  wanted: string | undefined,
+  notFailures: readonly string[],
+): Promise<LifeTotals> {
   const life = lifeOf(measure);
   const where = tallyWhere(filters, viewer, { signedOnly: true });
-  const excluded = sql`array[${sql.join([...notFailures, ""].map((c) => sql`${c}`), sql`, `)}]::text[]`;
+  const excluded = sql`array[${sql.join(
+    [...notFailures, ""].map((c) => sql`${c}`),
+    sql`, `,
+  )}]::text[]`;
   const { rows } = await db.execute<TotalsRow>(sql`
     with g as materialized (
       select ${cases.primaryCause} as cause, ${life} as t, count(*)::int as n from ${cases} where ${where} group by 1, 2
@@ -41,9 +58,16 @@ export async function lifeTotals(filters: TallyFilters, viewer: TallyViewer, mea
     union all select 't', null, t, sum(n)::int, null, null, null from g where t > 0 group by t
     union all select 'o', g.cause, t, n, null, null, null from g join pick on pick.cause = g.cause where t > 0
     union all select 'w', null, null, coalesce(sum(n), 0)::int, null, null, null from g where t is null or t <= 0`);
-  const totals = { byTime: [] as FleetCountRow[], causes: [] as LifeTotals["causes"][number][], ownTimes: [] as FleetCountRow[], ownCause: null as string | null, withoutLife: 0 };
+  const totals = {
+    byTime: [] as FleetCountRow[],
+    causes: [] as LifeTotals["causes"][number][],
+    ownTimes: [] as FleetCountRow[],
+    ownCause: null as string | null,
+    withoutLife: 0,
+  };
   for (const r of rows) {
-    if (r.kind === "c" && r.cause) totals.causes.push({ cause: r.cause, failures: r.n, sumLog: Number(r.sum_log), first: Number(r.first), last: Number(r.last) });
+    if (r.kind === "c" && r.cause)
+      totals.causes.push({ cause: r.cause, failures: r.n, sumLog: Number(r.sum_log), first: Number(r.first), last: Number(r.last) });
     else if (r.kind === "t") totals.byTime.push({ time: Number(r.t), count: r.n });
     else if (r.kind === "o") {
       totals.ownCause = r.cause;
@@ -55,7 +79,12 @@ export async function lifeTotals(filters: TallyFilters, viewer: TallyViewer, mea
 }
 
 /** One cause's signed lives by service life (when the service picks another cause than lifeTotals did). */
-export async function causeLives(filters: TallyFilters, viewer: TallyViewer, measure: LifeMeasure, cause: string): Promise<FleetCountRow[]> {
+export async function causeLives(
+  filters: TallyFilters,
+  viewer: TallyViewer,
+  measure: LifeMeasure,
+  cause: string,
+): Promise<FleetCountRow[]> {
   const life = lifeOf(measure);
   const where = tallyWhere(filters, viewer, { signedOnly: true });
   const rows = await db
@@ -68,7 +97,12 @@ export async function causeLives(filters: TallyFilters, viewer: TallyViewer, mea
 
 export async function latestFleetBatch(): Promise<FleetBatch | null> {
   const [row] = await db
-    .select({ batchId: fleetUnits.batchId, uploadedAt: sql<string>`max(${fleetUnits.uploadedAt})::text`, uploadedBy: sql<string | null>`min(${user.name})`, units: sql<number>`count(*)::int` })
+    .select({
+      batchId: fleetUnits.batchId,
+      uploadedAt: sql<string>`max(${fleetUnits.uploadedAt})::text`,
+      uploadedBy: sql<string | null>`min(${user.name})`,
+      units: sql<number>`count(*)::int`,
+    })
     .from(fleetUnits)
     .leftJoin(user, eq(user.id, fleetUnits.uploadedBy))
     .groupBy(fleetUnits.batchId)

@@ -14,7 +14,12 @@ export type { TallyViewer };
 /** The columns a tally filters on: the cases' own, or a roll-up's (whose day is the first of its month). */
 type TallyColumns = { siteId: AnyPgColumn; day: AnyPgColumn; bearingClass: AnyPgColumn; trigger: AnyPgColumn };
 const CASE_COLUMNS: TallyColumns = { siteId: cases.siteId, day: cases.removedOn, bearingClass: cases.bearingClass, trigger: cases.trigger };
-const CELL_COLUMNS: TallyColumns = { siteId: tallyCells.siteId, day: tallyCells.month, bearingClass: tallyCells.bearingClass, trigger: tallyCells.trigger };
+const CELL_COLUMNS: TallyColumns = {
+  siteId: tallyCells.siteId,
+  day: tallyCells.month,
+  bearingClass: tallyCells.bearingClass,
+  trigger: tallyCells.trigger,
+};
 
 /**
  * Everyone else counts within the one read rule, and only their own shop: a tally is labelled with

@@ -25,7 +25,14 @@ const pricedSums = (where = sql`true`) => sql`
   coalesce(sum(g.n) filter (where ${where} and g.outcome = 'no-defect' and ${sites.removalCostUsd} is null), 0)::int as uncosted`;
 
 type OutcomeRow = { key: string | null; n: number; confirmed: number; no_defect: number; cost_usd: number; uncosted: number };
-const toCell = (r: OutcomeRow): OutcomeCell => ({ key: r.key ?? "", n: r.n, confirmed: r.confirmed, noDefect: r.no_defect, costUsd: r.cost_usd, uncosted: r.uncosted });
+const toCell = (r: OutcomeRow): OutcomeCell => ({
+  key: r.key ?? "",
+  n: r.n,
+  confirmed: r.confirmed,
+  noDefect: r.no_defect,
+  costUsd: r.cost_usd,
+  uncosted: r.uncosted,
+});
 
 export async function hotReadings(filters: TallyFilters, viewer: TallyViewer): Promise<{ cells: HotCell[]; withoutReading: number }> {
   const { rows } = await db.execute<{ margin: number | null; reading: number | null; confirmed: number; n: number }>(sql`

@@ -12,7 +12,18 @@ import { cellWhere } from "./yield-scope";
 
 export type CallViewer = TallyViewer & { id: string };
 
-type Row = { by: "shop" | "person" | "quarter" | "name"; name: string | null; site_id: string | null; person: string | null; quarter: string | null; n: number; confirmed: number; no_defect: number; cost_usd: number; uncosted: number };
+type Row = {
+  by: "shop" | "person" | "quarter" | "name";
+  name: string | null;
+  site_id: string | null;
+  person: string | null;
+  quarter: string | null;
+  n: number;
+  confirmed: number;
+  no_defect: number;
+  cost_usd: number;
+  uncosted: number;
+};
 
 /**
  * Display names of the people in the `person` column of subquery `m`, as rows of `by`, `person` and
@@ -20,10 +31,16 @@ type Row = { by: "shop" | "person" | "quarter" | "name"; name: string | null; si
  * so the page needs no second round trip once it knows who made the calls.
  */
 const nameRows = (withNames: boolean, columns: SQL) =>
-  withNames ? sql`union all select 'name', ${user.id}, ${user.name}, ${columns} from ${user} where ${user.id} in (select m.person from m)` : sql``;
+  withNames
+    ? sql`union all select 'name', ${user.id}, ${user.name}, ${columns} from ${user} where ${user.id} in (select m.person from m)`
+    : sql``;
 
 /** Remove calls, summed from the signed-outcome roll-up (db/schema/yield-cells.ts), with the inspectors' names when `withNames`. */
-export async function removeCalls(filters: TallyFilters, viewer: CallViewer, withNames: boolean): Promise<{ byShop: OutcomeCell[]; byInspector: OutcomeCell[]; byQuarter: CallCell[]; names: Map<string, string> }> {
+export async function removeCalls(
+  filters: TallyFilters,
+  viewer: CallViewer,
+  withNames: boolean,
+): Promise<{ byShop: OutcomeCell[]; byInspector: OutcomeCell[]; byQuarter: CallCell[]; names: Map<string, string> }> {
   const c = yieldCells;
   const own = viewerSiteLimit(viewer).limited ? eq(c.createdBy, viewer.id) : undefined;
   // Summed per shop, person and month first; the quarter and the money are worked out on those few rows.
@@ -44,11 +61,20 @@ export async function removeCalls(filters: TallyFilters, viewer: CallViewer, wit
     from m left join ${sites} on ${sites.id} = m.site_id
     group by grouping sets ((m.site_id), (m.person), (m.site_id, to_char(m.month, 'YYYY-"Q"Q')))
     ${nameRows(withNames, sql`null, null, 0, 0, 0, 0, 0`)}`);
-  const cell = (key: string, r: Row): OutcomeCell => ({ key, n: r.n, confirmed: r.confirmed, noDefect: r.no_defect, costUsd: r.cost_usd, uncosted: r.uncosted });
+  const cell = (key: string, r: Row): OutcomeCell => ({
+    key,
+    n: r.n,
+    confirmed: r.confirmed,
+    noDefect: r.no_defect,
+    costUsd: r.cost_usd,
+    uncosted: r.uncosted,
+  });
   return {
     byShop: rows.filter((r) => r.by === "shop" && r.site_id).map((r) => cell(r.site_id!, r)),
     byInspector: rows.filter((r) => r.by === "person" && r.person).map((r) => cell(r.person!, r)),
-    byQuarter: rows.filter((r) => r.by === "quarter" && r.site_id && r.quarter).map((r) => ({ ...cell(`${r.site_id}|${r.quarter}`, r), siteId: r.site_id, quarter: r.quarter })),
+    byQuarter: rows
+      .filter((r) => r.by === "quarter" && r.site_id && r.quarter)
+      .map((r) => ({ ...cell(`${r.site_id}|${r.quarter}`, r), siteId: r.site_id, quarter: r.quarter })),
     names: namesOf(rows),
   };
 }
@@ -59,12 +85,24 @@ export async function removeCalls(filters: TallyFilters, viewer: CallViewer, wit
  * viewer may see it too: an inspector counts only later removals at their own shop, which is the
  * keep call's shop. With the inspectors' names when `withNames`.
  */
-export async function keepCalls(filters: TallyFilters, viewer: CallViewer, windowDays: number, withNames: boolean): Promise<{ byShop: KeepCell[]; byInspector: KeepCell[]; names: Map<string, string> }> {
+export async function keepCalls(
+  filters: TallyFilters,
+  viewer: CallViewer,
+  windowDays: number,
+  withNames: boolean,
+): Promise<{ byShop: KeepCell[]; byInspector: KeepCell[]; names: Map<string, string> }> {
   const k = keepGaps;
   const limit = viewerSiteLimit(viewer);
   const next = limit.limited ? k.nextSameSite : k.nextAny;
   const own = limit.limited ? eq(k.createdBy, viewer.id) : undefined;
-  const { rows } = await db.execute<{ by: "shop" | "person" | "name"; person: string | null; name: string | null; site_id: string | null; keeps: number; missed: number }>(sql`
+  const { rows } = await db.execute<{
+    by: "shop" | "person" | "name";
+    person: string | null;
+    name: string | null;
+    site_id: string | null;
+    keeps: number;
+    missed: number;
+  }>(sql`
     with m as (
       select case when grouping(${k.createdBy}) = 0 then 'person' else 'shop' end as by, ${k.createdBy} as person, ${k.siteId} as site_id,
         count(*)::int as keeps,

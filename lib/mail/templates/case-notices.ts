@@ -3,15 +3,27 @@ import { renderMail } from "./layout";
 
 type CaseRef = { caseNumber: string; url: string };
 
-const PREFS_FOOTER = "You receive this notice because of your part in this case. Switch notices on or off under Notices on your profile page.";
+const PREFS_FOOTER =
+  "You receive this notice because of your part in this case. Switch notices on or off under Notices on your profile page.";
 
 export function signoffRequested(p: CaseRef & { analystName: string; primaryCauseLabel: string; trigger: string }) {
   return renderMail(
     `${p.caseNumber} waits for your sign-off`,
     `${p.caseNumber} is ready for sign-off`,
     [
-      { kind: "p", text: `${p.analystName} finished the teardown and proposes a verdict. Please review the findings and sign it, or return it to the bench with a reason.` },
-      { kind: "facts", rows: [["Case", p.caseNumber], ["Removed for", p.trigger], ["Proposed root cause", p.primaryCauseLabel], ["Proposed by", p.analystName]] },
+      {
+        kind: "p",
+        text: `${p.analystName} finished the teardown and proposes a verdict. Please review the findings and sign it, or return it to the bench with a reason.`,
+      },
+      {
+        kind: "facts",
+        rows: [
+          ["Case", p.caseNumber],
+          ["Removed for", p.trigger],
+          ["Proposed root cause", p.primaryCauseLabel],
+          ["Proposed by", p.analystName],
+        ],
+      },
       { kind: "button", label: "Review the verdict", url: p.url },
     ],
     PREFS_FOOTER,
@@ -23,8 +35,19 @@ export function verdictSigned(p: CaseRef & { signerName: string; primaryCauseLab
     `${p.caseNumber} signed: ${p.primaryCauseLabel}`,
     `The verdict on ${p.caseNumber} is signed`,
     [
-      { kind: "p", text: `${p.signerName} signed the verdict. The case is now closed and read-only; its report can be printed or handed over.` },
-      { kind: "facts", rows: [["Case", p.caseNumber], ["Root cause", p.primaryCauseLabel], ["Confidence", p.confidence], ["Signed by", p.signerName]] },
+      {
+        kind: "p",
+        text: `${p.signerName} signed the verdict. The case is now closed and read-only; its report can be printed or handed over.`,
+      },
+      {
+        kind: "facts",
+        rows: [
+          ["Case", p.caseNumber],
+          ["Root cause", p.primaryCauseLabel],
+          ["Confidence", p.confidence],
+          ["Signed by", p.signerName],
+        ],
+      },
       { kind: "button", label: "Open the case", url: p.url },
     ],
     PREFS_FOOTER,

@@ -14,7 +14,10 @@ export function renderMail(subject: string, heading: string, blocks: Block[], fo
       if (b.kind === "button")
         return `<p style="margin:20px 0"><a href="${escapeHtml(b.url)}" style="background:#b45309;color:#fff;padding:11px 18px;border-radius:6px;text-decoration:none;font-weight:600">${escapeHtml(b.label)}</a></p><p style="margin:0 0 14px;font-size:12px;color:#64748b">Or paste this address into your browser: ${escapeHtml(b.url)}</p>`;
       return `<table style="border-collapse:collapse;margin:0 0 14px;font-size:14px">${b.rows
-        .map(([k, v]) => `<tr><td style="padding:3px 14px 3px 0;color:#64748b">${escapeHtml(k)}</td><td style="padding:3px 0">${escapeHtml(v)}</td></tr>`)
+        .map(
+          ([k, v]) =>
+            `<tr><td style="padding:3px 14px 3px 0;color:#64748b">${escapeHtml(k)}</td><td style="padding:3px 0">${escapeHtml(v)}</td></tr>`,
+        )
         .join("")}</table>`;
     })
     .join("\n");
@@ -34,6 +37,8 @@ ${htmlBlocks}</div>
     "",
     "--",
     foot,
-  ].join("\n\n").replace(/\n{3,}/g, "\n\n");
+  ]
+    .join("\n\n")
+    .replace(/\n{3,}/g, "\n\n");
   return { subject, html, text };
 }

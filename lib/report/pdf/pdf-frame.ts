@@ -14,7 +14,11 @@ export function drawTitleBand(doc: PDFKit.PDFDocument, r: CaseReport) {
   doc.rect(0, BAND_HEIGHT, PAGE.width, 3).fill(AMBER);
   doc.font(FONT.bold).fontSize(8).fillColor(AMBER).text("TEARLINE CASE REPORT", left, 24, { characterSpacing: 2.2, lineBreak: false });
   doc.font(FONT.bold).fontSize(24).fillColor("#ffffff").text(r.number, left, 38, { lineBreak: false });
-  doc.font(FONT.regular).fontSize(SIZE.small).fillColor("#cbd5e1").text(pdfText(`Generated ${r.generatedAt}`), left, 70, { lineBreak: false });
+  doc
+    .font(FONT.regular)
+    .fontSize(SIZE.small)
+    .fillColor("#cbd5e1")
+    .text(pdfText(`Generated ${r.generatedAt}`), left, 70, { lineBreak: false });
 
   // Revision pill on the right: green when signed, amber when a draft.
   const signed = r.revision.kind === "signed";
@@ -24,8 +28,15 @@ export function drawTitleBand(doc: PDFKit.PDFDocument, r: CaseReport) {
   const px = PAGE.width - right - pillWidth;
   doc.roundedRect(px, 26, pillWidth, 18, 9).fill(signed ? OK : AMBER);
   doc.fillColor(signed ? "#ffffff" : INK).text(pill, px + 10, 31.5, { characterSpacing: 1.2, lineBreak: false });
-  const detail = signed && r.revision.kind === "signed" ? `Signed by ${r.revision.signedBy}\n${r.revision.signedAt}` : `Not signed · ${r.revision.kind === "draft" ? r.revision.stage : ""}`;
-  doc.font(FONT.regular).fontSize(SIZE.small).fillColor("#e2e8f0").text(pdfText(detail), PAGE.width - right - 220, 52, { width: 220, align: "right" });
+  const detail =
+    signed && r.revision.kind === "signed"
+      ? `Signed by ${r.revision.signedBy}\n${r.revision.signedAt}`
+      : `Not signed · ${r.revision.kind === "draft" ? r.revision.stage : ""}`;
+  doc
+    .font(FONT.regular)
+    .fontSize(SIZE.small)
+    .fillColor("#e2e8f0")
+    .text(pdfText(detail), PAGE.width - right - 220, 52, { width: 220, align: "right" });
   doc.x = left;
   doc.y = BAND_HEIGHT + 18;
 }
@@ -33,11 +44,23 @@ export function drawTitleBand(doc: PDFKit.PDFDocument, r: CaseReport) {
 export function drawRunningHead(doc: PDFKit.PDFDocument, r: CaseReport) {
   const { left, right, top } = PAGE.margin;
   const y = top - 22;
-  doc.font(FONT.bold).fontSize(SIZE.label).fillColor(MUTED).text(pdfText(`TEARLINE CASE REPORT · ${r.number}`), left, y, { characterSpacing: 1, lineBreak: false });
+  doc
+    .font(FONT.bold)
+    .fontSize(SIZE.label)
+    .fillColor(MUTED)
+    .text(pdfText(`TEARLINE CASE REPORT · ${r.number}`), left, y, { characterSpacing: 1, lineBreak: false });
   const word = r.revision.kind === "signed" ? "Signed revision" : "Draft — not signed";
-  doc.font(FONT.regular).fontSize(SIZE.label).fillColor(r.revision.kind === "signed" ? OK : WARN);
+  doc
+    .font(FONT.regular)
+    .fontSize(SIZE.label)
+    .fillColor(r.revision.kind === "signed" ? OK : WARN);
   doc.text(pdfText(word), PAGE.width - right - 200, y, { width: 200, align: "right", lineBreak: false });
-  doc.moveTo(left, y + 11).lineTo(PAGE.width - right, y + 11).lineWidth(0.5).strokeColor(LINE).stroke();
+  doc
+    .moveTo(left, y + 11)
+    .lineTo(PAGE.width - right, y + 11)
+    .lineWidth(0.5)
+    .strokeColor(LINE)
+    .stroke();
   doc.x = left;
   doc.y = top;
 }
@@ -52,10 +75,23 @@ export function finishPages(doc: PDFKit.PDFDocument, r: CaseReport) {
     const savedBottom = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
     const y = PAGE.height - 34;
-    doc.moveTo(left, y - 8).lineTo(PAGE.width - right, y - 8).lineWidth(0.5).strokeColor(LINE).stroke();
+    doc
+      .moveTo(left, y - 8)
+      .lineTo(PAGE.width - right, y - 8)
+      .lineWidth(0.5)
+      .strokeColor(LINE)
+      .stroke();
     const revision = r.revision.kind === "signed" ? `Signed ${r.revision.signedAt}` : "Draft — not signed";
     doc.font(FONT.regular).fontSize(SIZE.small).fillColor(MUTED).text(pdfText(revision), left, y, { lineBreak: false });
-    doc.font(FONT.bold).fontSize(SIZE.small).fillColor(INK).text(pdfText(`${r.number} · page ${i - start + 1} of ${count}`), PAGE.width - right - 200, y, { width: 200, align: "right", lineBreak: false });
+    doc
+      .font(FONT.bold)
+      .fontSize(SIZE.small)
+      .fillColor(INK)
+      .text(pdfText(`${r.number} · page ${i - start + 1} of ${count}`), PAGE.width - right - 200, y, {
+        width: 200,
+        align: "right",
+        lineBreak: false,
+      });
     if (r.revision.kind === "draft") drawDraftMark(doc);
     doc.page.margins.bottom = savedBottom;
   }

@@ -1,7 +1,18 @@
 // pdfkit's built-in Helvetica speaks WinAnsi only: swap what it cannot show for plain equivalents.
 const SWAPS: Record<string, string> = {
-  "−": "-", "→": "->", "←": "<-", "≤": "<=", "≥": ">=", "≈": "~", "π": "pi", "✓": "yes", "✗": "no", "×": "×",
-  "\u00a0": " ", "\u2009": " ", "\u202f": " ",
+  "−": "-",
+  "→": "->",
+  "←": "<-",
+  "≤": "<=",
+  "≥": ">=",
+  "≈": "~",
+  π: "pi",
+  "✓": "yes",
+  "✗": "no",
+  "×": "×",
+  "\u00a0": " ",
+  "\u2009": " ",
+  "\u202f": " ",
 };
 // Characters WinAnsi adds above Latin-1's control range (pdfkit maps these itself).
 const WIN_ANSI_EXTRA = new Set("€‚ƒ„…†‡ˆ‰Š‹ŒŽ‘’“”•–—˜™š›œžŸ");

@@ -2,7 +2,21 @@
 import type PDFKit from "pdfkit";
 import type { Note, Row } from "../types";
 import { pdfText } from "./pdf-text";
-import { CONTENT_WIDTH, FONT, INK, INK_2, LEVEL_COLOUR, LEVEL_WORD, LINE, LINE_STRONG, MUTED, PAGE, SIZE, SURFACE_2, ACCENT } from "./pdf-style";
+import {
+  CONTENT_WIDTH,
+  FONT,
+  INK,
+  INK_2,
+  LEVEL_COLOUR,
+  LEVEL_WORD,
+  LINE,
+  LINE_STRONG,
+  MUTED,
+  PAGE,
+  SIZE,
+  SURFACE_2,
+  ACCENT,
+} from "./pdf-style";
 
 export type Column = { title: string; width: number; align?: "left" | "right" | "center"; mono?: boolean };
 
@@ -42,8 +56,17 @@ export class PdfWriter {
     const y = this.doc.y;
     const { doc } = this;
     doc.rect(this.left, y + 1, 3, 13).fill(ACCENT);
-    doc.font(FONT.bold).fontSize(SIZE.h2).fillColor(INK).text(pdfText(`${this.sectionNo}  ${title}`), this.left + 10, y + 2, { lineBreak: false });
-    doc.moveTo(this.left, y + 20).lineTo(this.left + this.width, y + 20).lineWidth(0.6).strokeColor(LINE_STRONG).stroke();
+    doc
+      .font(FONT.bold)
+      .fontSize(SIZE.h2)
+      .fillColor(INK)
+      .text(pdfText(`${this.sectionNo}  ${title}`), this.left + 10, y + 2, { lineBreak: false });
+    doc
+      .moveTo(this.left, y + 20)
+      .lineTo(this.left + this.width, y + 20)
+      .lineWidth(0.6)
+      .strokeColor(LINE_STRONG)
+      .stroke();
     doc.x = this.left;
     doc.y = y + 28;
   }
@@ -60,7 +83,11 @@ export class PdfWriter {
     const size = opts.size ?? SIZE.body;
     const font = opts.font ?? FONT.regular;
     this.ensure(Math.min(this.textHeight(s, width, font, size), 60));
-    this.doc.font(font).fontSize(size).fillColor(opts.colour ?? INK).text(pdfText(s), x, this.doc.y, { width, lineGap: 1.5 });
+    this.doc
+      .font(font)
+      .fontSize(size)
+      .fillColor(opts.colour ?? INK)
+      .text(pdfText(s), x, this.doc.y, { width, lineGap: 1.5 });
     this.doc.x = this.left;
   }
 
@@ -69,15 +96,27 @@ export class PdfWriter {
     const colWidth = (width - (columns - 1) * 14) / columns;
     for (let i = 0; i < rows.length; i += columns) {
       const line = rows.slice(i, i + columns);
-      const labelHeight = (label: string) => this.doc.font(FONT.regular).fontSize(SIZE.label).heightOfString(pdfText(label.toUpperCase()), { width: colWidth, characterSpacing: 0.4 });
+      const labelHeight = (label: string) =>
+        this.doc
+          .font(FONT.regular)
+          .fontSize(SIZE.label)
+          .heightOfString(pdfText(label.toUpperCase()), { width: colWidth, characterSpacing: 0.4 });
       const labelH = Math.max(...line.map(([l]) => labelHeight(l))) + 1.5;
       const h = labelH + Math.max(...line.map(([, v]) => this.textHeight(v, colWidth))) + 3;
       this.ensure(h + 4);
       const y = this.doc.y;
       line.forEach(([label, value], j) => {
         const cx = x + j * (colWidth + 14);
-        this.doc.font(FONT.regular).fontSize(SIZE.label).fillColor(MUTED).text(pdfText(label.toUpperCase()), cx, y, { width: colWidth, characterSpacing: 0.4 });
-        this.doc.font(FONT.regular).fontSize(SIZE.body).fillColor(INK).text(pdfText(value), cx, y + labelH, { width: colWidth, lineGap: 1.5 });
+        this.doc
+          .font(FONT.regular)
+          .fontSize(SIZE.label)
+          .fillColor(MUTED)
+          .text(pdfText(label.toUpperCase()), cx, y, { width: colWidth, characterSpacing: 0.4 });
+        this.doc
+          .font(FONT.regular)
+          .fontSize(SIZE.body)
+          .fillColor(INK)
+          .text(pdfText(value), cx, y + labelH, { width: colWidth, lineGap: 1.5 });
       });
       this.doc.x = this.left;
       this.doc.y = y + h + 3;
@@ -94,7 +133,16 @@ export class PdfWriter {
       doc.rect(this.left, y, this.width, 15).fill(SURFACE_2);
       let x = this.left;
       for (const c of columns) {
-        doc.font(FONT.bold).fontSize(SIZE.label).fillColor(MUTED).text(pdfText(c.title.toUpperCase()), x + pad, y + 4.5, { width: c.width - 2 * pad, align: c.align ?? "left", lineBreak: false, characterSpacing: 0.3 });
+        doc
+          .font(FONT.bold)
+          .fontSize(SIZE.label)
+          .fillColor(MUTED)
+          .text(pdfText(c.title.toUpperCase()), x + pad, y + 4.5, {
+            width: c.width - 2 * pad,
+            align: c.align ?? "left",
+            lineBreak: false,
+            characterSpacing: 0.3,
+          });
         x += c.width;
       }
       doc.y = y + 15;
@@ -102,7 +150,9 @@ export class PdfWriter {
     this.ensure(15 + 18);
     header();
     for (const row of rows) {
-      const heights = row.map((cell, i) => this.textHeight(cell, columns[i].width - 2 * pad, columns[i].mono ? FONT.mono : FONT.regular, size));
+      const heights = row.map((cell, i) =>
+        this.textHeight(cell, columns[i].width - 2 * pad, columns[i].mono ? FONT.mono : FONT.regular, size),
+      );
       const h = Math.max(...heights) + 2 * pad;
       if (doc.y + h > this.bottom) {
         doc.addPage();
@@ -112,10 +162,19 @@ export class PdfWriter {
       let x = this.left;
       row.forEach((cell, i) => {
         const c = columns[i];
-        doc.font(c.mono ? FONT.mono : FONT.regular).fontSize(size).fillColor(INK).text(pdfText(cell), x + pad, y + pad, { width: c.width - 2 * pad, align: c.align ?? "left", lineGap: 1.5 });
+        doc
+          .font(c.mono ? FONT.mono : FONT.regular)
+          .fontSize(size)
+          .fillColor(INK)
+          .text(pdfText(cell), x + pad, y + pad, { width: c.width - 2 * pad, align: c.align ?? "left", lineGap: 1.5 });
         x += c.width;
       });
-      doc.moveTo(this.left, y + h).lineTo(this.left + this.width, y + h).lineWidth(0.5).strokeColor(LINE).stroke();
+      doc
+        .moveTo(this.left, y + h)
+        .lineTo(this.left + this.width, y + h)
+        .lineWidth(0.5)
+        .strokeColor(LINE)
+        .stroke();
       doc.x = this.left;
       doc.y = y + h;
     }
@@ -130,8 +189,16 @@ export class PdfWriter {
       const h = this.textHeight(n.text, textWidth) + 4;
       this.ensure(h);
       const y = doc.y;
-      doc.font(FONT.bold).fontSize(SIZE.label).fillColor(LEVEL_COLOUR[n.level]).text(LEVEL_WORD[n.level].toUpperCase(), this.left, y + 1.2, { width: 46, lineBreak: false, characterSpacing: 0.3 });
-      doc.font(FONT.regular).fontSize(SIZE.body).fillColor(INK_2).text(pdfText(n.text), this.left + 52, y, { width: textWidth, lineGap: 1.5 });
+      doc
+        .font(FONT.bold)
+        .fontSize(SIZE.label)
+        .fillColor(LEVEL_COLOUR[n.level])
+        .text(LEVEL_WORD[n.level].toUpperCase(), this.left, y + 1.2, { width: 46, lineBreak: false, characterSpacing: 0.3 });
+      doc
+        .font(FONT.regular)
+        .fontSize(SIZE.body)
+        .fillColor(INK_2)
+        .text(pdfText(n.text), this.left + 52, y, { width: textWidth, lineGap: 1.5 });
       doc.x = this.left;
       doc.y = y + h;
     }
@@ -146,8 +213,17 @@ export class PdfWriter {
     const y = doc.y;
     doc.roundedRect(this.left, y, this.width, h, 4).fill(colours.fill);
     doc.rect(this.left, y, 3, h).fill(colours.ink);
-    doc.font(FONT.bold).fontSize(SIZE.h3).fillColor(colours.ink).text(pdfText(title), this.left + 14, y + 10, { width: inner });
-    if (body) doc.font(FONT.regular).fontSize(SIZE.body).fillColor(INK).text(pdfText(body), this.left + 14, doc.y + 3, { width: inner, lineGap: 1.5 });
+    doc
+      .font(FONT.bold)
+      .fontSize(SIZE.h3)
+      .fillColor(colours.ink)
+      .text(pdfText(title), this.left + 14, y + 10, { width: inner });
+    if (body)
+      doc
+        .font(FONT.regular)
+        .fontSize(SIZE.body)
+        .fillColor(INK)
+        .text(pdfText(body), this.left + 14, doc.y + 3, { width: inner, lineGap: 1.5 });
     doc.x = this.left;
     doc.y = y + h + 6;
   }

@@ -28,14 +28,30 @@ function thumbnails(w: PdfWriter, photos: ReportPhoto[], images: PhotoImages) {
         try {
           doc.image(img, x, y, { fit: [cell, imgH], align: "center", valign: "center" });
         } catch {
-          doc.font(FONT.italic).fontSize(SIZE.small).fillColor(MUTED).text("Image could not be drawn", x, y + imgH / 2 - 4, { width: cell, align: "center" });
+          doc
+            .font(FONT.italic)
+            .fontSize(SIZE.small)
+            .fillColor(MUTED)
+            .text("Image could not be drawn", x, y + imgH / 2 - 4, { width: cell, align: "center" });
         }
       } else {
-        doc.font(FONT.italic).fontSize(SIZE.small).fillColor(MUTED).text("Image not available", x, y + imgH / 2 - 4, { width: cell, align: "center" });
+        doc
+          .font(FONT.italic)
+          .fontSize(SIZE.small)
+          .fillColor(MUTED)
+          .text("Image not available", x, y + imgH / 2 - 4, { width: cell, align: "center" });
       }
       doc.rect(x, y, cell, imgH).lineWidth(0.5).strokeColor(LINE_STRONG).stroke();
-      doc.font(FONT.bold).fontSize(SIZE.small).fillColor(INK).text(`Photo ${p.number}`, x, y + imgH + 4, { width: cell, lineBreak: false });
-      doc.font(FONT.regular).fontSize(SIZE.small).fillColor(MUTED).text(pdfText(p.caption), x, y + imgH + 13, { width: cell, height: 18, ellipsis: true });
+      doc
+        .font(FONT.bold)
+        .fontSize(SIZE.small)
+        .fillColor(INK)
+        .text(`Photo ${p.number}`, x, y + imgH + 4, { width: cell, lineBreak: false });
+      doc
+        .font(FONT.regular)
+        .fontSize(SIZE.small)
+        .fillColor(MUTED)
+        .text(pdfText(p.caption), x, y + imgH + 13, { width: cell, height: 18, ellipsis: true });
     });
     doc.x = w.left;
     doc.y = y + imgH + 34;
@@ -77,7 +93,14 @@ function fieldChecks(w: PdfWriter, r: CaseReport) {
   const f = r.field;
   if (f.handRoll) {
     w.subheading("Hand roll");
-    w.table([{ title: "Axle position", width: 120 }, { title: "Cup pulled outboard", width: 198 }, { title: "Cup pushed inboard", width: w.width - 318 }], f.handRoll.grid);
+    w.table(
+      [
+        { title: "Axle position", width: 120 },
+        { title: "Cup pulled outboard", width: 198 },
+        { title: "Cup pushed inboard", width: w.width - 318 },
+      ],
+      f.handRoll.grid,
+    );
     w.facts([...f.handRoll.procedure, ["Result", f.handRoll.result]], 4);
   } else w.muted("No hand roll recorded.");
   w.gap(4);
@@ -87,27 +110,60 @@ function fieldChecks(w: PdfWriter, r: CaseReport) {
     w.muted(`${ep.method}. ${ep.unitNote}.`);
     w.gap(3);
     w.table(
-      [{ title: "Trial", width: 50, align: "center" }, { title: "Zero", width: 100, align: "right" }, { title: "Reading", width: 100, align: "right" }, { title: "End play (in)", width: 133, align: "right" }, { title: "End play (mm)", width: w.width - 383, align: "right" }],
+      [
+        { title: "Trial", width: 50, align: "center" },
+        { title: "Zero", width: 100, align: "right" },
+        { title: "Reading", width: 100, align: "right" },
+        { title: "End play (in)", width: 133, align: "right" },
+        { title: "End play (mm)", width: w.width - 383, align: "right" },
+      ],
       ep.trials.map((t) => [String(t.trial), t.zero, t.reading, t.endPlayIn, t.endPlayMm]),
     );
-    if (ep.arithmetic.length) w.table([{ title: "Arithmetic", width: 150 }, { title: "Value", width: w.width - 150 }], ep.arithmetic.map(([k, v]) => [k, v]));
+    if (ep.arithmetic.length)
+      w.table(
+        [
+          { title: "Arithmetic", width: 150 },
+          { title: "Value", width: w.width - 150 },
+        ],
+        ep.arithmetic.map(([k, v]) => [k, v]),
+      );
     w.paragraph(`End-play call: ${ep.call}`, { font: FONT.bold, colour: ep.removes ? DANGER : INK });
     w.gap(3);
   } else w.muted("End play was not measured.");
   w.gap(4);
   if (f.visual.length) {
     w.subheading("Visual findings");
-    w.table([{ title: "Finding", width: 180 }, { title: "Note", width: w.width - 180 }], f.visual);
+    w.table(
+      [
+        { title: "Finding", width: 180 },
+        { title: "Note", width: w.width - 180 },
+      ],
+      f.visual,
+    );
   }
   w.subheading("Before the checks");
   w.facts(f.confirmations, 4);
   if (f.safetyFlag.length) {
     w.gap(2);
-    w.callout(SAFETY_FLAG_TITLE, `${f.safetyFlag.map((t) => `Not confirmed: ${t}`).join(" ")} ${SAFETY_FLAG_DEFERRAL}`, { fill: WARN_SOFT, ink: WARN });
+    w.callout(SAFETY_FLAG_TITLE, `${f.safetyFlag.map((t) => `Not confirmed: ${t}`).join(" ")} ${SAFETY_FLAG_DEFERRAL}`, {
+      fill: WARN_SOFT,
+      ink: WARN,
+    });
   }
-  const tone = f.call.call === "remove" ? { fill: DANGER_SOFT, ink: DANGER } : f.call.call === "keep" ? { fill: OK_SOFT, ink: OK } : { fill: WARN_SOFT, ink: WARN };
+  const tone =
+    f.call.call === "remove"
+      ? { fill: DANGER_SOFT, ink: DANGER }
+      : f.call.call === "keep"
+        ? { fill: OK_SOFT, ink: OK }
+        : { fill: WARN_SOFT, ink: WARN };
   w.gap(2);
-  w.callout(`Field call: ${f.call.label}`, f.storedCallDiffers ? `The call stored with the case was "${f.storedCallDiffers}"; the checks as recorded now give the call above.` : "Recomputed from the readings above.", tone);
+  w.callout(
+    `Field call: ${f.call.label}`,
+    f.storedCallDiffers
+      ? `The call stored with the case was "${f.storedCallDiffers}"; the checks as recorded now give the call above.`
+      : "Recomputed from the readings above.",
+    tone,
+  );
   w.notes(f.call.reasons);
   if (f.notes) {
     w.gap(4);
@@ -116,7 +172,13 @@ function fieldChecks(w: PdfWriter, r: CaseReport) {
 }
 
 export function renderReportPdf(r: CaseReport, images: PhotoImages = new Map()): Promise<Buffer> {
-  const doc = new PDFDocument({ size: PAGE.size, margins: PAGE.margin, bufferPages: true, autoFirstPage: false, info: { Title: `Tearline case report ${r.number}`, Author: "Tearline", Subject: r.revision.title } });
+  const doc = new PDFDocument({
+    size: PAGE.size,
+    margins: PAGE.margin,
+    bufferPages: true,
+    autoFirstPage: false,
+    info: { Title: `Tearline case report ${r.number}`, Author: "Tearline", Subject: r.revision.title },
+  });
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
@@ -131,8 +193,17 @@ export function renderReportPdf(r: CaseReport, images: PhotoImages = new Map()):
 
   w.facts(r.headline, 4);
   w.gap(2);
-  if (r.revision.kind === "signed") w.callout(r.revision.title, "This revision is final. Any later change reopens the case and is recorded in its history.", { fill: OK_SOFT, ink: OK });
-  else w.callout(`${r.revision.title} · ${r.revision.stage}`, "This report shows the case as it stands now; findings and the verdict may still change before an engineer signs it.", { fill: WARN_SOFT, ink: WARN });
+  if (r.revision.kind === "signed")
+    w.callout(r.revision.title, "This revision is final. Any later change reopens the case and is recorded in its history.", {
+      fill: OK_SOFT,
+      ink: OK,
+    });
+  else
+    w.callout(
+      `${r.revision.title} · ${r.revision.stage}`,
+      "This report shows the case as it stands now; findings and the verdict may still change before an engineer signs it.",
+      { fill: WARN_SOFT, ink: WARN },
+    );
 
   w.section("Bearing and removal");
   w.subheading("Bearing");
@@ -172,16 +243,40 @@ export function renderReportPdf(r: CaseReport, images: PhotoImages = new Map()):
   }
 
   w.section("Related cases", r.related.length ? 60 : 24);
-  if (r.related.length) w.table([{ title: "Case", width: 90 }, { title: "Stage", width: 100 }, { title: "Root cause", width: 130 }, { title: "Removed", width: 70 }, { title: "Link note", width: w.width - 390 }], r.related.map((x) => [x.number, x.status, x.cause, x.removedOn, x.note || "—"]));
+  if (r.related.length)
+    w.table(
+      [
+        { title: "Case", width: 90 },
+        { title: "Stage", width: 100 },
+        { title: "Root cause", width: 130 },
+        { title: "Removed", width: 70 },
+        { title: "Link note", width: w.width - 390 },
+      ],
+      r.related.map((x) => [x.number, x.status, x.cause, x.removedOn, x.note || "—"]),
+    );
   else w.muted("No related cases are linked.");
 
   w.section("Photo register", r.photos.length ? 60 : 24);
   if (r.photos.length) {
-    w.muted("Originals are kept byte for byte; the SHA-256 of each lets anyone check a copy. The evidence ZIP holds the files and the same list.");
+    w.muted(
+      "Originals are kept byte for byte; the SHA-256 of each lets anyone check a copy. The evidence ZIP holds the files and the same list.",
+    );
     w.gap(3);
     w.table(
-      [{ title: "No.", width: 30, align: "center" }, { title: "Part", width: 78 }, { title: "Caption / file", width: 150 }, { title: "Size", width: 44, align: "right" }, { title: "SHA-256", width: w.width - 302, mono: true }],
-      r.photos.map((p) => [String(p.number), p.component, `${p.caption}${p.fileName && p.fileName !== p.caption ? `\n${p.fileName}` : ""}`, bytesWords(p.bytes), `${p.sha256.slice(0, 32)}\n${p.sha256.slice(32)}`]),
+      [
+        { title: "No.", width: 30, align: "center" },
+        { title: "Part", width: 78 },
+        { title: "Caption / file", width: 150 },
+        { title: "Size", width: 44, align: "right" },
+        { title: "SHA-256", width: w.width - 302, mono: true },
+      ],
+      r.photos.map((p) => [
+        String(p.number),
+        p.component,
+        `${p.caption}${p.fileName && p.fileName !== p.caption ? `\n${p.fileName}` : ""}`,
+        bytesWords(p.bytes),
+        `${p.sha256.slice(0, 32)}\n${p.sha256.slice(32)}`,
+      ]),
       { size: 7.5 },
     );
   } else w.muted("No photos in this case.");

@@ -12,7 +12,8 @@ const FORM_KB = 150;
 
 const pg = new Client({ connectionString: process.env.DATABASE_URL });
 await pg.connect();
-const number = (await pg.query<{ number: string }>("select number from cases where status = 'signed' order by number limit 1")).rows[0].number;
+const number = (await pg.query<{ number: string }>("select number from cases where status = 'signed' order by number limit 1")).rows[0]
+  .number;
 await pg.end();
 
 type Role = Parameters<typeof signedInCookie>[0];
@@ -41,7 +42,10 @@ const pages: { path: string; target: number; signedIn: boolean; role?: Role }[] 
 ];
 
 const over: string[] = [];
-const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH, args: ["--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run"] });
+const browser = await chromium.launch({
+  executablePath: process.env.CHROMIUM_PATH,
+  args: ["--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run"],
+});
 try {
   const cookies = new Map<Role, string>();
   const cookieFor = async (role: Role) => cookies.get(role) ?? cookies.set(role, await signedInCookie(role)).get(role)!;
@@ -50,31 +54,48 @@ try {
     const ctx = await browser.newContext({ baseURL: APP_URL });
     if (p.signedIn) {
       const cookie = await cookieFor(p.role ?? "manager");
-      await ctx.addCookies(cookie.split("; ").map((pair) => {
-        const at = pair.indexOf("=");
-        return { name: pair.slice(0, at), value: pair.slice(at + 1), domain: host, path: "/" };
-      }));
+      await ctx.addCookies(
+        cookie.split("; ").map((pair) => {
+          const at = pair.indexOf("=");
+          return { name: pair.slice(0, at), value: pair.slice(at + 1), domain: host, path: "/" };
+        }),
+      );
     }
     const page = await ctx.newPage();
     const sizes = new Map<string, Promise<number>>();
     page.on("requestfinished", (req) => {
-      if (req.resourceType() === "script") sizes.set(req.url(), req.sizes().then((s) => s.responseBodySize));
+      if (req.resourceType() === "script")
+        sizes.set(
+          req.url(),
+          req.sizes().then((s) => s.responseBodySize),
+        );
     });
     const res = await page.goto(p.path, { waitUntil: "networkidle" });
     if (!res || res.status() !== 200) throw new Error(`${p.path} answered ${res?.status()}`);
     if (new URL(page.url()).pathname !== new URL(p.path, APP_URL).pathname) throw new Error(`${p.path} was sent on to ${page.url()}`);
     // What the served HTML itself asks for (script tags and script preloads), not what the page adds later.
     const html = await res.text();
-    const refs = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*as="script"[^>]*\shref|link[^>]*\shref)="([^"]+\.js[^"]*)"/g)].map((m) => new URL(m[1].replace(/&amp;/g, "&"), APP_URL).href);
+    const refs = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*as="script"[^>]*\shref|link[^>]*\shref)="([^"]+\.js[^"]*)"/g)].map(
+      (m) => new URL(m[1].replace(/&amp;/g, "&"), APP_URL).href,
+    );
     const inHtml = new Set(refs);
-    let first = 0, later = 0;
+    let first = 0,
+      later = 0;
     for (const [url, size] of sizes) {
       if (inHtml.has(url)) first += await size;
       else later += await size;
     }
     const kb = first / 1024;
     const label = p.path.replace(number, "[number]");
-    const fig = record({ name: `first-load JS ${label}`, runs: 1, p50: kb, p95: kb, unit: "kB", target: p.target, note: `${(later / 1024).toFixed(1)} kB more fetched after load` });
+    const fig = record({
+      name: `first-load JS ${label}`,
+      runs: 1,
+      p50: kb,
+      p95: kb,
+      unit: "kB",
+      target: p.target,
+      note: `${(later / 1024).toFixed(1)} kB more fetched after load`,
+    });
     if (!fig.ok) over.push(`${label} ${kb.toFixed(1)} kB > ${p.target} kB`);
     await ctx.close();
   }

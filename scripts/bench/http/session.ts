@@ -12,5 +12,8 @@ export async function signedInCookie(role: (typeof DEMO_USERS)[number]["role"] =
     body: JSON.stringify({ email, password: DEMO_PASSWORD }),
   });
   if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${await res.text()}`);
-  return res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  return res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
 }

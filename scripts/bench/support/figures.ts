@@ -8,8 +8,19 @@ export const BENCH_CASES = Number(process.env.BENCH_CASES ?? 100_000);
 export const GROWTH_PASS = process.env.BENCH_PASS === "growth";
 
 export type Figure = {
-  name: string; cases: number; runs: number; p50: number; p95: number; unit: "ms" | "s" | "kB" | "req/s";
-  target?: number; targetOn?: "p50" | "p95"; floorP95?: number; maxRatio?: number; ratio?: number; ok: boolean; note?: string;
+  name: string;
+  cases: number;
+  runs: number;
+  p50: number;
+  p95: number;
+  unit: "ms" | "s" | "kB" | "req/s";
+  target?: number;
+  targetOn?: "p50" | "p95";
+  floorP95?: number;
+  maxRatio?: number;
+  ratio?: number;
+  ok: boolean;
+  note?: string;
 };
 
 /** Nearest-rank percentile. */
@@ -24,7 +35,8 @@ export async function timed(fn: () => Promise<unknown>): Promise<number> {
   return performance.now() - t0;
 }
 
-const fmt = (n: number, unit: string) => (unit === "ms" ? `${n.toFixed(1)} ms` : unit === "s" ? `${n.toFixed(2)} s` : `${n.toFixed(1)} ${unit}`);
+const fmt = (n: number, unit: string) =>
+  unit === "ms" ? `${n.toFixed(1)} ms` : unit === "s" ? `${n.toFixed(2)} s` : `${n.toFixed(1)} ${unit}`;
 
 /** Prints one figure and records it. A figure misses when over its target or over its ratio to the floor. */
 export function record(f: Omit<Figure, "ok" | "cases" | "ratio">): Figure {
@@ -34,10 +46,15 @@ export function record(f: Omit<Figure, "ok" | "cases" | "ratio">): Figure {
   const far = ratio !== undefined && f.maxRatio !== undefined && ratio > f.maxRatio;
   const ok = GROWTH_PASS || (!over && !far);
   const fig: Figure = { ...f, cases: BENCH_CASES, ratio, ok };
-  const floor = f.floorP95 !== undefined ? `, floor p95 ${fmt(f.floorP95, f.unit)}, ×${ratio!.toFixed(2)}${f.maxRatio ? ` (≤ ${f.maxRatio}×)` : ""}` : "";
+  const floor =
+    f.floorP95 !== undefined
+      ? `, floor p95 ${fmt(f.floorP95, f.unit)}, ×${ratio!.toFixed(2)}${f.maxRatio ? ` (≤ ${f.maxRatio}×)` : ""}`
+      : "";
   const target = f.target !== undefined ? ` (target ${f.targetOn ?? "p95"} ≤ ${fmt(f.target, f.unit)})` : "";
   const verdict = GROWTH_PASS ? "" : ok ? " OK" : " MISSED";
-  console.log(`${f.name}: ${f.runs} runs, p50 ${fmt(f.p50, f.unit)}, p95 ${fmt(f.p95, f.unit)}${target}${floor}${verdict}${f.note ? ` - ${f.note}` : ""}`);
+  console.log(
+    `${f.name}: ${f.runs} runs, p50 ${fmt(f.p50, f.unit)}, p95 ${fmt(f.p95, f.unit)}${target}${floor}${verdict}${f.note ? ` - ${f.note}` : ""}`,
+  );
   if (process.env.BENCH_RESULTS) appendFileSync(process.env.BENCH_RESULTS, `${JSON.stringify(fig)}\n`);
   if (!ok) process.exitCode = 1;
   return fig;
@@ -57,7 +74,10 @@ export async function capture(fn: () => Promise<unknown>): Promise<Captured[]> {
   (pool as unknown as { query: unknown }).query = (...args: unknown[]) => {
     const [a, b] = args;
     // drizzle sends (config, params); the floor keeps only the SQL text and its values.
-    const config: QueryConfig = typeof a === "string" ? { text: a, values: b as unknown[] } : { text: (a as QueryConfig).text, values: (Array.isArray(b) ? b : (a as QueryConfig).values) as unknown[] };
+    const config: QueryConfig =
+      typeof a === "string"
+        ? { text: a, values: b as unknown[] }
+        : { text: (a as QueryConfig).text, values: (Array.isArray(b) ? b : (a as QueryConfig).values) as unknown[] };
     if (inFlight === 0) group++;
     seen.push({ config, group });
     inFlight++;
@@ -111,10 +131,21 @@ export async function measure(name: string, calls: Call[], opts: { repeats: numb
       if (opts.floor !== false) floor.push(await replay(statements));
     }
   }
-  const worst = slow.sort((a, b) => b.ms - a.ms).slice(0, 3).map((s) => `${s.label} ${s.ms.toFixed(0)} ms`).join("; ");
+  const worst = slow
+    .sort((a, b) => b.ms - a.ms)
+    .slice(0, 3)
+    .map((s) => `${s.label} ${s.ms.toFixed(0)} ms`)
+    .join("; ");
   return record({
-    name, runs: app.length, p50: percentile(app, 50), p95: percentile(app, 95), unit: "ms", target: opts.target,
-    floorP95: floor.length ? percentile(floor, 95) : undefined, maxRatio: floor.length ? (opts.maxRatio ?? 1.5) : undefined, note: `slowest ${worst}`,
+    name,
+    runs: app.length,
+    p50: percentile(app, 50),
+    p95: percentile(app, 95),
+    unit: "ms",
+    target: opts.target,
+    floorP95: floor.length ? percentile(floor, 95) : undefined,
+    maxRatio: floor.length ? (opts.maxRatio ?? 1.5) : undefined,
+    note: `slowest ${worst}`,
   });
 }
 

@@ -13,7 +13,10 @@ try {
   const have = await count();
   if (have < want) {
     console.log(`bench: ${have} cases, generating ${want - have} more (npm run seed:large)…`);
-    const run = spawnSync("node_modules/.bin/tsx", ["scripts/seed-large.ts", "--cases", String(want - have)], { stdio: "inherit", env: process.env });
+    const run = spawnSync("node_modules/.bin/tsx", ["scripts/seed-large.ts", "--cases", String(want - have)], {
+      stdio: "inherit",
+      env: process.env,
+    });
     if (run.status !== 0) throw new Error("seed:large failed");
   }
   // Statistics only when the data changed or a migration just added something to plan with.

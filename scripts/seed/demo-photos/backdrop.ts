@@ -15,7 +15,8 @@ const PAPER = { base: [214, 210, 200] } as const;
 export function backdrop(rng: Rng, light = false): string {
   const [r, g, b] = light ? PAPER.base : rng.pick(MATS).base;
   const jitter = rng.real(0.9, 1.1);
-  const lx = rng.real(0.3, 0.7), ly = rng.real(0.2, 0.5);
+  const lx = rng.real(0.3, 0.7),
+    ly = rng.real(0.2, 0.5);
   return `<defs><radialGradient id="pool" cx="${n(lx)}" cy="${n(ly)}" r="0.85">
 <stop offset="0" stop-color="#fff" stop-opacity="${light ? 0.18 : 0.12}"/><stop offset="1" stop-color="#000" stop-opacity="${light ? 0.18 : 0.3}"/></radialGradient></defs>
 <rect width="${W}" height="${H}" fill="${rgb(r * jitter, g * jitter, b * jitter)}"/>
@@ -29,7 +30,10 @@ ${specks(rng, { x: 0, y: 0, w: W, h: H }, 500, [1, 2.5], light ? ["#b9b3a6", "#e
  */
 export function shadowOf(path: string, dy: number, opacity = 0.55): string {
   const move = `transform="translate(0 ${n(dy)})"`;
-  const feather = [40, 24, 10].map((w) => `<path d="${path}" ${move} fill="none" stroke="#000" stroke-width="${w}" stroke-opacity="${op(opacity * 0.25)}" stroke-linejoin="round"/>`);
+  const feather = [40, 24, 10].map(
+    (w) =>
+      `<path d="${path}" ${move} fill="none" stroke="#000" stroke-width="${w}" stroke-opacity="${op(opacity * 0.25)}" stroke-linejoin="round"/>`,
+  );
   return `${feather.join("")}<path d="${path}" ${move} fill="#000" opacity="${op(opacity)}"/>`;
 }
 
@@ -44,8 +48,15 @@ export function steelGradient(id: string, rng: Rng, tone: number, matte = false)
   const c = (f: number) => rgb(Math.min(255, tone * f - 3), Math.min(255, tone * f), Math.min(255, tone * f + 6));
   const peak = matte ? 1.12 : 1.42;
   const stops: [number, string][] = [
-    [0, c(0.42)], [0.06, c(0.78)], [hl - 0.12, c(0.98)], [hl, c(peak)], [hl + 0.09, c(1.04)],
-    [0.62, c(matte ? 0.9 : 0.8)], [0.86, c(matte ? 1.0 : 1.12)], [0.95, c(0.75)], [1, c(0.4)],
+    [0, c(0.42)],
+    [0.06, c(0.78)],
+    [hl - 0.12, c(0.98)],
+    [hl, c(peak)],
+    [hl + 0.09, c(1.04)],
+    [0.62, c(matte ? 0.9 : 0.8)],
+    [0.86, c(matte ? 1.0 : 1.12)],
+    [0.95, c(0.75)],
+    [1, c(0.4)],
   ];
   return `<linearGradient id="${id}" x1="0" y1="0" x2="0" y2="1">${stops.map(([o, col]) => `<stop offset="${op(o)}" stop-color="${col}"/>`).join("")}</linearGradient>`;
 }

@@ -22,11 +22,14 @@ export function drawFinish(rng: Rng): Finish {
 export function applyFinish(data: Buffer, width: number, height: number, channels: number, finish: Finish, rng: Rng): void {
   // Grain comes from a table of near-normal values read from a random start on every row,
   // so no pattern repeats across the picture.
-  const size = 1 << TABLE_BITS, mask = size - 1;
+  const size = 1 << TABLE_BITS,
+    mask = size - 1;
   const table = new Float32Array(size);
   for (let i = 0; i < size; i++) table[i] = (rng.next() + rng.next() + rng.next() - 1.5) * 2 * finish.grain;
 
-  const cx = width / 2, cy = height / 2, reach = cx * cx + cy * cy;
+  const cx = width / 2,
+    cy = height / 2,
+    reach = cx * cx + cy * cy;
   const colFalloff = new Float32Array(width);
   for (let x = 0; x < width; x++) colFalloff[x] = ((x - cx) * (x - cx)) / reach;
   const [cr, cg, cb] = finish.cast;

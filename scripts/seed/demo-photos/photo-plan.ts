@@ -35,9 +35,24 @@ export type PlannedPhoto = {
 
 /** Codes shown once each after the stories (arc burns, water etch, spalls), most telling first. */
 const SHOWCASE = [
-  "electrical.fluting", "deformation.overload", "deformation.debris", "corrosion.false-brinell", "heat.discoloration",
-  "seal.damaged", "seal.leaking", "mounting.cap-screw", "fracture.fatigue", "wear.adhesive", "lubricant.water",
-  "mounting.fit", "lubricant.starved", "cage.broken", "corrosion.fretting", "fracture.forced", "fatigue.surface", "wear.abrasive",
+  "electrical.fluting",
+  "deformation.overload",
+  "deformation.debris",
+  "corrosion.false-brinell",
+  "heat.discoloration",
+  "seal.damaged",
+  "seal.leaking",
+  "mounting.cap-screw",
+  "fracture.fatigue",
+  "wear.adhesive",
+  "lubricant.water",
+  "mounting.fit",
+  "lubricant.starved",
+  "cage.broken",
+  "corrosion.fretting",
+  "fracture.forced",
+  "fatigue.surface",
+  "wear.abrasive",
 ];
 
 const has = (c: PlanCase, code: string) => c.findings.some((f) => f.damageCode === code);
@@ -52,7 +67,9 @@ export function textSeed(text: string): number {
 
 /** The cases to photograph, each with the damage code that earned it a place. */
 export function pickPhotoCases(all: readonly PlanCase[], limit = PHOTO_CASES): { c: PlanCase; lead: string }[] {
-  const pool = [...all].filter((c) => c.status !== "field" && c.findings.some((f) => f.damageCode !== "none")).sort((a, b) => a.number.localeCompare(b.number));
+  const pool = [...all]
+    .filter((c) => c.status !== "field" && c.findings.some((f) => f.damageCode !== "none"))
+    .sort((a, b) => a.number.localeCompare(b.number));
   const chosen: { c: PlanCase; lead: string }[] = [];
   const take = (c: PlanCase, lead: string) => chosen.length < limit && !chosen.some((x) => x.c.id === c.id) && chosen.push({ c, lead });
   const inWaterRun = (c: PlanCase) => !!c.removedOn && c.removedOn >= WATER_RUN[0] && c.removedOn <= WATER_RUN[1];
@@ -65,7 +82,8 @@ export function pickPhotoCases(all: readonly PlanCase[], limit = PHOTO_CASES): {
   for (const c of [...spalls.filter(open), ...spread].slice(0, 5)) take(c, "fatigue.subsurface");
   for (const code of SHOWCASE) {
     const withCode = pool.filter((c) => has(c, code));
-    const c = withCode.find((x) => open(x) && !chosen.some((y) => y.c.id === x.id)) ?? withCode.find((x) => !chosen.some((y) => y.c.id === x.id));
+    const c =
+      withCode.find((x) => open(x) && !chosen.some((y) => y.c.id === x.id)) ?? withCode.find((x) => !chosen.some((y) => y.c.id === x.id));
     if (c) take(c, code);
   }
   return chosen;
@@ -107,7 +125,10 @@ export function planDemoPhotos(all: readonly PlanCase[], limit = PHOTO_CASES): P
   return pickPhotoCases(all, limit).flatMap(({ c, lead }) => {
     const damaged = c.findings.filter((f) => f.damageCode !== "none");
     const first = damaged.find((f) => f.damageCode === lead)!;
-    const others = damaged.filter((f) => f !== first).sort((a, b) => b.severity - a.severity || a.createdAt.getTime() - b.createdAt.getTime()).slice(0, 1);
+    const others = damaged
+      .filter((f) => f !== first)
+      .sort((a, b) => b.severity - a.severity || a.createdAt.getTime() - b.createdAt.getTime())
+      .slice(0, 1);
     const shots: [PlanFinding, PhotoView][] = [[first, "close"]];
     if (STORIES.has(lead) || others.length === 0) shots.push([first, "overview"]);
     for (const f of others) shots.push([f, "close"]);
@@ -117,11 +138,23 @@ export function planDemoPhotos(all: readonly PlanCase[], limit = PHOTO_CASES): P
       const takenAt = new Date(f.createdAt.getTime() - (40 - i * 6) * MINUTE - (seed % 300) * 1000);
       const uploadedAt = new Date(f.createdAt.getTime() + (5 + i) * MINUTE);
       const spec: DemoPhotoSpec = {
-        seed, caseNumber: c.number, component: f.component, row: f.row, damageCode: f.damageCode, zone: f.zone,
-        severity: f.severity, view, partWords: partWords(f), takenAt,
+        seed,
+        caseNumber: c.number,
+        component: f.component,
+        row: f.row,
+        damageCode: f.damageCode,
+        zone: f.zone,
+        severity: f.severity,
+        view,
+        partWords: partWords(f),
+        takenAt,
       };
       return {
-        caseId: c.id, caseNumber: c.number, spec, takenAt, uploadedAt,
+        caseId: c.id,
+        caseNumber: c.number,
+        spec,
+        takenAt,
+        uploadedAt,
         fileName: `${c.number.toLowerCase()}-${f.component}-${view}-${i + 1}.jpg`,
         tags: { component: f.component, row: f.row, clockDeg: f.clockDeg, findingId: f.id, caption: photoCaption(f, view) },
       };

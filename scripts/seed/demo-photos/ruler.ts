@@ -5,8 +5,10 @@ import { n } from "./svg-kit";
 
 /** A rule `mm` long at `pxPerMm`, its top-left corner near (x, y), turned a little. */
 export function steelRule(rng: Rng, x: number, y: number, pxPerMm: number, mm: number): string {
-  const len = mm * pxPerMm, h = 15 * pxPerMm * 0.1 + 34;
-  let ticks = "", labels = "";
+  const len = mm * pxPerMm,
+    h = 15 * pxPerMm * 0.1 + 34;
+  let ticks = "",
+    labels = "";
   for (let i = 0; i <= mm; i++) {
     const tick = i % 10 === 0 ? 18 : i % 5 === 0 ? 12 : 7;
     ticks += `M${n(10 + i * pxPerMm)} 0v${tick}`;

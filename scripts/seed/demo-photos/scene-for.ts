@@ -12,13 +12,16 @@ const FASTENINGS = new Set(["cap-screws", "locking-plate", "end-cap"]);
 
 function partScene(rng: Rng, spec: DemoPhotoSpec): Scene {
   const { component: c, zone, view, row } = spec;
-  if (c === "lubricant") return spec.damageCode === "lubricant.starved" ? rollersScene(rng, view, true) : greaseScene(rng, spec.damageCode, view);
+  if (c === "lubricant")
+    return spec.damageCode === "lubricant.starved" ? rollersScene(rng, view, true) : greaseScene(rng, spec.damageCode, view);
   if (c.startsWith("seal")) return sealScene(rng, spec.damageCode, spec.severity, view);
   if (c.startsWith("cage")) return cageScene(rng, spec.damageCode, view);
   if (c.startsWith("rollers")) return zone === "roller-end" ? rollerEndScene(rng) : rollersScene(rng, view, false);
   if (FASTENINGS.has(c)) return endCapScene(rng, spec.damageCode, c === "locking-plate");
-  if (c === "cup") return ringScene(rng, { kind: zone === "outside-surface" ? "plain" : "cup", view, matte: zone === "outside-surface", row }, false);
-  if (c.startsWith("cone")) return ringScene(rng, { kind: zone === "bore" ? "plain" : "cone", view, matte: zone === "bore", row }, zone === "rib");
+  if (c === "cup")
+    return ringScene(rng, { kind: zone === "outside-surface" ? "plain" : "cup", view, matte: zone === "outside-surface", row }, false);
+  if (c.startsWith("cone"))
+    return ringScene(rng, { kind: zone === "bore" ? "plain" : "cone", view, matte: zone === "bore", row }, zone === "rib");
   // The journal, backing ring and spacer: plain ground faces.
   return ringScene(rng, { kind: "plain", view, matte: true, row }, false);
 }

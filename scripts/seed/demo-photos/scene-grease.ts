@@ -15,7 +15,8 @@ const GREASE: Record<string, { fill: string; specks: string[]; gloss: number }> 
 export function greaseScene(rng: Rng, code: string, view: "close" | "overview"): Scene {
   const g = GREASE[code] ?? GREASE.normal;
   const k = view === "close" ? 1 : 0.62;
-  const cx = rng.real(520, 680), cy = rng.real(380, 460);
+  const cx = rng.real(520, 680),
+    cy = rng.real(380, 460);
   const outline = ragged(rng, cx, cy, 360 * k, 230 * k, 14, 0.3, rng.real(-0.3, 0.3));
   const shape = smoothPath(outline);
   const box = { x: cx - 380 * k, y: cy - 250 * k, w: 760 * k, h: 500 * k };
@@ -29,14 +30,17 @@ export function greaseScene(rng: Rng, code: string, view: "close" | "overview"):
   let gloss = "";
   for (let i = 0; i < 14; i++) {
     const [x, y] = outline[rng.int(0, outline.length - 1)];
-    const px = cx + (x - cx) * rng.real(0.1, 0.8), py = cy + (y - cy) * rng.real(0.1, 0.8);
+    const px = cx + (x - cx) * rng.real(0.1, 0.8),
+      py = cy + (y - cy) * rng.real(0.1, 0.8);
     gloss += `<path d="${smoothPath(ragged(rng, px, py, rng.real(20, 70) * k, rng.real(6, 18) * k, 8, 0.4, rng.real(-0.4, 0.4)))}" opacity="${op(rng.real(0.3, 0.8))}"/>`;
   }
   let extra = "";
   if (code === "lubricant.water") {
     // Free water standing in droplets on the emulsion.
     for (let i = 0; i < 26; i++) {
-      const x = cx + rng.real(-300, 300) * k, y = cy + rng.real(-180, 180) * k, r = rng.real(4, 16) * k;
+      const x = cx + rng.real(-300, 300) * k,
+        y = cy + rng.real(-180, 180) * k,
+        r = rng.real(4, 16) * k;
       extra += `<circle cx="${n(x)}" cy="${n(y)}" r="${n(r)}" fill="#bcb5a3" stroke="#8e8776" stroke-width="1.2"/><circle cx="${n(x - r * 0.3)}" cy="${n(y - r * 0.35)}" r="${n(r * 0.3)}" fill="#fff" opacity="0.9"/>`;
     }
   } else if (code === "lubricant.degraded") {
@@ -45,7 +49,8 @@ export function greaseScene(rng: Rng, code: string, view: "close" | "overview"):
     }
   }
   const grit = specks(rng, box, code === "lubricant.debris" ? 2600 : 1200, [1, code === "lubricant.debris" ? 4 : 3], g.specks, 0.75);
-  const kx = rng.real(760, 860), ky = rng.real(560, 640);
+  const kx = rng.real(760, 860),
+    ky = rng.real(560, 640);
   const knife = `<g transform="rotate(${n(rng.real(-25, -10))} ${n(kx)} ${n(ky)})"><rect x="${n(kx + 4)}" y="${n(ky + 12)}" width="420" height="90" rx="8" fill="#000" opacity="0.25" filter="url(#blur6)"/>
 <rect x="${n(kx)}" y="${n(ky)}" width="240" height="90" rx="6" fill="url(#g-knife)"/><rect x="${n(kx + 230)}" y="${n(ky + 25)}" width="190" height="40" rx="10" fill="#2b3a55"/></g>`;
 

@@ -13,12 +13,14 @@ const at = (cx: number, cy: number, r: number, a: number): [number, number] => [
 /** A seal face on: stamped casing, black rubber lip, grease at the lip; torn, dented or leaking as found. */
 export function sealScene(rng: Rng, code: string, severity: number, view: "close" | "overview"): Scene {
   const k = view === "close" ? rng.real(2.1, 2.5) : 1;
-  const cx = rng.real(560, 640), cy = view === "close" ? 430 + 280 * k : rng.real(410, 450);
+  const cx = rng.real(560, 640),
+    cy = view === "close" ? 430 + 280 * k : rng.real(410, 450);
   const R = { outer: 400 * k, casing: 312 * k, lip: 245 * k, bore: 200 * k };
   const painted = rng.chance(0.5);
   const defs = `<radialGradient id="g-casing" cx="${n(0.45)}" cy="${n(0.4)}" r="0.6"><stop offset="0.6" stop-color="${painted ? "#3a3d40" : "#c3c8cc"}"/><stop offset="0.85" stop-color="${painted ? "#1f2123" : "#8e9498"}"/><stop offset="1" stop-color="${painted ? "#2c2e30" : "#aab0b4"}"/></radialGradient>`;
   let ridges = "";
-  for (let i = 0; i < 6; i++) ridges += `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(R.casing + (R.outer - R.casing) * rng.real(0.1, 0.95))}" stroke="${i % 2 ? "#fff" : "#000"}" stroke-opacity="0.18" stroke-width="${n(rng.real(1.5, 4) * k)}" fill="none"/>`;
+  for (let i = 0; i < 6; i++)
+    ridges += `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(R.casing + (R.outer - R.casing) * rng.real(0.1, 0.95))}" stroke="${i % 2 ? "#fff" : "#000"}" stroke-opacity="0.18" stroke-width="${n(rng.real(1.5, 4) * k)}" fill="none"/>`;
   let body = `${backdrop(rng)}${discShadow(cx + 12, cy + 24, R.outer, 0.5)}
 <path d="${ring(cx, cy, R.casing, R.outer)}" fill="url(#g-casing)" fill-rule="evenodd"/>${ridges}
 <path d="${ring(cx, cy, R.lip, R.casing)}" fill="#161616" fill-rule="evenodd"/>
@@ -27,7 +29,7 @@ ${[14, 9, 4].map((w) => `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n((R.lip + R.c
 <circle cx="${n(cx)}" cy="${n(cy)}" r="${n(R.bore)}" fill="#7d8388"/>`;
   const a = -Math.PI / 2 + rng.real(-0.25, 0.25) / k;
   if (code === "seal.damaged") {
-    const span = rng.real(0.08, 0.14) / Math.sqrt(k) * (1 + severity * 0.3);
+    const span = (rng.real(0.08, 0.14) / Math.sqrt(k)) * (1 + severity * 0.3);
     const pts: [number, number][] = [];
     for (let i = 0; i <= 8; i++) pts.push(at(cx, cy, R.lip - 4 + rng.real(-6, 6) * k, a - span / 2 + (span * i) / 8));
     for (let i = 8; i >= 0; i--) pts.push(at(cx, cy, R.lip + (R.casing - R.lip) * rng.real(0.55, 0.9), a - span / 2 + (span * i) / 8));
@@ -38,7 +40,8 @@ ${[14, 9, 4].map((w) => `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n((R.lip + R.c
     body += `<ellipse cx="${n(dx)}" cy="${n(dy)}" rx="${n(38 * k)}" ry="${n(18 * k)}" fill="#000" opacity="0.45" filter="url(#blur3)"/><ellipse cx="${n(dx + 4)}" cy="${n(dy + 8)}" rx="${n(34 * k)}" ry="${n(6 * k)}" fill="#fff" opacity="0.35" filter="url(#blur2)"/>`;
   } else if (code === "seal.leaking" || code !== "none") {
     // Grease pushed out past the lip and smeared over the casing.
-    let blobs = "", gloss = "";
+    let blobs = "",
+      gloss = "";
     for (let i = 0; i < 7; i++) {
       const [x, y] = at(cx, cy, rng.real(R.lip, R.outer * 0.98), a + rng.real(-0.22, 0.22) / Math.sqrt(k));
       blobs += `<path d="${smoothPath(ragged(rng, x, y, rng.real(40, 90) * Math.sqrt(k), rng.real(20, 50) * Math.sqrt(k), 9, 0.35, rng.real(-0.5, 0.5)))}"/>`;
@@ -51,24 +54,30 @@ ${[14, 9, 4].map((w) => `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n((R.lip + R.c
 
 /** The end cap face on with its three cap screws and locking plate; loose, backed out or missing as found. */
 export function endCapScene(rng: Rng, code: string, plateFinding: boolean): Scene {
-  const cx = rng.real(560, 640), cy = rng.real(410, 450), R = rng.real(370, 400), bolt = R * 0.52;
+  const cx = rng.real(560, 640),
+    cy = rng.real(410, 450),
+    R = rng.real(370, 400),
+    bolt = R * 0.52;
   const turn = rng.real(0, Math.PI * 2);
   let rings = "";
-  for (let i = 0; i < 50; i++) rings += `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(rng.real(R * 0.1, R * 0.97))}" stroke="${rng.chance(0.5) ? "#fff" : "#000"}" stroke-opacity="${op(rng.real(0.04, 0.12))}" fill="none"/>`;
+  for (let i = 0; i < 50; i++)
+    rings += `<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(rng.real(R * 0.1, R * 0.97))}" stroke="${rng.chance(0.5) ? "#fff" : "#000"}" stroke-opacity="${op(rng.real(0.04, 0.12))}" fill="none"/>`;
   const heads = [0, 1, 2].map((i) => at(cx, cy, bolt, turn + (i * 2 * Math.PI) / 3));
   const plate = polygon(heads.map(([x, y]) => [cx + (x - cx) * 1.45, cy + (y - cy) * 1.45] as [number, number]));
   let body = `${backdrop(rng)}${discShadow(cx + 14, cy + 26, R, 0.55)}
 <circle cx="${n(cx)}" cy="${n(cy)}" r="${n(R)}" fill="url(#g-cap)"/><g>${rings}</g>
 <path d="${plate}" fill="#6d7377" stroke="#3f4447" stroke-width="6" stroke-linejoin="round"/>`;
-  const hex = (x: number, y: number, r: number, rot: number) => polygon([0, 1, 2, 3, 4, 5].map((j) => at(x, y, r, rot + (j * Math.PI) / 3)));
+  const hex = (x: number, y: number, r: number, rot: number) =>
+    polygon([0, 1, 2, 3, 4, 5].map((j) => at(x, y, r, rot + (j * Math.PI) / 3)));
   const loose = code === "mounting.cap-screw" ? rng.int(0, 2) : -1;
   const missing = loose >= 0 && rng.chance(0.4) ? (loose + 1) % 3 : -1;
   heads.forEach(([x, y], i) => {
     const rot = rng.real(0, 1);
     const tab = at(x, y, 70, Math.atan2(y - cy, x - cx));
-    body += plateFinding || i === loose
-      ? `<rect x="${n(tab[0] - 22)}" y="${n(tab[1] - 14)}" width="44" height="28" fill="#7c8286" stroke="#3f4447" stroke-width="2"/>`
-      : `<rect x="${n(tab[0] - 22)}" y="${n(tab[1] - 6)}" width="44" height="12" fill="#b9bec2" stroke="#3f4447" stroke-width="2"/>`;
+    body +=
+      plateFinding || i === loose
+        ? `<rect x="${n(tab[0] - 22)}" y="${n(tab[1] - 14)}" width="44" height="28" fill="#7c8286" stroke="#3f4447" stroke-width="2"/>`
+        : `<rect x="${n(tab[0] - 22)}" y="${n(tab[1] - 6)}" width="44" height="12" fill="#b9bec2" stroke="#3f4447" stroke-width="2"/>`;
     if (i === missing) {
       body += `<circle cx="${n(x)}" cy="${n(y)}" r="34" fill="#0d0d0d"/>${[26, 20, 14].map((r) => `<circle cx="${n(x)}" cy="${n(y)}" r="${r}" stroke="#3b3b3b" stroke-width="2" fill="none"/>`).join("")}`;
       body += fretting(rng, { kind: "disc", cx: x, cy: y, inner: 36, outer: 80, scale: 0.5, clip: "" }, 2);
@@ -76,7 +85,8 @@ export function endCapScene(rng: Rng, code: string, plateFinding: boolean): Scen
     }
     const lift = i === loose ? 1.1 : 1;
     body += `<path d="${hex(x + (lift - 1) * 160, y + (lift - 1) * 200, 60 * lift, rot)}" fill="#000" opacity="${i === loose ? 0.6 : 0.45}" filter="url(#blur6)"/>`;
-    if (i === loose) body += `<circle cx="${n(x)}" cy="${n(y)}" r="40" fill="#9ba0a4"/>${[34, 28, 22].map((r) => `<circle cx="${n(x)}" cy="${n(y)}" r="${r}" stroke="#5d6165" stroke-width="2.5" fill="none"/>`).join("")}`;
+    if (i === loose)
+      body += `<circle cx="${n(x)}" cy="${n(y)}" r="40" fill="#9ba0a4"/>${[34, 28, 22].map((r) => `<circle cx="${n(x)}" cy="${n(y)}" r="${r}" stroke="#5d6165" stroke-width="2.5" fill="none"/>`).join("")}`;
     body += `<path d="${hex(x, y - (lift - 1) * 80, 58 * lift, rot)}" fill="url(#g-head)" stroke="#2e3236" stroke-width="2"/><circle cx="${n(x)}" cy="${n(y - (lift - 1) * 80)}" r="${n(44 * lift)}" fill="none" stroke="#fff" stroke-opacity="0.25" stroke-width="2"/>`;
   });
   const defs = `<radialGradient id="g-cap" cx="0.42" cy="0.38" r="0.7"><stop offset="0" stop-color="#9ea3a7"/><stop offset="0.7" stop-color="#62676b"/><stop offset="1" stop-color="#3d4144"/></radialGradient>

@@ -18,7 +18,8 @@ function band(x0: number, x1: number, topMid: number, height: number, sag: numbe
 function face(rng: Rng, b: Band, id: string, tone: number, matte: boolean, track: boolean): { defs: string; body: string } {
   const defs = steelGradient(`g-${id}`, rng, tone, matte) + clipDef(b.clip, b);
   const path = bandOutline(b);
-  const trackFrom = rng.real(0.14, 0.22), trackTo = rng.real(0.78, 0.86);
+  const trackFrom = rng.real(0.14, 0.22),
+    trackTo = rng.real(0.78, 0.86);
   // The roller path is polished brighter than the ground finish either side of it.
   const trackLines = track
     ? `<path d="${bandLine(b, (trackFrom + trackTo) / 2)}" stroke="#fff" stroke-opacity="0.16" stroke-width="${n((trackTo - trackFrom) * (b.bottom[1] - b.top[1]))}" fill="none"/>`
@@ -38,12 +39,15 @@ ${patina(rng, { x: b.x0, y: Math.min(b.top[1], b.top[0]), w: b.x1 - b.x0, h: b.b
 /** Returns the scene; the first surface is the one the finding is on (the rib, when asked for). */
 export function ringScene(rng: Rng, o: RingOptions, onRib: boolean): Scene {
   const tone = rng.real(150, 178);
-  const sagClose = rng.real(12, 48), x0 = -20, x1 = W + 20;
+  const sagClose = rng.real(12, 48),
+    x0 = -20,
+    x1 = W + 20;
   const parts: { defs: string; body: string }[] = [];
   const surfaces: Band[] = [];
 
   if (o.view === "close") {
-    const top = rng.real(150, 200), height = rng.real(470, 540);
+    const top = rng.real(150, 200),
+      height = rng.real(470, 540);
     const raceway = band(x0, x1, top, height, sagClose, rng.real(150, 190), 1, "clip-a");
     if (o.kind === "cone") {
       const rib = band(x0, x1, top - rng.real(95, 120), rng.real(70, 85), sagClose * 0.95, raceway.pitch, 1, "clip-rib");
@@ -55,13 +59,17 @@ export function ringScene(rng: Rng, o: RingOptions, onRib: boolean): Scene {
     if (onRib && surfaces.length > 1) surfaces.reverse();
   } else if (o.kind === "cup") {
     // Both raceways of the one-piece cup, the outboard one nearer the camera (lower in the frame).
-    const sag = rng.real(90, 130), top = rng.real(200, 240), height = rng.real(175, 200);
+    const sag = rng.real(90, 130),
+      top = rng.real(200, 240),
+      height = rng.real(175, 200);
     const inboard = band(x0, x1, top, height, sag, rng.real(80, 95), 0.5, "clip-a");
     const outboard = band(x0, x1, top + height + rng.real(45, 60), height * 1.08, sag * 1.1, inboard.pitch * 1.08, 0.54, "clip-b");
     parts.push(face(rng, inboard, "a", tone * 0.95, o.matte, !o.matte), face(rng, outboard, "b", tone, o.matte, !o.matte));
     surfaces.push(...(o.row === "inboard" ? [inboard, outboard] : [outboard, inboard]));
   } else {
-    const sag = rng.real(90, 130), top = rng.real(230, 280), height = rng.real(290, 330);
+    const sag = rng.real(90, 130),
+      top = rng.real(230, 280),
+      height = rng.real(290, 330);
     const raceway = band(x0, x1, top, height, sag, rng.real(85, 100), 0.55, "clip-a");
     if (o.kind === "cone") {
       const rib = band(x0, x1, top - 62, 48, sag * 0.97, raceway.pitch, 0.55, "clip-rib");

@@ -10,7 +10,8 @@ export function rollersScene(rng: Rng, view: "close" | "overview", dry: boolean)
   const count = view === "close" ? 3 : 5;
   const h = view === "close" ? rng.real(175, 200) : rng.real(105, 120);
   const gap = view === "close" ? rng.real(40, 60) : rng.real(24, 34);
-  const left = rng.real(90, 170), len = view === "close" ? rng.real(900, 980) : rng.real(760, 860);
+  const left = rng.real(90, 170),
+    len = view === "close" ? rng.real(900, 980) : rng.real(760, 860);
   const top0 = (860 - count * h - (count - 1) * gap) / 2;
   let defs = steelGradient("g-roller", rng, rng.real(160, 180));
   defs += `<radialGradient id="g-end" cx="0.4" cy="0.4"><stop offset="0" stop-color="#d9dde0"/><stop offset="0.8" stop-color="#8d9296"/><stop offset="1" stop-color="#4a4e52"/></radialGradient>`;
@@ -18,8 +19,19 @@ export function rollersScene(rng: Rng, view: "close" | "overview", dry: boolean)
   const surfaces: Band[] = [];
   for (let i = 0; i < count; i++) {
     const y = top0 + i * (h + gap) + rng.real(-8, 8);
-    const x0 = left + rng.real(-25, 25), x1 = x0 + len;
-    const b: Band = { kind: "band", x0, x1, top: [y, y], bottom: [y + h, y + h], pitch: h, scale: view === "close" ? 1 : 0.6, clip: `clip-roller${i}`, taper: h * 0.16 };
+    const x0 = left + rng.real(-25, 25),
+      x1 = x0 + len;
+    const b: Band = {
+      kind: "band",
+      x0,
+      x1,
+      top: [y, y],
+      bottom: [y + h, y + h],
+      pitch: h,
+      scale: view === "close" ? 1 : 0.6,
+      clip: `clip-roller${i}`,
+      taper: h * 0.16,
+    };
     const outline = bandOutline(b);
     defs += `<clipPath id="${b.clip}"><path d="${outline}"/></clipPath>`;
     body += `${shadowOf(outline, 16)}<path d="${outline}" fill="url(#g-roller)"/><g clip-path="url(#${b.clip})">${grindingLines(rng, b, 30, 0.1)}
@@ -35,7 +47,9 @@ ${dry ? temperColours(rng, b, 2) + specks(rng, { x: x0, y, w: len, h }, 500, [1,
 
 /** One roller's large end face on: ground in rings, a recess in the middle, a chamfered edge. */
 export function rollerEndScene(rng: Rng): Scene {
-  const cx = rng.real(540, 660), cy = rng.real(400, 450), r = rng.real(300, 340);
+  const cx = rng.real(540, 660),
+    cy = rng.real(400, 450),
+    r = rng.real(300, 340);
   let rings = "";
   for (let i = 0; i < 90; i++) {
     const rr = rng.real(r * 0.3, r * 0.95);
@@ -51,8 +65,11 @@ export function rollerEndScene(rng: Rng): Scene {
 
 /** A stretch of stamped steel cage with a roller in each pocket; a bent or broken bar where found. */
 export function cageScene(rng: Rng, damageCode: string, view: "close" | "overview"): Scene {
-  const top = rng.real(190, 230), height = rng.real(420, 470), pitch = view === "close" ? rng.real(200, 230) : rng.real(140, 160);
-  const win = pitch * 0.62, start = rng.real(-60, 0);
+  const top = rng.real(190, 230),
+    height = rng.real(420, 470),
+    pitch = view === "close" ? rng.real(200, 230) : rng.real(140, 160);
+  const win = pitch * 0.62,
+    start = rng.real(-60, 0);
   const bad = Math.floor((W / 2 - start) / pitch);
   let defs = steelGradient("g-cage", rng, rng.real(95, 115), true);
   defs += `<linearGradient id="g-pocket-roller" x1="0" y1="0" x2="1" y2="0"><stop offset="0" stop-color="#50555a"/><stop offset="0.35" stop-color="#dfe3e6"/><stop offset="0.7" stop-color="#9da2a6"/><stop offset="1" stop-color="#43474b"/></linearGradient>`;
@@ -60,11 +77,13 @@ export function cageScene(rng: Rng, damageCode: string, view: "close" | "overvie
 <rect x="-10" y="${n(top)}" width="${W + 20}" height="${n(height)}" fill="url(#g-cage)"/>`;
   for (let i = 0; i * pitch + start < W + pitch; i++) {
     const x = start + i * pitch + (pitch - win) / 2;
-    const broken = i === bad && damageCode === "cage.broken", bent = i === bad && damageCode === "cage.deformed";
+    const broken = i === bad && damageCode === "cage.broken",
+      bent = i === bad && damageCode === "cage.deformed";
     const skew = bent ? rng.real(14, 24) : 0;
     body += `<rect x="${n(x)}" y="${n(top + 40)}" width="${n(win)}" height="${n(height - 80)}" rx="6" fill="#141516"/>
 <rect x="${n(x + 8 + skew)}" y="${n(top + 30)}" width="${n(win - 16)}" height="${n(height - 60)}" rx="14" fill="url(#g-pocket-roller)" transform="rotate(${n(skew / 4)} ${n(x + win / 2)} ${n(top + height / 2)})"/>`;
-    if (bent) body += `<path d="M${n(x + win)} ${n(top + 20)}Q${n(x + win + 60)} ${n(top + height / 2)} ${n(x + win)} ${n(top + height - 20)}" stroke="#6b7075" stroke-width="${n(pitch - win - 6)}" fill="none"/>`;
+    if (bent)
+      body += `<path d="M${n(x + win)} ${n(top + 20)}Q${n(x + win + 60)} ${n(top + height / 2)} ${n(x + win)} ${n(top + height - 20)}" stroke="#6b7075" stroke-width="${n(pitch - win - 6)}" fill="none"/>`;
     if (broken) {
       const cy = top + rng.real(0.3, 0.7) * height;
       body += `<path d="${polygon(ragged(rng, x + win + (pitch - win) / 2, cy, (pitch - win) * 0.7, 26, 10, 0.6))}" fill="#111"/>

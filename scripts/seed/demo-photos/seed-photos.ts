@@ -23,14 +23,24 @@ export async function requireObjectStore(): Promise<void> {
   try {
     await Promise.race([storageReachable(), new Promise((_, reject) => setTimeout(() => reject(new Error("no answer in 5 s")), 5000))]);
   } catch (err) {
-    throw new Error(`Demo photos need the object store, which did not answer at ${where}: ${(err as Error).message}. ` +
-      "Start Tearline through scripts/start.sh (it starts the local store), set S3_* to a reachable bucket, or pass --no-photos.");
+    throw new Error(
+      `Demo photos need the object store, which did not answer at ${where}: ${(err as Error).message}. ` +
+        "Start Tearline through scripts/start.sh (it starts the local store), set S3_* to a reachable bucket, or pass --no-photos.",
+    );
   }
 }
 
 async function loadCases(db: Db): Promise<PlanCase[]> {
   const caseRows = await db.select({ id: cases.id, number: cases.number, status: cases.status, removedOn: cases.removedOn }).from(cases);
-  const found = await db.select().from(findings).where(inArray(findings.caseId, caseRows.map((c) => c.id)));
+  const found = await db
+    .select()
+    .from(findings)
+    .where(
+      inArray(
+        findings.caseId,
+        caseRows.map((c) => c.id),
+      ),
+    );
   return caseRows.map((c) => ({
     ...c,
     findings: found.filter((f) => f.caseId === c.id).map((f) => ({ ...f, row: f.row ?? null })),
@@ -54,10 +64,16 @@ async function ingestCase(db: Db, shots: PlannedPhoto[], uploadedBy: string): Pr
       // Dates as if uploaded at the bench: the row and its history entry.
       const label = `${photo.fileName} (${photo.sha256.slice(0, 12)})`;
       await db.update(photos).set({ createdAt: shot.uploadedAt }).where(eq(photos.id, photo.id));
-      await db.update(caseEvents).set({ at: shot.uploadedAt }).where(and(
-        eq(caseEvents.caseId, caseId), eq(caseEvents.action, "photo-added"),
-        sql`${caseEvents.changes} @> ${JSON.stringify([{ field: "photo", to: label }])}::jsonb`,
-      ));
+      await db
+        .update(caseEvents)
+        .set({ at: shot.uploadedAt })
+        .where(
+          and(
+            eq(caseEvents.caseId, caseId),
+            eq(caseEvents.action, "photo-added"),
+            sql`${caseEvents.changes} @> ${JSON.stringify([{ field: "photo", to: label }])}::jsonb`,
+          ),
+        );
     }
   } finally {
     if (status === "signed") await db.update(cases).set({ status: "signed" }).where(eq(cases.id, caseId));

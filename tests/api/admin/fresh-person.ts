@@ -15,7 +15,9 @@ export async function freshPerson(role: DemoRole, name = "Ines Varga"): Promise<
   const email = uniqueEmail(role);
   const password = `pw-${randomUUID()}`;
   await db.insert(t.user).values({ id, name, email, emailVerified: true, role });
-  await db.insert(t.account).values({ id: randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
+  await db
+    .insert(t.account)
+    .values({ id: randomUUID(), accountId: id, providerId: "credential", userId: id, password: await hashPassword(password) });
   const client = await new ApiClient(email).signIn(email, password);
   return { id, name, email, password, client };
 }

@@ -9,10 +9,19 @@ import { linkIn, waitForMail, type FakeMail } from "../../support/mail";
 import { uniqueEmail } from "./fresh-person";
 
 const invitationRows = async (email?: string) =>
-  (await db.select({ n: count() }).from(t.invitations).where(email ? eq(t.invitations.email, email) : undefined))[0].n;
+  (
+    await db
+      .select({ n: count() })
+      .from(t.invitations)
+      .where(email ? eq(t.invitations.email, email) : undefined)
+  )[0].n;
 
 async function invite(body: Record<string, unknown>) {
-  return (await as("admin")).json<{ invitation?: { id: string }; error?: string; fields?: Record<string, string> }>("POST", "/api/admin/invitations", body);
+  return (await as("admin")).json<{ invitation?: { id: string }; error?: string; fields?: Record<string, string> }>(
+    "POST",
+    "/api/admin/invitations",
+    body,
+  );
 }
 
 const tokenIn = (mail: FakeMail) => new URL(linkIn(mail, "/invitation/")).pathname.split("/").pop()!;
@@ -65,15 +74,23 @@ describe("invitations", () => {
     expect((await invite({ name: "Mira Solberg", email, role: "engineer" })).status).toBe(201);
     const second = await tokenFromMail(email, first);
     expect(second).not.toBe(first);
-    expect((await new ApiClient().json("POST", "/api/invitations/accept", { token: first, password: "a-long-new-password" })).status).toBe(410);
-    expect((await new ApiClient().json("POST", "/api/invitations/accept", { token: second, password: "a-long-new-password" })).status).toBe(201);
+    expect((await new ApiClient().json("POST", "/api/invitations/accept", { token: first, password: "a-long-new-password" })).status).toBe(
+      410,
+    );
+    expect((await new ApiClient().json("POST", "/api/invitations/accept", { token: second, password: "a-long-new-password" })).status).toBe(
+      201,
+    );
   });
 
   const bad: { name: string; body: Record<string, unknown>; field: string }[] = [
     { name: "a malformed e-mail", body: { name: "Kai Brennan", email: "kai-at-sable-river", role: "analyst" }, field: "email" },
     { name: "an unknown role", body: { name: "Kai Brennan", email: "kai@sable-river.example", role: "superuser" }, field: "role" },
     { name: "a one-letter name", body: { name: "K", email: "kai@sable-river.example", role: "analyst" }, field: "name" },
-    { name: "a site that is not a site id", body: { name: "Kai Brennan", email: "kai@sable-river.example", role: "analyst", siteId: "MJC" }, field: "siteId" },
+    {
+      name: "a site that is not a site id",
+      body: { name: "Kai Brennan", email: "kai@sable-river.example", role: "analyst", siteId: "MJC" },
+      field: "siteId",
+    },
   ];
   for (const attempt of bad) {
     it(`refuses ${attempt.name} with a field message and writes nothing`, async () => {

@@ -6,7 +6,8 @@ import { db, t } from "../../support/db";
 import { siteId, userId } from "../../support/factories";
 import { freshPerson, roleOf } from "./fresh-person";
 
-const patchUser = async (id: string, body: unknown, by: DemoRole = "admin") => (await as(by)).json<{ error?: string; fields?: Record<string, string> }>("PATCH", `/api/admin/users/${id}`, body);
+const patchUser = async (id: string, body: unknown, by: DemoRole = "admin") =>
+  (await as(by)).json<{ error?: string; fields?: Record<string, string> }>("PATCH", `/api/admin/users/${id}`, body);
 
 describe("roles", () => {
   it("a role change takes effect on the person's next request, without signing in again", async () => {

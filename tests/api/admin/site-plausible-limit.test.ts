@@ -7,7 +7,12 @@ import { db, t } from "../../support/db";
 import { siteId } from "../../support/factories";
 import { fieldReport } from "../cases/fixtures";
 
-type Answer = { error?: string; fields?: Record<string, string>; details?: { fields?: Record<string, string> }; site?: { plausibleMaxIn: number } };
+type Answer = {
+  error?: string;
+  fields?: Record<string, string>;
+  details?: { fields?: Record<string, string> };
+  site?: { plausibleMaxIn: number };
+};
 /** Zod refusals carry `fields`, service refusals `details.fields`. */
 const fieldsOf = (a: Answer) => a.fields ?? a.details?.fields ?? {};
 
@@ -25,7 +30,19 @@ afterAll(async () => {
 
 // 0.18 in: over the 1/16 in removal limit, under the 0.25 in starting plausibility limit (arithmetic).
 const reading = () =>
-  fieldReport({ fieldChecks: { ...baseChecks(), endPlay: { method: "dial", unit: "in", trials: [{ zero: "0", reading: "0.180" }, { zero: "0", reading: "0.181" }] } } });
+  fieldReport({
+    fieldChecks: {
+      ...baseChecks(),
+      endPlay: {
+        method: "dial",
+        unit: "in",
+        trials: [
+          { zero: "0", reading: "0.180" },
+          { zero: "0", reading: "0.181" },
+        ],
+      },
+    },
+  });
 const baseChecks = () => ({
   handRoll: {
     grid: {

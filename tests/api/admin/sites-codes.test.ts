@@ -16,7 +16,16 @@ const MM_PER_IN = checks.units.in_to_mm; // 25.4 exactly (NIST SP 811; from memo
 
 async function newSite(extra: Record<string, unknown> = {}) {
   const code = `T${tag().toUpperCase()}`;
-  const res = await (await admin()).json<SiteBody>("POST", "/api/admin/sites", { code, name: `Test yard ${code}`, kind: "car-shop", railway: "Sable River Rail", location: "Test", ...extra });
+  const res = await (
+    await admin()
+  ).json<SiteBody>("POST", "/api/admin/sites", {
+    code,
+    name: `Test yard ${code}`,
+    kind: "car-shop",
+    railway: "Sable River Rail",
+    location: "Test",
+    ...extra,
+  });
   expect(res.status).toBe(201);
   return res.body.site as { id: string; code: string; endPlayMaxIn: number; dialSpreadIn: number; tapeSpreadIn: number };
 }
@@ -36,7 +45,9 @@ describe("sites and their end-play limits", () => {
   it("keeps a limit typed in millimetres, converted to inches, to 5 places", async () => {
     const site = await newSite();
     const inches = 1.5 / MM_PER_IN; // 1.5 mm = 0.0590551… in (arithmetic)
-    const res = await (await admin()).json<SiteBody>("PATCH", `/api/admin/sites/${site.id}`, { endPlayMaxIn: inches, tapeSpreadIn: 1 / 32 });
+    const res = await (
+      await admin()
+    ).json<SiteBody>("PATCH", `/api/admin/sites/${site.id}`, { endPlayMaxIn: inches, tapeSpreadIn: 1 / 32 });
     expect(res.status).toBe(200);
     expect((await storedSite(site.id)).endPlayMaxIn).toBe(0.05906);
     expect((await storedSite(site.id)).tapeSpreadIn).toBe(0.03125); // 1/32 in (arithmetic)
@@ -70,7 +81,9 @@ describe("sites and their end-play limits", () => {
 
   it("refuses a second site with the same code", async () => {
     const site = await newSite();
-    const res = await (await admin()).json<SiteBody>("POST", "/api/admin/sites", { code: site.code.toLowerCase(), name: "Copy", kind: "lab", railway: "Sable River Rail" });
+    const res = await (
+      await admin()
+    ).json<SiteBody>("POST", "/api/admin/sites", { code: site.code.toLowerCase(), name: "Copy", kind: "lab", railway: "Sable River Rail" });
     expect(res.status).toBe(409);
   });
 
@@ -100,10 +113,19 @@ describe("sites and their end-play limits", () => {
 });
 
 async function addCode(list: "damage" | "cause" | "trigger", code: string, extra: Record<string, unknown> = {}) {
-  return (await admin()).json<CodeBody>("POST", "/api/admin/codes", { list, code, label: `Test ${code}`, description: "Made by a test", synonyms: ["testword"], ...extra });
+  return (await admin()).json<CodeBody>("POST", "/api/admin/codes", {
+    list,
+    code,
+    label: `Test ${code}`,
+    description: "Made by a test",
+    synonyms: ["testword"],
+    ...extra,
+  });
 }
 const pickerCodes = async (list: string, query = "") =>
-  ((await (await as("inspector")).json<CodeBody>("GET", `/api/codes?list=${list}${query}`)).body.codes ?? []).map((c) => c as { code: string; retired: boolean; label: string; synonyms: string[] });
+  ((await (await as("inspector")).json<CodeBody>("GET", `/api/codes?list=${list}${query}`)).body.codes ?? []).map(
+    (c) => c as { code: string; retired: boolean; label: string; synonyms: string[] },
+  );
 
 describe("classification lists", () => {
   it("adds a damage code under its family, and everyone's picker offers it", async () => {
@@ -115,7 +137,12 @@ describe("classification lists", () => {
   });
 
   it("refuses codes that break the pattern, and duplicates", async () => {
-    for (const [list, code] of [["damage", "no-family"], ["damage", "gremlin.bite"], ["cause", "Has Spaces"], ["trigger", "dotted.code"]] as const) {
+    for (const [list, code] of [
+      ["damage", "no-family"],
+      ["damage", "gremlin.bite"],
+      ["cause", "Has Spaces"],
+      ["trigger", "dotted.code"],
+    ] as const) {
       const res = await addCode(list, code);
       expect(res.status, code).toBe(400);
       expect(res.body.fields?.code).toBeTruthy();
@@ -127,8 +154,13 @@ describe("classification lists", () => {
     const code = `wear.t-${tag()}`;
     await addCode("damage", code);
     const url = `/api/admin/codes/damage/${code}`;
-    expect((await (await admin()).json("PATCH", url, { label: "Renamed wear", synonyms: ["scuffy", "Scuffy", " rubbed "] })).status).toBe(200);
-    expect((await pickerCodes("damage")).find((c) => c.code === code)).toMatchObject({ label: "Renamed wear", synonyms: ["scuffy", "rubbed"] });
+    expect((await (await admin()).json("PATCH", url, { label: "Renamed wear", synonyms: ["scuffy", "Scuffy", " rubbed "] })).status).toBe(
+      200,
+    );
+    expect((await pickerCodes("damage")).find((c) => c.code === code)).toMatchObject({
+      label: "Renamed wear",
+      synonyms: ["scuffy", "rubbed"],
+    });
     expect((await (await admin()).json("PATCH", url, { code: "wear.other" })).status).toBe(400);
   });
 
@@ -147,13 +179,22 @@ describe("classification lists", () => {
     const damage = `heat.t-${tag()}`;
     const cause = `t-cause-${tag()}`;
     const trigger = `t-trigger-${tag()}`;
-    for (const [list, code] of [["damage", damage], ["cause", cause], ["trigger", trigger]] as const) expect((await addCode(list, code)).status).toBe(201);
+    for (const [list, code] of [
+      ["damage", damage],
+      ["cause", cause],
+      ["trigger", trigger],
+    ] as const)
+      expect((await addCode(list, code)).status).toBe(201);
     // Two findings on one case count as one case.
     await createCase({ findings: [{ damageCode: damage }, { damageCode: damage, component: "cone-inboard" }] });
     await createCase({ findings: [{ damageCode: damage }] });
     await createCase({ primaryCause: "seal", contributingCauses: [cause] });
     await createCase({ trigger });
-    for (const [list, code, n] of [["damage", damage, 2], ["cause", cause, 1], ["trigger", trigger, 1]] as const) {
+    for (const [list, code, n] of [
+      ["damage", damage, 2],
+      ["cause", cause, 1],
+      ["trigger", trigger, 1],
+    ] as const) {
       const res = await (await admin()).json<CodeBody>("DELETE", `/api/admin/codes/${list}/${code}`);
       expect(res.status, code).toBe(409);
       expect(res.body.error).toContain(`used by ${n} ${n === 1 ? "case" : "cases"}`);

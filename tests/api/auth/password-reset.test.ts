@@ -50,11 +50,16 @@ describe("password reset", () => {
     expect(short.status).toBe(400);
     expect(short.body.message).toMatch(/too short/i);
     await new ApiClient().signIn(person.email, person.password);
-    expect((await new ApiClient().request("POST", "/api/auth/reset-password", { newPassword: "long-enough-password", token })).status).toBe(200);
+    expect((await new ApiClient().request("POST", "/api/auth/reset-password", { newPassword: "long-enough-password", token })).status).toBe(
+      200,
+    );
   });
 
   it("answers the same for an unknown address, and sends nothing", async () => {
-    const res = await new ApiClient().json<{ status?: boolean }>("POST", "/api/auth/request-password-reset", { email: "no-one-here@sable-river.example", redirectTo: "/reset-password" });
+    const res = await new ApiClient().json<{ status?: boolean }>("POST", "/api/auth/request-password-reset", {
+      email: "no-one-here@sable-river.example",
+      redirectTo: "/reset-password",
+    });
     expect(res.status).toBe(200);
     await expect(waitForMail((m) => m.to.includes("no-one-here@sable-river.example"), 3000)).rejects.toThrow();
   });

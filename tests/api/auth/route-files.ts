@@ -17,8 +17,22 @@ function routeFiles(dir: string): string[] {
 export function exportedMethods(source: string): string[] {
   const found = new Set<string>();
   for (const m of source.matchAll(/export\s+(?:const|let|async\s+function|function)\s+([A-Z]+)\b/g)) found.add(m[1]);
-  for (const m of source.matchAll(/export\s+const\s*\{([^}]*)\}/g)) for (const name of m[1].split(",")) found.add(name.trim().split(/\s*:\s*/).pop()!);
-  for (const m of source.matchAll(/export\s*\{([^}]*)\}/g)) for (const name of m[1].split(",")) found.add(name.trim().split(/\s+as\s+/).pop()!);
+  for (const m of source.matchAll(/export\s+const\s*\{([^}]*)\}/g))
+    for (const name of m[1].split(","))
+      found.add(
+        name
+          .trim()
+          .split(/\s*:\s*/)
+          .pop()!,
+      );
+  for (const m of source.matchAll(/export\s*\{([^}]*)\}/g))
+    for (const name of m[1].split(","))
+      found.add(
+        name
+          .trim()
+          .split(/\s+as\s+/)
+          .pop()!,
+      );
   return [...found].filter((n) => METHODS.includes(n));
 }
 
@@ -43,7 +57,10 @@ function pageFiles(dir: string): string[] {
 /** "/cases/[number]" for every page.tsx under app/ (route groups such as "(app)" are not part of the URL). */
 export function pagePatterns(): string[] {
   return pageFiles(APP_DIR).map((file) => {
-    const parts = path.relative(APP_DIR, path.dirname(file)).split(path.sep).filter((p) => p && !/^\(.*\)$/.test(p));
+    const parts = path
+      .relative(APP_DIR, path.dirname(file))
+      .split(path.sep)
+      .filter((p) => p && !/^\(.*\)$/.test(p));
     return "/" + parts.join("/");
   });
 }

@@ -36,10 +36,7 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
   // Accounts and the auth library's own endpoints (sign-in is public; its admin endpoints are admin-only).
   "GET /api/auth/[...all]": {
     access: "public",
-    probes: [
-      { path: "/api/auth/get-session" },
-      { path: "/api/auth/admin/list-users", access: ADMIN },
-    ],
+    probes: [{ path: "/api/auth/get-session" }, { path: "/api/auth/admin/list-users", access: ADMIN }],
   },
   "POST /api/auth/[...all]": {
     access: "public",
@@ -51,7 +48,11 @@ export const ROUTE_TABLE: Record<string, RouteRow> = {
       { path: "/api/auth/admin/impersonate-user", body: { userId: "nobody" }, access: "disabled" },
       { path: "/api/auth/admin/set-user-password", body: { userId: "nobody", newPassword: "x" }, access: "disabled" },
       // An unknown role makes the admin's call fail after the role check, so no account is created.
-      { path: "/api/auth/admin/create-user", body: { email: "guard-probe@sable-river.example", password: "long-enough-password", name: "Guard Probe", role: "no-such-role" }, access: "disabled" },
+      {
+        path: "/api/auth/admin/create-user",
+        body: { email: "guard-probe@sable-river.example", password: "long-enough-password", name: "Guard Probe", role: "no-such-role" },
+        access: "disabled",
+      },
     ],
   },
   "POST /api/invitations/accept": { access: "public" },
@@ -149,7 +150,11 @@ export type RouteRule = { gate: Gate; reach: Reach; probes?: MatrixProbe[] };
 export const REACH_PERMISSIONS: Permission[] = ["case:read-all", "tallies:read-all"];
 
 const STALE = 999_999; // a version no case reaches in a test run: a permitted save is refused as stale, nothing changes
-const sectionProbe = (section: "field" | "teardown" | "verdict", permission: Permission, stageAllows: MatrixProbe["stageAllows"]): MatrixProbe => ({
+const sectionProbe = (
+  section: "field" | "teardown" | "verdict",
+  permission: Permission,
+  stageAllows: MatrixProbe["stageAllows"],
+): MatrixProbe => ({
   label: `section ${section}`,
   permission,
   body: () => ({ version: STALE, section, data: {} }),
@@ -211,28 +216,88 @@ export const ROUTE_RULES: Record<string, RouteRule> = {
       unreadable("no section named", ["case:edit-field", "case:edit-teardown", "case:propose"]),
     ],
   },
-  "POST /api/cases/[id]/transitions": { gate: "case:read", reach: "case", // Signing is its own route (POST /api/cases/[id]/signature); here it is refused as a step.
-    probes: [...ACTIONS.filter((a) => a !== "sign").map(stepProbe), unreadable("no step named", ACTIONS.map((a) => WORKFLOW[a].permission))] },
+  "POST /api/cases/[id]/transitions": {
+    gate: "case:read",
+    reach: "case", // Signing is its own route (POST /api/cases/[id]/signature); here it is refused as a step.
+    probes: [
+      ...ACTIONS.filter((a) => a !== "sign").map(stepProbe),
+      unreadable(
+        "no step named",
+        ACTIONS.map((a) => WORKFLOW[a].permission),
+      ),
+    ],
+  },
   "GET /api/cases/[id]/history": { gate: "case:read", reach: "case" },
   "GET /api/cases/[id]/signature": { gate: "case:read", reach: "case" },
   // A stale version is refused before the password is checked, so a permitted probe signs nothing.
-  "POST /api/cases/[id]/signature": { gate: "case:sign", reach: "case", probes: [{ body: () => ({ version: STALE, password: "matrix probe", contentHash: "0".repeat(64), meaningAccepted: true }), stageAllows: (stage) => stage === "signoff" }] },
-  "POST /api/cases/[id]/findings": { gate: "case:edit-teardown", reach: "case", probes: [{ body: () => ({ version: STALE, finding: { component: "cup", damageCode: "fatigue.subsurface", severity: 3 } }), stageAllows: teardownOpen }] },
-  "PATCH /api/cases/[id]/findings/[findingId]": { gate: "case:edit-teardown", reach: "case", probes: [{ body: () => ({ version: STALE, finding: {} }), stageAllows: teardownOpen }] },
-  "DELETE /api/cases/[id]/findings/[findingId]": { gate: "case:edit-teardown", reach: "case", probes: [{ query: () => `?version=${STALE}`, stageAllows: teardownOpen }] },
+  "POST /api/cases/[id]/signature": {
+    gate: "case:sign",
+    reach: "case",
+    probes: [
+      {
+        body: () => ({ version: STALE, password: "matrix probe", contentHash: "0".repeat(64), meaningAccepted: true }),
+        stageAllows: (stage) => stage === "signoff",
+      },
+    ],
+  },
+  "POST /api/cases/[id]/findings": {
+    gate: "case:edit-teardown",
+    reach: "case",
+    probes: [
+      {
+        body: () => ({ version: STALE, finding: { component: "cup", damageCode: "fatigue.subsurface", severity: 3 } }),
+        stageAllows: teardownOpen,
+      },
+    ],
+  },
+  "PATCH /api/cases/[id]/findings/[findingId]": {
+    gate: "case:edit-teardown",
+    reach: "case",
+    probes: [{ body: () => ({ version: STALE, finding: {} }), stageAllows: teardownOpen }],
+  },
+  "DELETE /api/cases/[id]/findings/[findingId]": {
+    gate: "case:edit-teardown",
+    reach: "case",
+    probes: [{ query: () => `?version=${STALE}`, stageAllows: teardownOpen }],
+  },
   "GET /api/cases/[id]/links": { gate: "case:read", reach: "case" },
   // Linking a case to itself is refused after the access checks, so a permitted probe changes nothing.
-  "POST /api/cases/[id]/links": { gate: "case:link", reach: "case", probes: [{ body: (c) => ({ relatedId: c.id, note: "matrix probe" }) }] },
-  "DELETE /api/cases/[id]/links": { gate: "case:link", reach: "case", probes: [{ query: (c) => `?relatedId=${c.id}`, missingTarget: true }] },
+  "POST /api/cases/[id]/links": {
+    gate: "case:link",
+    reach: "case",
+    probes: [{ body: (c) => ({ relatedId: c.id, note: "matrix probe" }) }],
+  },
+  "DELETE /api/cases/[id]/links": {
+    gate: "case:link",
+    reach: "case",
+    probes: [{ query: (c) => `?relatedId=${c.id}`, missingTarget: true }],
+  },
   "GET /api/cases/[id]/similar": { gate: "case:read", reach: "case" },
   "GET /api/cases/[id]/report.pdf": { gate: "case:read", reach: "case" },
   "GET /api/cases/[id]/evidence.zip": { gate: "case:export", reach: "case" },
   "GET /api/cases/[id]/photos": { gate: "case:read", reach: "case" },
   // A form without a file: refused after the access checks.
-  "POST /api/cases/[id]/photos": { gate: "photo:upload", reach: "case", probes: [{ body: () => { const f = new FormData(); f.set("caption", "matrix probe"); return f; }, stageAllows: notSigned }] },
+  "POST /api/cases/[id]/photos": {
+    gate: "photo:upload",
+    reach: "case",
+    probes: [
+      {
+        body: () => {
+          const f = new FormData();
+          f.set("caption", "matrix probe");
+          return f;
+        },
+        stageAllows: notSigned,
+      },
+    ],
+  },
   "GET /api/photos/[photoId]/[variant]": { gate: "case:read", reach: "photo" },
   // A finding of no case: refused after the photo is found and its case checked.
-  "PATCH /api/photos/[photoId]": { gate: "photo:upload", reach: "photo", probes: [{ body: () => ({ findingId: NO_ID }), stageAllows: notSigned }] },
+  "PATCH /api/photos/[photoId]": {
+    gate: "photo:upload",
+    reach: "photo",
+    probes: [{ body: () => ({ findingId: NO_ID }), stageAllows: notSigned }],
+  },
   "DELETE /api/photos/[photoId]": { gate: "photo:delete", reach: "photo", probes: [{ allowedUseNoId: true, stageAllows: notSigned }] },
 
   "GET /api/tallies": { gate: "tallies:read", reach: "none" },

@@ -49,8 +49,18 @@ describe("sign-in", () => {
     { name: "an empty form", body: {}, status: 400, message: /email/i },
     { name: "an empty e-mail and password", body: { email: "", password: "" }, status: 400, message: /email/i },
     { name: "a malformed e-mail", body: { email: "dana-at-sable-river", password: DEMO_PASSWORD }, status: 400, message: /email/i },
-    { name: "a wrong password", body: { email: DEMO_USERS[0].email, password: "not-the-password" }, status: 401, message: /invalid email or password/i },
-    { name: "an unknown person", body: { email: "nobody@sable-river.example", password: DEMO_PASSWORD }, status: 401, message: /invalid email or password/i },
+    {
+      name: "a wrong password",
+      body: { email: DEMO_USERS[0].email, password: "not-the-password" },
+      status: 401,
+      message: /invalid email or password/i,
+    },
+    {
+      name: "an unknown person",
+      body: { email: "nobody@sable-river.example", password: DEMO_PASSWORD },
+      status: 401,
+      message: /invalid email or password/i,
+    },
   ];
 
   bad.forEach((attempt, i) => {

@@ -14,9 +14,17 @@ describe("saving a case", () => {
     const analyst = await as("analyst");
     const created = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport());
     const { id, version } = created.body.case;
-    const first = await inspector.json<CaseBody>("PATCH", `/api/cases/${id}`, { version, section: "field", data: { fieldNotes: "First person's note" } });
+    const first = await inspector.json<CaseBody>("PATCH", `/api/cases/${id}`, {
+      version,
+      section: "field",
+      data: { fieldNotes: "First person's note" },
+    });
     expect(first.status).toBe(200);
-    const second = await analyst.json<{ error: string; details: { updatedBy: string; current: Record<string, unknown> } }>("PATCH", `/api/cases/${id}`, { version, section: "field", data: { fieldNotes: "Second person's note" } });
+    const second = await analyst.json<{ error: string; details: { updatedBy: string; current: Record<string, unknown> } }>(
+      "PATCH",
+      `/api/cases/${id}`,
+      { version, section: "field", data: { fieldNotes: "Second person's note" } },
+    );
     expect(second.status).toBe(409);
     expect(second.body.error).toMatch(/Dana Okafor saved this case/);
     expect(second.body.details.current.fieldNotes).toBe("First person's note");
@@ -50,7 +58,11 @@ describe("saving a case", () => {
   test("a section save with an unknown field is refused and changes nothing", async () => {
     const inspector = await as("inspector");
     const created = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport());
-    const r = await inspector.json("PATCH", `/api/cases/${created.body.case.id}`, { version: created.body.case.version, section: "field", data: { status: "signed" } });
+    const r = await inspector.json("PATCH", `/api/cases/${created.body.case.id}`, {
+      version: created.body.case.version,
+      section: "field",
+      data: { status: "signed" },
+    });
     expect(r.status).toBe(400);
     const [row] = await db.select().from(t.cases).where(eq(t.cases.id, created.body.case.id));
     expect(row.status).toBe("field");
@@ -66,16 +78,30 @@ describe("saving a case", () => {
     const mine = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport());
     const pellham = await as("inspector.pellham");
     expect((await pellham.json("GET", `/api/cases/${mine.body.case.id}`)).status).toBe(404);
-    expect((await pellham.json("PATCH", `/api/cases/${mine.body.case.id}`, { version: 1, section: "field", data: { fieldNotes: "x" } })).status).toBe(404);
+    expect(
+      (await pellham.json("PATCH", `/api/cases/${mine.body.case.id}`, { version: 1, section: "field", data: { fieldNotes: "x" } })).status,
+    ).toBe(404);
     expect((await (await as("manager")).json("GET", `/api/cases/${mine.body.case.number}`)).status).toBe(200);
-    expect((await (await as("manager")).json("PATCH", `/api/cases/${mine.body.case.id}`, { version: 1, section: "field", data: { fieldNotes: "x" } })).status).toBe(403);
+    expect(
+      (
+        await (
+          await as("manager")
+        ).json("PATCH", `/api/cases/${mine.body.case.id}`, { version: 1, section: "field", data: { fieldNotes: "x" } })
+      ).status,
+    ).toBe(403);
   });
 
   test("an inspector cannot edit the field report once the lab has the bearing", async () => {
     const inspector = await as("inspector");
     const created = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport());
-    const r = await (await as("analyst")).json<CaseBody>("POST", `/api/cases/${created.body.case.id}/transitions`, { version: created.body.case.version, action: "receive" });
-    const edit = await inspector.json("PATCH", `/api/cases/${created.body.case.id}`, { version: r.body.case.version, section: "field", data: { fieldNotes: "late" } });
+    const r = await (
+      await as("analyst")
+    ).json<CaseBody>("POST", `/api/cases/${created.body.case.id}/transitions`, { version: created.body.case.version, action: "receive" });
+    const edit = await inspector.json("PATCH", `/api/cases/${created.body.case.id}`, {
+      version: r.body.case.version,
+      section: "field",
+      data: { fieldNotes: "late" },
+    });
     expect(edit.status).toBe(403);
   });
 });

@@ -26,7 +26,14 @@ export async function fieldReport(overrides: Record<string, unknown> = {}) {
         },
         procedure: { turnedBy: "hand", oneDirection: true, judgedBy: "feel" },
       },
-      endPlay: { method: "dial", unit: "in", trials: [{ zero: "0", reading: "0.020" }, { zero: "0", reading: "0.021" }] },
+      endPlay: {
+        method: "dial",
+        unit: "in",
+        trials: [
+          { zero: "0", reading: "0.020" },
+          { zero: "0", reading: "0.021" },
+        ],
+      },
       visual: [],
       confirmations: { ppe: true, blueSignal: true, wheelsetSecured: true },
     },
@@ -50,8 +57,19 @@ export async function caseAwaitingSignoff(filer: Stepper, lab: Stepper, override
     version = r.body.case?.version ?? r.body.version!;
   };
   await step("POST", `/api/cases/${id}/transitions`, { action: "receive" });
-  await step("POST", `/api/cases/${id}/findings`, { finding: { component: "cup", row: "outboard", damageCode: "fatigue.subsurface", severity: 2, zone: "raceway" } });
-  await step("PATCH", `/api/cases/${id}`, { section: "verdict", data: { primaryCause: "end-of-life", contributingCauses: [], confidence: "probable", removalConfirmed: "confirmed", correctiveAction: "None." } });
+  await step("POST", `/api/cases/${id}/findings`, {
+    finding: { component: "cup", row: "outboard", damageCode: "fatigue.subsurface", severity: 2, zone: "raceway" },
+  });
+  await step("PATCH", `/api/cases/${id}`, {
+    section: "verdict",
+    data: {
+      primaryCause: "end-of-life",
+      contributingCauses: [],
+      confidence: "probable",
+      removalConfirmed: "confirmed",
+      correctiveAction: "None.",
+    },
+  });
   await step("POST", `/api/cases/${id}/transitions`, { action: "propose" });
   return { id, number, version };
 }

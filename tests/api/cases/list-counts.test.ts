@@ -22,7 +22,10 @@ async function differences(): Promise<{ extra: unknown[]; missing: unknown[] }> 
     select 'extra' as side, to_jsonb(x) as r from (select * from roll except all select * from fresh) x
     union all
     select 'missing', to_jsonb(y) from (select * from fresh except all select * from roll) y`);
-  return { extra: rows.filter((r) => r.side === "extra").map((r) => r.r), missing: rows.filter((r) => r.side === "missing").map((r) => r.r) };
+  return {
+    extra: rows.filter((r) => r.side === "extra").map((r) => r.r),
+    missing: rows.filter((r) => r.side === "missing").map((r) => r.r),
+  };
 }
 
 async function expectExact() {
@@ -55,9 +58,18 @@ describe("case list count cells", () => {
   it("equal a full recount after single and many-row updates of every counted column", async () => {
     const analyst = await userId("analyst");
     await db.update(t.cases).set({ status: "signed" }).where(eq(t.cases.id, ids[0]));
-    await db.update(t.cases).set({ siteId: sites.B, createdBy: analyst }).where(inArray(t.cases.id, ids.slice(1, 10)));
-    await db.update(t.cases).set({ trigger: "welding", bearingClass: "E", primaryCause: null }).where(inArray(t.cases.id, ids.slice(10, 18)));
-    await db.update(t.cases).set({ siteId: null }).where(inArray(t.cases.id, ids.slice(18, 21)));
+    await db
+      .update(t.cases)
+      .set({ siteId: sites.B, createdBy: analyst })
+      .where(inArray(t.cases.id, ids.slice(1, 10)));
+    await db
+      .update(t.cases)
+      .set({ trigger: "welding", bearingClass: "E", primaryCause: null })
+      .where(inArray(t.cases.id, ids.slice(10, 18)));
+    await db
+      .update(t.cases)
+      .set({ siteId: null })
+      .where(inArray(t.cases.id, ids.slice(18, 21)));
     await db.update(t.cases).set({ updatedAt: new Date() }).where(inArray(t.cases.id, ids)); // no counted column: no cell moves
     await expectExact();
   });
@@ -75,12 +87,24 @@ describe("the case list's total", () => {
 
   async function casesHere() {
     return db
-      .select({ id: t.cases.id, number: t.cases.number, status: t.cases.status, trigger: t.cases.trigger, bearingClass: t.cases.bearingClass, siteId: t.cases.siteId, createdBy: t.cases.createdBy, removedOn: t.cases.removedOn })
+      .select({
+        id: t.cases.id,
+        number: t.cases.number,
+        status: t.cases.status,
+        trigger: t.cases.trigger,
+        bearingClass: t.cases.bearingClass,
+        siteId: t.cases.siteId,
+        createdBy: t.cases.createdBy,
+        removedOn: t.cases.removedOn,
+      })
       .from(t.cases)
       .where(inArray(t.cases.siteId, [sites.A, sites.B]));
   }
   async function viewer(role: (typeof byRole)[number]) {
-    const [u] = await db.select({ id: t.user.id, role: t.user.role, siteId: t.user.siteId }).from(t.user).where(eq(t.user.id, await userId(role)));
+    const [u] = await db
+      .select({ id: t.user.id, role: t.user.role, siteId: t.user.siteId })
+      .from(t.user)
+      .where(eq(t.user.id, await userId(role)));
     return u;
   }
 
@@ -100,7 +124,11 @@ describe("the case list's total", () => {
       const res = await client.json<Page>("GET", `/api/cases?site=${CODE}A,${CODE}B&pageSize=10&${query}`);
       expect(res.status, JSON.stringify(res.body)).toBe(200);
       const want = here.filter(keep);
-      expect({ query, total: res.body.total, pageCount: res.body.pageCount }).toEqual({ query, total: want.length, pageCount: Math.max(1, Math.ceil(want.length / 10)) });
+      expect({ query, total: res.body.total, pageCount: res.body.pageCount }).toEqual({
+        query,
+        total: want.length,
+        pageCount: Math.max(1, Math.ceil(want.length / 10)),
+      });
       expect(res.body.rows.length).toBe(Math.min(10, want.length));
     }
   });

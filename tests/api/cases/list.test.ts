@@ -7,7 +7,17 @@ import { TRIGGERS } from "@/lib/classification";
 import { ApiClient, as } from "../../support/api";
 import { buildCasebook, removeCasebook, TOKEN, type Built } from "./list-fixture";
 
-type Row = { id: string; number: string; status: string; removedOn: string | null; carNumber: string; endPlayMeanIn: number | null; triggerLabel: string; causeLabel: string | null; siteCode: string | null };
+type Row = {
+  id: string;
+  number: string;
+  status: string;
+  removedOn: string | null;
+  carNumber: string;
+  endPlayMeanIn: number | null;
+  triggerLabel: string;
+  causeLabel: string | null;
+  siteCode: string | null;
+};
 type Page = { rows: Row[]; total: number; page: number; pageSize: number; pageCount: number; error?: string };
 
 let book: Built[] = [];
@@ -62,7 +72,11 @@ describe("each filter, and filters together", () => {
     ["to=2025-12-31", (b) => b.removedOn !== null && b.removedOn <= "2025-12-31"],
     ["status=signed&trigger=wayside-hot", (b) => b.status === "signed" && b.trigger === "wayside-hot"],
     ["site=PYC&status=signoff", (b) => b.site === "PYC" && b.status === "signoff"],
-    ["trigger=wayside-hot&class=F&from=2026-01-01&to=2026-04-30", (b) => b.trigger === "wayside-hot" && b.cls === "F" && b.removedOn !== null && b.removedOn >= "2026-01-01" && b.removedOn <= "2026-04-30"],
+    [
+      "trigger=wayside-hot&class=F&from=2026-01-01&to=2026-04-30",
+      (b) =>
+        b.trigger === "wayside-hot" && b.cls === "F" && b.removedOn !== null && b.removedOn >= "2026-01-01" && b.removedOn <= "2026-04-30",
+    ],
   ];
   it.each(cases)("%s", async (query, keep) => {
     const p = await list(query);
@@ -89,15 +103,18 @@ describe("each filter, and filters together", () => {
 describe("sorting", () => {
   const byNumberDesc = (a: Built, b: Built) => (a.number < b.number ? 1 : -1); // the tie-break: newest number first
   const order = (rows: Row[]) => rows.map((r) => r.number);
-  const nullsLast = <T,>(get: (b: Built) => T | null, cmp: (x: T, y: T) => number) => (a: Built, b: Built) => {
-    const x = get(a), y = get(b);
-    if (x === null && y === null) return byNumberDesc(a, b);
-    if (x === null) return 1;
-    if (y === null) return -1;
-    return cmp(x, y) || byNumberDesc(a, b);
-  };
-  const asc = <T,>(x: T, y: T) => (x < y ? -1 : x > y ? 1 : 0);
-  const desc = <T,>(x: T, y: T) => -asc(x, y);
+  const nullsLast =
+    <T>(get: (b: Built) => T | null, cmp: (x: T, y: T) => number) =>
+    (a: Built, b: Built) => {
+      const x = get(a),
+        y = get(b);
+      if (x === null && y === null) return byNumberDesc(a, b);
+      if (x === null) return 1;
+      if (y === null) return -1;
+      return cmp(x, y) || byNumberDesc(a, b);
+    };
+  const asc = <T>(x: T, y: T) => (x < y ? -1 : x > y ? 1 : 0);
+  const desc = <T>(x: T, y: T) => -asc(x, y);
 
   it("sorts by removal date both ways, undated cases last either way", async () => {
     const up = await list("sort=removedOn:asc");
@@ -203,7 +220,9 @@ describe("CSV export", () => {
     expect([...bytes.slice(0, 3)]).toEqual([0xef, 0xbb, 0xbf]); // UTF-8 byte-order mark (Unicode Standard §2.6), so spreadsheets read UTF-8
     expect(res.headers.get("content-type")).toMatch(/^text\/csv; charset=utf-8/);
     // RFC 6266 attachment with a file name; the date is today's in UTC.
-    expect(res.headers.get("content-disposition")).toBe(`attachment; filename="tearline-cases-${new Date().toISOString().slice(0, 10)}.csv"`);
+    expect(res.headers.get("content-disposition")).toBe(
+      `attachment; filename="tearline-cases-${new Date().toISOString().slice(0, 10)}.csv"`,
+    );
     expect(raw.startsWith("\uFEFFCase number,Stage,Car mark,Car number,")).toBe(true);
     expect(records[0]).toContain("End play (in)");
     expect(raw.split("\r\n").length).toBeGreaterThan(2); // RFC 4180 §2.1: records end with CRLF
@@ -215,7 +234,10 @@ describe("CSV export", () => {
     for (const query of ["sort=removedOn:asc", "status=signed,signoff&sort=car:desc", "site=PYC&sort=trigger:asc"]) {
       const rows = (await list(query)).rows;
       const { records } = await exportCsv(query);
-      expect(records.slice(1).map((r) => r[0]), query).toEqual(rows.map((r) => r.number));
+      expect(
+        records.slice(1).map((r) => r[0]),
+        query,
+      ).toEqual(rows.map((r) => r.number));
     }
   });
 
@@ -229,7 +251,9 @@ describe("CSV export", () => {
     expect(records.find((r) => r[0] === c4.number)![serialCol]).toBe(c4.serialText);
     // OWASP CSV Injection: a leading = gets an apostrophe.
     expect(records.find((r) => r[0] === c5.number)![serialCol]).toBe(`'${c5.serialText}`);
-    expect(records.find((r) => r[0] === book.find((b) => b.key === "c7")!.number)![records[0].indexOf("Bearing class")]).toBe("AP-X, compact");
+    expect(records.find((r) => r[0] === book.find((b) => b.key === "c7")!.number)![records[0].indexOf("Bearing class")]).toBe(
+      "AP-X, compact",
+    );
   });
 
   it("writes end play to four decimals and dates as ISO", async () => {
@@ -250,6 +274,11 @@ describe("the export cap", () => {
     expect(run.capped).toBe(true);
     const got: string[] = [];
     for await (const batch of run.batches()) got.push(...batch.map((r) => r.number));
-    expect(got).toEqual(book.map((b) => b.number).sort().slice(0, 5));
+    expect(got).toEqual(
+      book
+        .map((b) => b.number)
+        .sort()
+        .slice(0, 5),
+    );
   });
 });

@@ -15,13 +15,26 @@ describe("separation of duties at sign-off", () => {
     const id = filed.body.case.id;
     let version = filed.body.case.version;
     const step = async (body: Record<string, unknown>) => {
-      const r = await admin.json<CaseBody & { version?: number }>(body.finding ? "POST" : body.section ? "PATCH" : "POST", body.finding ? `/api/cases/${id}/findings` : body.section ? `/api/cases/${id}` : `/api/cases/${id}/transitions`, { version, ...body });
+      const r = await admin.json<CaseBody & { version?: number }>(
+        body.finding ? "POST" : body.section ? "PATCH" : "POST",
+        body.finding ? `/api/cases/${id}/findings` : body.section ? `/api/cases/${id}` : `/api/cases/${id}/transitions`,
+        { version, ...body },
+      );
       expect(r.status, JSON.stringify(r.body)).toBeLessThan(300);
       version = r.body.case?.version ?? r.body.version!;
     };
     await step({ action: "receive" });
     await step({ finding: { component: "cup", row: "outboard", damageCode: "fatigue.subsurface", severity: 2, zone: "raceway" } });
-    await step({ section: "verdict", data: { primaryCause: "end-of-life", contributingCauses: [], confidence: "probable", removalConfirmed: "confirmed", correctiveAction: "None." } });
+    await step({
+      section: "verdict",
+      data: {
+        primaryCause: "end-of-life",
+        contributingCauses: [],
+        confidence: "probable",
+        removalConfirmed: "confirmed",
+        correctiveAction: "None.",
+      },
+    });
     await step({ action: "propose" });
 
     const own = await signVerdict(admin, id, { version });

@@ -17,19 +17,36 @@ beforeAll(async () => {
   id = filed.body.case.id;
   version = filed.body.case.version;
   const step = async (body: Record<string, unknown>) => {
-    const r = await admin.json<CaseBody & { version?: number }>(body.finding ? "POST" : body.section ? "PATCH" : "POST", body.finding ? `/api/cases/${id}/findings` : body.section ? `/api/cases/${id}` : `/api/cases/${id}/transitions`, { version, ...body });
+    const r = await admin.json<CaseBody & { version?: number }>(
+      body.finding ? "POST" : body.section ? "PATCH" : "POST",
+      body.finding ? `/api/cases/${id}/findings` : body.section ? `/api/cases/${id}` : `/api/cases/${id}/transitions`,
+      { version, ...body },
+    );
     expect(r.status, JSON.stringify(r.body)).toBeLessThan(300);
     version = r.body.case?.version ?? r.body.version!;
   };
   await step({ action: "receive" });
-  await step({ finding: { component: "cup", row: "outboard", damageCode: "fatigue.subsurface", severity: 3, zone: "raceway", notes: "Load zone." } });
-  await step({ section: "verdict", data: { primaryCause: "end-of-life", contributingCauses: [], confidence: "confirmed", removalConfirmed: "confirmed", correctiveAction: "None." } });
+  await step({
+    finding: { component: "cup", row: "outboard", damageCode: "fatigue.subsurface", severity: 3, zone: "raceway", notes: "Load zone." },
+  });
+  await step({
+    section: "verdict",
+    data: {
+      primaryCause: "end-of-life",
+      contributingCauses: [],
+      confidence: "confirmed",
+      removalConfirmed: "confirmed",
+      correctiveAction: "None.",
+    },
+  });
   await step({ action: "propose" });
 });
 
 describe("signing a verdict", () => {
   test("shows what is signed and what the signature means before anything is signed", async () => {
-    const view = await (await as("engineer")).json<SignatureView & { content: { findings: unknown[]; photoHashes: unknown[] } }>("GET", `/api/cases/${id}/signature`);
+    const view = await (
+      await as("engineer")
+    ).json<SignatureView & { content: { findings: unknown[]; photoHashes: unknown[] } }>("GET", `/api/cases/${id}/signature`);
     expect(view.status).toBe(200);
     expect(view.body.contentHash).toMatch(/^[0-9a-f]{64}$/);
     expect(view.body.meaning).toMatch(/I confirm this root-cause verdict/);
@@ -43,10 +60,20 @@ describe("signing a verdict", () => {
     expect(wrong.status).toBe(403);
     expect(wrong.body.error).toMatch(/password is not right/);
     const view = await engineer.json<SignatureView>("GET", `/api/cases/${id}/signature`);
-    const unticked = await engineer.json("POST", `/api/cases/${id}/signature`, { version, password: "x", contentHash: view.body.contentHash, meaningAccepted: false });
+    const unticked = await engineer.json("POST", `/api/cases/${id}/signature`, {
+      version,
+      password: "x",
+      contentHash: view.body.contentHash,
+      meaningAccepted: false,
+    });
     expect(unticked.status).toBe(400);
     const { DEMO_PASSWORD } = await import("../../../scripts/seed/demo-people");
-    const stale = await engineer.json<{ error: string }>("POST", `/api/cases/${id}/signature`, { version, password: DEMO_PASSWORD, contentHash: "0".repeat(64), meaningAccepted: true });
+    const stale = await engineer.json<{ error: string }>("POST", `/api/cases/${id}/signature`, {
+      version,
+      password: DEMO_PASSWORD,
+      contentHash: "0".repeat(64),
+      meaningAccepted: true,
+    });
     expect(stale.status).toBe(409);
     const [row] = await db.select().from(t.cases).where(eq(t.cases.id, id));
     expect(row.status).toBe("signoff");

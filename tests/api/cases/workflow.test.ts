@@ -8,7 +8,9 @@ import { waitForMail } from "../../support/mail";
 import { signVerdict } from "../../support/sign";
 import { fieldReport } from "./fixtures";
 
-type CaseBody = { case: { id: string; number: string; version: number; status: string; fieldCall: string; endPlayMeanIn: number; serviceMonths: number } };
+type CaseBody = {
+  case: { id: string; number: string; version: number; status: string; fieldCall: string; endPlayMeanIn: number; serviceMonths: number };
+};
 
 describe("case life", () => {
   let id = "";
@@ -32,7 +34,10 @@ describe("case life", () => {
 
   test("the analyst cannot add findings before receiving; receiving moves it to the bench", async () => {
     const analyst = await as("analyst");
-    const early = await analyst.json("POST", `/api/cases/${id}/findings`, { version, finding: { component: "cup", damageCode: "fatigue.subsurface", severity: 3 } });
+    const early = await analyst.json("POST", `/api/cases/${id}/findings`, {
+      version,
+      finding: { component: "cup", damageCode: "fatigue.subsurface", severity: 3 },
+    });
     expect(early.status).toBe(403);
     const r = await analyst.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version, action: "receive" });
     expect(r.status).toBe(200);
@@ -51,14 +56,43 @@ describe("case life", () => {
     const analyst = await as("analyst");
     const f = await analyst.json<{ version: number }>("POST", `/api/cases/${id}/findings`, {
       version,
-      finding: { component: "cup", row: "outboard", damageCode: "fatigue.subsurface", severity: 3, clockDeg: 350, arcDeg: 30, zone: "raceway", lengthMm: 18, widthMm: 9, notes: "Spall at the load zone." },
+      finding: {
+        component: "cup",
+        row: "outboard",
+        damageCode: "fatigue.subsurface",
+        severity: 3,
+        clockDeg: 350,
+        arcDeg: 30,
+        zone: "raceway",
+        lengthMm: 18,
+        widthMm: 9,
+        notes: "Spall at the load zone.",
+      },
     });
     expect(f.status).toBe(201);
     version = f.body.version;
-    const td = await analyst.json<CaseBody>("PATCH", `/api/cases/${id}`, { version, section: "teardown", data: { lubricant: { conditions: ["normal"] }, dispositions: { cup: "scrap" }, teardownNotes: "Outboard cup raceway spalled at 12 o'clock." } });
+    const td = await analyst.json<CaseBody>("PATCH", `/api/cases/${id}`, {
+      version,
+      section: "teardown",
+      data: {
+        lubricant: { conditions: ["normal"] },
+        dispositions: { cup: "scrap" },
+        teardownNotes: "Outboard cup raceway spalled at 12 o'clock.",
+      },
+    });
     expect(td.status).toBe(200);
     version = td.body.case.version;
-    const v = await analyst.json<CaseBody>("PATCH", `/api/cases/${id}`, { version, section: "verdict", data: { primaryCause: "end-of-life", contributingCauses: [], confidence: "confirmed", removalConfirmed: "confirmed", correctiveAction: "None; normal life." } });
+    const v = await analyst.json<CaseBody>("PATCH", `/api/cases/${id}`, {
+      version,
+      section: "verdict",
+      data: {
+        primaryCause: "end-of-life",
+        contributingCauses: [],
+        confidence: "confirmed",
+        removalConfirmed: "confirmed",
+        correctiveAction: "None; normal life.",
+      },
+    });
     expect(v.status).toBe(200);
     version = v.body.case.version;
     const p = await analyst.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version, action: "propose" });
@@ -73,17 +107,25 @@ describe("case life", () => {
     const analyst = await as("analyst");
     expect((await signVerdict(analyst, id)).status).toBe(403);
     // never on one click: the plain step is refused and points to the signature step
-    const oneClick = await (await as("engineer")).json<{ error: string }>("POST", `/api/cases/${id}/transitions`, { version, action: "sign" });
+    const oneClick = await (
+      await as("engineer")
+    ).json<{ error: string }>("POST", `/api/cases/${id}/transitions`, { version, action: "sign" });
     expect(oneClick.status).toBe(400);
     expect(oneClick.body.error).toMatch(/asks for your password/);
     const engineer = await as("engineer");
     const noReason = await engineer.json("POST", `/api/cases/${id}/transitions`, { version, action: "return" });
     expect(noReason.status).toBe(400);
-    const ret = await engineer.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version, action: "return", reason: "Photograph the cone raceways too, please." });
+    const ret = await engineer.json<CaseBody>("POST", `/api/cases/${id}/transitions`, {
+      version,
+      action: "return",
+      reason: "Photograph the cone raceways too, please.",
+    });
     expect(ret.status).toBe(200);
     expect(ret.body.case.status).toBe("bench");
     version = ret.body.case.version;
-    const mail = await waitForMail((m) => m.subject.includes(number) && m.to.includes(demoUser("analyst").email) && m.text.includes("Photograph the cone raceways"));
+    const mail = await waitForMail(
+      (m) => m.subject.includes(number) && m.to.includes(demoUser("analyst").email) && m.text.includes("Photograph the cone raceways"),
+    );
     expect(mail.to).toContain(demoUser("inspector").email);
   });
 
@@ -99,24 +141,45 @@ describe("case life", () => {
     await waitForMail((m) => m.subject.includes(number) && /signed/i.test(m.subject) && m.to.includes(demoUser("analyst").email));
 
     const admin = await as("admin");
-    const edit = await admin.json<{ error: string }>("PATCH", `/api/cases/${id}`, { version, section: "verdict", data: { correctiveAction: "changed" } });
+    const edit = await admin.json<{ error: string }>("PATCH", `/api/cases/${id}`, {
+      version,
+      section: "verdict",
+      data: { correctiveAction: "changed" },
+    });
     expect(edit.status).toBe(409);
     expect(edit.body.error).toMatch(/signed and read-only/);
     const [row] = await db.select().from(t.cases).where(eq(t.cases.id, id));
     expect(row.correctiveAction).toBe("None; normal life.");
 
     expect((await engineer.json("POST", `/api/cases/${id}/transitions`, { version, action: "reopen" })).status).toBe(400);
-    const re = await engineer.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version, action: "reopen", reason: "Maker asked for a second look at the cone." });
+    const re = await engineer.json<CaseBody>("POST", `/api/cases/${id}/transitions`, {
+      version,
+      action: "reopen",
+      reason: "Maker asked for a second look at the cone.",
+    });
     expect(re.status).toBe(200);
     expect(re.body.case.status).toBe("bench");
   });
 
   test("the history lists every step with who and what changed", async () => {
     const manager = await as("manager");
-    const h = await manager.json<{ events: { action: string; userName: string; reason: string | null; changes: { field: string; from: unknown; to: unknown }[] }[] }>("GET", `/api/cases/${id}/history`);
+    const h = await manager.json<{
+      events: { action: string; userName: string; reason: string | null; changes: { field: string; from: unknown; to: unknown }[] }[];
+    }>("GET", `/api/cases/${id}/history`);
     expect(h.status).toBe(200);
     const actions = h.body.events.map((e) => e.action).reverse();
-    expect(actions).toEqual(["created", "receive", "finding-added", "teardown-saved", "verdict-saved", "propose", "return", "propose", "sign", "reopen"]);
+    expect(actions).toEqual([
+      "created",
+      "receive",
+      "finding-added",
+      "teardown-saved",
+      "verdict-saved",
+      "propose",
+      "return",
+      "propose",
+      "sign",
+      "reopen",
+    ]);
     const reopen = h.body.events[0];
     expect(reopen.userName).toBe(demoUser("engineer").name);
     expect(reopen.reason).toMatch(/second look/);
@@ -126,7 +189,13 @@ describe("case life", () => {
 
   test("anonymous callers get 401 on every case route", async () => {
     const anon = new ApiClient();
-    for (const [m, p] of [["GET", `/api/cases/${id}`], ["PATCH", `/api/cases/${id}`], ["POST", `/api/cases/${id}/transitions`], ["GET", `/api/cases/${id}/history`], ["POST", "/api/cases"]]) {
+    for (const [m, p] of [
+      ["GET", `/api/cases/${id}`],
+      ["PATCH", `/api/cases/${id}`],
+      ["POST", `/api/cases/${id}/transitions`],
+      ["GET", `/api/cases/${id}/history`],
+      ["POST", "/api/cases"],
+    ]) {
       expect((await anon.request(m, p, m === "GET" ? undefined : {})).status, `${m} ${p}`).toBe(401);
     }
   });

@@ -18,10 +18,20 @@ beforeAll(async () => {
 
 afterAll(() => stack.stop(), 60_000);
 
-const invite = (email: string) => admin.json<{ invitation?: { id: string }; error?: string }>("POST", "/api/admin/invitations", { name: "Ines Varga", email, role: "inspector" });
+const invite = (email: string) =>
+  admin.json<{ invitation?: { id: string }; error?: string }>("POST", "/api/admin/invitations", {
+    name: "Ines Varga",
+    email,
+    role: "inspector",
+  });
 const deliveredTo = async (email: string) => (await stack.mailMessages()).filter((m) => m.to.includes(email));
 const outboxRow = async (email: string) =>
-  (await stack.query<{ status: string; attempts: number; last_error: string | null }>("select status, attempts, last_error from mail_outbox where $1 = any(\"to\")", [email]))[0];
+  (
+    await stack.query<{ status: string; attempts: number; last_error: string | null }>(
+      'select status, attempts, last_error from mail_outbox where $1 = any("to")',
+      [email],
+    )
+  )[0];
 
 describe.skipIf(!servicesRunning)("mail server down", () => {
   it("delivers while it runs; killed, the action still succeeds and the mail goes out once it is back", async () => {

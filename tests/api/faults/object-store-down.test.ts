@@ -17,7 +17,11 @@ beforeAll(async () => {
   if (!servicesRunning) return;
   await stack.start(1);
   inspector = await stack.client("inspector");
-  const filed = await inspector.json<{ case: { id: string } }>("POST", "/api/cases", await fieldReport({ siteId: await stack.siteId("MJC") }));
+  const filed = await inspector.json<{ case: { id: string } }>(
+    "POST",
+    "/api/cases",
+    await fieldReport({ siteId: await stack.siteId("MJC") }),
+  );
   caseId = filed.body.case.id;
 }, 240_000);
 
@@ -25,7 +29,9 @@ afterAll(() => stack.stop(), 60_000);
 
 const caseState = async () => ({
   photos: (await stack.query("select id from photos where case_id = $1", [caseId])).length,
-  events: (await stack.query<{ action: string }>("select action from case_events where case_id = $1 order by at", [caseId])).map((e) => e.action),
+  events: (await stack.query<{ action: string }>("select action from case_events where case_id = $1 order by at", [caseId])).map(
+    (e) => e.action,
+  ),
   version: (await stack.query<{ version: number }>("select version from cases where id = $1", [caseId]))[0].version,
 });
 
@@ -69,7 +75,11 @@ describe.skipIf(!servicesRunning)("object store stuck or down under the running 
     // Back on the same port: the same server stores the photo without a restart.
     expect(stack.appAlive()).toBe(true);
     let again: Awaited<ReturnType<typeof upload>> | undefined;
-    await waitUntil("the upload was accepted again", async () => (again = await upload(inspector, caseId, await twoToneJpeg({ seed: 42 }), "down.jpg")).status === 201, 30);
+    await waitUntil(
+      "the upload was accepted again",
+      async () => (again = await upload(inspector, caseId, await twoToneJpeg({ seed: 42 }), "down.jpg")).status === 201,
+      30,
+    );
     const keys = await stack.listKeys(`cases/${caseId}/${again!.body.photo!.sha256}/`);
     expect(keys.map((k) => k.split("/").pop())).toEqual(["original", "screen.webp", "thumb.webp"]);
     expect((await caseState()).photos).toBe(before.photos + 1);

@@ -52,7 +52,10 @@ describe.skipIf(!servicesRunning)("a page that fails while rendering", () => {
     expect(stack.appAlive()).toBe(true);
   }, 60_000);
 
-  for (const [name, viewport] of [["desk", DESK], ["phone", PHONE]] as const) {
+  for (const [name, viewport] of [
+    ["desk", DESK],
+    ["phone", PHONE],
+  ] as const) {
     it(`shows our own page with a way back on a ${name}, and the case again after "Try again"`, async () => {
       const page = await ui.signIn("manager", viewport, { baseURL: stack.appUrl() });
       await withCasesLocked(async () => {

@@ -34,7 +34,11 @@ beforeAll(async () => {
 afterAll(() => stack.stop(), 60_000);
 
 async function fileCase() {
-  const filed = await inspector.json<{ case: { id: string } }>("POST", "/api/cases", await fieldReport({ siteId: await stack.siteId("MJC") }));
+  const filed = await inspector.json<{ case: { id: string } }>(
+    "POST",
+    "/api/cases",
+    await fieldReport({ siteId: await stack.siteId("MJC") }),
+  );
   expect(filed.status).toBe(201);
   return filed.body.case.id;
 }
@@ -54,13 +58,20 @@ const waitingOnLock = async () =>
 /** Sends the first part of a multipart upload and keeps the rest back, as a slow phone link would. */
 function startSlowUpload(caseId: string, file: Buffer, sentBytes: number): Promise<void> {
   const boundary = "----tearline-slow-upload";
-  const head = Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="slow.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`);
+  const head = Buffer.from(
+    `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="slow.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`,
+  );
   const tail = Buffer.from(`\r\n--${boundary}--\r\n`);
   const url = new URL(`${stack.appUrl()}/api/cases/${caseId}/photos`);
   return new Promise((resolve) => {
     const req = http.request(url, {
       method: "POST",
-      headers: { origin: stack.appUrl(), cookie: inspector.cookie, "content-type": `multipart/form-data; boundary=${boundary}`, "content-length": head.length + file.length + tail.length },
+      headers: {
+        origin: stack.appUrl(),
+        cookie: inspector.cookie,
+        "content-type": `multipart/form-data; boundary=${boundary}`,
+        "content-length": head.length + file.length + tail.length,
+      },
     });
     req.on("error", () => resolve()); // the server goes away mid-body
     req.on("response", () => resolve());
@@ -69,10 +80,15 @@ function startSlowUpload(caseId: string, file: Buffer, sentBytes: number): Promi
   });
 }
 
-const photoRows = async (caseId: string) => stack.query<{ sha256: string; original_key: string }>("select sha256, original_key from photos where case_id = $1", [caseId]);
+const photoRows = async (caseId: string) =>
+  stack.query<{ sha256: string; original_key: string }>("select sha256, original_key from photos where case_id = $1", [caseId]);
 
 async function sweep() {
-  const { stdout } = await run(path.join(PROJECT, "node_modules/.bin/tsx"), ["--conditions=react-server", "scripts/sweep-photos.ts", "--older-than=0"], { cwd: PROJECT, env: stack.env() });
+  const { stdout } = await run(
+    path.join(PROJECT, "node_modules/.bin/tsx"),
+    ["--conditions=react-server", "scripts/sweep-photos.ts", "--older-than=0"],
+    { cwd: PROJECT, env: stack.env() },
+  );
   return stdout;
 }
 
@@ -108,7 +124,9 @@ describe.skipIf(!servicesRunning)("app server killed mid-action", () => {
       // The dead server's transaction is rolled back by PostgreSQL: no row, no history line, version unchanged.
       await waitUntil("the dead server's transaction ended", async () => !(await waitingOnLock()), 30);
       expect(await photoRows(caseId)).toEqual([]);
-      expect((await stack.query<{ action: string }>("select action from case_events where case_id = $1", [caseId])).map((e) => e.action)).toEqual(["created"]);
+      expect(
+        (await stack.query<{ action: string }>("select action from case_events where case_id = $1", [caseId])).map((e) => e.action),
+      ).toEqual(["created"]);
       expect(await stack.listKeys(folder)).toHaveLength(3);
 
       expect(await sweep()).toMatch(/removed 3 objects/);
@@ -138,7 +156,10 @@ describe.skipIf(!servicesRunning)("app server killed mid-action", () => {
       await lock.release();
     }
     await waitUntil("the dead server's transaction ended", async () => !(await waitingOnLock()), 30);
-    const [half] = await stack.query<{ status: string; signed_by: string | null; version: number }>("select status, signed_by, version from cases where id = $1", [id]);
+    const [half] = await stack.query<{ status: string; signed_by: string | null; version: number }>(
+      "select status, signed_by, version from cases where id = $1",
+      [id],
+    );
     expect(half).toEqual({ status: "signoff", signed_by: null, version });
     expect(await stack.query("select 1 from case_events where case_id = $1 and action = 'sign'", [id])).toEqual([]);
 

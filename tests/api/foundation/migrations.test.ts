@@ -17,7 +17,22 @@ const name = `tl_migrate_${randomBytes(6).toString("hex")}`;
 let fresh: Pool;
 
 // The tables Tearline cannot work without, named here so a schema file dropped by mistake is noticed.
-const CORE_TABLES = ["user", "session", "account", "verification", "sites", "invitations", "code_entries", "cases", "case_counters", "findings", "case_events", "case_links", "photos", "mail_outbox"];
+const CORE_TABLES = [
+  "user",
+  "session",
+  "account",
+  "verification",
+  "sites",
+  "invitations",
+  "code_entries",
+  "cases",
+  "case_counters",
+  "findings",
+  "case_events",
+  "case_links",
+  "photos",
+  "mail_outbox",
+];
 
 beforeAll(async () => {
   await pool.query(`CREATE DATABASE ${name}`);
@@ -56,7 +71,9 @@ describe("migrations on an empty database", () => {
   });
 
   it("create every table the schema declares, the core ones included", async () => {
-    const { rows } = await fresh.query<{ table_name: string }>(`select table_name from information_schema.tables where table_schema = 'public'`);
+    const { rows } = await fresh.query<{ table_name: string }>(
+      `select table_name from information_schema.tables where table_schema = 'public'`,
+    );
     const present = new Set(rows.map((r) => r.table_name));
     const declared = (Object.values(schema) as unknown[])
       .filter((v): v is PgTable => is(v, PgTableClass))
@@ -66,7 +83,9 @@ describe("migrations on an empty database", () => {
   });
 
   it("create each declared column", async () => {
-    const { rows } = await fresh.query<{ table_name: string; column_name: string }>(`select table_name, column_name from information_schema.columns where table_schema = 'public'`);
+    const { rows } = await fresh.query<{ table_name: string; column_name: string }>(
+      `select table_name, column_name from information_schema.columns where table_schema = 'public'`,
+    );
     const present = new Set(rows.map((r) => `${r.table_name}.${r.column_name}`));
     const missing = (Object.values(schema) as unknown[])
       .filter((v): v is PgTable => is(v, PgTableClass))

@@ -32,7 +32,15 @@ describe("object store", () => {
     const sent = randomBytes(1024 * 1024 + 17);
     const k = key("stream");
     const chunks = Array.from({ length: Math.ceil(sent.length / 65536) }, (_, i) => sent.subarray(i * 65536, (i + 1) * 65536));
-    await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: k, Body: Readable.from(chunks), ContentLength: sent.length, ContentType: "image/jpeg" }));
+    await s3().send(
+      new PutObjectCommand({
+        Bucket: bucket(),
+        Key: k,
+        Body: Readable.from(chunks),
+        ContentLength: sent.length,
+        ContentType: "image/jpeg",
+      }),
+    );
     const head = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: k }));
     expect(head.ContentLength).toBe(sent.length);
     expect(head.ContentType).toBe("image/jpeg");

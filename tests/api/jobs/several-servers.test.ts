@@ -44,11 +44,31 @@ describe("several app servers", () => {
     const stamp = `two-servers-${Date.now()}`;
     const rows = await db
       .insert(t.mailOutbox)
-      .values(Array.from({ length: 12 }, (_, i) => ({ kind: "test", to: [`reader${i}@sable-river.example`], subject: `${stamp} #${i}`, html: "<p>x</p>", text: "x" })))
+      .values(
+        Array.from({ length: 12 }, (_, i) => ({
+          kind: "test",
+          to: [`reader${i}@sable-river.example`],
+          subject: `${stamp} #${i}`,
+          html: "<p>x</p>",
+          text: "x",
+        })),
+      )
       .returning({ id: t.mailOutbox.id });
     const boss = await getBoss();
     await Promise.all(Array.from({ length: 6 }, () => boss.send(QUEUES.mailSend, {})));
-    await until(async () => (await db.select().from(t.mailOutbox).where(inArray(t.mailOutbox.id, rows.map((r) => r.id)))).every((r) => r.status === "sent"));
+    await until(async () =>
+      (
+        await db
+          .select()
+          .from(t.mailOutbox)
+          .where(
+            inArray(
+              t.mailOutbox.id,
+              rows.map((r) => r.id),
+            ),
+          )
+      ).every((r) => r.status === "sent"),
+    );
     await new Promise((r) => setTimeout(r, 2000));
     const received = (await mailbox()).filter((m) => m.subject.startsWith(stamp));
     expect(received).toHaveLength(12);

@@ -23,7 +23,9 @@ describe("invitation e-mail", () => {
     const session = await client.json("GET", "/api/auth/get-session");
     expect((session.body as { user?: { email?: string; role?: string } }).user).toMatchObject({ email: invite.email, role: "analyst" });
     // The link works once.
-    expect((await new ApiClient().post("/api/invitations/accept", { token: invite.token, password: "another-long-password" })).status).toBe(410);
+    expect((await new ApiClient().post("/api/invitations/accept", { token: invite.token, password: "another-long-password" })).status).toBe(
+      410,
+    );
     expect(await (await new ApiClient().get(new URL(invite.link).pathname)).text()).toContain("Invitation not valid");
   });
 });

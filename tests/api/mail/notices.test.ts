@@ -21,12 +21,18 @@ async function outboxRow(id: string | null) {
 describe("PATCH /api/me/notices", () => {
   it("switches the caller's own notices and refuses unknown ones", async () => {
     const person = await invitedPerson("engineer", "Oskar Brandt");
-    const changed = await person.client.json<{ notices: { kind: string; on: boolean }[] }>("PATCH", "/api/me/notices", { "signoff-requested": false });
+    const changed = await person.client.json<{ notices: { kind: string; on: boolean }[] }>("PATCH", "/api/me/notices", {
+      "signoff-requested": false,
+    });
     expect(changed.status).toBe(200);
     expect(changed.body.notices.find((n) => n.kind === "signoff-requested")?.on).toBe(false);
     expect(changed.body.notices.find((n) => n.kind === "digest")?.on).toBe(true);
     const read = await person.client.json<{ notices: { kind: string; on: boolean }[] }>("GET", "/api/me/notices");
-    expect(read.body.notices.map((n) => [n.kind, n.on])).toEqual([["signoff-requested", false], ["case-reopened", true], ["digest", true]]);
+    expect(read.body.notices.map((n) => [n.kind, n.on])).toEqual([
+      ["signoff-requested", false],
+      ["case-reopened", true],
+      ["digest", true],
+    ]);
 
     expect((await person.client.patch("/api/me/notices", { "no-such-notice": false })).status).toBe(400);
     expect((await person.client.patch("/api/me/notices", { digest: "off" })).status).toBe(400);
@@ -65,7 +71,15 @@ describe("verdict signed, returned and reopened", () => {
     const analyst = await recipient("analyst");
     const inspector = await recipient("inspector", { "verdict-signed": false });
     const engineer = await recipient("engineer");
-    const c = await createCase({ status: "signed", primaryCause: "seal", confidence: "probable", proposedBy: analyst.id, createdBy: inspector.id, signedBy: engineer.id, signedAt: new Date() });
+    const c = await createCase({
+      status: "signed",
+      primaryCause: "seal",
+      confidence: "probable",
+      proposedBy: analyst.id,
+      createdBy: inspector.id,
+      signedBy: engineer.id,
+      signedAt: new Date(),
+    });
     const signer = { id: engineer.id, name: "Test engineer" };
 
     const signed = await outboxRow(await notifyVerdictSigned(c, signer));

@@ -15,7 +15,8 @@ export async function recipient(role: string, noticePrefs: Record<string, boolea
   return { id, email, name: `Test ${role}` };
 }
 
-export const mailTo = (email: string, subject?: string) => (m: FakeMail) => m.to.includes(email) && (!subject || m.subject.includes(subject));
+export const mailTo = (email: string, subject?: string) => (m: FakeMail) =>
+  m.to.includes(email) && (!subject || m.subject.includes(subject));
 
 /** An admin invites; returns the invitation e-mail as the fake received it, and its link. */
 export async function inviteByMail(role: string, name: string) {

@@ -7,7 +7,10 @@ import { mailbox, refuseMail, waitForMail } from "../../support/mail";
 import { mailTo, uniqueEmail } from "./people";
 
 async function rowFor(email: string) {
-  const [row] = await db.select().from(t.mailOutbox).where(sql`${email} = any(${t.mailOutbox.to})`);
+  const [row] = await db
+    .select()
+    .from(t.mailOutbox)
+    .where(sql`${email} = any(${t.mailOutbox.to})`);
   return row;
 }
 
@@ -32,7 +35,10 @@ describe("when the mail server refuses", () => {
     expect(res.status).toBe(201);
     expect(Date.now() - started).toBeLessThan(5_000);
 
-    const failed = await until(() => rowFor(email), (r) => Boolean(r?.lastError));
+    const failed = await until(
+      () => rowFor(email),
+      (r) => Boolean(r?.lastError),
+    );
     expect(failed.status).toBe("pending");
     expect(failed.attempts).toBeGreaterThanOrEqual(1);
     expect(failed.lastError).toMatch(/451|refus/i);
@@ -48,7 +54,11 @@ describe("when the mail server refuses", () => {
     await refuseMail(false);
     const mail = await waitForMail(mailTo(email, "You are invited to Tearline"), 20_000);
     expect(mail.to).toEqual([email]);
-    const sent = await until(() => rowFor(email), (r) => r?.status === "sent", 5_000);
+    const sent = await until(
+      () => rowFor(email),
+      (r) => r?.status === "sent",
+      5_000,
+    );
     expect(sent.status).toBe("sent");
     expect(sent.sentAt).not.toBeNull();
   });
@@ -58,9 +68,15 @@ describe("when the mail server refuses", () => {
     await refuseMail(true);
     const email = uniqueEmail("retry-now");
     expect((await admin.post("/api/admin/invitations", { email, name: "Noor Haddad", role: "analyst" })).status).toBe(201);
-    await until(() => rowFor(email), (r) => Boolean(r?.lastError));
+    await until(
+      () => rowFor(email),
+      (r) => Boolean(r?.lastError),
+    );
     // Push the next attempt far out, so only "Retry now" can send it during this test.
-    await db.update(t.mailOutbox).set({ nextAttemptAt: new Date(Date.now() + 3_600_000) }).where(eq(t.mailOutbox.id, (await rowFor(email)).id));
+    await db
+      .update(t.mailOutbox)
+      .set({ nextAttemptAt: new Date(Date.now() + 3_600_000) })
+      .where(eq(t.mailOutbox.id, (await rowFor(email)).id));
     await refuseMail(false);
 
     expect((await (await as("engineer")).post("/api/admin/outbox/retry")).status).toBe(403);
@@ -68,7 +84,15 @@ describe("when the mail server refuses", () => {
     expect(retried.status).toBe(200);
     expect(typeof retried.body.sent).toBe("number");
     // Sent by this call (or by the timer, which the call made it due for): without it, an hour's wait.
-    expect((await until(() => rowFor(email), (r) => r?.status === "sent", 5_000)).status).toBe("sent");
+    expect(
+      (
+        await until(
+          () => rowFor(email),
+          (r) => r?.status === "sent",
+          5_000,
+        )
+      ).status,
+    ).toBe("sent");
     await waitForMail(mailTo(email, "You are invited to Tearline"));
   });
 });

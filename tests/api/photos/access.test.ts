@@ -47,7 +47,11 @@ describe("tags after upload", () => {
   it("change a photo's tags and link it to a finding of its case", async () => {
     const { caseRow, photo } = await casePhoto();
     const [finding] = await db.select().from(t.findings).where(eq(t.findings.caseId, caseRow.id));
-    const res = await analyst.json<{ photo: { component: string; clockDeg: number; findingId: string } }>("PATCH", `/api/photos/${photo.id}`, { component: "cup", clockDeg: 180, findingId: finding.id, caption: "6 o'clock spall" });
+    const res = await analyst.json<{ photo: { component: string; clockDeg: number; findingId: string } }>(
+      "PATCH",
+      `/api/photos/${photo.id}`,
+      { component: "cup", clockDeg: 180, findingId: finding.id, caption: "6 o'clock spall" },
+    );
     expect(res.status).toBe(200);
     expect(res.body.photo).toMatchObject({ component: "cup", clockDeg: 180, findingId: finding.id });
   });
@@ -84,7 +88,9 @@ describe("deleting photos", () => {
     const before = await footprint(caseRow.id);
     const res = await analyst.json<{ error: string }>("DELETE", `/api/photos/${photo.id}`);
     expect(res.status).toBe(409);
-    expect(res.body.error).toBe("This case is signed and read-only, so its photos cannot be added, changed or deleted. An engineer can reopen it with a reason.");
+    expect(res.body.error).toBe(
+      "This case is signed and read-only, so its photos cannot be added, changed or deleted. An engineer can reopen it with a reason.",
+    );
     expect(await footprint(caseRow.id)).toEqual(before);
   });
 

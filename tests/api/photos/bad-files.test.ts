@@ -34,7 +34,14 @@ describe("bad files are refused and leave nothing behind", () => {
   });
 
   it("text renamed .jpg → 415", async () => {
-    await expectRefused(analyst, caseId, textAsJpeg(), "raceway.jpg", 415, /is not a photo: its content is plain text, whatever its name says/);
+    await expectRefused(
+      analyst,
+      caseId,
+      textAsJpeg(),
+      "raceway.jpg",
+      415,
+      /is not a photo: its content is plain text, whatever its name says/,
+    );
   });
 
   it("an SVG drawing → 415", async () => {
@@ -51,7 +58,14 @@ describe("bad files are refused and leave nothing behind", () => {
   });
 
   it("an HEIC the server cannot decode → 415 that says how to send JPEG", async () => {
-    await expectRefused(analyst, caseId, heicHeaderOnly(), "IMG_4410.HEIC", 415, /HEIC photo that this server cannot decode.*Most Compatible/);
+    await expectRefused(
+      analyst,
+      caseId,
+      heicHeaderOnly(),
+      "IMG_4410.HEIC",
+      415,
+      /HEIC photo that this server cannot decode.*Most Compatible/,
+    );
   });
 });
 

@@ -4,12 +4,25 @@ import type { ApiClient } from "../../support/api";
 import { listKeys } from "../../support/bucket";
 import { db, t } from "../../support/db";
 
-export async function upload(client: ApiClient, caseId: string, file: Buffer, name: string, tags: Record<string, string> = {}, type = "image/jpeg") {
+export async function upload(
+  client: ApiClient,
+  caseId: string,
+  file: Buffer,
+  name: string,
+  tags: Record<string, string> = {},
+  type = "image/jpeg",
+) {
   const form = new FormData();
   form.set("file", new Blob([new Uint8Array(file)], { type }), name);
   for (const [k, v] of Object.entries(tags)) form.set(k, v);
   const res = await client.request("POST", `/api/cases/${caseId}/photos`, form);
-  const body = (await res.json()) as { photo?: { id: string; sha256: string; takenAt: string | null; width: number; height: number; urls: Record<string, string> }; duplicate?: boolean; message?: string; error?: string; code?: string };
+  const body = (await res.json()) as {
+    photo?: { id: string; sha256: string; takenAt: string | null; width: number; height: number; urls: Record<string, string> };
+    duplicate?: boolean;
+    message?: string;
+    error?: string;
+    code?: string;
+  };
   return { status: res.status, body };
 }
 

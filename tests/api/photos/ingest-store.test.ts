@@ -15,7 +15,14 @@ import { createCase, userId } from "../../support/factories";
 import { twoToneJpeg } from "../../support/photo-files";
 import { footprint } from "./helpers";
 
-const input = async (caseId: string, seed: number) => ({ caseId, file: await twoToneJpeg({ seed }), fileName: "x.jpg", tags: {}, uploadedBy: await userId("analyst"), limits: photoLimits() });
+const input = async (caseId: string, seed: number) => ({
+  caseId,
+  file: await twoToneJpeg({ seed }),
+  fileName: "x.jpg",
+  tags: {},
+  uploadedBy: await userId("analyst"),
+  limits: photoLimits(),
+});
 
 describe("ingest against the real bucket and database", () => {
   it("removes the stored objects when the row is refused (the case was signed meanwhile)", async () => {
@@ -27,7 +34,8 @@ describe("ingest against the real bucket and database", () => {
   it("removes the original when a derivative cannot be stored, and writes no row", async () => {
     const c = await createCase({ status: "bench" });
     const failingThumb: PhotoObjectStore = {
-      put: (key, body, type) => (key.endsWith("thumb.webp") ? Promise.reject(new Error("bucket refused the thumbnail")) : s3PhotoStore.put(key, body, type)),
+      put: (key, body, type) =>
+        key.endsWith("thumb.webp") ? Promise.reject(new Error("bucket refused the thumbnail")) : s3PhotoStore.put(key, body, type),
       remove: s3PhotoStore.remove,
     };
     await expect(ingestPhoto(await input(c.id, 62), { store: failingThumb, rows: photoRows })).rejects.toThrow(/bucket refused/);
@@ -37,7 +45,10 @@ describe("ingest against the real bucket and database", () => {
   it("stores two concurrent uploads of the same file once", async () => {
     const c = await createCase({ status: "bench" });
     const same = await input(c.id, 63);
-    const [a, b] = await Promise.all([ingestPhoto(same, { store: s3PhotoStore, rows: photoRows }), ingestPhoto(same, { store: s3PhotoStore, rows: photoRows })]);
+    const [a, b] = await Promise.all([
+      ingestPhoto(same, { store: s3PhotoStore, rows: photoRows }),
+      ingestPhoto(same, { store: s3PhotoStore, rows: photoRows }),
+    ]);
     expect([a.duplicate, b.duplicate].sort()).toEqual([false, true]);
     expect(a.photo.id).toBe(b.photo.id);
     expect(await footprint(c.id)).toMatchObject({ rows: 1 });

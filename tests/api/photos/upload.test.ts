@@ -25,14 +25,26 @@ describe("uploading a phone photo", () => {
     const c = await createCase({ status: "bench" });
     const file = await twoToneJpeg({ width: 400, height: 200, orientation: 6, gps: true, takenAt: "2026:03:14 09:26:53", seed: 11 });
     const sha = createHash("sha256").update(file).digest("hex");
-    const { status, body } = await upload(analyst, c.id, file, "IMG_2201.JPG", { component: "cup", row: "inboard", clockDeg: "90", caption: "Spall, load zone" });
+    const { status, body } = await upload(analyst, c.id, file, "IMG_2201.JPG", {
+      component: "cup",
+      row: "inboard",
+      clockDeg: "90",
+      caption: "Spall, load zone",
+    });
     expect(status).toBe(201);
     expect(body.photo!.sha256).toBe(sha);
     expect(body.photo!.takenAt).toBe("2026-03-14T09:26:53.000Z");
     expect([body.photo!.width, body.photo!.height]).toEqual([200, 400]);
 
     const [row] = await db.select().from(t.photos).where(eq(t.photos.id, body.photo!.id));
-    expect(row).toMatchObject({ component: "cup", row: "inboard", clockDeg: 90, caption: "Spall, load zone", bytes: file.length, contentType: "image/jpeg" });
+    expect(row).toMatchObject({
+      component: "cup",
+      row: "inboard",
+      clockDeg: 90,
+      caption: "Spall, load zone",
+      bytes: file.length,
+      contentType: "image/jpeg",
+    });
 
     // The bucket, read through the SDK, holds exactly the bytes that were sent.
     const stored = await readObject(row.originalKey);
@@ -97,8 +109,14 @@ describe("uploading a phone photo", () => {
 
   it("lists a case's photos with their tags, and records uploads in the history", async () => {
     const c = await createCase({ status: "bench" });
-    await upload(analyst, c.id, await twoToneJpeg({ seed: 14 }), "roller-end.jpg", { component: "rollers-outboard", caption: "Roller end scoring" });
-    const res = await analyst.json<{ photos: Array<{ component: string; row: string; caption: string; urls: Record<string, string> }> }>("GET", `/api/cases/${c.id}/photos`);
+    await upload(analyst, c.id, await twoToneJpeg({ seed: 14 }), "roller-end.jpg", {
+      component: "rollers-outboard",
+      caption: "Roller end scoring",
+    });
+    const res = await analyst.json<{ photos: Array<{ component: string; row: string; caption: string; urls: Record<string, string> }> }>(
+      "GET",
+      `/api/cases/${c.id}/photos`,
+    );
     expect(res.status).toBe(200);
     expect(res.body.photos).toHaveLength(1);
     expect(res.body.photos[0]).toMatchObject({ component: "rollers-outboard", row: "outboard", caption: "Roller end scoring" });
@@ -108,7 +126,9 @@ describe("uploading a phone photo", () => {
 
   it("lets an inspector add photos to a case of their own shop", async () => {
     const c = await createCase({ status: "field" });
-    const res = await upload(await as("inspector"), c.id, await twoToneJpeg({ seed: 15 }), "from-the-shop.jpg", { component: "seal-outboard" });
+    const res = await upload(await as("inspector"), c.id, await twoToneJpeg({ seed: 15 }), "from-the-shop.jpg", {
+      component: "seal-outboard",
+    });
     expect(res.status).toBe(201);
   });
 });

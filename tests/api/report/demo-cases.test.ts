@@ -11,7 +11,11 @@ describe("reports of the demo casebook", () => {
     for (const status of ["field", "bench", "signoff", "signed"] as const) {
       // The demo seed's case with the most findings in this stage (test factories use TST serials).
       const [c] = await db
-        .select({ id: t.cases.id, number: t.cases.number, n: sql<number>`(select count(*) from findings f where f.case_id = cases.id)::int`.as("n") })
+        .select({
+          id: t.cases.id,
+          number: t.cases.number,
+          n: sql<number>`(select count(*) from findings f where f.case_id = cases.id)::int`.as("n"),
+        })
         .from(t.cases)
         .where(sql`${eq(t.cases.status, status)} and ${t.cases.serial} not like 'TST%'`)
         .orderBy(sql`n desc`, t.cases.number)

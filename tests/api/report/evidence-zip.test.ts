@@ -59,7 +59,11 @@ describe("GET /api/cases/:id/evidence.zip", () => {
     expect((await (await as("inspector")).get(`/api/cases/${cases.signed.id}/evidence.zip`)).status).toBe(403);
     const draft = await (await as("manager")).get(`/api/cases/${cases.draft.id}/evidence.zip`);
     expect(draft.status).toBe(200);
-    expect(Buffer.from(await draft.arrayBuffer()).subarray(0, 2).toString()).toBe("PK");
+    expect(
+      Buffer.from(await draft.arrayBuffer())
+        .subarray(0, 2)
+        .toString(),
+    ).toBe("PK");
   });
 
   it("refuses with a clear message, before any download starts, when an original is missing from storage", async () => {

@@ -17,38 +17,91 @@ const FIELD_CHECKS = {
     },
     procedure: { turnedBy: "hand", oneDirection: true, judgedBy: "feel" },
   },
-  endPlay: { method: "dial", unit: "in", trials: [{ zero: "0.000", reading: "0.020" }, { zero: "0.000", reading: "0.021" }, { zero: "0.000", reading: "0.019" }] },
+  endPlay: {
+    method: "dial",
+    unit: "in",
+    trials: [
+      { zero: "0.000", reading: "0.020" },
+      { zero: "0.000", reading: "0.021" },
+      { zero: "0.000", reading: "0.019" },
+    ],
+  },
   visual: [],
   confirmations: { ppe: true, blueSignal: true, wheelsetSecured: true, cooled: true },
 };
 
-export async function addPhoto(caseId: string, p: { component: string; findingId?: string; fileName: string; rgb: [number, number, number] }) {
+export async function addPhoto(
+  caseId: string,
+  p: { component: string; findingId?: string; fileName: string; rgb: [number, number, number] },
+) {
   const [r, g, b] = p.rgb;
-  const original = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r, g, b } } }).jpeg({ quality: 90 }).toBuffer();
+  const original = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r, g, b } } })
+    .jpeg({ quality: 90 })
+    .toBuffer();
   const digest = sha256(original);
   const folder = `cases/${caseId}/${digest}/`;
   await putObject(`${folder}original`, original, "image/jpeg");
   await putObject(`${folder}screen.webp`, await sharp(original).webp().toBuffer(), "image/webp");
   await putObject(`${folder}thumb.webp`, await sharp(original).resize(320).webp().toBuffer(), "image/webp");
   await db.insert(t.photos).values({
-    id: randomUUID(), caseId, component: p.component, findingId: p.findingId ?? null, caption: "", sha256: digest, contentType: "image/jpeg",
-    bytes: original.length, width: 640, height: 480, originalKey: `${folder}original`, screenKey: `${folder}screen.webp`, thumbKey: `${folder}thumb.webp`, fileName: p.fileName,
+    id: randomUUID(),
+    caseId,
+    component: p.component,
+    findingId: p.findingId ?? null,
+    caption: "",
+    sha256: digest,
+    contentType: "image/jpeg",
+    bytes: original.length,
+    width: 640,
+    height: 480,
+    originalKey: `${folder}original`,
+    screenKey: `${folder}screen.webp`,
+    thumbKey: `${folder}thumb.webp`,
+    fileName: p.fileName,
   });
   return { original, digest };
 }
 
 export async function reportCases() {
   const [engineer, analyst] = [await userId("engineer"), await userId("analyst")];
-  const verdict = { primaryCause: "water-ingress", contributingCauses: ["seal"], confidence: "confirmed" as const, removalConfirmed: "confirmed" as const, proposedBy: analyst, proposedAt: new Date("2026-06-20T10:00:00Z"), correctiveAction: "Check seal seating on the wheel line." };
+  const verdict = {
+    primaryCause: "water-ingress",
+    contributingCauses: ["seal"],
+    confidence: "confirmed" as const,
+    removalConfirmed: "confirmed" as const,
+    proposedBy: analyst,
+    proposedAt: new Date("2026-06-20T10:00:00Z"),
+    correctiveAction: "Check seal seating on the wheel line.",
+  };
   const related = await createCase({ status: "signed", primaryCause: "water-ingress" });
   const signed = await createCase({
-    status: "signed", fieldChecks: FIELD_CHECKS, fieldCall: "remove", ...verdict, signedBy: engineer, signedAt: new Date("2026-06-22T09:30:00Z"),
+    status: "signed",
+    fieldChecks: FIELD_CHECKS,
+    fieldCall: "remove",
+    ...verdict,
+    signedBy: engineer,
+    signedAt: new Date("2026-06-22T09:30:00Z"),
     findings: [
-      { component: "cup", row: "inboard", damageCode: "corrosion.moisture", severity: 3, clockDeg: 0, arcDeg: 40, zone: "raceway", lengthMm: 22, widthMm: 9, notes: "Etch at roller spacing." },
+      {
+        component: "cup",
+        row: "inboard",
+        damageCode: "corrosion.moisture",
+        severity: 3,
+        clockDeg: 0,
+        arcDeg: 40,
+        zone: "raceway",
+        lengthMm: 22,
+        widthMm: 9,
+        notes: "Etch at roller spacing.",
+      },
       { component: "seal-inboard", damageCode: "seal.damaged", severity: 3, notes: "Lip torn." },
     ],
   });
-  const draft = await createCase({ status: "bench", fieldChecks: FIELD_CHECKS, findings: [{ component: "cone-outboard", damageCode: "fatigue.surface", severity: 2, clockDeg: 90 }] });
+  const draft = await createCase({
+    status: "bench",
+    fieldChecks: FIELD_CHECKS,
+    findings: [{ component: "cone-outboard", damageCode: "fatigue.surface", severity: 2, clockDeg: 90 }],
+  });
   const found = await db.select().from(t.findings).where(eq(t.findings.caseId, signed.id));
   const cupFinding = found.find((f) => f.component === "cup")!;
   const photos = [

@@ -28,7 +28,16 @@ describe("GET /api/cases/:id/report.pdf", () => {
     const text = pages.join("\n");
     expect(text).toContain("TEARLINE CASE REPORT");
     expect(text).toContain(cases.signed.number);
-    for (const section of ["Bearing and removal", "Field checks", "Teardown", "Findings by part", "Damage map", "Verdict", "Related cases", "Photo register"]) {
+    for (const section of [
+      "Bearing and removal",
+      "Field checks",
+      "Teardown",
+      "Findings by part",
+      "Damage map",
+      "Verdict",
+      "Related cases",
+      "Photo register",
+    ]) {
       expect(text).toContain(section);
     }
     expect(text).toContain("Signed revision — signed by Tomasz Wielgus on 22 Jun 2026, 09:30 UTC");

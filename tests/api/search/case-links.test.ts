@@ -25,9 +25,15 @@ describe("related cases", () => {
     expect(res.body.links.map((l) => l.id)).toEqual([b.id]);
     const fromB = await engineer.json<Links>("GET", `/api/cases/${b.id}/links`);
     expect(fromB.body.links.map((l) => [l.id, l.note])).toEqual([[a.id, "Same lot of cups"]]);
-    const rows = await db.select().from(t.caseLinks).where(inArray(t.caseLinks.caseId, [a.id, b.id]));
+    const rows = await db
+      .select()
+      .from(t.caseLinks)
+      .where(inArray(t.caseLinks.caseId, [a.id, b.id]));
     expect(rows).toHaveLength(2);
-    const events = await db.select().from(t.caseEvents).where(and(inArray(t.caseEvents.caseId, [a.id, b.id]), eq(t.caseEvents.action, "linked")));
+    const events = await db
+      .select()
+      .from(t.caseEvents)
+      .where(and(inArray(t.caseEvents.caseId, [a.id, b.id]), eq(t.caseEvents.action, "linked")));
     expect(events).toHaveLength(2);
   });
 

@@ -30,7 +30,14 @@ export async function people() {
 
 export type SearchBody = {
   total: number;
-  hits: { id: string; caseNumber: string; snippets: { field: string; segments: { text: string; hit: boolean }[] }[]; findings: { code: string; matched: boolean }[]; serial: { text: string; hit: boolean }[]; car: { text: string; hit: boolean }[] }[];
+  hits: {
+    id: string;
+    caseNumber: string;
+    snippets: { field: string; segments: { text: string; hit: boolean }[] }[];
+    findings: { code: string; matched: boolean }[];
+    serial: { text: string; hit: boolean }[];
+    car: { text: string; hit: boolean }[];
+  }[];
   facets: Record<string, { value: string; count: number; selected: boolean }[]>;
   understood: { text: string; corrections: string[]; codes: { code: string }[] }[];
 };

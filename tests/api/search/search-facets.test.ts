@@ -17,11 +17,54 @@ const set = (...names: string[]) => new Set(names.map((n) => book[n].id));
 beforeAll(async () => {
   const p = await people();
   // Invented cases; trigger, site, class, stage, severity and dates chosen so each filter picks a known subset.
-  book.hotMjc = await caseWith(marker, { notes: "Alarm.", trigger: "wayside-hot", siteId: p.mjc, bearingClass: "F", status: "signed", primaryCause: "water-ingress", removedOn: "2025-03-10", findings: [{ component: "cup", damageCode: "corrosion.moisture", severity: 3 }] });
-  book.hotPyc = await caseWith(marker, { notes: "Alarm.", trigger: "wayside-hot", siteId: p.pyc, createdBy: p.analyst, bearingClass: "G", status: "bench", removedOn: "2025-07-01", findings: [{ component: "cone-inboard", damageCode: "fatigue.subsurface", severity: 4 }] });
-  book.rollMjc = await caseWith(marker, { notes: "Rough.", trigger: "hand-roll", siteId: p.mjc, bearingClass: "F", status: "bench", removedOn: "2025-11-20", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 2 }] });
-  book.rollPyc = await caseWith(marker, { notes: "Rough.", trigger: "hand-roll", siteId: p.pyc, createdBy: p.analyst, bearingClass: "K", status: "signed", primaryCause: "end-of-life", removedOn: "2026-01-15", findings: [{ component: "rollers-outboard", damageCode: "fatigue.surface", severity: 1 }] });
-  book.sealMjc = await caseWith(marker, { notes: "Purged.", trigger: "seal-grease", siteId: p.mjc, bearingClass: "F", status: "field", removedOn: "2026-02-02" });
+  book.hotMjc = await caseWith(marker, {
+    notes: "Alarm.",
+    trigger: "wayside-hot",
+    siteId: p.mjc,
+    bearingClass: "F",
+    status: "signed",
+    primaryCause: "water-ingress",
+    removedOn: "2025-03-10",
+    findings: [{ component: "cup", damageCode: "corrosion.moisture", severity: 3 }],
+  });
+  book.hotPyc = await caseWith(marker, {
+    notes: "Alarm.",
+    trigger: "wayside-hot",
+    siteId: p.pyc,
+    createdBy: p.analyst,
+    bearingClass: "G",
+    status: "bench",
+    removedOn: "2025-07-01",
+    findings: [{ component: "cone-inboard", damageCode: "fatigue.subsurface", severity: 4 }],
+  });
+  book.rollMjc = await caseWith(marker, {
+    notes: "Rough.",
+    trigger: "hand-roll",
+    siteId: p.mjc,
+    bearingClass: "F",
+    status: "bench",
+    removedOn: "2025-11-20",
+    findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 2 }],
+  });
+  book.rollPyc = await caseWith(marker, {
+    notes: "Rough.",
+    trigger: "hand-roll",
+    siteId: p.pyc,
+    createdBy: p.analyst,
+    bearingClass: "K",
+    status: "signed",
+    primaryCause: "end-of-life",
+    removedOn: "2026-01-15",
+    findings: [{ component: "rollers-outboard", damageCode: "fatigue.surface", severity: 1 }],
+  });
+  book.sealMjc = await caseWith(marker, {
+    notes: "Purged.",
+    trigger: "seal-grease",
+    siteId: p.mjc,
+    bearingClass: "F",
+    status: "field",
+    removedOn: "2026-02-02",
+  });
 });
 
 describe("search facets", () => {

@@ -24,7 +24,9 @@ function fileTriggers(): Map<string, string> {
 
 describe("the search index file", () => {
   test("every search function in the database has the body the file gives, and the file names them all", async () => {
-    const { rows } = await db.execute<{ name: string; body: string }>(sql`select proname as name, prosrc as body from pg_proc where proname like 'tl\\_%search%' and pronamespace = 'public'::regnamespace`);
+    const { rows } = await db.execute<{ name: string; body: string }>(
+      sql`select proname as name, prosrc as body from pg_proc where proname like 'tl\\_%search%' and pronamespace = 'public'::regnamespace`,
+    );
     const inFile = fileFunctions();
     expect([...inFile.keys()].sort()).toEqual(rows.map((r) => r.name).sort());
     for (const r of rows) expect(squash(inFile.get(r.name)!), r.name).toBe(squash(r.body));
@@ -41,7 +43,9 @@ describe("the search index file", () => {
   });
 
   test("the pending queue exists as the file creates it", async () => {
-    const { rows } = await db.execute<{ column_name: string; data_type: string }>(sql`select column_name, data_type from information_schema.columns where table_name = 'search_pending' order by ordinal_position`);
+    const { rows } = await db.execute<{ column_name: string; data_type: string }>(
+      sql`select column_name, data_type from information_schema.columns where table_name = 'search_pending' order by ordinal_position`,
+    );
     expect(rows.map((r) => `${r.column_name} ${r.data_type}`)).toEqual(["txid bigint", "ids ARRAY"]);
     expect(FILE).toContain("CREATE UNLOGGED TABLE IF NOT EXISTS search_pending (txid bigint NOT NULL, ids uuid[] NOT NULL);");
   });

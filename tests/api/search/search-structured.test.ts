@@ -8,7 +8,13 @@ const hitIds = (b: { hits: { id: string }[] }) => b.hits.map((h) => h.id);
 
 const marker = markerWord();
 type Case = { id: string };
-let cupOutboard: Case, cupInboardSaysOutboard: Case, coneOutboard: Case, waterCupOutboard: Case, textOnly: Case, raceway: Case, acoustic: Case;
+let cupOutboard: Case,
+  cupInboardSaysOutboard: Case,
+  coneOutboard: Case,
+  waterCupOutboard: Case,
+  textOnly: Case,
+  raceway: Case,
+  acoustic: Case;
 
 type Reading = Omit<SearchBody, "understood"> & { understood: { text: string; reading: string; role: string; without: string }[] };
 const search = async (q: string) => {
@@ -20,13 +26,33 @@ const search = async (q: string) => {
 
 beforeAll(async () => {
   // Invented cases: the notes of the first never name the part, row or damage.
-  cupOutboard = await caseWith(marker, { notes: "Metal gone in the load zone.", bearingClass: "K", findings: [{ component: "cup", row: "outboard", zone: "raceway", damageCode: "fatigue.subsurface", severity: 4 }] });
-  cupInboardSaysOutboard = await caseWith(marker, { notes: "Spalled cup, found at the outboard end of the car.", findings: [{ component: "cup", row: "inboard", damageCode: "fatigue.subsurface", severity: 3 }] });
-  coneOutboard = await caseWith(marker, { notes: "Flaked.", findings: [{ component: "cone-outboard", damageCode: "fatigue.subsurface", severity: 3 }] });
-  waterCupOutboard = await caseWith(marker, { notes: "Stained.", findings: [{ component: "cup", row: "outboard", damageCode: "corrosion.moisture", severity: 2 }] });
+  cupOutboard = await caseWith(marker, {
+    notes: "Metal gone in the load zone.",
+    bearingClass: "K",
+    findings: [{ component: "cup", row: "outboard", zone: "raceway", damageCode: "fatigue.subsurface", severity: 4 }],
+  });
+  cupInboardSaysOutboard = await caseWith(marker, {
+    notes: "Spalled cup, found at the outboard end of the car.",
+    findings: [{ component: "cup", row: "inboard", damageCode: "fatigue.subsurface", severity: 3 }],
+  });
+  coneOutboard = await caseWith(marker, {
+    notes: "Flaked.",
+    findings: [{ component: "cone-outboard", damageCode: "fatigue.subsurface", severity: 3 }],
+  });
+  waterCupOutboard = await caseWith(marker, {
+    notes: "Stained.",
+    findings: [{ component: "cup", row: "outboard", damageCode: "corrosion.moisture", severity: 2 }],
+  });
   textOnly = await caseWith(marker, { notes: "Spall on the cup outboard row, not yet coded." });
-  raceway = await caseWith(marker, { notes: "Marks.", findings: [{ component: "cone-inboard", zone: "rib", damageCode: "wear.adhesive", severity: 2 }] });
-  acoustic = await caseWith(marker, { notes: "Noise.", trigger: "wayside-acoustic", findings: [{ component: "rollers-inboard", damageCode: "none", severity: 0 }] });
+  raceway = await caseWith(marker, {
+    notes: "Marks.",
+    findings: [{ component: "cone-inboard", zone: "rib", damageCode: "wear.adhesive", severity: 2 }],
+  });
+  acoustic = await caseWith(marker, {
+    notes: "Noise.",
+    trigger: "wayside-acoustic",
+    findings: [{ component: "rollers-inboard", damageCode: "none", severity: 0 }],
+  });
 });
 
 describe("search that knows parts and rows", () => {
@@ -57,11 +83,15 @@ describe("search that knows parts and rows", () => {
   it("says how the words were read and offers each part to drop", async () => {
     const body = await search("spall cup outboard row");
     expect(body.understood.slice(0, 3).map((u) => [u.reading, u.role])).toEqual([
-      ["subsurface spall", "damage"], ["cup", "part"], ["outboard row", "row"],
+      ["subsurface spall", "damage"],
+      ["cup", "part"],
+      ["outboard row", "row"],
     ]);
     expect(body.understood[2].without).toBe(`spall cup ${marker}`);
     // dropping the row: every cup spall again, recorded on either row
-    const wider = await as("engineer").then((e) => e.json<Reading>("GET", `/api/search?q=${encodeURIComponent(body.understood[2].without)}`));
+    const wider = await as("engineer").then((e) =>
+      e.json<Reading>("GET", `/api/search?q=${encodeURIComponent(body.understood[2].without)}`),
+    );
     expect(hitIds(wider.body)).toEqual(expect.arrayContaining([cupOutboard.id, cupInboardSaysOutboard.id]));
   });
 

@@ -20,13 +20,29 @@ const search = async (query: string) => {
 
 beforeAll(async () => {
   spalledText = await caseWith(marker, { notes: "Deep spalling in the load zone of the cup outboard raceway." });
-  spallCoded = await caseWith(marker, { notes: "Metal gone from the raceway.", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 4 }] });
-  waterCoded = await caseWith(marker, { notes: "Dark marks at roller spacing.", findings: [{ component: "cup", damageCode: "corrosion.moisture", severity: 3 }] });
+  spallCoded = await caseWith(marker, {
+    notes: "Metal gone from the raceway.",
+    findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 4 }],
+  });
+  waterCoded = await caseWith(marker, {
+    notes: "Dark marks at roller spacing.",
+    findings: [{ component: "cup", damageCode: "corrosion.moisture", severity: 3 }],
+  });
   rustText = await caseWith(marker, { notes: "Rust on the cone bore after the yard flooded." });
-  unrelated = await caseWith(marker, { notes: "Grey bands across the raceway.", findings: [{ component: "rollers-inboard", damageCode: "electrical.fluting", severity: 3 }] });
-  serialCase = await caseWith(marker, { notes: "Checked in.", serial: `ZX${marker.slice(2, 6).toUpperCase()}7731`, carMark: "QZRX", carNumber: "551208" });
+  unrelated = await caseWith(marker, {
+    notes: "Grey bands across the raceway.",
+    findings: [{ component: "rollers-inboard", damageCode: "electrical.fluting", severity: 3 }],
+  });
+  serialCase = await caseWith(marker, {
+    notes: "Checked in.",
+    serial: `ZX${marker.slice(2, 6).toUpperCase()}7731`,
+    carMark: "QZRX",
+    carNumber: "551208",
+  });
   // An admin adds a code with its own shop word after the fact.
-  await db.insert(t.codeEntries).values({ list: "damage", code: extraCode, label: "Zebra banding", synonyms: [`${marker}band`], sortOrder: 999 });
+  await db
+    .insert(t.codeEntries)
+    .values({ list: "damage", code: extraCode, label: "Zebra banding", synonyms: [`${marker}band`], sortOrder: 999 });
 });
 
 afterAll(async () => {

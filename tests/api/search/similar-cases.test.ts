@@ -18,26 +18,69 @@ const water = [
 beforeAll(async () => {
   const p = await people();
   const base = { siteId: p.mjc, bearingClass: "F", trigger: "wayside-hot", primaryCause: "water-ingress" };
-  book.twin = await caseWith(marker, { ...base, removedOn: "1986-03-01", notes: "Seal lip torn, grease milky with water. Cup etched at roller spacing.", findings: water });
-  book.waterOnCone = await caseWith(marker, {
-    ...base, bearingClass: "G", trigger: "hand-roll", removedOn: "1986-04-01", notes: "Outboard cone stained, grease emulsified.",
-    findings: [{ component: "cone-outboard", damageCode: "corrosion.moisture", severity: 3 }, { component: "lubricant", damageCode: "lubricant.water", severity: 2 }],
+  book.twin = await caseWith(marker, {
+    ...base,
+    removedOn: "1986-03-01",
+    notes: "Seal lip torn, grease milky with water. Cup etched at roller spacing.",
+    findings: water,
   });
-  book.cupOnly = await caseWith(marker, { ...base, primaryCause: null, trigger: "scheduled", bearingClass: "K", removedOn: "1986-05-01", notes: "Stain on the cup.", findings: [water[0]] });
+  book.waterOnCone = await caseWith(marker, {
+    ...base,
+    bearingClass: "G",
+    trigger: "hand-roll",
+    removedOn: "1986-04-01",
+    notes: "Outboard cone stained, grease emulsified.",
+    findings: [
+      { component: "cone-outboard", damageCode: "corrosion.moisture", severity: 3 },
+      { component: "lubricant", damageCode: "lubricant.water", severity: 2 },
+    ],
+  });
+  book.cupOnly = await caseWith(marker, {
+    ...base,
+    primaryCause: null,
+    trigger: "scheduled",
+    bearingClass: "K",
+    removedOn: "1986-05-01",
+    notes: "Stain on the cup.",
+    findings: [water[0]],
+  });
   // Another shop's twin: as close as the first, but an inspector at Marrow Junction may not see it.
-  book.otherShopTwin = await caseWith(marker, { ...base, siteId: p.pyc, createdBy: p.analyst, removedOn: "1986-06-01", notes: "Seal lip torn, grease milky with water. Cup etched at roller spacing.", findings: water });
+  book.otherShopTwin = await caseWith(marker, {
+    ...base,
+    siteId: p.pyc,
+    createdBy: p.analyst,
+    removedOn: "1986-06-01",
+    notes: "Seal lip torn, grease milky with water. Cup etched at roller spacing.",
+    findings: water,
+  });
   for (const [i, code] of ["electrical.fluting", "electrical.arc", "deformation.handling"].entries()) {
     book[`unrelated${i}`] = await caseWith(marker, {
-      siteId: p.mjc, bearingClass: "E", trigger: "welding", primaryCause: "electrical", removedOn: "1986-07-01", notes: "Grey bands across the raceway.",
+      siteId: p.mjc,
+      bearingClass: "E",
+      trigger: "welding",
+      primaryCause: "electrical",
+      removedOn: "1986-07-01",
+      notes: "Grey bands across the raceway.",
       findings: [{ component: "rollers-inboard", damageCode: code, severity: 3 }],
     });
   }
-  book.target = await caseWith(marker, { ...base, removedOn: "1987-01-10", notes: "Milky grease behind the inboard seal. Water etch on the cup at roller spacing; seal lip torn.", findings: water });
+  book.target = await caseWith(marker, {
+    ...base,
+    removedOn: "1987-01-10",
+    notes: "Milky grease behind the inboard seal. Water etch on the cup at roller spacing; seal lip torn.",
+    findings: water,
+  });
   // A later case is never an "earlier" neighbour, however alike.
-  book.later = await caseWith(marker, { ...base, removedOn: "1987-06-01", notes: "Milky grease behind the inboard seal.", findings: water });
+  book.later = await caseWith(marker, {
+    ...base,
+    removedOn: "1987-06-01",
+    notes: "Milky grease behind the inboard seal.",
+    findings: water,
+  });
 });
 
-const similarFor = async (key: string, role: Parameters<typeof as>[0] = "engineer") => (await as(role)).json<{ similar: Similar[] }>("GET", `/api/cases/${key}/similar`);
+const similarFor = async (key: string, role: Parameters<typeof as>[0] = "engineer") =>
+  (await as(role)).json<{ similar: Similar[] }>("GET", `/api/cases/${key}/similar`);
 
 describe("similar earlier cases", () => {
   it("puts the known nearest neighbour first and leaves unrelated cases out of the ten", async () => {
@@ -60,7 +103,9 @@ describe("similar earlier cases", () => {
     for (let i = 1; i < list.length; i++) expect(list[i - 1].score).toBeGreaterThanOrEqual(list[i].score);
     const twin = list.find((s) => s.id === book.twin.id)!;
     expect(twin.score).toBeGreaterThan(0.8);
-    expect(twin.reasons.map((r) => r.kind)).toEqual(expect.arrayContaining(["same-finding", "same-cause", "same-trigger", "same-bearing-class", "shared-words"]));
+    expect(twin.reasons.map((r) => r.kind)).toEqual(
+      expect.arrayContaining(["same-finding", "same-cause", "same-trigger", "same-bearing-class", "shared-words"]),
+    );
     expect(twin.reasons.find((r) => r.kind === "same-finding")!.text).toMatch(/on the cup in both/);
     const sum = twin.reasons.reduce((s, r) => s + r.weight, 0);
     expect(twin.score).toBeCloseTo(Math.min(1, sum), 9);

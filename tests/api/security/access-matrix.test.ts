@@ -14,7 +14,17 @@ import { createCase, siteId } from "../../support/factories";
 import { pdfPages } from "../../support/pdf-text";
 import { smallPng } from "../../support/photo-files";
 import { pagePatterns, routeKeys } from "../auth/route-files";
-import { NO_ID, PAGE_RULES, REACH_PERMISSIONS, ROUTE_RULES, ROUTE_TABLE, SAMPLE_PARAMS, type Gate, type MatrixProbe, type ProbeCase } from "../auth/route-table";
+import {
+  NO_ID,
+  PAGE_RULES,
+  REACH_PERMISSIONS,
+  ROUTE_RULES,
+  ROUTE_TABLE,
+  SAMPLE_PARAMS,
+  type Gate,
+  type MatrixProbe,
+  type ProbeCase,
+} from "../auth/route-table";
 
 type Who = DemoRole | "anonymous" | "inspector.pellham";
 type Caller = { who: Who; client: ApiClient; viewer: { id: string; role: Role; siteId: string | null } | null };
@@ -33,10 +43,19 @@ async function viewerOf(email: string) {
 /** A field-stage case at `site`, with a finding, a photo and links to `linkTo`, built through the API where the app writes history. */
 async function seedCase(site: string, by: DemoRole | "inspector.pellham", linkTo: { id: string }[] = []) {
   const creator = by === "inspector.pellham" ? await viewerOf("inspector.pellham@sable-river.example") : await viewerOf(demoUser(by).email);
-  const row = await createCase({ siteId: await siteId(site), createdBy: creator.id, status: "field", findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 3 }] });
+  const row = await createCase({
+    siteId: await siteId(site),
+    createdBy: creator.id,
+    status: "field",
+    findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity: 3 }],
+  });
   const admin = await as("admin");
   const form = new FormData();
-  form.set("file", new Blob([new Uint8Array(await smallPng(row.number.length + Math.floor(Math.random() * 200)))], { type: "image/png" }), "matrix.png");
+  form.set(
+    "file",
+    new Blob([new Uint8Array(await smallPng(row.number.length + Math.floor(Math.random() * 200)))], { type: "image/png" }),
+    "matrix.png",
+  );
   const up = await admin.request("POST", `/api/cases/${row.id}/photos`, form);
   if (up.status !== 201) throw new Error(`photo upload for the matrix failed: ${up.status} ${await up.text()}`);
   const engineer = await as("engineer");
@@ -54,13 +73,44 @@ async function moveTo(row: { id: string }, stage: Stage) {
   const stageValues: Record<Stage, Partial<typeof t.cases.$inferInsert>> = {
     field: {},
     bench: { receivedAt: new Date(), receivedBy: analystId },
-    signoff: { receivedAt: new Date(), receivedBy: analystId, proposedAt: new Date(), proposedBy: analystId, primaryCause: "water-ingress", confidence: "probable", removalConfirmed: "confirmed" },
-    signed: { receivedAt: new Date(), receivedBy: analystId, proposedAt: new Date(), proposedBy: analystId, primaryCause: "water-ingress", confidence: "probable", removalConfirmed: "confirmed", signedAt: new Date(), signedBy: engineerId },
+    signoff: {
+      receivedAt: new Date(),
+      receivedBy: analystId,
+      proposedAt: new Date(),
+      proposedBy: analystId,
+      primaryCause: "water-ingress",
+      confidence: "probable",
+      removalConfirmed: "confirmed",
+    },
+    signed: {
+      receivedAt: new Date(),
+      receivedBy: analystId,
+      proposedAt: new Date(),
+      proposedBy: analystId,
+      primaryCause: "water-ingress",
+      confidence: "probable",
+      removalConfirmed: "confirmed",
+      signedAt: new Date(),
+      signedBy: engineerId,
+    },
   };
-  const [moved] = await db.update(t.cases).set({ status: stage, ...stageValues[stage] }).where(eq(t.cases.id, row.id)).returning();
+  const [moved] = await db
+    .update(t.cases)
+    .set({ status: stage, ...stageValues[stage] })
+    .where(eq(t.cases.id, row.id))
+    .returning();
   const [finding] = await db.select({ id: t.findings.id }).from(t.findings).where(eq(t.findings.caseId, row.id));
   const [photo] = await db.select({ id: t.photos.id }).from(t.photos).where(eq(t.photos.caseId, row.id));
-  return { id: moved.id, number: moved.number, version: moved.version, stage, findingId: finding.id, photoId: photo.id, siteId: moved.siteId, createdBy: moved.createdBy };
+  return {
+    id: moved.id,
+    number: moved.number,
+    version: moved.version,
+    stage,
+    findingId: finding.id,
+    photoId: photo.id,
+    siteId: moved.siteId,
+    createdBy: moved.createdBy,
+  };
 }
 
 beforeAll(async () => {
@@ -105,7 +155,15 @@ function hasGate(caller: Caller, gate: Gate): boolean {
 }
 
 /** What is wrong with an answer; null when it is the one the rules give. */
-function apiProblem(caller: Caller, gate: Gate, reachable: boolean, probe: MatrixProbe, stage: Stage | null, status: number, aimedAtNoId: boolean): string | null {
+function apiProblem(
+  caller: Caller,
+  gate: Gate,
+  reachable: boolean,
+  probe: MatrixProbe,
+  stage: Stage | null,
+  status: number,
+  aimedAtNoId: boolean,
+): string | null {
   if (status >= 500) return `server error ${status}`;
   if (gate === "public") return null; // who may call the auth library's own endpoints is role-guards.test.ts's job
   if (!caller.viewer) return status === 401 ? null : `anonymous got ${status}, expected 401`;
@@ -114,7 +172,10 @@ function apiProblem(caller: Caller, gate: Gate, reachable: boolean, probe: Matri
   const named = probe.anyOf ? `any of ${probe.anyOf.join(", ")}` : gate;
   // At a stage where nobody may do this (a signed case), "read-only" (409) is as true an answer as 403.
   const nobodyMay = Boolean(stage && probe.stageAllows && !probe.stageAllows(stage, "admin"));
-  if (!permitted) return status === 403 || (!reachable && status === 404) || (nobodyMay && status === 409) ? null : `lacks ${named} but got ${status}, expected 403`;
+  if (!permitted)
+    return status === 403 || (!reachable && status === 404) || (nobodyMay && status === 409)
+      ? null
+      : `lacks ${named} but got ${status}, expected 403`;
   if (!reachable) return status === 404 ? null : `may not read the case but got ${status}, expected 404`;
   if (probe.anyOf) return status === 401 || status === 403 || status === 404 ? `allowed (${named}) but got ${status}` : null;
   if (aimedAtNoId) return status === 401 || status === 403 ? `allowed (${named}) but refused with ${status}` : null;
@@ -140,14 +201,26 @@ function fill(route: string, c: ProbeCase | null): string {
 describe("access matrix: the rows", () => {
   it("has a rule for every route method and none for a route that is gone", () => {
     const keys = routeKeys();
-    expect(keys.filter((k) => !(k in ROUTE_RULES)), "routes without a rule in ROUTE_RULES").toEqual([]);
-    expect(Object.keys(ROUTE_RULES).filter((k) => !keys.includes(k)), "rules for routes that no longer exist").toEqual([]);
+    expect(
+      keys.filter((k) => !(k in ROUTE_RULES)),
+      "routes without a rule in ROUTE_RULES",
+    ).toEqual([]);
+    expect(
+      Object.keys(ROUTE_RULES).filter((k) => !keys.includes(k)),
+      "rules for routes that no longer exist",
+    ).toEqual([]);
   });
 
   it("has a rule for every page and none for a page that is gone", () => {
     const pages = pagePatterns();
-    expect(pages.filter((p) => !(p in PAGE_RULES)), "pages without a rule in PAGE_RULES").toEqual([]);
-    expect(Object.keys(PAGE_RULES).filter((p) => !pages.includes(p)), "rules for pages that no longer exist").toEqual([]);
+    expect(
+      pages.filter((p) => !(p in PAGE_RULES)),
+      "pages without a rule in PAGE_RULES",
+    ).toEqual([]);
+    expect(
+      Object.keys(PAGE_RULES).filter((p) => !pages.includes(p)),
+      "rules for pages that no longer exist",
+    ).toEqual([]);
   });
 
   it("names every permission of lib/auth/permissions.ts in some route or page rule", () => {
@@ -166,8 +239,11 @@ describe("access matrix: the rows", () => {
     for (const [key, rule] of Object.entries(ROUTE_RULES)) {
       const access = ROUTE_TABLE[key]?.access;
       if (!Array.isArray(access) || rule.gate === "public" || rule.gate === "signed-in" || rule.probes?.some((p) => p.permission)) continue;
-      const byPermission = (["inspector", "analyst", "engineer", "manager", "admin"] as Role[]).filter((r) => can(r, rule.gate as Permission));
-      if ([...access].sort().join() !== byPermission.sort().join()) drift.push(`${key}: table ${access.join("/")}, permissions ${byPermission.join("/")}`);
+      const byPermission = (["inspector", "analyst", "engineer", "manager", "admin"] as Role[]).filter((r) =>
+        can(r, rule.gate as Permission),
+      );
+      if ([...access].sort().join() !== byPermission.sort().join())
+        drift.push(`${key}: table ${access.join("/")}, permissions ${byPermission.join("/")}`);
     }
     expect(drift).toEqual([]);
   });
@@ -193,7 +269,7 @@ describe("access matrix: API routes", () => {
             for (const tp of tableProbes) {
               const path = tp.path ?? fill(route, aim) + (probe.query && aim ? probe.query(aim) : "");
               const sends = method !== "GET" && method !== "DELETE";
-              const body = probe.body && aim ? probe.body(aim) : tp.body ?? (sends ? {} : undefined);
+              const body = probe.body && aim ? probe.body(aim) : (tp.body ?? (sends ? {} : undefined));
               const res = await caller.client.request(method, path, body);
               const text = await bodyText(res);
               const where = `${method} ${path.replace(target?.id ?? "\u0000", `<${stage} case>`)}${probe.label ? ` (${probe.label})` : ""} as ${caller.who}`;
@@ -227,8 +303,16 @@ describe("access matrix: pages", () => {
           let wrong: string | null = null;
           if (res.status >= 500) wrong = `server error ${res.status}`;
           else if (rule.gate === "public" || rule.gate === "anonymous-only") wrong = null;
-          else if (!caller.viewer) wrong = res.status >= 300 && res.status < 400 && to.includes("/sign-in") ? null : `anonymous got ${res.status} ${to}, expected a redirect to sign-in`;
-          else if (!hasGate(caller, rule.gate)) wrong = res.status >= 300 && res.status < 400 && to.includes("/forbidden") ? null : `lacks ${rule.gate} but got ${res.status} ${to}, expected the refusal page`;
+          else if (!caller.viewer)
+            wrong =
+              res.status >= 300 && res.status < 400 && to.includes("/sign-in")
+                ? null
+                : `anonymous got ${res.status} ${to}, expected a redirect to sign-in`;
+          else if (!hasGate(caller, rule.gate))
+            wrong =
+              res.status >= 300 && res.status < 400 && to.includes("/forbidden")
+                ? null
+                : `lacks ${rule.gate} but got ${res.status} ${to}, expected the refusal page`;
           else if (!reachable) wrong = res.status === 404 ? null : `may not read ${target!.number} but got ${res.status}, expected 404`;
           else if (res.status !== 200) wrong = `allowed but got ${res.status} ${to}`;
           if (wrong) problems.push(`${where}: ${wrong}`);

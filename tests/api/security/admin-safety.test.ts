@@ -7,7 +7,10 @@ import { waitForMail } from "../../support/mail";
 import { freshPerson, roleOf, uniqueEmail } from "../admin/fresh-person";
 
 async function activeAdmins() {
-  const rows = await db.select({ id: t.user.id }).from(t.user).where(sql`${t.user.role} = 'admin' and coalesce(${t.user.banned}, false) = false`);
+  const rows = await db
+    .select({ id: t.user.id })
+    .from(t.user)
+    .where(sql`${t.user.role} = 'admin' and coalesce(${t.user.banned}, false) = false`);
   return rows.length;
 }
 
@@ -75,7 +78,12 @@ describe("one-time links", () => {
     expect(res.status).toBe(201);
     const delivered = await waitForMail((m) => m.to.includes(email));
     expect(delivered.text).toMatch(/\/invitation\/[A-Za-z0-9_-]{16,}/);
-    let row = (await db.select().from(t.mailOutbox).where(arrayContains(t.mailOutbox.to, [email])))[0];
+    let row = (
+      await db
+        .select()
+        .from(t.mailOutbox)
+        .where(arrayContains(t.mailOutbox.to, [email]))
+    )[0];
     for (let i = 0; i < 20 && row.status !== "sent"; i++) {
       await new Promise((r) => setTimeout(r, 250));
       row = (await db.select().from(t.mailOutbox).where(eq(t.mailOutbox.id, row.id)))[0];
@@ -92,8 +100,12 @@ describe("audit log", () => {
     await db.insert(t.auditLog).values({ kind: "sign-in", subject: "append-only-probe@sable-river.example" });
     // The plain driver, so the error text is the database's own and not the query echoed back.
     const probe = "append-only-probe@sable-river.example";
-    await expect(pool.query("update audit_log set kind = 'x' where subject = $1", [probe])).rejects.toThrow(/audit_log is append-only: UPDATE refused/);
-    await expect(pool.query("delete from audit_log where subject = $1", [probe])).rejects.toThrow(/audit_log is append-only: DELETE refused/);
+    await expect(pool.query("update audit_log set kind = 'x' where subject = $1", [probe])).rejects.toThrow(
+      /audit_log is append-only: UPDATE refused/,
+    );
+    await expect(pool.query("delete from audit_log where subject = $1", [probe])).rejects.toThrow(
+      /audit_log is append-only: DELETE refused/,
+    );
     await expect(pool.query("truncate audit_log")).rejects.toThrow(/audit_log is append-only: TRUNCATE refused/);
     expect((await pool.query("select count(*)::int as n from audit_log where subject = $1", [probe])).rows[0].n).toBe(1);
   });
@@ -103,16 +115,33 @@ describe("audit log", () => {
     const person = await freshPerson("inspector", "Gus Amari");
     expect((await admin.json("PATCH", `/api/admin/users/${person.id}`, { role: "analyst" })).status).toBe(200);
     expect((await (await as("analyst")).get("/api/cases/export")).status).toBe(200);
-    const byKind = await admin.json<{ entries: { kind: string; subject: string; actorEmail: string; detail: Record<string, unknown> }[] }>("GET", `/api/admin/audit?kind=role-change&person=${encodeURIComponent(person.email)}`);
+    const byKind = await admin.json<{ entries: { kind: string; subject: string; actorEmail: string; detail: Record<string, unknown> }[] }>(
+      "GET",
+      `/api/admin/audit?kind=role-change&person=${encodeURIComponent(person.email)}`,
+    );
     expect(byKind.status).toBe(200);
     expect(byKind.body.entries).toHaveLength(1);
-    expect(byKind.body.entries[0]).toMatchObject({ kind: "role-change", subject: person.email, actorEmail: demoUser("admin").email, detail: { from: "inspector", to: "analyst" } });
-    const exports = await admin.json<{ entries: { kind: string; actorEmail: string }[] }>("GET", `/api/admin/audit?kind=export&person=${encodeURIComponent(demoUser("analyst").email)}`);
+    expect(byKind.body.entries[0]).toMatchObject({
+      kind: "role-change",
+      subject: person.email,
+      actorEmail: demoUser("admin").email,
+      detail: { from: "inspector", to: "analyst" },
+    });
+    const exports = await admin.json<{ entries: { kind: string; actorEmail: string }[] }>(
+      "GET",
+      `/api/admin/audit?kind=export&person=${encodeURIComponent(demoUser("analyst").email)}`,
+    );
     expect(exports.body.entries.length).toBeGreaterThan(0);
     const today = new Date().toISOString().slice(0, 10);
-    const dated = await admin.json<{ entries: unknown[] }>("GET", `/api/admin/audit?from=${today}&to=${today}&person=${encodeURIComponent(person.email)}`);
+    const dated = await admin.json<{ entries: unknown[] }>(
+      "GET",
+      `/api/admin/audit?from=${today}&to=${today}&person=${encodeURIComponent(person.email)}`,
+    );
     expect(dated.body.entries.length).toBeGreaterThanOrEqual(2);
-    const before = await admin.json<{ entries: unknown[] }>("GET", `/api/admin/audit?to=2000-01-01&person=${encodeURIComponent(person.email)}`);
+    const before = await admin.json<{ entries: unknown[] }>(
+      "GET",
+      `/api/admin/audit?to=2000-01-01&person=${encodeURIComponent(person.email)}`,
+    );
     expect(before.body.entries).toHaveLength(0);
     expect((await admin.json("GET", "/api/admin/audit?kind=no-such-kind")).status).toBe(400);
     for (const role of ["inspector", "analyst", "engineer", "manager"] as const) {

@@ -10,7 +10,11 @@ import { smallPng } from "../../support/photo-files";
 import { caseAwaitingSignoff, fieldReport } from "../cases/fixtures";
 import { signVerdict } from "../../support/sign";
 
-type CaseBody = { case: { id: string; number: string; version: number; status: string; siteId: string | null }; error?: string; details?: { fields?: Record<string, string> } };
+type CaseBody = {
+  case: { id: string; number: string; version: number; status: string; siteId: string | null };
+  error?: string;
+  details?: { fields?: Record<string, string> };
+};
 type Answer = { error?: string; case?: CaseBody["case"]; photo?: { id: string } };
 const MISSING_SITE = "00000000-0000-4000-8000-000000000000";
 
@@ -26,7 +30,10 @@ async function upload(client: ApiClient, caseId: string, seed: number) {
 }
 
 async function events(caseId: string, action: string) {
-  return db.select().from(t.caseEvents).where(and(eq(t.caseEvents.caseId, caseId), eq(t.caseEvents.action, action)));
+  return db
+    .select()
+    .from(t.caseEvents)
+    .where(and(eq(t.caseEvents.caseId, caseId), eq(t.caseEvents.action, action)));
 }
 
 describe("evidence freeze", () => {
@@ -79,7 +86,10 @@ describe("evidence freeze", () => {
     expect(toSigned.body.error).toMatch(new RegExp(`${b.number} is signed`));
     const unlink = await engineer.json<Answer>("DELETE", `/api/cases/${a.id}/links?relatedId=${b.id}`);
     expect(unlink.status).toBe(409);
-    const still = await db.select().from(t.caseLinks).where(and(eq(t.caseLinks.caseId, a.id), eq(t.caseLinks.relatedId, b.id)));
+    const still = await db
+      .select()
+      .from(t.caseLinks)
+      .where(and(eq(t.caseLinks.caseId, a.id), eq(t.caseLinks.relatedId, b.id)));
     expect(still).toHaveLength(1);
     expect(await versionOf(c.id)).toBe(c.version);
   });
@@ -88,21 +98,32 @@ describe("evidence freeze", () => {
 describe("own shop on every field save", () => {
   const pellham = "inspector.pellham@sable-river.example";
   afterAll(async () => {
-    await db.update(t.user).set({ siteId: await siteId("PYC") }).where(eq(t.user.email, pellham));
+    await db
+      .update(t.user)
+      .set({ siteId: await siteId("PYC") })
+      .where(eq(t.user.email, pellham));
   });
 
   test("an inspector cannot move their case to another shop by saving the field section", async () => {
     const inspector = await as("inspector");
     const filed = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport());
     expect(filed.status).toBe(201);
-    const moved = await inspector.json<Answer>("PATCH", `/api/cases/${filed.body.case.id}`, { version: filed.body.case.version, section: "field", data: { siteId: await siteId("PYC") } });
+    const moved = await inspector.json<Answer>("PATCH", `/api/cases/${filed.body.case.id}`, {
+      version: filed.body.case.version,
+      section: "field",
+      data: { siteId: await siteId("PYC") },
+    });
     expect(moved.status).toBe(403);
     expect(moved.body.error).toMatch(/own shop/);
     const [row] = await db.select().from(t.cases).where(eq(t.cases.id, filed.body.case.id));
     expect(row.siteId).toBe(await siteId("MJC"));
     expect(row.version).toBe(filed.body.case.version);
     // Saving other fields of the same case at its own shop still works.
-    const ok = await inspector.json<Answer>("PATCH", `/api/cases/${filed.body.case.id}`, { version: row.version, section: "field", data: { siteId: row.siteId, fieldNotes: "Checked again." } });
+    const ok = await inspector.json<Answer>("PATCH", `/api/cases/${filed.body.case.id}`, {
+      version: row.version,
+      section: "field",
+      data: { siteId: row.siteId, fieldNotes: "Checked again." },
+    });
     expect(ok.status).toBe(200);
   });
 
@@ -133,12 +154,22 @@ describe("codes and sites are the ones on record", () => {
 
     const filed = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport());
     const id = filed.body.case.id;
-    const received = await analyst.json<CaseBody>("POST", `/api/cases/${id}/transitions`, { version: filed.body.case.version, action: "receive" });
+    const received = await analyst.json<CaseBody>("POST", `/api/cases/${id}/transitions`, {
+      version: filed.body.case.version,
+      action: "receive",
+    });
     const v = received.body.case.version;
-    const badCause = await analyst.json<Answer>("PATCH", `/api/cases/${id}`, { version: v, section: "verdict", data: { primaryCause: "gremlins" } });
+    const badCause = await analyst.json<Answer>("PATCH", `/api/cases/${id}`, {
+      version: v,
+      section: "verdict",
+      data: { primaryCause: "gremlins" },
+    });
     expect(badCause.status).toBe(400);
     expect(badCause.body.error).toMatch(/not in the list of root causes/);
-    const badDamage = await analyst.json<Answer>("POST", `/api/cases/${id}/findings`, { version: v, finding: { component: "cup", damageCode: "rust.imaginary", severity: 2 } });
+    const badDamage = await analyst.json<Answer>("POST", `/api/cases/${id}/findings`, {
+      version: v,
+      finding: { component: "cup", damageCode: "rust.imaginary", severity: 2 },
+    });
     expect(badDamage.status).toBe(400);
     expect(badDamage.body.error).toMatch(/not in the list of damage codes/);
     expect(await versionOf(id)).toBe(v);
@@ -151,12 +182,19 @@ describe("codes and sites are the ones on record", () => {
     const inspector = await as("inspector");
     const filed = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport({ trigger: code }));
     expect(filed.status).toBe(201);
-    await db.update(t.codeEntries).set({ retiredAt: new Date() }).where(and(eq(t.codeEntries.list, "trigger"), eq(t.codeEntries.code, code)));
+    await db
+      .update(t.codeEntries)
+      .set({ retiredAt: new Date() })
+      .where(and(eq(t.codeEntries.list, "trigger"), eq(t.codeEntries.code, code)));
 
     const fresh = await inspector.json<Answer>("POST", "/api/cases", await fieldReport({ trigger: code }));
     expect(fresh.status).toBe(400);
     expect(fresh.body.error).toMatch(/is retired/);
-    const kept = await inspector.json<Answer>("PATCH", `/api/cases/${filed.body.case.id}`, { version: filed.body.case.version, section: "field", data: { trigger: code, fieldNotes: "Noted after the code was retired." } });
+    const kept = await inspector.json<Answer>("PATCH", `/api/cases/${filed.body.case.id}`, {
+      version: filed.body.case.version,
+      section: "field",
+      data: { trigger: code, fieldNotes: "Noted after the code was retired." },
+    });
     expect(kept.status).toBe(200);
   });
 
@@ -171,7 +209,11 @@ describe("codes and sites are the ones on record", () => {
 
     const inspector = await as("inspector");
     const filed = await inspector.json<CaseBody>("POST", "/api/cases", await fieldReport());
-    const receive = await analyst.json<Answer>("POST", `/api/cases/${filed.body.case.id}/transitions`, { version: filed.body.case.version, action: "receive", labSiteId: MISSING_SITE });
+    const receive = await analyst.json<Answer>("POST", `/api/cases/${filed.body.case.id}/transitions`, {
+      version: filed.body.case.version,
+      action: "receive",
+      labSiteId: MISSING_SITE,
+    });
     expect(receive.status).toBe(400);
     expect(await versionOf(filed.body.case.id)).toBe(filed.body.case.version);
   });

@@ -34,13 +34,20 @@ describe("one read rule, two forms", () => {
 
     for (const [who, viewer] of await viewers()) {
       const bySql = new Set((await db.select({ id: t.cases.id }).from(t.cases).where(readableCases(viewer))).map((r) => r.id));
-      const byAlias = new Set(((await db.execute(sql`select id from cases "c" where ${readableIn(viewer, "c") ?? sql`true`}`)).rows as { id: string }[]).map((r) => r.id));
+      const byAlias = new Set(
+        ((await db.execute(sql`select id from cases "c" where ${readableIn(viewer, "c") ?? sql`true`}`)).rows as { id: string }[]).map(
+          (r) => r.id,
+        ),
+      );
       const byRule = new Set(all.filter((c) => canReadCase(viewer, c)).map((c) => c.id));
       expect([...bySql].sort(), who).toEqual([...byRule].sort());
       expect([...byAlias].sort(), who).toEqual([...byRule].sort());
       // The list's total: the same rule over the count cells' columns sums to the same cases.
       const cells = t.caseListCounts;
-      const [summed] = await db.select({ n: sql<number>`coalesce(sum(${cells.n}), 0)`.mapWith(Number) }).from(cells).where(readableCases(viewer, { createdBy: cells.createdBy, siteId: cells.siteId }));
+      const [summed] = await db
+        .select({ n: sql<number>`coalesce(sum(${cells.n}), 0)`.mapWith(Number) })
+        .from(cells)
+        .where(readableCases(viewer, { createdBy: cells.createdBy, siteId: cells.siteId }));
       expect(summed.n, who).toBe(byRule.size);
     }
   });

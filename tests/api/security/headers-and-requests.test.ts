@@ -47,7 +47,11 @@ describe("security headers", () => {
 describe("state-changing API requests", () => {
   it("are refused with 403 without our origin and with 415 without a JSON body type", async () => {
     const analyst = await as("analyst");
-    const noOrigin = await fetch(`${APP_URL}/api/cases`, { method: "POST", headers: { cookie: analyst.cookie, "content-type": "application/json" }, body: "{}" });
+    const noOrigin = await fetch(`${APP_URL}/api/cases`, {
+      method: "POST",
+      headers: { cookie: analyst.cookie, "content-type": "application/json" },
+      body: "{}",
+    });
     expect(noOrigin.status).toBe(403);
     expect(((await noOrigin.json()) as { error: string }).error).toMatch(/did not come from a Tearline page/);
     const evil = await analyst.request("POST", "/api/cases", {}, { origin: "https://evil.example" });
@@ -64,7 +68,10 @@ describe("body limits, counted as the body arrives", () => {
   it("refuses a chunked JSON body past 1 MB with 413 and a clear message", async () => {
     const analyst = await as("analyst");
     const init = chunked(1024 * 1024 + 128 * 1024, "application/json");
-    const res = await fetch(`${APP_URL}/api/cases`, { ...init, headers: { ...(init.headers as Record<string, string>), cookie: analyst.cookie } });
+    const res = await fetch(`${APP_URL}/api/cases`, {
+      ...init,
+      headers: { ...(init.headers as Record<string, string>), cookie: analyst.cookie },
+    });
     expect(res.status).toBe(413);
     expect(((await res.json()) as { error: string }).error).toMatch(/larger than 1 MB.*nothing was changed/);
   });
@@ -72,7 +79,10 @@ describe("body limits, counted as the body arrives", () => {
   it("refuses a chunked fleet CSV past 20 MB with 413", async () => {
     const engineer = await as("engineer");
     const init = chunked(20 * 1024 * 1024 + 256 * 1024, "text/csv");
-    const res = await fetch(`${APP_URL}/api/fleet`, { ...init, headers: { ...(init.headers as Record<string, string>), cookie: engineer.cookie } });
+    const res = await fetch(`${APP_URL}/api/fleet`, {
+      ...init,
+      headers: { ...(init.headers as Record<string, string>), cookie: engineer.cookie },
+    });
     expect(res.status).toBe(413);
     expect(((await res.json()) as { error: string }).error).toMatch(/fleet list is larger than 20 MB/);
   });
@@ -81,7 +91,10 @@ describe("body limits, counted as the body arrives", () => {
     const analyst = await as("analyst");
     const c = await createCase({});
     const init = chunked(25 * 1024 * 1024 + 256 * 1024, "multipart/form-data; boundary=x");
-    const res = await fetch(`${APP_URL}/api/cases/${c.id}/photos`, { ...init, headers: { ...(init.headers as Record<string, string>), cookie: analyst.cookie } });
+    const res = await fetch(`${APP_URL}/api/cases/${c.id}/photos`, {
+      ...init,
+      headers: { ...(init.headers as Record<string, string>), cookie: analyst.cookie },
+    });
     expect(res.status).toBe(413);
     expect(((await res.json()) as { error: string }).error).toMatch(/photo is larger than/i);
   });

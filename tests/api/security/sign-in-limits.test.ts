@@ -56,7 +56,10 @@ describe("sign-in limits", () => {
     expect(kinds).toEqual(expect.arrayContaining(["sign-in-failed", "account-locked", "account-unlocked", "sign-in"]));
     const failed = rows.filter((r) => r.kind === "sign-in-failed").map((r) => r.address);
     expect(failed).toEqual(expect.arrayContaining([loopback(203, 1), loopback(203, 5)]));
-    const unlock = await db.select().from(t.auditLog).where(and(eq(t.auditLog.subject, person.email), eq(t.auditLog.kind, "account-unlocked")));
+    const unlock = await db
+      .select()
+      .from(t.auditLog)
+      .where(and(eq(t.auditLog.subject, person.email), eq(t.auditLog.kind, "account-unlocked")));
     expect(unlock[0].actorEmail).toBe(demoUser("admin").email);
   });
 });

@@ -15,7 +15,9 @@ const rows = async <T = Row>(q: ReturnType<typeof sql>) => (await db.execute(q))
 
 let demo: Row[];
 beforeAll(async () => {
-  demo = await rows(sql`select c.*, s.code as site_code, l.code as lab_code from cases c join sites s on s.id = c.site_id left join sites l on l.id = c.lab_site_id where ${DEMO}`);
+  demo = await rows(
+    sql`select c.*, s.code as site_code, l.code as lab_code from cases c join sites s on s.id = c.site_id left join sites l on l.id = c.lab_site_id where ${DEMO}`,
+  );
 });
 
 describe("demo casebook coverage", () => {
@@ -71,21 +73,32 @@ describe("demo stories", () => {
       select s.code as site, c.removed_on::text as day from cases c join sites s on s.id = c.site_id
       where ${DEMO} and c.trigger = 'welding' and c.primary_cause = 'electrical'
         and exists (select 1 from findings f where f.case_id = c.id and f.damage_code = 'electrical.arc') order by 2`);
-    const best = Math.max(...arcs.map((a) => arcs.filter((b) => b.site === a.site && b.day >= a.day && Date.parse(b.day) - Date.parse(a.day) <= 35 * 86_400_000).length));
+    const best = Math.max(
+      ...arcs.map(
+        (a) => arcs.filter((b) => b.site === a.site && b.day >= a.day && Date.parse(b.day) - Date.parse(a.day) <= 35 * 86_400_000).length,
+      ),
+    );
     expect(best).toBeGreaterThanOrEqual(4); // demo scenario: shop welding burns several bearings
   });
 
   it("wears out late at end of life and fails early after reconditioning or mounting", () => {
-    const life = (causes: string[]) => demo.filter((c) => causes.includes(String(c.primary_cause)) && c.service_months).map((c) => ({ time: Number(c.service_months), failed: true }));
+    const life = (causes: string[]) =>
+      demo
+        .filter((c) => causes.includes(String(c.primary_cause)) && c.service_months)
+        .map((c) => ({ time: Number(c.service_months), failed: true }));
     // Weibull shape above 1 means wear-out, below about 1 early failures (Abernethy, The New Weibull Handbook).
     expect(weibullMle(life(["end-of-life"])).beta).toBeGreaterThan(2);
     expect(weibullMle(life(["reconditioning", "mounting"])).beta).toBeLessThan(1.3);
   });
 
   it("has cars that came back and a bearing lot with several failures, linked both ways", async () => {
-    const cars = await rows<{ n: number }>(sql`select count(*)::int as n from cases c where ${DEMO} group by c.car_mark, c.car_number having count(*) > 1`);
+    const cars = await rows<{ n: number }>(
+      sql`select count(*)::int as n from cases c where ${DEMO} group by c.car_mark, c.car_number having count(*) > 1`,
+    );
     expect(cars.length).toBeGreaterThanOrEqual(2);
-    const lots = await rows<{ n: number }>(sql`select count(*)::int as n from cases c where ${DEMO} and c.lot is not null and c.primary_cause = 'material' group by c.lot order by 1 desc limit 1`);
+    const lots = await rows<{ n: number }>(
+      sql`select count(*)::int as n from cases c where ${DEMO} and c.lot is not null and c.primary_cause = 'material' group by c.lot order by 1 desc limit 1`,
+    );
     expect(lots[0].n).toBeGreaterThanOrEqual(4);
     const oneWay = await rows(sql`select 1 from case_links a join cases c on c.id = a.case_id where ${DEMO}
       and not exists (select 1 from case_links b where b.case_id = a.related_id and b.related_id = a.case_id)`);
@@ -103,10 +116,16 @@ describe("demo cases obey the app's rules", () => {
   });
 
   it("stores the field call and end-play mean that the field checks compute to", async () => {
-    const policies = await rows<{ id: string; max: number; dial: number; tape: number }>(sql`select id, end_play_max_in::float as max, dial_spread_in::float as dial, tape_spread_in::float as tape from sites`);
+    const policies = await rows<{ id: string; max: number; dial: number; tape: number }>(
+      sql`select id, end_play_max_in::float as max, dial_spread_in::float as dial, tape_spread_in::float as tape from sites`,
+    );
     for (const c of demo) {
       const p = policies.find((s) => s.id === c.site_id)!;
-      const again = summariseFieldChecks(fieldChecksSchema.parse(c.field_checks), { maxIn: p.max, dialSpreadIn: p.dial, tapeSpreadIn: p.tape }, c.trigger as string);
+      const again = summariseFieldChecks(
+        fieldChecksSchema.parse(c.field_checks),
+        { maxIn: p.max, dialSpreadIn: p.dial, tapeSpreadIn: p.tape },
+        c.trigger as string,
+      );
       expect(c.field_call, String(c.number)).toBe(again.fieldCall);
       expect(c.end_play_mean_in === null ? null : Number(c.end_play_mean_in)).toBe(again.endPlayMeanIn);
     }

@@ -31,7 +31,10 @@ describe("seed:large", () => {
     expect(n).toBe(COUNT);
     const perCase = await db
       .select({ status: t.cases.status, n: sql<number>`count(${t.findings.id})::int` })
-      .from(t.cases).leftJoin(t.findings, eq(t.findings.caseId, t.cases.id)).where(mine).groupBy(t.cases.id);
+      .from(t.cases)
+      .leftJoin(t.findings, eq(t.findings.caseId, t.cases.id))
+      .where(mine)
+      .groupBy(t.cases.id);
     expect(perCase.reduce((s, r) => s + r.n, 0)).toBe(result.findings);
     for (const r of perCase) {
       if (r.status === "signed" || r.status === "signoff") expect(r.n).toBeGreaterThanOrEqual(1);
@@ -40,7 +43,10 @@ describe("seed:large", () => {
   });
 
   it("spreads removals over ten years and many triggers and causes", async () => {
-    const rows = await db.select({ removedOn: t.cases.removedOn, trigger: t.cases.trigger, cause: t.cases.primaryCause }).from(t.cases).where(inArray(t.cases.id, result.caseIds));
+    const rows = await db
+      .select({ removedOn: t.cases.removedOn, trigger: t.cases.trigger, cause: t.cases.primaryCause })
+      .from(t.cases)
+      .where(inArray(t.cases.id, result.caseIds));
     const years = new Set(rows.map((r) => r.removedOn!.slice(0, 4)));
     expect(years.size).toBeGreaterThanOrEqual(10); // ten years of removals
     expect(new Set(rows.map((r) => r.trigger)).size).toBeGreaterThanOrEqual(12);
@@ -48,7 +54,10 @@ describe("seed:large", () => {
   });
 
   it("gives unique numbers above the demo range and moves the counters past them", async () => {
-    const rows = await db.select({ number: t.cases.number, removedOn: t.cases.removedOn }).from(t.cases).where(inArray(t.cases.id, result.caseIds));
+    const rows = await db
+      .select({ number: t.cases.number, removedOn: t.cases.removedOn })
+      .from(t.cases)
+      .where(inArray(t.cases.id, result.caseIds));
     expect(new Set(rows.map((r) => r.number)).size).toBe(COUNT);
     const maxByYear = new Map<number, number>();
     for (const r of rows) {

@@ -5,7 +5,13 @@ import { createCase, siteId } from "../../support/factories";
 import { db, t } from "../../support/db";
 
 export type Outcome = "confirmed" | "no-defect" | null;
-export type FindingSpec = { component: string; row: "inboard" | "outboard" | null; clockDeg: number | null; arcDeg: number | null; severity: number };
+export type FindingSpec = {
+  component: string;
+  row: "inboard" | "outboard" | null;
+  clockDeg: number | null;
+  arcDeg: number | null;
+  severity: number;
+};
 export type CaseSpec = {
   status: "field" | "bench" | "signoff" | "signed";
   trigger: string;
@@ -30,7 +36,11 @@ const PARTS = ["cup", "cone-inboard", "cone-outboard", "rollers-inboard"];
 export function rng(seed: number) {
   let s = seed % 2147483647 || 1;
   const next = () => (s = (s * 16807) % 2147483647) / 2147483647;
-  return { next, int: (lo: number, hi: number) => lo + Math.floor(next() * (hi - lo + 1)), pick: <T,>(xs: readonly T[]) => xs[Math.floor(next() * xs.length)] };
+  return {
+    next,
+    int: (lo: number, hi: number) => lo + Math.floor(next() * (hi - lo + 1)),
+    pick: <T>(xs: readonly T[]) => xs[Math.floor(next() * xs.length)],
+  };
 }
 
 export const tag = () => `T6${randomBytes(3).toString("hex").toUpperCase()}`;
@@ -74,10 +84,19 @@ export async function makeSites(code: string): Promise<{ A: string; B: string; M
     ])
     .returning({ id: t.sites.id, name: t.sites.name });
   const mjc = await siteId("MJC");
-  return { A: rows[0].id, B: rows[1].id, MJC: mjc, names: { [rows[0].id]: rows[0].name, [rows[1].id]: rows[1].name, [mjc]: "Marrow Junction car shop" } };
+  return {
+    A: rows[0].id,
+    B: rows[1].id,
+    MJC: mjc,
+    names: { [rows[0].id]: rows[0].name, [rows[1].id]: rows[1].name, [mjc]: "Marrow Junction car shop" },
+  };
 }
 
-export async function insertCasebook(bearingClass: string, list: CaseSpec[], sites: { A: string; B: string; MJC: string }): Promise<Inserted[]> {
+export async function insertCasebook(
+  bearingClass: string,
+  list: CaseSpec[],
+  sites: { A: string; B: string; MJC: string },
+): Promise<Inserted[]> {
   const out: Inserted[] = [];
   for (const s of list) {
     const [mark, number] = s.car.split(" ");

@@ -21,7 +21,12 @@ describe("fleet list upload", () => {
   });
 
   it("stores a good list as one new batch and reports it as the list in use", async () => {
-    const csv = [header, `${CLASS}-1,${CLASS},2020-01-31,2026-01-31,,`, `${CLASS}-2,${CLASS},,2026-01-31,48.5,310000`, `${CLASS}-3,${CLASS},,2026-01-31,,120000`].join("\r\n");
+    const csv = [
+      header,
+      `${CLASS}-1,${CLASS},2020-01-31,2026-01-31,,`,
+      `${CLASS}-2,${CLASS},,2026-01-31,48.5,310000`,
+      `${CLASS}-3,${CLASS},,2026-01-31,,120000`,
+    ].join("\r\n");
     const res = await (await as("engineer")).json<{ batchId: string; units: number }>("POST", "/api/fleet", undefined);
     expect(res.status).toBe(400); // no body at all
     const up = await (await as("engineer")).request("POST", "/api/fleet", csv, { "content-type": "text/csv" });
@@ -47,14 +52,26 @@ describe("fleet list upload", () => {
 
   it("refuses a list with bad rows, naming each row, and stores nothing", async () => {
     const before = await unitCount();
-    const csv = [header, `${CLASS}-1,${CLASS},,2026-01-31,10,`, `${CLASS}-2,${CLASS},,31/01/2026,10,`, `${CLASS}-3,,,2026-01-31,-2,`].join("\n");
-    const res = await (await as("admin")).json<{ error: string; rows: { row: number; column: string; message: string }[]; errorCount: number }>("POST", "/api/fleet", undefined);
+    const csv = [header, `${CLASS}-1,${CLASS},,2026-01-31,10,`, `${CLASS}-2,${CLASS},,31/01/2026,10,`, `${CLASS}-3,,,2026-01-31,-2,`].join(
+      "\n",
+    );
+    const res = await (
+      await as("admin")
+    ).json<{ error: string; rows: { row: number; column: string; message: string }[]; errorCount: number }>(
+      "POST",
+      "/api/fleet",
+      undefined,
+    );
     expect(res.status).toBe(400);
     const bad = await (await as("admin")).request("POST", "/api/fleet", csv, { "content-type": "text/csv" });
     expect(bad.status).toBe(422);
     const body = (await bad.json()) as { error: string; rows: { row: number; column: string; message: string }[]; errorCount: number };
     expect(body.error).toMatch(/3 problems; nothing was stored/);
-    expect(body.rows.map((r) => [r.row, r.column])).toEqual([[3, "as_of"], [4, "bearing_class"], [4, "service_months"]]);
+    expect(body.rows.map((r) => [r.row, r.column])).toEqual([
+      [3, "as_of"],
+      [4, "bearing_class"],
+      [4, "service_months"],
+    ]);
     expect(await unitCount()).toBe(before);
   });
 });

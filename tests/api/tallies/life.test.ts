@@ -14,7 +14,15 @@ const CLASS = tag();
 const FLEET_CLASS = tag();
 
 async function file(bearingClass: string, cause: string, serviceMonths: number | null, serviceMiles: number | null = null) {
-  return createCase({ bearingClass, status: "signed", primaryCause: cause, removalConfirmed: "confirmed", serviceMonths, serviceMiles, removedOn: "1991-06-15" });
+  return createCase({
+    bearingClass,
+    status: "signed",
+    primaryCause: cause,
+    removalConfirmed: "confirmed",
+    serviceMonths,
+    serviceMiles,
+    removedOn: "1991-06-15",
+  });
 }
 
 beforeAll(async () => {
@@ -47,7 +55,10 @@ describe("life analysis", () => {
 
   it("counts fleet units still in service as suspensions", async () => {
     const manager = await as("manager");
-    const csv = ["serial,bearing_class,as_of,service_months", ...[1, 2, 3, 4].map((i) => `${FLEET_CLASS}-${i},${FLEET_CLASS},2026-01-31,500`)].join("\n");
+    const csv = [
+      "serial,bearing_class,as_of,service_months",
+      ...[1, 2, 3, 4].map((i) => `${FLEET_CLASS}-${i},${FLEET_CLASS},2026-01-31,500`),
+    ].join("\n");
     const up = await manager.request("POST", "/api/fleet", csv, { "content-type": "text/csv" });
     expect(up.status).toBe(201);
     const d = await life(`class=${FLEET_CLASS}&cause=water-ingress`);

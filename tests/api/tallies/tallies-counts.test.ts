@@ -56,7 +56,12 @@ describe("tallies over the test casebook", () => {
       const confirmed = mine.filter((c) => c.outcome === "confirmed").length;
       const noDefect = mine.filter((c) => c.outcome === "no-defect").length;
       const row = d.triggerVerdict.find((r) => r.trigger === trigger)!;
-      expect([row.confirmed, row.noDefect, row.notRecorded, row.total]).toEqual([confirmed, noDefect, mine.length - confirmed - noDefect, mine.length]);
+      expect([row.confirmed, row.noDefect, row.notRecorded, row.total]).toEqual([
+        confirmed,
+        noDefect,
+        mine.length - confirmed - noDefect,
+        mine.length,
+      ]);
       const rate = d.byTrigger.rows.find((r) => r.id === trigger)!;
       expect([rate.confirmed, rate.n]).toEqual([confirmed, confirmed + noDefect]);
       // Wilson (1927) closed form written out in casebook.ts, z = 1.959963985 to ten digits (fixture)
@@ -69,7 +74,12 @@ describe("tallies over the test casebook", () => {
   it("gives each removal site its confirmed share, lowest first", async () => {
     const d = await tallies("");
     const rows = d.byShop.rows;
-    expect(rows.map((r) => r.label).sort()).toEqual(Object.entries(names).filter(([id]) => signed().some((c) => c.siteId === id)).map(([, n]) => n).sort());
+    expect(rows.map((r) => r.label).sort()).toEqual(
+      Object.entries(names)
+        .filter(([id]) => signed().some((c) => c.siteId === id))
+        .map(([, n]) => n)
+        .sort(),
+    );
     for (const r of rows) {
       const mine = signed().filter((c) => c.siteId === r.id && c.outcome !== null);
       expect([r.confirmed, r.n]).toEqual([mine.filter((c) => c.outcome === "confirmed").length, mine.length]);
@@ -80,16 +90,22 @@ describe("tallies over the test casebook", () => {
   it("tests cause x site with the Pearson statistic worked out here", async () => {
     const d = await tallies("");
     const t = d.causeSite;
-    t.sites.forEach((s, i) => t.causes.forEach((c, j) => expect(t.counts[i][j]).toBe(signed().filter((x) => x.siteId === s.id && (x.cause ?? "") === c.code).length)));
+    t.sites.forEach((s, i) =>
+      t.causes.forEach((c, j) =>
+        expect(t.counts[i][j]).toBe(signed().filter((x) => x.siteId === s.id && (x.cause ?? "") === c.code).length),
+      ),
+    );
     // Pearson (1900): sum over cells of (O - E)^2 / E with E = row total x column total / N
     const rows = t.counts.map((r) => r.reduce((a, b) => a + b, 0));
     const cols = t.causes.map((_, j) => t.counts.reduce((a, r) => a + r[j], 0));
     const n = rows.reduce((a, b) => a + b, 0);
     let x2 = 0;
-    t.counts.forEach((r, i) => r.forEach((o, j) => {
-      const e = (rows[i] * cols[j]) / n;
-      x2 += ((o - e) ** 2) / e;
-    }));
+    t.counts.forEach((r, i) =>
+      r.forEach((o, j) => {
+        const e = (rows[i] * cols[j]) / n;
+        x2 += (o - e) ** 2 / e;
+      }),
+    );
     expect(t.statistic!).toBeCloseTo(x2, 9);
     expect(t.df).toBe((t.sites.length - 1) * (t.causes.length - 1));
   });
@@ -102,7 +118,9 @@ describe("tallies over the test casebook", () => {
     const all = d.monthly.series.find((s) => s.id === "all-removals")!;
     expect(all.counts).toEqual(d.monthly.months.map((m) => in93.filter((c) => c.removedOn.startsWith(m)).length));
     for (const s of d.monthly.series.filter((x) => !x.id.startsWith("all-"))) {
-      expect(s.counts).toEqual(d.monthly.months.map((m) => in93.filter((c) => c.status === "signed" && c.cause === s.id && c.removedOn.startsWith(m)).length));
+      expect(s.counts).toEqual(
+        d.monthly.months.map((m) => in93.filter((c) => c.status === "signed" && c.cause === s.id && c.removedOn.startsWith(m)).length),
+      );
     }
   });
 
@@ -112,7 +130,9 @@ describe("tallies over the test casebook", () => {
     expect(hot.totals.removals).toBe(cases.filter((c) => c.trigger === "wayside-hot").length);
     const a = await tallies(`site=${siteCodes.A}`);
     expect(a.totals.removals).toBe(cases.filter((c) => c.site === "A").length);
-    expect(a.byShop.rows.map((r) => r.label)).toEqual(signed().some((c) => c.site === "A") ? [names[cases.find((c) => c.site === "A")!.siteId]] : []);
+    expect(a.byShop.rows.map((r) => r.label)).toEqual(
+      signed().some((c) => c.site === "A") ? [names[cases.find((c) => c.site === "A")!.siteId]] : [],
+    );
   });
 
   for (const [kind, keyOf] of [
@@ -122,13 +142,23 @@ describe("tallies over the test casebook", () => {
   ] as const) {
     it(`finds the same ${kind} clusters as the reference rule (findClusters)`, async () => {
       const d = await tallies(`cluster=${kind}&window=45`);
-      const expected = findClusters(signed().map((c) => ({ id: c.number, key: keyOf(c), cause: c.cause!, date: c.removedOn })), { keyKind: kind, windowDays: 45 });
+      const expected = findClusters(
+        signed().map((c) => ({ id: c.number, key: keyOf(c), cause: c.cause!, date: c.removedOn })),
+        { keyKind: kind, windowDays: 45 },
+      );
       expect(d.clusters.total).toBe(expected.length);
       const got = d.clusters.items.map((c) => `${c.key}|${c.cause}|${c.firstDate}|${c.lastDate}|${c.size}`).sort();
-      const want = expected.map((c) => `${c.key}|${c.cause}|${c.firstDate.toISOString().slice(0, 10)}|${c.lastDate.toISOString().slice(0, 10)}|${c.memberIds.length}`).sort();
+      const want = expected
+        .map(
+          (c) =>
+            `${c.key}|${c.cause}|${c.firstDate.toISOString().slice(0, 10)}|${c.lastDate.toISOString().slice(0, 10)}|${c.memberIds.length}`,
+        )
+        .sort();
       expect(got).toEqual(want);
       for (const item of d.clusters.items) {
-        const ref = expected.find((c) => c.key === item.key && c.cause === item.cause && c.firstDate.toISOString().startsWith(item.firstDate))!;
+        const ref = expected.find(
+          (c) => c.key === item.key && c.cause === item.cause && c.firstDate.toISOString().startsWith(item.firstDate),
+        )!;
         expect(new Set(item.caseNumbers).size).toBe(Math.min(24, ref.memberIds.length));
         expect(item.caseNumbers.every((n) => ref.memberIds.includes(n))).toBe(true);
       }

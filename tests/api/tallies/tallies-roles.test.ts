@@ -16,7 +16,8 @@ beforeAll(async () => {
   cases = await insertCasebook(CLASS, list, sites);
 });
 
-const get = async (role: Parameters<typeof as>[0], query: string) => (await as(role)).json<TalliesData>("GET", `/api/tallies?class=${CLASS}${query}`);
+const get = async (role: Parameters<typeof as>[0], query: string) =>
+  (await as(role)).json<TalliesData>("GET", `/api/tallies?class=${CLASS}${query}`);
 
 describe("tallies by role", () => {
   it("refuses anyone not signed in", async () => {
@@ -43,7 +44,9 @@ describe("tallies by role", () => {
     expect(res.body.totals.removals).toBe(own.length);
     expect(res.body.totals.signed).toBe(own.filter((c) => c.status === "signed").length);
     expect(res.body.byShop.rows.every((r) => r.label === "Marrow Junction car shop")).toBe(true);
-    expect(res.body.causeSite.sites.map((s) => s.label)).toEqual(own.some((c) => c.status === "signed") ? ["Marrow Junction car shop"] : []);
+    expect(res.body.causeSite.sites.map((s) => s.label)).toEqual(
+      own.some((c) => c.status === "signed") ? ["Marrow Junction car shop"] : [],
+    );
   });
 
   it("keeps an inspector to their shop even when they ask for another site", async () => {

@@ -19,7 +19,10 @@ async function differences(rollUp: string, recount: string): Promise<{ extra: un
     select 'extra' as side, to_jsonb(x) as r from (select * from roll except all select * from fresh) x
     union all
     select 'missing', to_jsonb(y) from (select * from fresh except all select * from roll) y`);
-  return { extra: rows.filter((r) => r.side === "extra").map((r) => r.r), missing: rows.filter((r) => r.side === "missing").map((r) => r.r) };
+  return {
+    extra: rows.filter((r) => r.side === "extra").map((r) => r.r),
+    missing: rows.filter((r) => r.side === "missing").map((r) => r.r),
+  };
 }
 
 const clusterable = `status = 'signed' and removed_on is not null and primary_cause is not null`;
@@ -95,22 +98,43 @@ describe("tallies roll-ups", () => {
 
   it("equal a full recount after single and many-row updates of every counted column", async () => {
     await db.update(t.cases).set({ status: "signed", primaryCause: "impact", removalConfirmed: "confirmed" }).where(eq(t.cases.id, ids[0]));
-    await db.update(t.cases).set({ removedOn: "1986-02-28" }).where(inArray(t.cases.id, ids.slice(1, 10)));
-    await db.update(t.cases).set({ siteId: sites.B, trigger: "seal-grease" }).where(inArray(t.cases.id, ids.slice(10, 20)));
-    await db.update(t.cases).set({ bearingClass: OTHER_CLASS, removedOn: null }).where(inArray(t.cases.id, ids.slice(20, 25)));
-    await db.update(t.cases).set({ carNumber: "9", lot: `${CLASS}-3` }).where(inArray(t.cases.id, ids.slice(25, 35)));
-    await db.update(t.cases).set({ updatedAt: new Date() }).where(inArray(t.cases.bearingClass, [CLASS, OTHER_CLASS]));
+    await db
+      .update(t.cases)
+      .set({ removedOn: "1986-02-28" })
+      .where(inArray(t.cases.id, ids.slice(1, 10)));
+    await db
+      .update(t.cases)
+      .set({ siteId: sites.B, trigger: "seal-grease" })
+      .where(inArray(t.cases.id, ids.slice(10, 20)));
+    await db
+      .update(t.cases)
+      .set({ bearingClass: OTHER_CLASS, removedOn: null })
+      .where(inArray(t.cases.id, ids.slice(20, 25)));
+    await db
+      .update(t.cases)
+      .set({ carNumber: "9", lot: `${CLASS}-3` })
+      .where(inArray(t.cases.id, ids.slice(25, 35)));
+    await db
+      .update(t.cases)
+      .set({ updatedAt: new Date() })
+      .where(inArray(t.cases.bearingClass, [CLASS, OTHER_CLASS]));
     await expectExact();
   });
 
   it("equal a full recount after signed cases are reopened, then signed again with another verdict", async () => {
-    const signed = await db.select({ id: t.cases.id }).from(t.cases).where(and(eq(t.cases.bearingClass, CLASS), eq(t.cases.status, "signed")));
+    const signed = await db
+      .select({ id: t.cases.id })
+      .from(t.cases)
+      .where(and(eq(t.cases.bearingClass, CLASS), eq(t.cases.status, "signed")));
     const chosen = signed.slice(0, 6).map((c) => c.id);
     expect(chosen.length).toBeGreaterThan(2);
     await db.update(t.cases).set({ status: "bench", signedAt: null, signedBy: null }).where(inArray(t.cases.id, chosen));
     await expectExact();
     for (const [i, id] of chosen.entries()) {
-      await db.update(t.cases).set({ status: "signed", signedAt: new Date(), removalConfirmed: i % 2 ? "confirmed" : "no-defect" }).where(eq(t.cases.id, id));
+      await db
+        .update(t.cases)
+        .set({ status: "signed", signedAt: new Date(), removalConfirmed: i % 2 ? "confirmed" : "no-defect" })
+        .where(eq(t.cases.id, id));
     }
     await expectExact();
   });
@@ -120,5 +144,4 @@ describe("tallies roll-ups", () => {
     ids = ids.slice(20);
     await expectExact();
   });
-
 });

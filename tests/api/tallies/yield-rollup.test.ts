@@ -16,7 +16,10 @@ async function differences(rollUp: string, recount: string): Promise<{ extra: un
     select 'extra' as side, to_jsonb(x) as r from (select * from roll except all select * from fresh) x
     union all
     select 'missing', to_jsonb(y) from (select * from fresh except all select * from roll) y`);
-  return { extra: rows.filter((r) => r.side === "extra").map((r) => r.r), missing: rows.filter((r) => r.side === "missing").map((r) => r.r) };
+  return {
+    extra: rows.filter((r) => r.side === "extra").map((r) => r.r),
+    missing: rows.filter((r) => r.side === "missing").map((r) => r.r),
+  };
 }
 
 const month = `date_trunc('month', removed_on::timestamp)::date`;
@@ -63,7 +66,14 @@ beforeAll(async () => {
     const status = r.pick(["signed", "signed", "bench"] as const);
     const detail =
       trigger === "wayside-hot"
-        ? r.next() < 0.1 ? { readingF: "hot", thresholdF: 170 } : { readingF: 170 + r.int(0, 60) + 0.5, thresholdF: 170, detectorId: ` RU-${r.int(1, 3)} `, detectorLocation: r.pick(["MP 1.0", ""]) }
+        ? r.next() < 0.1
+          ? { readingF: "hot", thresholdF: 170 }
+          : {
+              readingF: 170 + r.int(0, 60) + 0.5,
+              thresholdF: 170,
+              detectorId: ` RU-${r.int(1, 3)} `,
+              detectorLocation: r.pick(["MP 1.0", ""]),
+            }
         : trigger === "wayside-acoustic"
           ? { alarmLevel: r.pick(["level 2", " ", "level 3"]), detectorId: `RU-${r.int(1, 3)}` }
           : {};
@@ -93,9 +103,18 @@ describe("removal-yield roll-ups", () => {
 
   it("equal a full recount after single and many-row updates, including moved positions and changed readings", async () => {
     await db.update(t.cases).set({ status: "signed", removalConfirmed: "no-defect" }).where(eq(t.cases.id, ids[0]));
-    await db.update(t.cases).set({ fieldCall: "keep", axle: 3, removedOn: "1987-06-30" }).where(inArray(t.cases.id, ids.slice(1, 12)));
-    await db.update(t.cases).set({ triggerDetail: { readingF: 240, thresholdF: 200, detectorId: "RU-9" } }).where(inArray(t.cases.id, ids.slice(12, 20)));
-    await db.update(t.cases).set({ siteId: sites.B, carNumber: "2" }).where(inArray(t.cases.id, ids.slice(20, 30)));
+    await db
+      .update(t.cases)
+      .set({ fieldCall: "keep", axle: 3, removedOn: "1987-06-30" })
+      .where(inArray(t.cases.id, ids.slice(1, 12)));
+    await db
+      .update(t.cases)
+      .set({ triggerDetail: { readingF: 240, thresholdF: 200, detectorId: "RU-9" } })
+      .where(inArray(t.cases.id, ids.slice(12, 20)));
+    await db
+      .update(t.cases)
+      .set({ siteId: sites.B, carNumber: "2" })
+      .where(inArray(t.cases.id, ids.slice(20, 30)));
     await db.update(t.cases).set({ updatedAt: new Date() }).where(eq(t.cases.bearingClass, CLASS));
     await expectExact();
   });
@@ -107,7 +126,9 @@ describe("removal-yield roll-ups", () => {
   });
 
   it("equal a full recount after signed cases are reopened, then signed again with another outcome", async () => {
-    const signed = await db.select({ id: t.cases.id }).from(t.cases)
+    const signed = await db
+      .select({ id: t.cases.id })
+      .from(t.cases)
       .where(and(eq(t.cases.bearingClass, CLASS), eq(t.cases.status, "signed"), isNotNull(t.cases.removalConfirmed)));
     const chosen = signed.slice(0, 8).map((c) => c.id);
     expect(chosen.length).toBeGreaterThan(3);
@@ -115,7 +136,10 @@ describe("removal-yield roll-ups", () => {
     await db.update(t.cases).set({ status: "bench", signedAt: null, signedBy: null }).where(inArray(t.cases.id, chosen));
     await expectExact();
     for (const [i, id] of chosen.entries()) {
-      await db.update(t.cases).set({ status: "signed", signedAt: new Date(), removalConfirmed: i % 2 ? "confirmed" : "no-defect" }).where(eq(t.cases.id, id));
+      await db
+        .update(t.cases)
+        .set({ status: "signed", signedAt: new Date(), removalConfirmed: i % 2 ? "confirmed" : "no-defect" })
+        .where(eq(t.cases.id, id));
     }
     await expectExact();
   });

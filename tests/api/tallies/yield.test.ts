@@ -63,7 +63,17 @@ const days = (a: string, b: string) => (Date.parse(b) - Date.parse(a)) / 8640000
 
 /** Keep calls followed by a removal of the same car and position within the window, counted here. */
 function missed(keeps: Spec[], all: Spec[], window: number): number {
-  return keeps.filter((k) => all.some((o) => o !== k && o.car === k.car && o.axle === k.axle && o.side === k.side && days(k.removedOn, o.removedOn) > 0 && days(k.removedOn, o.removedOn) <= window)).length;
+  return keeps.filter((k) =>
+    all.some(
+      (o) =>
+        o !== k &&
+        o.car === k.car &&
+        o.axle === k.axle &&
+        o.side === k.side &&
+        days(k.removedOn, o.removedOn) > 0 &&
+        days(k.removedOn, o.removedOn) <= window,
+    ),
+  ).length;
 }
 
 let siteIds: Record<"A" | "B" | "MJC", string>;
@@ -79,13 +89,22 @@ beforeAll(async () => {
   await db.update(t.sites).set({ removalCostUsd: COST_A }).where(eq(t.sites.id, sites.A));
   const [mjc] = await db.select({ cost: t.sites.removalCostUsd }).from(t.sites).where(eq(t.sites.id, sites.MJC));
   costOf = { A: COST_A, B: null, MJC: mjc.cost };
-  people = { inspector: await userId("inspector"), pellham: (await db.select({ id: t.user.id }).from(t.user).where(eq(t.user.email, "inspector.pellham@sable-river.example")))[0].id, analyst: await userId("analyst") };
+  people = {
+    inspector: await userId("inspector"),
+    pellham: (await db.select({ id: t.user.id }).from(t.user).where(eq(t.user.email, "inspector.pellham@sable-river.example")))[0].id,
+    analyst: await userId("analyst"),
+  };
   list = build();
   for (const s of list) {
     const [mark, number] = s.car.split(" ");
     const detail =
       s.trigger === "wayside-hot"
-        ? { readingF: s.threshold + s.margin, thresholdF: s.threshold, detectorId: s.detector, detectorLocation: `MP ${s.detector.slice(3)}0.0` }
+        ? {
+            readingF: s.threshold + s.margin,
+            thresholdF: s.threshold,
+            detectorId: s.detector,
+            detectorLocation: `MP ${s.detector.slice(3)}0.0`,
+          }
         : s.trigger === "wayside-acoustic"
           ? { alarmLevel: s.level, detectorId: s.detector, detectorLocation: `MP ${s.detector.slice(3)}0.0` }
           : { felt: "roughness" };
@@ -149,7 +168,9 @@ describe("removal yield counts", () => {
     for (const id of ["TD-1", "TD-2", "TD-3"]) {
       for (const trigger of ["wayside-hot", "wayside-acoustic"] as const) {
         const all = list.filter((s) => s.trigger === trigger && s.detector === id);
-        const row = d.detectors.rows.find((r) => r.id === id && r.trigger === (trigger === "wayside-hot" ? "Wayside hot-bearing alarm" : "Wayside acoustic alarm"));
+        const row = d.detectors.rows.find(
+          (r) => r.id === id && r.trigger === (trigger === "wayside-hot" ? "Wayside hot-bearing alarm" : "Wayside acoustic alarm"),
+        );
         const done = all.filter(signedWithOutcome);
         const noDefect = done.filter((s) => s.outcome === "no-defect");
         expect(row?.alarms ?? 0, `${id} ${trigger}`).toBe(all.length);
@@ -166,7 +187,11 @@ describe("removal yield counts", () => {
   it("sums the no-defect money by trigger", async () => {
     const d = await get("manager");
     for (const row of d.cost.byTrigger) {
-      const trigger = list.find((s) => row.label.toLowerCase().includes(s.trigger === "hand-roll" ? "hand roll" : s.trigger === "wayside-hot" ? "hot-bearing" : "acoustic"));
+      const trigger = list.find((s) =>
+        row.label
+          .toLowerCase()
+          .includes(s.trigger === "hand-roll" ? "hand roll" : s.trigger === "wayside-hot" ? "hot-bearing" : "acoustic"),
+      );
       const mine = list.filter((s) => s.trigger === trigger!.trigger && s.status === "signed" && s.outcome === "no-defect");
       expect(row.noDefect).toBe(mine.length);
       expect(row.costUsd).toBeCloseTo(priced(mine), 6);
@@ -191,7 +216,13 @@ describe("removal yield counts", () => {
       const row = d.calls.inspectors.find((r) => r.id === people[by]);
       const calls = list.filter((s) => s.by === by && s.call === "remove" && signedWithOutcome(s));
       expect(row?.n ?? 0, by).toBe(calls.length);
-      expect(row?.missed ?? 0).toBe(missed(list.filter((s) => s.by === by && s.call === "keep"), list, 60));
+      expect(row?.missed ?? 0).toBe(
+        missed(
+          list.filter((s) => s.by === by && s.call === "keep"),
+          list,
+          60,
+        ),
+      );
     }
     // managers see names
     expect(d.namesShown).toBe(true);

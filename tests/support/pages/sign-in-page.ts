@@ -25,6 +25,9 @@ export class SignInPage {
   /** Signs in and waits until the app has left the sign-in page (for `to`, or anywhere else). */
   async signIn(email: string, password: string, to?: string, timeout = 30_000) {
     await this.fill(email, password);
-    await Promise.all([this.page.waitForURL((u) => (to ? u.pathname === to : !u.pathname.startsWith("/sign-in")), { timeout }), this.submit()]);
+    await Promise.all([
+      this.page.waitForURL((u) => (to ? u.pathname === to : !u.pathname.startsWith("/sign-in")), { timeout }),
+      this.submit(),
+    ]);
   }
 }

@@ -11,5 +11,6 @@ export class TalliesPage {
 
   readonly heading = () => this.page.getByRole("heading", { level: 1 }).textContent();
   /** The chart card whose heading is exactly `title`. */
-  readonly card = (title: string) => this.page.locator("section[data-chart-card]", { has: this.page.getByRole("heading", { name: title, exact: true }) });
+  readonly card = (title: string) =>
+    this.page.locator("section[data-chart-card]", { has: this.page.getByRole("heading", { name: title, exact: true }) });
 }

@@ -49,7 +49,12 @@ describe("site policy validation", () => {
 
   it("accepts the common defaults and keeps 5 decimal places", () => {
     // 0.015625 rounds half away from zero to 0.01563 at the column's 5 decimals (arithmetic)
-    expect(sitePolicySchema.parse(good)).toEqual({ endPlayMaxIn: 0.0625, dialSpreadIn: 0.002, tapeSpreadIn: 0.01563, plausibleMaxIn: 0.25 });
+    expect(sitePolicySchema.parse(good)).toEqual({
+      endPlayMaxIn: 0.0625,
+      dialSpreadIn: 0.002,
+      tapeSpreadIn: 0.01563,
+      plausibleMaxIn: 0.25,
+    });
   });
 
   it("accepts the 1/4 in ceiling and refuses anything above it, zero or below", () => {

@@ -20,11 +20,15 @@ describe("backup manifest", () => {
     const a = { key: "p/a.jpg", bytes: 3, sha256: sha256("abc") };
     const b = { key: "p/b.jpg", bytes: 1, sha256: sha256("b") };
     expect(compareObjects([a, b], [b, a])).toEqual([]);
-    expect(compareObjects([a, b], [{ ...a, sha256: sha256("abd") }, { key: "p/c.jpg", bytes: 1, sha256: sha256("c") }])).toEqual([
-      "object p/a.jpg differs from the backup",
-      "object p/b.jpg is missing",
-      "object p/c.jpg is not in the backup",
-    ]);
+    expect(
+      compareObjects(
+        [a, b],
+        [
+          { ...a, sha256: sha256("abd") },
+          { key: "p/c.jpg", bytes: 1, sha256: sha256("c") },
+        ],
+      ),
+    ).toEqual(["object p/a.jpg differs from the backup", "object p/b.jpg is missing", "object p/c.jpg is not in the backup"]);
   });
 
   it("refuses object keys that would leave the backup folder", () => {

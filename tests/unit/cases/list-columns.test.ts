@@ -1,5 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { CASE_COLUMNS, defaultColumnVisibility, formatAgo, formatClass, formatDay, formatEndPlay, formatMonths, formatPosition } from "@/lib/cases/list-columns";
+import {
+  CASE_COLUMNS,
+  defaultColumnVisibility,
+  formatAgo,
+  formatClass,
+  formatDay,
+  formatEndPlay,
+  formatMonths,
+  formatPosition,
+} from "@/lib/cases/list-columns";
 
 describe("case list formatting", () => {
   it("shows end play in inches to four decimals", () => {

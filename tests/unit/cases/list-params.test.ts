@@ -43,7 +43,12 @@ describe("reading the case list query", () => {
 
   it("reads page, page size, sort, dates and text", () => {
     const p = parse("page=3&pageSize=50&sort=removedOn:asc&from=2026-01-01&to=2026-06-30&q=%20SRRL%2012%20");
-    expect(p).toEqual({ filters: { from: "2026-01-01", to: "2026-06-30", q: "SRRL 12" }, sort: { field: "removedOn", dir: "asc" }, page: 3, pageSize: 50 });
+    expect(p).toEqual({
+      filters: { from: "2026-01-01", to: "2026-06-30", q: "SRRL 12" },
+      sort: { field: "removedOn", dir: "asc" },
+      page: 3,
+      pageSize: 50,
+    });
   });
 
   it("treats blank values as not given", () => {

@@ -15,21 +15,82 @@ function zodReading(q: URLSearchParams) {
 
 // Values near every rule's edges: good words, bad words, blanks, limits, odd numbers and dates.
 const listValue = fc.oneof(
-  fc.constantFrom("field", "bench,signoff", "signed,signed,", "open", "F,other", "Z", "wayside-hot", "Hot Box", "water-ingress,seal", "mjc,PYC", "M J", " , ,", ""),
-  fc.array(fc.constantFrom("field", "bench", "x", "F", "K", "mjc", "a.b", "-bad", " ", "A_1", "é"), { maxLength: 4 }).map((xs) => xs.join(",")),
+  fc.constantFrom(
+    "field",
+    "bench,signoff",
+    "signed,signed,",
+    "open",
+    "F,other",
+    "Z",
+    "wayside-hot",
+    "Hot Box",
+    "water-ingress,seal",
+    "mjc,PYC",
+    "M J",
+    " , ,",
+    "",
+  ),
+  fc
+    .array(fc.constantFrom("field", "bench", "x", "F", "K", "mjc", "a.b", "-bad", " ", "A_1", "é"), { maxLength: 4 })
+    .map((xs) => xs.join(",")),
   fc.string({ maxLength: 12 }),
   fc.constant("a,".repeat(1001)),
 );
 const dayValue = fc.oneof(
-  fc.constantFrom("2026-03-14", "2024-02-29", "2026-02-29", "2026-13-01", "14/03/2026", "2026-3-14", "", "  ", "2026-03-14x", "20260-03-14"),
+  fc.constantFrom(
+    "2026-03-14",
+    "2024-02-29",
+    "2026-02-29",
+    "2026-13-01",
+    "14/03/2026",
+    "2026-3-14",
+    "",
+    "  ",
+    "2026-03-14x",
+    "20260-03-14",
+  ),
   fc.date({ min: new Date("1990-01-01"), max: new Date("2040-12-31"), noInvalidDate: true }).map((d) => d.toISOString().slice(0, 10)),
 );
 const numberValue = fc.oneof(
-  fc.constantFrom("0", "1", "2.5", "abc", "", " 7 ", "1e3", "0x10", "Infinity", "-3", "9", "10", "200", "201", "100000", "100001", "1e21", "5000"),
+  fc.constantFrom(
+    "0",
+    "1",
+    "2.5",
+    "abc",
+    "",
+    " 7 ",
+    "1e3",
+    "0x10",
+    "Infinity",
+    "-3",
+    "9",
+    "10",
+    "200",
+    "201",
+    "100000",
+    "100001",
+    "1e21",
+    "5000",
+  ),
   fc.integer({ min: -5, max: 250 }).map(String),
 );
-const sortValue = fc.constantFrom("removedOn:asc", "updatedAt:desc", "car:asc", "colour:asc", "removedOn:up", "removedOn", "serial:asc:x", "", ":");
-const qValue = fc.oneof(fc.string({ maxLength: 20 }), fc.constant("x".repeat(101)), fc.constant(` ${"y".repeat(100)} `), fc.constant("   "));
+const sortValue = fc.constantFrom(
+  "removedOn:asc",
+  "updatedAt:desc",
+  "car:asc",
+  "colour:asc",
+  "removedOn:up",
+  "removedOn",
+  "serial:asc:x",
+  "",
+  ":",
+);
+const qValue = fc.oneof(
+  fc.string({ maxLength: 20 }),
+  fc.constant("x".repeat(101)),
+  fc.constant(` ${"y".repeat(100)} `),
+  fc.constant("   "),
+);
 
 const entry = fc.oneof(
   fc.tuple(fc.constantFrom("status", "trigger", "cause", "class", "site"), listValue),
@@ -67,6 +128,9 @@ describe("the list screen's reading of the URL", () => {
 
   it("refuses with the words the API uses", () => {
     // the refusal list-params.test.ts holds the API to
-    expect(readListParams(new URLSearchParams("from=2026-06-01&to=2026-05-31"))).toEqual({ params: DEFAULT_LIST_PARAMS, error: "The removal dates must run forward: From is after To." });
+    expect(readListParams(new URLSearchParams("from=2026-06-01&to=2026-05-31"))).toEqual({
+      params: DEFAULT_LIST_PARAMS,
+      error: "The removal dates must run forward: From is after To.",
+    });
   });
 });

@@ -2,7 +2,10 @@ import { describe, expect, test } from "vitest";
 import { codeProblem, siteProblem } from "../../../lib/cases/reference-rules";
 
 const states = {
-  trigger: new Map([["hand-roll", false], ["old-alarm", true]]),
+  trigger: new Map([
+    ["hand-roll", false],
+    ["old-alarm", true],
+  ]),
   cause: new Map([["water-ingress", false]]),
   damage: new Map<string, boolean>(),
 };
@@ -22,11 +25,14 @@ describe("codes a save names", () => {
   });
 
   test("the first problem wins, in the order the fields were given", () => {
-    const p = codeProblem([
-      { list: "trigger", field: "trigger", code: "hand-roll", current: [] },
-      { list: "damage", field: "finding.damageCode", code: "x", current: [] },
-      { list: "cause", field: "primaryCause", code: "y", current: [] },
-    ], states);
+    const p = codeProblem(
+      [
+        { list: "trigger", field: "trigger", code: "hand-roll", current: [] },
+        { list: "damage", field: "finding.damageCode", code: "x", current: [] },
+        { list: "cause", field: "primaryCause", code: "y", current: [] },
+      ],
+      states,
+    );
     expect(p?.field).toBe("finding.damageCode");
   });
 });

@@ -15,7 +15,9 @@ describe("safety flag of a case", () => {
   });
 
   it("asks about cooling only after a hot-bearing alarm", () => {
-    expect(safetyFlagOf({ confirmations: { ppe: true, blueSignal: true, wheelsetSecured: true } }, "wayside-hot").map((f) => f.key)).toEqual(["cooled"]);
+    expect(
+      safetyFlagOf({ confirmations: { ppe: true, blueSignal: true, wheelsetSecured: true } }, "wayside-hot").map((f) => f.key),
+    ).toEqual(["cooled"]);
   });
 
   it("is empty before a field report exists", () => {

@@ -2,10 +2,28 @@ import { createHash } from "node:crypto";
 import { describe, expect, it } from "vitest";
 import { canonicalContent, contentHash, groupedHash, type SignedContent } from "@/lib/cases/signature-content";
 
-const finding = { component: "cup", row: "outboard", zone: "raceway", damageCode: "fatigue.subsurface", severity: 4, clockDeg: 180, arcDeg: 40, lengthMm: 22, widthMm: 9, notes: "Load zone." };
+const finding = {
+  component: "cup",
+  row: "outboard",
+  zone: "raceway",
+  damageCode: "fatigue.subsurface",
+  severity: 4,
+  clockDeg: 180,
+  arcDeg: 40,
+  lengthMm: 22,
+  widthMm: 9,
+  notes: "Load zone.",
+};
 const content: SignedContent = {
   caseNumber: "TL-2026-00042",
-  verdict: { primaryCause: "fatigue", contributingCauses: ["lubrication", "overload"], confidence: "confirmed", removalConfirmed: "confirmed", correctiveAction: "", verdictNotes: "Spall in the load zone." },
+  verdict: {
+    primaryCause: "fatigue",
+    contributingCauses: ["lubrication", "overload"],
+    confidence: "confirmed",
+    removalConfirmed: "confirmed",
+    correctiveAction: "",
+    verdictNotes: "Spall in the load zone.",
+  },
   findings: [finding, { ...finding, component: "cone-inboard", row: null, damageCode: "none", severity: 0, notes: "" }],
   photoHashes: ["b".repeat(64), "a".repeat(64)],
 };
@@ -18,7 +36,12 @@ describe("what a signature covers", () => {
   });
 
   it("does not depend on the order findings, photos or causes were read in", () => {
-    const shuffled = { ...content, findings: [...content.findings].reverse(), photoHashes: [...content.photoHashes].reverse(), verdict: { ...content.verdict, contributingCauses: ["overload", "lubrication"] } };
+    const shuffled = {
+      ...content,
+      findings: [...content.findings].reverse(),
+      photoHashes: [...content.photoHashes].reverse(),
+      verdict: { ...content.verdict, contributingCauses: ["overload", "lubrication"] },
+    };
     expect(contentHash(shuffled)).toBe(contentHash(content));
   });
 

@@ -9,10 +9,19 @@ describe("who may sign", () => {
     expect(r).toEqual({ ok: false, status: 403, message: "You proposed this verdict, so another engineer or an admin must sign it." });
   });
   it("lets a second person sign", () => {
-    expect(checkTransition("sign", "signoff", "engineer", undefined, verdict, { actorId: "u2", proposedBy: "u1" })).toEqual({ ok: true, to: "signed" });
-    expect(checkTransition("sign", "signoff", "admin", undefined, verdict, { actorId: "u2", proposedBy: "u1" })).toEqual({ ok: true, to: "signed" });
+    expect(checkTransition("sign", "signoff", "engineer", undefined, verdict, { actorId: "u2", proposedBy: "u1" })).toEqual({
+      ok: true,
+      to: "signed",
+    });
+    expect(checkTransition("sign", "signoff", "admin", undefined, verdict, { actorId: "u2", proposedBy: "u1" })).toEqual({
+      ok: true,
+      to: "signed",
+    });
   });
   it("leaves other steps to the proposer", () => {
-    expect(checkTransition("return", "signoff", "admin", "Needs cone photos.", verdict, { actorId: "u1", proposedBy: "u1" })).toEqual({ ok: true, to: "bench" });
+    expect(checkTransition("return", "signoff", "admin", "Needs cone photos.", verdict, { actorId: "u1", proposedBy: "u1" })).toEqual({
+      ok: true,
+      to: "bench",
+    });
   });
 });

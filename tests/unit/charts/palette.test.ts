@@ -10,7 +10,7 @@ function lab(hex: string): [number, number, number] {
   const x = (0.4124 * r + 0.3576 * g + 0.1805 * b) / 0.95047;
   const y = 0.2126 * r + 0.7152 * g + 0.0722 * b;
   const z = (0.0193 * r + 0.1192 * g + 0.9505 * b) / 1.08883;
-  const f = (t: number) => (t > 216 / 24389 ? Math.cbrt(t) : (24389 / 27 * t + 16) / 116);
+  const f = (t: number) => (t > 216 / 24389 ? Math.cbrt(t) : ((24389 / 27) * t + 16) / 116);
   return [116 * f(y) - 16, 500 * (f(x) - f(y)), 200 * (f(y) - f(z))];
 }
 const dE = (a: string, b: string) => Math.hypot(...lab(a).map((v, i) => v - lab(b)[i]));
@@ -20,7 +20,8 @@ describe("root-cause colours", () => {
     const list = Object.entries(CAUSE_COLOURS);
     expect(new Set(list.map(([, c]) => c.toLowerCase())).size).toBe(list.length);
     for (let i = 0; i < list.length; i++)
-      for (let j = i + 1; j < list.length; j++) expect(dE(list[i][1], list[j][1]), `${list[i][0]} vs ${list[j][0]}`).toBeGreaterThanOrEqual(20);
+      for (let j = i + 1; j < list.length; j++)
+        expect(dE(list[i][1], list[j][1]), `${list[i][0]} vs ${list[j][0]}`).toBeGreaterThanOrEqual(20);
   });
 });
 
@@ -29,7 +30,14 @@ describe("image legend layout", () => {
     const { layoutLegend } = await import("@/components/charts/export-image");
     const widths = [120, 200, 90, 260, 60];
     const at = layoutLegend(widths, 400);
-    expect(at).toEqual([{ x: 0, row: 0 }, { x: 136, row: 0 }, { x: 0, row: 1 }, { x: 106, row: 1 }, { x: 0, row: 2 }]);
-    for (let i = 1; i < at.length; i++) if (at[i].row === at[i - 1].row) expect(at[i].x).toBeGreaterThanOrEqual(at[i - 1].x + widths[i - 1]);
+    expect(at).toEqual([
+      { x: 0, row: 0 },
+      { x: 136, row: 0 },
+      { x: 0, row: 1 },
+      { x: 106, row: 1 },
+      { x: 0, row: 2 },
+    ]);
+    for (let i = 1; i < at.length; i++)
+      if (at[i].row === at[i - 1].row) expect(at[i].x).toBeGreaterThanOrEqual(at[i - 1].x + widths[i - 1]);
   });
 });

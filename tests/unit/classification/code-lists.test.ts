@@ -1,7 +1,16 @@
 import { describe, expect, it } from "vitest";
 import {
-  COMPONENTS, CONFIDENCES, DAMAGE_CODES, DISPOSITIONS, LUBRICANT_CONDITIONS, ROOT_CAUSES, ROWS,
-  SEVERITIES, TRIGGERS, ZONES, requiredTriggerFields,
+  COMPONENTS,
+  CONFIDENCES,
+  DAMAGE_CODES,
+  DISPOSITIONS,
+  LUBRICANT_CONDITIONS,
+  ROOT_CAUSES,
+  ROWS,
+  SEVERITIES,
+  TRIGGERS,
+  ZONES,
+  requiredTriggerFields,
 } from "@/lib/classification";
 
 // Each expected list is Tearline's own classification (the trade's part names,
@@ -17,15 +26,32 @@ describe("bearing parts", () => {
   it("lists every part of a freight-car journal bearing exactly once", () => {
     // Tearline's own part codes, after the trade's part names (common practice)
     expectExactlyOnce(codesOf(COMPONENTS), [
-      "cup", "cone-inboard", "cone-outboard", "rollers-inboard", "rollers-outboard", "cage-inboard",
-      "cage-outboard", "seal-inboard", "seal-outboard", "spacer", "backing-ring", "end-cap", "cap-screws",
-      "locking-plate", "lubricant", "journal",
+      "cup",
+      "cone-inboard",
+      "cone-outboard",
+      "rollers-inboard",
+      "rollers-outboard",
+      "cage-inboard",
+      "cage-outboard",
+      "seal-inboard",
+      "seal-outboard",
+      "spacer",
+      "backing-ring",
+      "end-cap",
+      "cap-screws",
+      "locking-plate",
+      "lubricant",
+      "journal",
     ]);
   });
 
   it("gives raceways to the cup and cones only, and a row choice to the one-piece double cup", () => {
     // cup = double outer ring, cones = inner rings; rollers run between their raceways (common practice)
-    expect(COMPONENTS.filter((c) => c.hasRaceway).map((c) => c.code).sort()).toEqual(["cone-inboard", "cone-outboard", "cup"]);
+    expect(
+      COMPONENTS.filter((c) => c.hasRaceway)
+        .map((c) => c.code)
+        .sort(),
+    ).toEqual(["cone-inboard", "cone-outboard", "cup"]);
     expect(COMPONENTS.filter((c) => c.hasRow).map((c) => c.code)).toEqual(["cup"]);
     expect(COMPONENTS.find((c) => c.code === "backing-ring")?.fixedRow).toBe("inboard"); // backing ring is inboard (common practice)
   });
@@ -49,7 +75,10 @@ describe("finding scales", () => {
   it("uses Tearline's 0–4 severity scale with its labels", () => {
     // Tearline's own severity scale (common practice)
     expect(SEVERITIES.map((s) => [s.code, s.label])).toEqual([
-      [0, "None"], [1, "Cosmetic"], [2, "Minor, part can be reconditioned"], [3, "Part condemned"],
+      [0, "None"],
+      [1, "Cosmetic"],
+      [2, "Minor, part can be reconditioned"],
+      [3, "Part condemned"],
       [4, "Bearing condemned / safety-relevant"],
     ]);
   });
@@ -59,8 +88,20 @@ describe("removal triggers", () => {
   it("lists the 14 triggers exactly once", () => {
     // Tearline's own removal triggers (common practice)
     expectExactlyOnce(codesOf(TRIGGERS), [
-      "wayside-hot", "wayside-acoustic", "hand-roll", "end-play-high", "end-play-tight", "seal-grease",
-      "welding", "cap-screws", "backing-ring", "wheel-removal", "accident", "visual-other", "scheduled", "other",
+      "wayside-hot",
+      "wayside-acoustic",
+      "hand-roll",
+      "end-play-high",
+      "end-play-tight",
+      "seal-grease",
+      "welding",
+      "cap-screws",
+      "backing-ring",
+      "wheel-removal",
+      "accident",
+      "visual-other",
+      "scheduled",
+      "other",
     ]);
   });
 
@@ -97,12 +138,34 @@ describe("damage codes", () => {
   it("lists the 28 damage codes exactly once", () => {
     // Tearline's own classification; mode names per ISO 15243:2017 clause 5
     expectExactlyOnce(codesOf(DAMAGE_CODES), [
-      "fatigue.subsurface", "fatigue.surface", "wear.abrasive", "wear.adhesive", "corrosion.moisture",
-      "corrosion.fretting", "corrosion.false-brinell", "electrical.arc", "electrical.fluting",
-      "deformation.overload", "deformation.debris", "deformation.handling", "fracture.forced",
-      "fracture.fatigue", "fracture.thermal", "heat.discoloration", "cage.deformed", "cage.broken",
-      "seal.damaged", "seal.leaking", "lubricant.water", "lubricant.debris", "lubricant.starved",
-      "lubricant.degraded", "mounting.cap-screw", "mounting.backing-ring", "mounting.fit", "none",
+      "fatigue.subsurface",
+      "fatigue.surface",
+      "wear.abrasive",
+      "wear.adhesive",
+      "corrosion.moisture",
+      "corrosion.fretting",
+      "corrosion.false-brinell",
+      "electrical.arc",
+      "electrical.fluting",
+      "deformation.overload",
+      "deformation.debris",
+      "deformation.handling",
+      "fracture.forced",
+      "fracture.fatigue",
+      "fracture.thermal",
+      "heat.discoloration",
+      "cage.deformed",
+      "cage.broken",
+      "seal.damaged",
+      "seal.leaking",
+      "lubricant.water",
+      "lubricant.debris",
+      "lubricant.starved",
+      "lubricant.degraded",
+      "mounting.cap-screw",
+      "mounting.backing-ring",
+      "mounting.fit",
+      "none",
     ]);
   });
 
@@ -128,8 +191,19 @@ describe("root causes", () => {
   it("lists the 13 root causes exactly once", () => {
     // Tearline's own verdict list (common practice)
     expectExactlyOnce(codesOf(ROOT_CAUSES), [
-      "water-ingress", "debris-ingress", "lubrication", "seal", "electrical", "impact", "mounting",
-      "handling", "reconditioning", "material", "end-of-life", "no-defect", "undetermined",
+      "water-ingress",
+      "debris-ingress",
+      "lubrication",
+      "seal",
+      "electrical",
+      "impact",
+      "mounting",
+      "handling",
+      "reconditioning",
+      "material",
+      "end-of-life",
+      "no-defect",
+      "undetermined",
     ]);
   });
 

@@ -5,15 +5,33 @@ import { DAMAGE_CODES, DAMAGE_FAMILIES, familyOfCode } from "@/lib/classificatio
 // erosion, 5.5 plastic deformation, 5.6 fracture and cracking. The other
 // families are Tearline's own and carry no clause.
 const EXPECTED_CLAUSE: Record<string, string | null> = {
-  "fatigue.subsurface": "5.1", "fatigue.surface": "5.1", // ISO 15243:2017 5.1 fatigue
-  "wear.abrasive": "5.2", "wear.adhesive": "5.2", // ISO 15243:2017 5.2 wear
-  "corrosion.moisture": "5.3", "corrosion.fretting": "5.3", "corrosion.false-brinell": "5.3", // 5.3 corrosion
-  "electrical.arc": "5.4", "electrical.fluting": "5.4", // ISO 15243:2017 5.4 electrical erosion
-  "deformation.overload": "5.5", "deformation.debris": "5.5", "deformation.handling": "5.5", // 5.5 plastic deformation
-  "fracture.forced": "5.6", "fracture.fatigue": "5.6", "fracture.thermal": "5.6", // 5.6 fracture and cracking
-  "heat.discoloration": null, "cage.deformed": null, "cage.broken": null, "seal.damaged": null,
-  "seal.leaking": null, "lubricant.water": null, "lubricant.debris": null, "lubricant.starved": null,
-  "lubricant.degraded": null, "mounting.cap-screw": null, "mounting.backing-ring": null, "mounting.fit": null,
+  "fatigue.subsurface": "5.1",
+  "fatigue.surface": "5.1", // ISO 15243:2017 5.1 fatigue
+  "wear.abrasive": "5.2",
+  "wear.adhesive": "5.2", // ISO 15243:2017 5.2 wear
+  "corrosion.moisture": "5.3",
+  "corrosion.fretting": "5.3",
+  "corrosion.false-brinell": "5.3", // 5.3 corrosion
+  "electrical.arc": "5.4",
+  "electrical.fluting": "5.4", // ISO 15243:2017 5.4 electrical erosion
+  "deformation.overload": "5.5",
+  "deformation.debris": "5.5",
+  "deformation.handling": "5.5", // 5.5 plastic deformation
+  "fracture.forced": "5.6",
+  "fracture.fatigue": "5.6",
+  "fracture.thermal": "5.6", // 5.6 fracture and cracking
+  "heat.discoloration": null,
+  "cage.deformed": null,
+  "cage.broken": null,
+  "seal.damaged": null,
+  "seal.leaking": null,
+  "lubricant.water": null,
+  "lubricant.debris": null,
+  "lubricant.starved": null,
+  "lubricant.degraded": null,
+  "mounting.cap-screw": null,
+  "mounting.backing-ring": null,
+  "mounting.fit": null,
   none: null,
 };
 

@@ -1,6 +1,17 @@
 // The one code-to-words lookup used by screens, the report, mail, search and tallies.
 import { describe, expect, it } from "vitest";
-import { bearingClassLabel, causeLabel, componentLabel, componentPhrase, damageLabel, NO_CODE, rowLabel, severityLabel, triggerLabel, zoneLabel } from "@/lib/classification/labels";
+import {
+  bearingClassLabel,
+  causeLabel,
+  componentLabel,
+  componentPhrase,
+  damageLabel,
+  NO_CODE,
+  rowLabel,
+  severityLabel,
+  triggerLabel,
+  zoneLabel,
+} from "@/lib/classification/labels";
 import { COMPONENTS, ROOT_CAUSES, TRIGGERS } from "@/lib/classification";
 
 describe("labels for codes", () => {

@@ -19,7 +19,10 @@ describe("query expansion", () => {
 
   it("keeps the order of the query and names each code once", () => {
     expect(expand("milky grease, spall, spalled")).toEqual([
-      "lubricant.water", "Grease with water", "fatigue.subsurface", "Subsurface spall",
+      "lubricant.water",
+      "Grease with water",
+      "fatigue.subsurface",
+      "Subsurface spall",
     ]);
   });
 

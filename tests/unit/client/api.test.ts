@@ -3,11 +3,29 @@
 import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { callApi, clientTimeoutMs, CLIENT_TIMEOUT_MS, problemFrom, noAnswerProblem, stripPrefixes, TIMEOUT_MESSAGE, OFFLINE_MESSAGE, CANCELLED_MESSAGE } from "@/lib/client/api";
+import {
+  callApi,
+  clientTimeoutMs,
+  CLIENT_TIMEOUT_MS,
+  problemFrom,
+  noAnswerProblem,
+  stripPrefixes,
+  TIMEOUT_MESSAGE,
+  OFFLINE_MESSAGE,
+  CANCELLED_MESSAGE,
+} from "@/lib/client/api";
 
 describe("problemFrom reads every error shape the server sends (lib/http/handler.ts errorResponse)", () => {
   it("a zod refusal: message and field problems, prefixes removed when asked", () => {
-    const p = problemFrom(400, { error: "Pick the site (and 1 more to fix)", code: "bad-request", fields: { "data.site": "Pick the site", "finding.zone": "Pick a zone" } }, { fieldPrefixes: ["data", "finding"] });
+    const p = problemFrom(
+      400,
+      {
+        error: "Pick the site (and 1 more to fix)",
+        code: "bad-request",
+        fields: { "data.site": "Pick the site", "finding.zone": "Pick a zone" },
+      },
+      { fieldPrefixes: ["data", "finding"] },
+    );
     expect(p).toMatchObject({ status: 400, code: "bad-request", message: "Pick the site (and 1 more to fix)", conflict: false });
     expect(p.fields).toEqual({ site: "Pick the site", zone: "Pick a zone" });
   });
@@ -141,6 +159,11 @@ describe("callApi against a real HTTP server", () => {
     await new Promise<void>((r) => closed.listen(0, "127.0.0.1", r));
     const port = (closed.address() as AddressInfo).port;
     await new Promise((r) => closed.close(r));
-    expect(await callApi("GET", `http://127.0.0.1:${port}/x`)).toMatchObject({ ok: false, status: 0, code: "offline", message: OFFLINE_MESSAGE });
+    expect(await callApi("GET", `http://127.0.0.1:${port}/x`)).toMatchObject({
+      ok: false,
+      status: 0,
+      code: "offline",
+      message: OFFLINE_MESSAGE,
+    });
   });
 });

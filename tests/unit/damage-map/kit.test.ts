@@ -3,7 +3,16 @@
 // SVG and pdfkit both put y downward, so "up" is a smaller y.
 import { describe, expect, it } from "vitest";
 import { bandPath, clockPoint, clockWords, HOUR_TICKS } from "@/lib/damage-map/geometry";
-import { arcOf, heatColour, offMapWords, RING_BANDS, SEVERITY_COLOURS, SEVERITY_KEYS, severityColour, severityWord } from "@/lib/damage-map/look";
+import {
+  arcOf,
+  heatColour,
+  offMapWords,
+  RING_BANDS,
+  SEVERITY_COLOURS,
+  SEVERITY_KEYS,
+  severityColour,
+  severityWord,
+} from "@/lib/damage-map/look";
 import { SEVERITIES } from "@/lib/classification";
 
 const close = (p: [number, number], q: [number, number]) => {

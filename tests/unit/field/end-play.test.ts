@@ -1,11 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  DEFAULT_END_PLAY_POLICY,
-  evaluateEndPlay,
-  ZERO_END_PLAY_IN,
-  type EndPlayInput,
-  type EndPlayResult,
-} from "@/lib/field";
+import { DEFAULT_END_PLAY_POLICY, evaluateEndPlay, ZERO_END_PLAY_IN, type EndPlayInput, type EndPlayResult } from "@/lib/field";
 
 const dial = (readings: Array<number | string>, extra: Partial<EndPlayInput> = {}): EndPlayInput => ({
   method: "dial",
@@ -61,11 +55,7 @@ describe("dial trials", () => {
     const r = evaluateEndPlay({
       method: "dial",
       unit: "in",
-      trials: [
-        { zero: 0.1, reading: 0.112 },
-        { zero: "0.100", reading: "0.113" },
-        { reading: 0.0115 },
-      ],
+      trials: [{ zero: 0.1, reading: 0.112 }, { zero: "0.100", reading: "0.113" }, { reading: 0.0115 }],
     });
     if (r.call === "incomplete") throw new Error("expected a measurement");
     expect(r.count).toBe(3);
@@ -108,7 +98,11 @@ describe("dial trials", () => {
   });
 
   it("names an unreadable trial, whether reading or zero", () => {
-    const r = evaluateEndPlay({ method: "dial", unit: "in", trials: [{ reading: "0.01" }, { reading: "abc" }, { zero: "x", reading: 0.01 }] });
+    const r = evaluateEndPlay({
+      method: "dial",
+      unit: "in",
+      trials: [{ reading: "0.01" }, { reading: "abc" }, { zero: "x", reading: 0.01 }],
+    });
     const errors = r.messages.filter((m) => m.code === "trial-unreadable").map((m) => m.text);
     expect(errors[0]).toMatch(/^Trial 2: the reading/);
     expect(errors[1]).toMatch(/^Trial 3: the zero/);

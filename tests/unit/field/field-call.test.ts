@@ -173,7 +173,11 @@ describe("undecided until the shop floor has settled it", () => {
   });
 
   it("unticked safety confirmations are recorded with the call but do not decide it", () => {
-    const c = decideFieldCall({ handRoll: cleanRoll(), endPlay: dial(0.02), safetyUnconfirmed: [{ key: "blueSignal", text: "blue-signal protection is in place" }] });
+    const c = decideFieldCall({
+      handRoll: cleanRoll(),
+      endPlay: dial(0.02),
+      safetyUnconfirmed: [{ key: "blueSignal", text: "blue-signal protection is in place" }],
+    });
     expect(c.call).toBe("keep");
     expect(c.reasons.find((r) => r.source === "safety")).toMatchObject({ level: "warn", code: "safety-unconfirmed-blueSignal" });
   });
@@ -182,8 +186,16 @@ describe("undecided until the shop floor has settled it", () => {
 describe("visual finding list", () => {
   it("has a plain label for each code, with only 'other' left to judgement", () => {
     expect(VISUAL_FINDINGS.map((f) => f.code)).toEqual([
-      "welding-damage", "cap-screw-loose", "cap-screw-missing", "seal-damaged", "grease-loss",
-      "backing-ring-loose", "cup-cracked", "heat-discoloration", "water", "other",
+      "welding-damage",
+      "cap-screw-loose",
+      "cap-screw-missing",
+      "seal-damaged",
+      "grease-loss",
+      "backing-ring-loose",
+      "cup-cracked",
+      "heat-discoloration",
+      "water",
+      "other",
     ]);
     expect(VISUAL_FINDINGS.filter((f) => !f.removes).map((f) => f.code)).toEqual(["other"]);
     for (const f of VISUAL_FINDINGS) expect(f.label.length).toBeGreaterThan(3);

@@ -1,13 +1,6 @@
 import { describe, expect, it } from "vitest";
 import checkValues from "@/tests/fixtures/field-check-values.json";
-import {
-  basicRatingLifeL10,
-  DAYS_PER_MEAN_MONTH,
-  l10Miles,
-  monthsBetween,
-  wheelRevolutions,
-  wheelRevolutionsPerMile,
-} from "@/lib/field";
+import { basicRatingLifeL10, DAYS_PER_MEAN_MONTH, l10Miles, monthsBetween, wheelRevolutions, wheelRevolutionsPerMile } from "@/lib/field";
 
 const iso = checkValues.iso281;
 const rel = (got: number, expected: number) => Math.abs(got - expected) / Math.abs(expected);
@@ -49,13 +42,12 @@ describe("wheel revolutions", () => {
     expect(rel(wheelRevolutions(1000, wheel.diameter_in), 1000 * wheel.rev_per_mile)).toBeLessThan(iso.rel_tol);
   });
 
-  it.each([
-    () => wheelRevolutionsPerMile(0),
-    () => wheelRevolutionsPerMile(Number.NaN),
-    () => wheelRevolutions(-1, 36),
-  ])("refuses a non-positive input (%#)", (call) => {
-    expect(call).toThrow(RangeError);
-  });
+  it.each([() => wheelRevolutionsPerMile(0), () => wheelRevolutionsPerMile(Number.NaN), () => wheelRevolutions(-1, 36)])(
+    "refuses a non-positive input (%#)",
+    (call) => {
+      expect(call).toThrow(RangeError);
+    },
+  );
 });
 
 describe("ISO 281 basic rating life", () => {

@@ -37,7 +37,12 @@ describe("plausibility", () => {
     // common practice default limit 0.25 in
     expect(dial([0.25]).messages.some((x) => x.code === "implausible-reading")).toBe(false);
     expect(dial([0.2], {}).call).toBe("over-limit");
-    expect(evaluateEndPlay({ method: "dial", unit: "in", trials: [{ reading: 0.2 }], rollersSeated: true }, { ...DEFAULT_END_PLAY_POLICY, plausibleMaxIn: 0.1 }).call).toBe("incomplete");
+    expect(
+      evaluateEndPlay(
+        { method: "dial", unit: "in", trials: [{ reading: 0.2 }], rollersSeated: true },
+        { ...DEFAULT_END_PLAY_POLICY, plausibleMaxIn: 0.1 },
+      ).call,
+    ).toBe("incomplete");
   });
 
   it("names an outlier trial far from the others", () => {

@@ -1,14 +1,6 @@
 import { describe, expect, it } from "vitest";
 import checkValues from "@/tests/fixtures/field-check-values.json";
-import {
-  formatInches,
-  formatMm,
-  inToMm,
-  MM_PER_IN,
-  mmToIn,
-  nearestSixtyFourth,
-  parseLength,
-} from "@/lib/field/units";
+import { formatInches, formatMm, inToMm, MM_PER_IN, mmToIn, nearestSixtyFourth, parseLength } from "@/lib/field/units";
 
 function value(text: string | number): number {
   const parsed = parseLength(text);

@@ -10,7 +10,8 @@ describe("isPageRequest", () => {
     }
   });
   it("leaves the API (which answers its own 503), built files, public files and writes alone", () => {
-    for (const p of ["/api/cases", "/api", "/_next/static/chunks/app.js", "/sw.js", "/favicon.ico", "/manifest.webmanifest"]) expect(isPageRequest("GET", p), p).toBe(false);
+    for (const p of ["/api/cases", "/api", "/_next/static/chunks/app.js", "/sw.js", "/favicon.ico", "/manifest.webmanifest"])
+      expect(isPageRequest("GET", p), p).toBe(false);
     for (const m of ["POST", "PATCH", "PUT", "DELETE", "OPTIONS"]) expect(isPageRequest(m, "/cases"), m).toBe(false);
   });
 });
@@ -21,7 +22,19 @@ describe("retryPath", () => {
     expect(retryPath("/sign-in")).toBe("/sign-in");
   });
   it("sends anything else home: missing, another host, a scheme, the outage page itself, overlong", () => {
-    for (const v of [null, undefined, "", "cases", "//evil.example/x", "/\\evil.example", "https://evil.example/", "javascript:alert(1)", UNAVAILABLE_PATH, `${UNAVAILABLE_PATH}?x=1`, "/" + "a".repeat(2001)]) {
+    for (const v of [
+      null,
+      undefined,
+      "",
+      "cases",
+      "//evil.example/x",
+      "/\\evil.example",
+      "https://evil.example/",
+      "javascript:alert(1)",
+      UNAVAILABLE_PATH,
+      `${UNAVAILABLE_PATH}?x=1`,
+      "/" + "a".repeat(2001),
+    ]) {
       expect(retryPath(v), String(v)).toBe("/");
     }
   });

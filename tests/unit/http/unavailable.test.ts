@@ -35,7 +35,9 @@ describe("isObjectStoreOutage", () => {
   it("is true for refused sockets, timeouts and 503 answers, false for a refusal by the store", () => {
     expect(isObjectStoreOutage(withCode("ECONNREFUSED"))).toBe(true);
     expect(isObjectStoreOutage(Object.assign(new Error("t"), { name: "TimeoutError" }))).toBe(true);
-    expect(isObjectStoreOutage(Object.assign(new Error("s"), { name: "ServiceUnavailable", $metadata: { httpStatusCode: 503 } }))).toBe(true);
+    expect(isObjectStoreOutage(Object.assign(new Error("s"), { name: "ServiceUnavailable", $metadata: { httpStatusCode: 503 } }))).toBe(
+      true,
+    );
     expect(isObjectStoreOutage(Object.assign(new Error("n"), { name: "NoSuchKey", $metadata: { httpStatusCode: 404 } }))).toBe(false);
     expect(isObjectStoreOutage(Object.assign(new Error("a"), { name: "AccessDenied", $metadata: { httpStatusCode: 403 } }))).toBe(false);
   });

@@ -44,14 +44,24 @@ class MemoryRows implements PhotoRowStore<NewPhotoRow & { id: number }> {
   }
 }
 
-const input = async (seed = 1) => ({ caseId: CASE, file: await twoToneJpeg({ seed }), fileName: "cup.jpg", tags: { component: "cup", caption: "Load zone" }, uploadedBy: "u1", limits });
+const input = async (seed = 1) => ({
+  caseId: CASE,
+  file: await twoToneJpeg({ seed }),
+  fileName: "cup.jpg",
+  tags: { component: "cup", caption: "Load zone" },
+  uploadedBy: "u1",
+  limits,
+});
 
 describe("ingestPhoto", () => {
   it("stores the original and both derivatives, then writes the row", async () => {
     const bucket = new MemoryBucket();
     const rows = new MemoryRows();
     const order: string[] = [];
-    const spy: PhotoObjectStore = { put: async (k, b) => (order.push(k.split("/").pop()!), bucket.put(k, b)), remove: (k) => bucket.remove(k) };
+    const spy: PhotoObjectStore = {
+      put: async (k, b) => (order.push(k.split("/").pop()!), bucket.put(k, b)),
+      remove: (k) => bucket.remove(k),
+    };
     const res = await ingestPhoto(await input(), { store: spy, rows });
     expect(res.duplicate).toBe(false);
     expect(order[0]).toBe("original");
@@ -82,7 +92,10 @@ describe("ingestPhoto", () => {
   it("stores every object before it opens the row transaction", async () => {
     const bucket = new MemoryBucket();
     const rows = new MemoryRows();
-    const spy: PhotoObjectStore = { put: async (k, b) => (rows.events.push(`put ${k.split("/").pop()}`), bucket.put(k, b)), remove: (k) => bucket.remove(k) };
+    const spy: PhotoObjectStore = {
+      put: async (k, b) => (rows.events.push(`put ${k.split("/").pop()}`), bucket.put(k, b)),
+      remove: (k) => bucket.remove(k),
+    };
     await ingestPhoto(await input(6), { store: spy, rows });
     expect(rows.events.slice(0, 1)).toEqual(["put original"]);
     expect(rows.events.slice(3)).toEqual(["lock", "insert"]);
@@ -94,7 +107,10 @@ describe("ingestPhoto", () => {
     const first = await ingestPhoto(await input(7), { store: bucket, rows });
     rows.failInsert = true;
     // A second upload that lost the race: it finds the row under the lock and leaves the shared objects.
-    const again = await ingestPhoto(await input(7), { store: bucket, rows: { ...rows, findByHash: async () => null, exclusive: rows.exclusive.bind(rows) } });
+    const again = await ingestPhoto(await input(7), {
+      store: bucket,
+      rows: { ...rows, findByHash: async () => null, exclusive: rows.exclusive.bind(rows) },
+    });
     expect(again).toEqual({ photo: first.photo, duplicate: true });
     expect(bucket.objects.size).toBe(3);
   });
@@ -124,7 +140,9 @@ describe("sweepOrphanPhotos", () => {
     const removed: string[] = [];
     const report = await sweepOrphanPhotos(
       {
-        list: async function* () { yield* objects; },
+        list: async function* () {
+          yield* objects;
+        },
         rowExists: async (_c, s) => s === sha("b"),
         remove: async (keys) => void removed.push(...keys),
       },
@@ -137,7 +155,13 @@ describe("sweepOrphanPhotos", () => {
   it("only reports in a dry run", async () => {
     const removed: string[] = [];
     const report = await sweepOrphanPhotos(
-      { list: async function* () { yield* objects; }, rowExists: async () => false, remove: async (k) => void removed.push(...k) },
+      {
+        list: async function* () {
+          yield* objects;
+        },
+        rowExists: async () => false,
+        remove: async (k) => void removed.push(...k),
+      },
       { olderThanMinutes: 1, now, dryRun: true },
     );
     expect(report.orphanFolders).toBe(3);

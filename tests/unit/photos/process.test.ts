@@ -5,7 +5,18 @@ import { describe, expect, it } from "vitest";
 import { processPhoto, sha256Hex, SCREEN_EDGE, THUMB_EDGE } from "@/lib/photos/process";
 import { PhotoRefusal } from "@/lib/photos/refusal";
 import { DEFAULT_MAX_BYTES, DEFAULT_MAX_PIXELS } from "@/lib/photos/limits";
-import { avifPhoto, heicHeaderOnly, noisyJpeg, pixelAt, pixelBombPng, smallPng, svgDrawing, textAsJpeg, truncatedJpeg, twoToneJpeg } from "../../support/photo-files";
+import {
+  avifPhoto,
+  heicHeaderOnly,
+  noisyJpeg,
+  pixelAt,
+  pixelBombPng,
+  smallPng,
+  svgDrawing,
+  textAsJpeg,
+  truncatedJpeg,
+  twoToneJpeg,
+} from "../../support/photo-files";
 
 const limits = { maxBytes: DEFAULT_MAX_BYTES, maxPixels: DEFAULT_MAX_PIXELS };
 

@@ -1,7 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { acceptedKind, heifMime, sniffImage } from "@/lib/photos/sniff";
 import { PhotoRefusal } from "@/lib/photos/refusal";
-import { avifPhoto, heicHeaderOnly, pixelBombPng, smallPng, smallWebp, svgDrawing, textAsJpeg, twoToneJpeg } from "../../support/photo-files";
+import {
+  avifPhoto,
+  heicHeaderOnly,
+  pixelBombPng,
+  smallPng,
+  smallWebp,
+  svgDrawing,
+  textAsJpeg,
+  twoToneJpeg,
+} from "../../support/photo-files";
 
 function refusalOf(fn: () => unknown): PhotoRefusal {
   try {

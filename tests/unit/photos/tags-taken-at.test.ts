@@ -12,7 +12,13 @@ describe("photo tags", () => {
     form.set("clockDeg", "90");
     form.set("findingId", "");
     form.set("caption", "  Spall in the load zone  ");
-    expect(photoTagsSchema.parse(tagsFromForm(form))).toEqual({ component: "cup", row: null, clockDeg: 90, findingId: null, caption: "Spall in the load zone" });
+    expect(photoTagsSchema.parse(tagsFromForm(form))).toEqual({
+      component: "cup",
+      row: null,
+      clockDeg: 90,
+      findingId: null,
+      caption: "Spall in the load zone",
+    });
   });
 
   it("give a part that belongs to one row that row, and refuse the other", () => {
@@ -38,7 +44,7 @@ describe("takenAtFromExif", () => {
   });
 
   it("ignores a camera clock that was never set or runs in the future", async () => {
-    expect(takenAtFromExif(await exifOf("2000:01:01 00:00:00"), new Date("2026-01-01")) ).not.toBeNull();
+    expect(takenAtFromExif(await exifOf("2000:01:01 00:00:00"), new Date("2026-01-01"))).not.toBeNull();
     expect(takenAtFromExif(await exifOf("1980:01:01 00:00:00"))).toBeNull();
     expect(takenAtFromExif(await exifOf("2031:05:05 10:00:00"), new Date("2026-06-01"))).toBeNull();
   });

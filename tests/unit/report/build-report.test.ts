@@ -32,7 +32,16 @@ describe("case report model", () => {
   it("calls an end play over 1/16 in a removal", () => {
     const src = demoReportSource();
     // 0.070 in is over the 0.0625 in limit (common practice for North American freight interchange).
-    src.case.fieldChecks = { endPlay: { method: "dial", unit: "in", trials: [{ zero: 0, reading: 0.07 }, { zero: 0, reading: 0.071 }] } };
+    src.case.fieldChecks = {
+      endPlay: {
+        method: "dial",
+        unit: "in",
+        trials: [
+          { zero: 0, reading: 0.07 },
+          { zero: 0, reading: 0.071 },
+        ],
+      },
+    };
     const field = buildCaseReport(src).field;
     expect(field.endPlay!.removes).toBe(true);
     expect(field.endPlay!.call).toBe("Over the limit: remove");
@@ -51,7 +60,11 @@ describe("case report model", () => {
     const r = buildCaseReport(demoReportSource());
     expect(r.components.map((c) => c.code)).toEqual(["cup", "cone-inboard", "seal-inboard"]);
     expect(r.components[0].disposition).toBe("Scrap");
-    expect(r.components[0].findings[0]).toMatchObject({ damage: "Water etch", where: "Inboard row, Raceway, at 12 o'clock (0°), over 40°", size: "22 × 9 mm" });
+    expect(r.components[0].findings[0]).toMatchObject({
+      damage: "Water etch",
+      where: "Inboard row, Raceway, at 12 o'clock (0°), over 40°",
+      size: "22 × 9 mm",
+    });
     // The cup photo comes first (cup before seal), so it is photo 1 and the seal photo is 2.
     expect(r.components[0].findings[0].photoNumbers).toEqual([1]);
     expect(r.components[2].findings[0].photoNumbers).toEqual([2]);

@@ -2,7 +2,20 @@ import { describe, expect, it } from "vitest";
 import { damageArcs } from "@/lib/report/damage-map";
 
 describe("damageArcs", () => {
-  const f = (over: Record<string, unknown>) => ({ id: "x", component: "cup", row: null, damageCode: "fatigue.subsurface", severity: 3, clockDeg: 30, arcDeg: 20, zone: null, lengthMm: null, widthMm: null, notes: "", ...over });
+  const f = (over: Record<string, unknown>) => ({
+    id: "x",
+    component: "cup",
+    row: null,
+    damageCode: "fatigue.subsurface",
+    severity: 3,
+    clockDeg: 30,
+    arcDeg: 20,
+    zone: null,
+    lengthMm: null,
+    widthMm: null,
+    notes: "",
+    ...over,
+  });
 
   it("draws a cup finding without a row on both rows, centred on its clock position", () => {
     const { arcs } = damageArcs([f({})], () => "Spall");
@@ -13,7 +26,10 @@ describe("damageArcs", () => {
   });
 
   it("leaves rollers and findings without a clock position off the map", () => {
-    const { arcs, offMap } = damageArcs([f({ component: "rollers-inboard" }), f({ clockDeg: null }), f({ component: "cone-outboard" })], () => "");
+    const { arcs, offMap } = damageArcs(
+      [f({ component: "rollers-inboard" }), f({ clockDeg: null }), f({ component: "cone-outboard" })],
+      () => "",
+    );
     expect(arcs).toHaveLength(1);
     expect(arcs[0]).toMatchObject({ ring: "cone", row: "outboard" });
     expect(offMap).toBe(2);

@@ -6,9 +6,15 @@ import { demoReportSource } from "../../fixtures/report-demo-case";
 
 describe("evidence manifest", () => {
   it("names photos by report number with a safe file name and the type's extension", () => {
-    expect(evidencePhotoPath({ number: 3, fileName: "Seal lip (inboard).JPG", contentType: "image/jpeg", sha256: "c".repeat(64) })).toBe("photos/03-Seal-lip-inboard.jpg");
-    expect(evidencePhotoPath({ number: 12, fileName: "../../etc/passwd", contentType: "image/png", sha256: "d".repeat(64) })).toBe("photos/12-etc-passwd.png");
-    expect(evidencePhotoPath({ number: 1, fileName: "", contentType: "image/heic", sha256: "e".repeat(64) })).toBe("photos/01-eeeeeeeeeeee.heic");
+    expect(evidencePhotoPath({ number: 3, fileName: "Seal lip (inboard).JPG", contentType: "image/jpeg", sha256: "c".repeat(64) })).toBe(
+      "photos/03-Seal-lip-inboard.jpg",
+    );
+    expect(evidencePhotoPath({ number: 12, fileName: "../../etc/passwd", contentType: "image/png", sha256: "d".repeat(64) })).toBe(
+      "photos/12-etc-passwd.png",
+    );
+    expect(evidencePhotoPath({ number: 1, fileName: "", contentType: "image/heic", sha256: "e".repeat(64) })).toBe(
+      "photos/01-eeeeeeeeeeee.heic",
+    );
   });
 
   it("writes SHA256SUMS lines as sha256sum does: digest, two spaces, path", () => {

@@ -14,7 +14,17 @@ describe.skipIf(!hasPoppler())("case report PDF", () => {
     expect(count).toBeGreaterThanOrEqual(2);
     const all = pages.join("\n");
     expect(all).toContain("TEARLINE CASE REPORT");
-    for (const s of ["Bearing and removal", "Field checks", "Teardown", "Findings by part", "Damage map", "Verdict", "Related cases", "Photo register"]) expect(all).toContain(s);
+    for (const s of [
+      "Bearing and removal",
+      "Field checks",
+      "Teardown",
+      "Findings by part",
+      "Damage map",
+      "Verdict",
+      "Related cases",
+      "Photo register",
+    ])
+      expect(all).toContain(s);
     expect(all).toContain("Signed revision — signed by Tomasz Wielgus on 2 Apr 2026, 09:30 UTC");
     // The end-play arithmetic as printed: mean 0.020 in = 0.508 mm (1 in = 25.4 mm, NIST SP 811).
     expect(all).toContain("0.0200 in = 0.508 mm (3 trials)");
@@ -38,8 +48,13 @@ describe.skipIf(!hasPoppler())("case report PDF", () => {
 
   it("prints the safety flag beside the confirmations left unticked, and none when all were ticked", async () => {
     const src = demoReportSource();
-    const unticked = { ...src, case: { ...src.case, fieldChecks: { ...src.case.fieldChecks, confirmations: { ppe: true, blueSignal: true } } } };
-    const flagged = pdfPages(await renderReportPdf(buildCaseReport(unticked))).join("\n").replace(/\s+/g, " ");
+    const unticked = {
+      ...src,
+      case: { ...src.case, fieldChecks: { ...src.case.fieldChecks, confirmations: { ppe: true, blueSignal: true } } },
+    };
+    const flagged = pdfPages(await renderReportPdf(buildCaseReport(unticked)))
+      .join("\n")
+      .replace(/\s+/g, " ");
     expect(flagged).toContain("Safety flag: confirmations left unticked at filing");
     expect(flagged).toContain("Not confirmed: wheelset is out from under the car and secured against rolling");
     expect(flagged).not.toContain("Not confirmed: blue-signal");

@@ -4,12 +4,31 @@ import { buildCaseReport } from "@/lib/report/build-report";
 import type { ReportSource } from "@/lib/report/types";
 import { demoReportSource } from "../../fixtures/report-demo-case";
 
-const hashOf = (s: ReportSource) => contentHash({
-  caseNumber: s.case.number,
-  verdict: { primaryCause: s.case.primaryCause, contributingCauses: s.case.contributingCauses, confidence: s.case.confidence, removalConfirmed: s.case.removalConfirmed, correctiveAction: s.case.correctiveAction, verdictNotes: s.case.verdictNotes },
-  findings: s.findings.map(({ component, row, zone, damageCode, severity, clockDeg, arcDeg, lengthMm, widthMm, notes }) => ({ component, row, zone, damageCode, severity, clockDeg, arcDeg, lengthMm, widthMm, notes })),
-  photoHashes: s.photos.map((p) => p.sha256),
-});
+const hashOf = (s: ReportSource) =>
+  contentHash({
+    caseNumber: s.case.number,
+    verdict: {
+      primaryCause: s.case.primaryCause,
+      contributingCauses: s.case.contributingCauses,
+      confidence: s.case.confidence,
+      removalConfirmed: s.case.removalConfirmed,
+      correctiveAction: s.case.correctiveAction,
+      verdictNotes: s.case.verdictNotes,
+    },
+    findings: s.findings.map(({ component, row, zone, damageCode, severity, clockDeg, arcDeg, lengthMm, widthMm, notes }) => ({
+      component,
+      row,
+      zone,
+      damageCode,
+      severity,
+      clockDeg,
+      arcDeg,
+      lengthMm,
+      widthMm,
+      notes,
+    })),
+    photoHashes: s.photos.map((p) => p.sha256),
+  });
 const row = (s: ReportSource, label: string) => buildCaseReport(s).verdict.rows.find((r) => r[0] === label)?.[1];
 
 describe("the signature on the report", () => {

@@ -40,7 +40,11 @@ describe("snippet", () => {
   });
 
   it("returns the whole short text, or null without a match", () => {
-    expect(snippet("Milky grease.", compileTerms(["milky"]))!.segments.map((s) => s.text).join("")).toBe("Milky grease.");
+    expect(
+      snippet("Milky grease.", compileTerms(["milky"]))!
+        .segments.map((s) => s.text)
+        .join(""),
+    ).toBe("Milky grease.");
     expect(snippet(long, compileTerms(["fluting"]))).toBeNull();
   });
 });

@@ -39,7 +39,9 @@ describe("search text → clauses", () => {
   it("treats tokens with digits as serials, car or case numbers", () => {
     const clauses = parse("SRRX 204518 TL-26-00042");
     expect(clauses.map((c) => [c.kind, c.text])).toEqual([
-      ["words", "srrx"], ["identifier", "204518"], ["identifier", "TL-26-00042"],
+      ["words", "srrx"],
+      ["identifier", "204518"],
+      ["identifier", "TL-26-00042"],
     ]);
   });
 

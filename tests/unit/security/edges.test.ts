@@ -44,7 +44,8 @@ describe("state-changing API requests", () => {
 
 describe("one-time links", () => {
   it("are removed from text and HTML, other links stay", () => {
-    const text = "Open http://127.0.0.1:3000/invitation/abcDEF123_-xyz to join; reset: https://t.example/api/auth/reset-password/tok123?callbackURL=%2Freset. Case: https://t.example/cases/JB-1";
+    const text =
+      "Open http://127.0.0.1:3000/invitation/abcDEF123_-xyz to join; reset: https://t.example/api/auth/reset-password/tok123?callbackURL=%2Freset. Case: https://t.example/cases/JB-1";
     const out = redactOneTimeLinks(text);
     expect(out).not.toMatch(/abcDEF123|tok123/);
     expect(out.split(LINK_REMOVED)).toHaveLength(3);
@@ -58,7 +59,9 @@ describe("sign-in limits", () => {
     const now = new Date("2026-03-01T10:00:30Z");
     const start = new Date("2026-03-01T10:00:00Z");
     expect(addressBlockedUntil({ failures: SIGN_IN_LIMITS.addressFailures - 1, windowStart: start, lockedUntil: null }, now)).toBeNull();
-    expect(addressBlockedUntil({ failures: SIGN_IN_LIMITS.addressFailures, windowStart: start, lockedUntil: null }, now)?.toISOString()).toBe("2026-03-01T10:01:00.000Z");
+    expect(
+      addressBlockedUntil({ failures: SIGN_IN_LIMITS.addressFailures, windowStart: start, lockedUntil: null }, now)?.toISOString(),
+    ).toBe("2026-03-01T10:01:00.000Z");
     expect(addressBlockedUntil({ failures: 99, windowStart: new Date("2026-03-01T09:58:00Z"), lockedUntil: null }, now)).toBeNull();
   });
 });

@@ -13,7 +13,10 @@ import { createRng } from "../../../scripts/seed/prng";
 const policy = { ...DEFAULT_END_PLAY_POLICY };
 const ctx: SeedContext = {
   sites: { MJC: { id: "site-mjc", policy }, PYC: { id: "site-pyc", policy }, OSW: { id: "site-osw", policy } },
-  labId: "site-cfl", filer: { MJC: "u-insp", PYC: "u-insp2", OSW: "u-analyst" }, analyst: "u-analyst", engineer: "u-engineer",
+  labId: "site-cfl",
+  filer: { MJC: "u-insp", PYC: "u-insp2", OSW: "u-analyst" },
+  analyst: "u-analyst",
+  engineer: "u-engineer",
 };
 
 function buildAll(seed = 42) {
@@ -39,8 +42,15 @@ describe("demo plan", () => {
 
   it("keeps the newest removals in the early stages and most cases signed", () => {
     const { specs } = planDemoCases(createRng(42));
-    const latestSigned = specs.filter((s) => s.status === "signed").map((s) => s.removedOn).sort().at(-1)!;
-    const earliestField = specs.filter((s) => s.status === "field").map((s) => s.removedOn).sort()[0];
+    const latestSigned = specs
+      .filter((s) => s.status === "signed")
+      .map((s) => s.removedOn)
+      .sort()
+      .at(-1)!;
+    const earliestField = specs
+      .filter((s) => s.status === "field")
+      .map((s) => s.removedOn)
+      .sort()[0];
     expect(earliestField > latestSigned).toBe(true);
     expect(specs.filter((s) => s.status === "signed").length / specs.length).toBeGreaterThan(0.7); // demo scenario: most signed
   });
@@ -93,7 +103,14 @@ describe("built demo cases", () => {
     for (const { spec, c } of built) {
       if (spec.status !== "signoff" && spec.status !== "signed") continue;
       const v = c.values;
-      expect(verdictProblems({ primaryCause: v.primaryCause ?? null, confidence: v.confidence ?? null, removalConfirmed: v.removalConfirmed ?? null, findingCount: c.findings.length })).toEqual([]);
+      expect(
+        verdictProblems({
+          primaryCause: v.primaryCause ?? null,
+          confidence: v.confidence ?? null,
+          removalConfirmed: v.removalConfirmed ?? null,
+          findingCount: c.findings.length,
+        }),
+      ).toEqual([]);
       if (spec.cause === "no-defect") expect(v.removalConfirmed).toBe("no-defect");
       else if (spec.cause !== "undetermined") expect(v.removalConfirmed).toBe("confirmed");
       if (spec.status === "signed") expect(v.signedBy && v.signedAt).toBeTruthy();
@@ -116,7 +133,11 @@ describe("built demo cases", () => {
       expect(times).toEqual([...times].sort((a, b) => a - b));
       expect(events[0].action).toBe("created");
       const steps = events.map((e) => e.action).filter((a) => ["receive", "propose", "sign", "return", "reopen"].includes(a));
-      const expected = { field: [], bench: spec.returned ? ["receive", "propose", "return"] : ["receive"], signoff: ["receive", "propose"] } as Record<string, string[]>;
+      const expected = {
+        field: [],
+        bench: spec.returned ? ["receive", "propose", "return"] : ["receive"],
+        signoff: ["receive", "propose"],
+      } as Record<string, string[]>;
       if (spec.status !== "signed") expect(steps).toEqual(expected[spec.status]);
       else expect(steps.at(-1)).toBe("sign");
       if (c.values.signedAt) expect(c.values.signedAt.getTime()).toBeLessThanOrEqual(Date.parse("2026-11-30T16:00:00Z"));

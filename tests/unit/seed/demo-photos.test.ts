@@ -17,8 +17,17 @@ import { createRng } from "../../../scripts/seed/prng";
 
 const sha = (b: Buffer) => createHash("sha256").update(b).digest("hex");
 const spec = (over: Partial<DemoPhotoSpec> = {}): DemoPhotoSpec => ({
-  seed: 4242, caseNumber: "TL-25-00033", component: "cup", row: "outboard", damageCode: "fatigue.subsurface",
-  zone: "raceway", severity: 3, view: "close", partWords: "cup, outboard", takenAt: new Date("2025-04-02T10:11:12Z"), ...over,
+  seed: 4242,
+  caseNumber: "TL-25-00033",
+  component: "cup",
+  row: "outboard",
+  damageCode: "fatigue.subsurface",
+  zone: "raceway",
+  severity: 3,
+  view: "close",
+  partWords: "cup, outboard",
+  takenAt: new Date("2025-04-02T10:11:12Z"),
+  ...over,
 });
 
 describe("drawDemoPhoto", () => {
@@ -29,7 +38,15 @@ describe("drawDemoPhoto", () => {
   });
 
   it("draws a different picture for each damage code on the same part and seed", async () => {
-    const codes = ["none", "fatigue.subsurface", "corrosion.moisture", "electrical.arc", "electrical.fluting", "deformation.overload", "fatigue.surface"];
+    const codes = [
+      "none",
+      "fatigue.subsurface",
+      "corrosion.moisture",
+      "electrical.arc",
+      "electrical.fluting",
+      "deformation.overload",
+      "fatigue.surface",
+    ];
     const images = await Promise.all(codes.map((damageCode) => drawDemoPhoto(spec({ damageCode }))));
     expect(new Set(images.map(sha)).size).toBe(codes.length);
     // Damage changes the pixels, not only the bytes: each differs visibly from the clean raceway.
@@ -60,8 +77,12 @@ describe("drawDemoPhoto", () => {
       { component: "cap-screws", row: null, damageCode: "mounting.cap-screw", zone: "other", partWords: "cap screws" },
     ];
     for (const p of parts) {
-      const { data, info } = await sharp(await drawDemoPhoto(spec(p))).raw().toBuffer({ resolveWithObject: true });
-      const px = (x: number, y: number) => [...data.subarray((y * info.width + x) * info.channels, (y * info.width + x) * info.channels + 3)];
+      const { data, info } = await sharp(await drawDemoPhoto(spec(p)))
+        .raw()
+        .toBuffer({ resolveWithObject: true });
+      const px = (x: number, y: number) => [
+        ...data.subarray((y * info.width + x) * info.channels, (y * info.width + x) * info.channels + 3),
+      ];
       // The strip's own colours: amber #f2a516 stripes in the hatch, near-black behind the words.
       let amber = 0;
       for (let y = 866; y < 898; y++) for (let x = 0; x < 28; x++) if (px(x, y)[0] > 190 && px(x, y)[2] < 90) amber++;
@@ -71,7 +92,9 @@ describe("drawDemoPhoto", () => {
   });
 
   it("writes the case number and part in the strip", () => {
-    expect(captionText("TL-25-00033", partWords({ component: "cup", row: "outboard" }))).toBe("TEARLINE DEMO · TL-25-00033 · CUP, OUTBOARD");
+    expect(captionText("TL-25-00033", partWords({ component: "cup", row: "outboard" }))).toBe(
+      "TEARLINE DEMO · TL-25-00033 · CUP, OUTBOARD",
+    );
     expect(partWords({ component: "lubricant", row: null })).toBe("grease");
     expect(partWords({ component: "rollers-inboard", row: "inboard" })).toBe("rollers, inboard");
   });
@@ -82,7 +105,10 @@ describe("planDemoPhotos on the generated casebook", () => {
   const policy = { ...DEFAULT_END_PLAY_POLICY };
   const ctx: SeedContext = {
     sites: { MJC: { id: "site-mjc", policy }, PYC: { id: "site-pyc", policy }, OSW: { id: "site-osw", policy } },
-    labId: "site-cfl", filer: { MJC: "u-insp", PYC: "u-insp2", OSW: "u-analyst" }, analyst: "u-analyst", engineer: "u-engineer",
+    labId: "site-cfl",
+    filer: { MJC: "u-insp", PYC: "u-insp2", OSW: "u-analyst" },
+    analyst: "u-analyst",
+    engineer: "u-engineer",
   };
   const rng = createRng(20261130);
   const { specs } = planDemoCases(rng);
@@ -94,7 +120,12 @@ describe("planDemoPhotos on the generated casebook", () => {
     const yy = s.removedOn.slice(2, 4);
     seq.set(yy, (seq.get(yy) ?? 0) + 1);
     return {
-      id: c.values.id, number: `TL-${yy}-${String(seq.get(yy)).padStart(5, "0")}`, status: c.values.status!, removedOn: s.removedOn, site: s.site, trigger: s.trigger,
+      id: c.values.id,
+      number: `TL-${yy}-${String(seq.get(yy)).padStart(5, "0")}`,
+      status: c.values.status!,
+      removedOn: s.removedOn,
+      site: s.site,
+      trigger: s.trigger,
       findings: c.findings.map((f, i) => ({ ...f, id: `${c.values.id}-f${i}`, createdAt: f.createdAt! })),
     };
   });
@@ -127,7 +158,9 @@ describe("planDemoPhotos on the generated casebook", () => {
 
   it("covers the arc-burn cluster, the water-etch run and spalls with cup photos to compare", () => {
     const leadCases = (code: string, pred: (c: (typeof casebook)[number]) => boolean = () => true) =>
-      [...perCase.keys()].map((id) => byId.get(id)!).filter((c) => pred(c) && plan.some((p) => p.caseId === c.id && p.spec.damageCode === code && p.tags.component === "cup"));
+      [...perCase.keys()]
+        .map((id) => byId.get(id)!)
+        .filter((c) => pred(c) && plan.some((p) => p.caseId === c.id && p.spec.damageCode === code && p.tags.component === "cup"));
     const inside = (w: readonly [string, string]) => (c: { removedOn: string | null }) => c.removedOn! >= w[0] && c.removedOn! <= w[1];
     // The arc cluster: Marrow Junction welding removals in the weeks after the track 4 work (demo scenario).
     expect(leadCases("electrical.arc", (c) => c.site === "MJC" && inside(ARC_WEEKS)(c)).length).toBeGreaterThanOrEqual(4);

@@ -50,11 +50,20 @@ describe("similarity score", () => {
   it("counts a shared condemning finding more than a shared cosmetic one", () => {
     // severity weighting: a shared severity-4 spall says more than shared cosmetic marks (common practice)
     const withSeverity = (severity: number): SimilarityCase => ({
-      id: `s${severity}`, bearingClass: null, trigger: null, text: "",
-      findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity }, { component: "spacer", damageCode: "wear.abrasive", severity: 2 }],
+      id: `s${severity}`,
+      bearingClass: null,
+      trigger: null,
+      text: "",
+      findings: [
+        { component: "cup", damageCode: "fatigue.subsurface", severity },
+        { component: "spacer", damageCode: "wear.abrasive", severity: 2 },
+      ],
     });
     const onlyShared = (severity: number): SimilarityCase => ({
-      id: `o${severity}`, bearingClass: null, trigger: null, text: "",
+      id: `o${severity}`,
+      bearingClass: null,
+      trigger: null,
+      text: "",
       findings: [{ component: "cup", damageCode: "fatigue.subsurface", severity }],
     });
     expect(similarity(withSeverity(4), onlyShared(4)).score).toBeGreaterThan(similarity(withSeverity(1), onlyShared(1)).score);
@@ -62,7 +71,11 @@ describe("similarity score", () => {
 
   it("ignores no-damage findings and two undetermined verdicts", () => {
     const blank = (id: string, cause: string): SimilarityCase => ({
-      id, bearingClass: null, trigger: null, primaryCause: cause, text: "",
+      id,
+      bearingClass: null,
+      trigger: null,
+      primaryCause: cause,
+      text: "",
       findings: [{ component: "cup", damageCode: "none", severity: 0 }],
     });
     expect(similarity(blank("a", "undetermined"), blank("b", "undetermined")).score).toBe(0);

@@ -35,8 +35,24 @@ describe("strength of association", () => {
 
   it("a table with complete dependence has V = 1; an untestable one has no figures", () => {
     // arithmetic: each row holds one column only
-    expectRel(association(chiSquareTest([[9, 0], [0, 4]])).cramersV!, 1, 1e-12);
-    expect(association(chiSquareTest([[3, 4], [0, 0]]))).toEqual({ gStatistic: null, gPValue: null, cramersV: null, strength: null });
+    expectRel(
+      association(
+        chiSquareTest([
+          [9, 0],
+          [0, 4],
+        ]),
+      ).cramersV!,
+      1,
+      1e-12,
+    );
+    expect(
+      association(
+        chiSquareTest([
+          [3, 4],
+          [0, 0],
+        ]),
+      ),
+    ).toEqual({ gStatistic: null, gPValue: null, cramersV: null, strength: null });
   });
 
   it("names the bands (common practice)", () => {

@@ -27,7 +27,10 @@ describe("c-chart", () => {
   });
 
   it("keeps the caller's items and handles no data", () => {
-    const chart = cChart([{ month: "2025-01", count: 3 }, { month: "2025-02", count: 5 }]);
+    const chart = cChart([
+      { month: "2025-01", count: 3 },
+      { month: "2025-02", count: 5 },
+    ]);
     expect(chart.points[1].item.month).toBe("2025-02");
     expect(chart.centre).toBe(4);
     expect(cChart([])).toEqual({ centre: 0, upperLimit: 0, lowerLimit: 0, points: [] });

@@ -28,7 +28,10 @@ describe("Pearson chi-square test of independence", () => {
     expect(r.df).toBe(t22.dof);
     expect(r.yatesApplied).toBe(false);
     // expected = row total x column total / N (arithmetic): 35*50/100, 65*50/100
-    expect(r.expected).toEqual([[17.5, 17.5], [32.5, 32.5]]);
+    expect(r.expected).toEqual([
+      [17.5, 17.5],
+      [32.5, 32.5],
+    ]);
     expect(r.warnings).toEqual([]);
   });
 
@@ -52,7 +55,11 @@ describe("Pearson chi-square test of independence", () => {
 
   it("drops all-zero rows and columns before testing", () => {
     const [[a, b], [c, d]] = t22.observed;
-    const r = chiSquareTest([[a, 0, b], [0, 0, 0], [c, 0, d]]);
+    const r = chiSquareTest([
+      [a, 0, b],
+      [0, 0, 0],
+      [c, 0, d],
+    ]);
     expect(r.rowIndices).toEqual([0, 2]);
     expect(r.colIndices).toEqual([0, 2]);
     expect(r.df).toBe(1);
@@ -61,37 +68,56 @@ describe("Pearson chi-square test of independence", () => {
   });
 
   it("warns when more than 20% of expected counts are below 5 (Cochran's rule)", () => {
-    expect(chiSquareTest([[1, 2], [3, 4]]).warnings.join(" ")).toMatch(/Cochran/);
+    expect(
+      chiSquareTest([
+        [1, 2],
+        [3, 4],
+      ]).warnings.join(" "),
+    ).toMatch(/Cochran/);
     // one cell of four (25%) below 5: row 1 total 8, column 2 total 12, N = 100 -> 0.96 expected
-    const oneLow = chiSquareTest([[7, 1], [81, 11]]);
+    const oneLow = chiSquareTest([
+      [7, 1],
+      [81, 11],
+    ]);
     expect(oneLow.lowExpectedShare).toBe(0.25);
     expect(oneLow.warnings).toHaveLength(1);
   });
 
   it("reports an untestable table instead of a number", () => {
-    const r = chiSquareTest([[3, 4], [0, 0]]);
+    const r = chiSquareTest([
+      [3, 4],
+      [0, 0],
+    ]);
     expect(r.statistic).toBeNull();
     expect(r.pValue).toBeNull();
     expect(r.df).toBe(0);
     expect(r.warnings[0]).toMatch(/at least two non-empty rows/);
     expect(() => chiSquareTest([[1, 2], [3]])).toThrow(RangeError);
-    expect(() => chiSquareTest([[1, -2], [3, 4]])).toThrow(RangeError);
+    expect(() =>
+      chiSquareTest([
+        [1, -2],
+        [3, 4],
+      ]),
+    ).toThrow(RangeError);
   });
 });
 
 describe("describeResiduals", () => {
   const shops = ["Shop A", "Shop B", "Empty shop", "Shop C"];
   const causes = ["water-ingress", "seal", "end-of-life"];
-  const table = [[12, 3, 5], [2, 10, 8], [0, 0, 0], [3, 4, 13]];
+  const table = [
+    [12, 3, 5],
+    [2, 10, 8],
+    [0, 0, 0],
+    [3, 4, 13],
+  ];
 
   it("names the cells that stand out, strongest first", () => {
     const r = chiSquareTest(table);
     const sentences = describeResiduals(r, shops, causes);
     expect(sentences.length).toBeGreaterThan(0);
     // expected for Shop A x water-ingress = 20 x 17 / 60 = 5.67 (arithmetic)
-    expect(sentences.map((s) => s.sentence)).toContain(
-      "Shop A has more water-ingress removals than expected (12 seen, 5.7 expected)",
-    );
+    expect(sentences.map((s) => s.sentence)).toContain("Shop A has more water-ingress removals than expected (12 seen, 5.7 expected)");
     for (const s of sentences) expect(Math.abs(s.adjustedResidual)).toBeGreaterThan(2);
     const sizes = sentences.map((s) => Math.abs(s.adjustedResidual));
     expect(sizes).toEqual([...sizes].sort((x, y) => y - x));
@@ -102,8 +128,6 @@ describe("describeResiduals", () => {
   it("says nothing when no cell passes the threshold", () => {
     const r = chiSquareTest(t22.observed);
     expect(describeResiduals(r, ["X", "Y"], ["p", "q"])).toEqual([]);
-    expect(describeResiduals(r, ["X", "Y"], ["p", "q"], { threshold: 1, itemNoun: "cases" })[0].sentence).toMatch(
-      / cases than expected/,
-    );
+    expect(describeResiduals(r, ["X", "Y"], ["p", "q"], { threshold: 1, itemNoun: "cases" })[0].sentence).toMatch(/ cases than expected/);
   });
 });

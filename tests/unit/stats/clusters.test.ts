@@ -42,12 +42,13 @@ describe("findClusters", () => {
       ev("t", "LOT 7", "material", "2025-05-03"),
     ];
     const clusters = findClusters([...events].reverse(), { keyKind: "lot", windowDays: 10 });
-    expect(clusters.map((c) => c.memberIds)).toEqual([["p", "q", "r"], ["s", "t"]]);
+    expect(clusters.map((c) => c.memberIds)).toEqual([
+      ["p", "q", "r"],
+      ["s", "t"],
+    ]);
     // p..r span 14 days: no 10-day window holds three of them, a 14-day one does
     expect(findClusters(events, { keyKind: "lot", windowDays: 10, minSize: 3 })).toEqual([]);
-    expect(findClusters(events, { keyKind: "lot", windowDays: 14, minSize: 3 }).map((c) => c.memberIds)).toEqual([
-      ["p", "q", "r"],
-    ]);
+    expect(findClusters(events, { keyKind: "lot", windowDays: 14, minSize: 3 }).map((c) => c.memberIds)).toEqual([["p", "q", "r"]]);
   });
 
   it("accepts Date objects and rejects bad dates", () => {

@@ -2,7 +2,15 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { chiSquareQuantile } from "@/lib/stats/distributions";
-import { fitLogistic, inversePrediction, logLikelihood, predictProbability, profileInterval, waldInterval, type BinomialPoint } from "@/lib/stats/logistic";
+import {
+  fitLogistic,
+  inversePrediction,
+  logLikelihood,
+  predictProbability,
+  profileInterval,
+  waldInterval,
+  type BinomialPoint,
+} from "@/lib/stats/logistic";
 import { expectAbs, expectRel } from "./check-values";
 
 // tests/fixtures/logistic-check-values.json: "reference" copied from the stored check values
@@ -43,7 +51,8 @@ describe("logistic fit on the 23 shuttle flights", () => {
 
   it("predicts the stored probabilities", () => {
     // stored check values, logistic: predicted_probability at 31, 50 and 65 °F
-    for (const [x, p] of Object.entries(ref.predicted_probability)) expectRel(predictProbability(fit, Number(x)).p, p as number, ref.rel_tol);
+    for (const [x, p] of Object.entries(ref.predicted_probability))
+      expectRel(predictProbability(fit, Number(x)).p, p as number, ref.rel_tol);
   });
 
   it("gives the recomputed profile-likelihood intervals", () => {
@@ -69,7 +78,10 @@ describe("logistic fit on the 23 shuttle flights", () => {
   });
 
   it("inverts the curve at 50% and 80% with the recomputed delta SE and Fieller interval", () => {
-    for (const [p, block] of [[0.5, again.margin_at_p50], [0.8, again.margin_at_p80]] as const) {
+    for (const [p, block] of [
+      [0.5, again.margin_at_p50],
+      [0.8, again.margin_at_p80],
+    ] as const) {
       const inv = inversePrediction(fit, p);
       // scipy 1.17.1 (recomputed block): x(p), delta-method SE, Fieller roots
       expectRel(inv.x, block.x, again.rel_tol);
@@ -108,17 +120,31 @@ describe("logistic fit edges", () => {
 
   it("returns null with nothing to fit", () => {
     expect(fitLogistic([])).toBeNull();
-    expect(fitLogistic([{ x: 1, n: 4, y: 4 }, { x: 2, n: 3, y: 3 }])).toBeNull();
+    expect(
+      fitLogistic([
+        { x: 1, n: 4, y: 4 },
+        { x: 2, n: 3, y: 3 },
+      ]),
+    ).toBeNull();
     expect(fitLogistic([{ x: 5, n: 10, y: 3 }])).toBeNull();
   });
 
   it("flags perfect separation instead of reporting a slope", () => {
-    const fit = fitLogistic([{ x: 1, n: 5, y: 0 }, { x: 2, n: 5, y: 0 }, { x: 3, n: 5, y: 5 }, { x: 4, n: 5, y: 5 }]);
+    const fit = fitLogistic([
+      { x: 1, n: 5, y: 0 },
+      { x: 2, n: 5, y: 0 },
+      { x: 3, n: 5, y: 5 },
+      { x: 4, n: 5, y: 5 },
+    ]);
     expect(fit?.separated).toBe(true);
   });
 
   it("a flat relation gives no bounded Fieller interval", () => {
-    const fit = fitLogistic([{ x: 0, n: 20, y: 10 }, { x: 10, n: 20, y: 11 }, { x: 20, n: 20, y: 10 }])!;
+    const fit = fitLogistic([
+      { x: 0, n: 20, y: 10 },
+      { x: 10, n: 20, y: 11 },
+      { x: 20, n: 20, y: 10 },
+    ])!;
     expect(inversePrediction(fit, 0.8).fieller).toBeNull();
   });
 

@@ -18,7 +18,12 @@ describe("pareto", () => {
   });
 
   it("breaks ties by label and copes with an empty or all-zero list", () => {
-    expect(pareto([{ label: "b", count: 2 }, { label: "a", count: 2 }]).map((r) => r.label)).toEqual(["a", "b"]);
+    expect(
+      pareto([
+        { label: "b", count: 2 },
+        { label: "a", count: 2 },
+      ]).map((r) => r.label),
+    ).toEqual(["a", "b"]);
     expect(pareto([])).toEqual([]);
     expect(pareto([{ label: "a", count: 0 }])).toEqual([{ label: "a", count: 0, share: 0, cumulativeShare: 0 }]);
     expect(() => pareto([{ label: "a", count: -1 }])).toThrow(RangeError);

@@ -7,7 +7,10 @@ import type { LifeUnit } from "@/lib/stats/weibull-data";
 
 /** ln L term by term: failures ln f(t) = ln(b/e) + (b-1) ln(t/e) - (t/e)^b, suspensions ln S(t) = -(t/e)^b. */
 function naiveLogLik(units: LifeUnit[], beta: number, eta: number): number {
-  return units.reduce((s, u) => s + (u.failed ? Math.log(beta / eta) + (beta - 1) * Math.log(u.time / eta) : 0) - Math.pow(u.time / eta, beta), 0);
+  return units.reduce(
+    (s, u) => s + (u.failed ? Math.log(beta / eta) + (beta - 1) * Math.log(u.time / eta) : 0) - Math.pow(u.time / eta, beta),
+    0,
+  );
 }
 
 // Whole months 1..120, many repeats, half suspended (invented).
@@ -23,7 +26,11 @@ describe("grouped Weibull likelihood", () => {
 
   it("equals the sum over every unit", () => {
     const d = prepareLikelihoodData(units);
-    for (const [beta, eta] of [[0.8, 40], [2.2, 90], [3.5, 150]]) {
+    for (const [beta, eta] of [
+      [0.8, 40],
+      [2.2, 90],
+      [3.5, 150],
+    ]) {
       expect(weibullLogLik(d, beta, eta)).toBeCloseTo(naiveLogLik(units, beta, eta), 6);
     }
   });
@@ -33,7 +40,12 @@ describe("grouped Weibull likelihood", () => {
     const shuffled = [...units].reverse();
     expect(weibullMle(shuffled).beta).toBeCloseTo(fit.beta, 10);
     const at = naiveLogLik(units, fit.beta, fit.eta);
-    for (const [db, de] of [[0.01, 0], [-0.01, 0], [0, 0.5], [0, -0.5]]) {
+    for (const [db, de] of [
+      [0.01, 0],
+      [-0.01, 0],
+      [0, 0.5],
+      [0, -0.5],
+    ]) {
       expect(naiveLogLik(units, fit.beta + db, fit.eta + de)).toBeLessThan(at);
     }
   });

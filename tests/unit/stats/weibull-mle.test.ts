@@ -51,9 +51,12 @@ describe("Weibull maximum likelihood", () => {
   });
 
   it("refuses data it cannot fit, with clear messages", () => {
-    expect(() => weibullMle([{ time: 10, failed: true }, { time: 20, failed: false }])).toThrow(
-      /at least two failures are needed/i,
-    );
+    expect(() =>
+      weibullMle([
+        { time: 10, failed: true },
+        { time: 20, failed: false },
+      ]),
+    ).toThrow(/at least two failures are needed/i);
     expect(() => weibullMle([])).toThrow(/at least two failures/i);
     expect(() =>
       weibullMle([
@@ -62,8 +65,23 @@ describe("Weibull maximum likelihood", () => {
         { time: 30, failed: false },
       ]),
     ).toThrow(/all failure times are equal/i);
-    expect(() => weibullMle([{ time: 0, failed: true }, { time: 5, failed: true }])).toThrow(/greater than zero/);
-    expect(() => weibullMle([{ time: -3, failed: true }, { time: 5, failed: true }])).toThrow(/greater than zero/);
-    expect(() => weibullMle([{ time: Number.NaN, failed: true }, { time: 5, failed: true }])).toThrow(/finite/);
+    expect(() =>
+      weibullMle([
+        { time: 0, failed: true },
+        { time: 5, failed: true },
+      ]),
+    ).toThrow(/greater than zero/);
+    expect(() =>
+      weibullMle([
+        { time: -3, failed: true },
+        { time: 5, failed: true },
+      ]),
+    ).toThrow(/greater than zero/);
+    expect(() =>
+      weibullMle([
+        { time: Number.NaN, failed: true },
+        { time: 5, failed: true },
+      ]),
+    ).toThrow(/finite/);
   });
 });

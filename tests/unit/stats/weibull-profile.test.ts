@@ -39,12 +39,18 @@ describe("profileOverBeta", () => {
   it.each([0.6, 0.8, 1.25, 1.6])("holding eta at %s x the estimate, matches a plain search", (k) => {
     const eta = fit.eta * k;
     const got = profileOverBeta(data, Math.log(eta), 0, fit.beta).logLik;
-    expect(got).toBeCloseTo(searchMax((b) => weibullLogLik(data, b, eta), 0.05, 20), 8);
+    expect(got).toBeCloseTo(
+      searchMax((b) => weibullLogLik(data, b, eta), 0.05, 20),
+      8,
+    );
   });
 
   it.each([0.4, 0.7, 1.3, 1.8])("holding B10 at %s x the estimate, matches a plain search", (k) => {
     const b10 = fit.b10 * k;
     const got = profileOverBeta(data, Math.log(b10), K10, fit.beta).logLik;
-    expect(got).toBeCloseTo(searchMax((b) => weibullLogLik(data, b, b10 * Math.exp(-K10 / b)), 0.05, 20), 8);
+    expect(got).toBeCloseTo(
+      searchMax((b) => weibullLogLik(data, b, b10 * Math.exp(-K10 / b)), 0.05, 20),
+      8,
+    );
   });
 });

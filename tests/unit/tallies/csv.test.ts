@@ -3,7 +3,13 @@ import { chartCsv, downloadName, filtersLine, parseCsv, toCsv } from "@/lib/tall
 
 describe("CSV", () => {
   it("quotes fields with commas, quotes and line breaks, and ends rows with CRLF (RFC 4180 section 2)", () => {
-    const csv = toCsv(["Site", "Note"], [["Marrow Junction, east", 'said "rough"'], ["Two\nlines", 3]]);
+    const csv = toCsv(
+      ["Site", "Note"],
+      [
+        ["Marrow Junction, east", 'said "rough"'],
+        ["Two\nlines", 3],
+      ],
+    );
     expect(csv).toBe('Site,Note\r\n"Marrow Junction, east","said ""rough"""\r\n"Two\nlines",3\r\n');
   });
 
@@ -16,13 +22,21 @@ describe("CSV", () => {
   });
 
   it("parses what it writes back into the same fields", () => {
-    const rows = [["a", "b,c"], ['say "hi"', ""], ["x\r\ny", "z"]];
+    const rows = [
+      ["a", "b,c"],
+      ['say "hi"', ""],
+      ["x\r\ny", "z"],
+    ];
     const parsed = parseCsv(toCsv(rows[0], rows.slice(1)));
     expect(parsed).toEqual(rows);
   });
 
   it("reads LF files, a byte-order mark and a last line without newline", () => {
-    expect(parseCsv("\uFEFFserial,class\nA1,F\nA2,G")).toEqual([["serial", "class"], ["A1", "F"], ["A2", "G"]]);
+    expect(parseCsv("\uFEFFserial,class\nA1,F\nA2,G")).toEqual([
+      ["serial", "class"],
+      ["A1", "F"],
+      ["A2", "G"],
+    ]);
   });
 
   it("names downloads after the chart", () => {

@@ -24,8 +24,16 @@ function tallies(): TalliesData {
     totals: verdictTotals(cells, 90),
     pareto: causePareto(cells),
     triggerVerdict: triggerVerdictRows(cells),
-    byTrigger: confirmationTable(cells, (c) => c.trigger, (id) => id),
-    byShop: confirmationTable(cells, (c) => c.siteId, (id) => names[id]),
+    byTrigger: confirmationTable(
+      cells,
+      (c) => c.trigger,
+      (id) => id,
+    ),
+    byShop: confirmationTable(
+      cells,
+      (c) => c.siteId,
+      (id) => names[id],
+    ),
     monthly: monthlyTally([{ month: "2026-03", signed: true, cause: "seal", count: 3 }], "2025-04", "2026-03", "2026-03"),
     causeSite: causeSiteTally(cells, (id) => names[id]),
     clusters: { keyKind: "site", windowDays: 30, minSize: 3, total: 0, items: [] },
@@ -34,11 +42,17 @@ function tallies(): TalliesData {
 }
 
 describe("weekly digest", () => {
-  const mail = buildDigest({ tallies: tallies(), week: { removals: 7, signed: 1, awaitingSignoff: 2, from: "2026-03-23", to: "2026-03-30" }, tallyUrl: "http://127.0.0.1:3000/tallies?from=2025-04&to=2026-03" });
+  const mail = buildDigest({
+    tallies: tallies(),
+    week: { removals: 7, signed: 1, awaitingSignoff: 2, from: "2026-03-23", to: "2026-03-30" },
+    tallyUrl: "http://127.0.0.1:3000/tallies?from=2025-04&to=2026-03",
+  });
 
   it("leads with the week's counts and links to the tallies", () => {
     expect(mail.subject).toBe("Tearline weekly digest: 7 removals, 1 verdict signed");
-    expect(mail.text).toContain("This week (2026-03-23 to 2026-03-30): 7 removals logged and 1 verdict signed. 2 verdicts wait for sign-off.");
+    expect(mail.text).toContain(
+      "This week (2026-03-23 to 2026-03-30): 7 removals logged and 1 verdict signed. 2 verdicts wait for sign-off.",
+    );
     expect(mail.text).toContain("Open the tallies: http://127.0.0.1:3000/tallies?from=2025-04&to=2026-03");
   });
 

@@ -10,13 +10,23 @@ describe("fleet list upload", () => {
     // 2019-04-10 to 2026-03-31 is 2547 days; / 30.436875 days per mean month = 83.68 (Gregorian calendar arithmetic)
     const days = (Date.UTC(2026, 2, 31) - Date.UTC(2019, 3, 10)) / 86_400_000;
     expect(days).toBe(2547);
-    expect(r.rows[0]).toEqual({ serial: "SRX40001", bearingClass: "F", mountedOn: "2019-04-10", asOf: "2026-03-31", serviceMonths: Math.round((days / 30.436875) * 100) / 100, serviceMiles: null });
+    expect(r.rows[0]).toEqual({
+      serial: "SRX40001",
+      bearingClass: "F",
+      mountedOn: "2019-04-10",
+      asOf: "2026-03-31",
+      serviceMonths: Math.round((days / 30.436875) * 100) / 100,
+      serviceMiles: null,
+    });
     expect(r.rows[1]).toMatchObject({ serial: "SRX40002", serviceMonths: 58.5, serviceMiles: 402000, mountedOn: null });
   });
 
   it("accepts headers in any case and spacing, and skips blank lines", () => {
     const r = parseFleetCsv("Serial, Bearing Class ,AS-OF,Service Months\n\nA1,F,2026-01-31,12\n");
-    expect(r).toEqual({ ok: true, rows: [{ serial: "A1", bearingClass: "F", mountedOn: null, asOf: "2026-01-31", serviceMonths: 12, serviceMiles: null }] });
+    expect(r).toEqual({
+      ok: true,
+      rows: [{ serial: "A1", bearingClass: "F", mountedOn: null, asOf: "2026-01-31", serviceMonths: 12, serviceMiles: null }],
+    });
   });
 
   it("numbers each error by the row the user sees in a spreadsheet and stores nothing", () => {

@@ -1,7 +1,17 @@
 // The life section summarises every cause from the counted rows; it must give what the same fit
 // over one unit per removal gives (the two paths share the Weibull MLE and Fisher bounds).
 import { describe, expect, it } from "vitest";
-import { countedFor, countedFromTotals, lifeTotalsOf, summariseCause, summariseEveryCause, summariseTotals, unitsFor, type FleetCountRow, type LifeCountRow } from "@/lib/tallies/life";
+import {
+  countedFor,
+  countedFromTotals,
+  lifeTotalsOf,
+  summariseCause,
+  summariseEveryCause,
+  summariseTotals,
+  unitsFor,
+  type FleetCountRow,
+  type LifeCountRow,
+} from "@/lib/tallies/life";
 
 // Invented counts: two causes over 1..60 months, some lives without a cause, and fleet survivors.
 const rows: LifeCountRow[] = [];
@@ -10,7 +20,10 @@ for (let t = 1; t <= 60; t++) {
   rows.push({ cause: "fatigue", time: t, count: t % 3 });
   if (t % 10 === 0) rows.push({ cause: null, time: t, count: 2 });
 }
-const fleet: FleetCountRow[] = [{ time: 30, count: 40 }, { time: 72, count: 25 }];
+const fleet: FleetCountRow[] = [
+  { time: 30, count: 40 },
+  { time: 72, count: 25 },
+];
 
 describe("summariseEveryCause", () => {
   it("matches the unit-by-unit summary for every cause", () => {
@@ -26,10 +39,18 @@ describe("summariseEveryCause", () => {
   });
 
   it("refuses the same data the unit path refuses, in the same words", () => {
-    const one: LifeCountRow[] = [{ cause: "seal", time: 12, count: 1 }, { cause: "other", time: 20, count: 5 }];
+    const one: LifeCountRow[] = [
+      { cause: "seal", time: 12, count: 1 },
+      { cause: "other", time: 20, count: 5 },
+    ];
     expect(summariseEveryCause(one, []).find((s) => s.cause === "seal")!.note).toBe(summariseCause("seal", unitsFor("seal", one, [])).note);
-    const same: LifeCountRow[] = [{ cause: "seal", time: 12, count: 3 }, { cause: "other", time: 20, count: 5 }];
-    expect(summariseEveryCause(same, []).find((s) => s.cause === "seal")!.note).toBe(summariseCause("seal", unitsFor("seal", same, [])).note);
+    const same: LifeCountRow[] = [
+      { cause: "seal", time: 12, count: 3 },
+      { cause: "other", time: 20, count: 5 },
+    ];
+    expect(summariseEveryCause(same, []).find((s) => s.cause === "seal")!.note).toBe(
+      summariseCause("seal", unitsFor("seal", same, [])).note,
+    );
   });
 });
 
@@ -46,7 +67,12 @@ describe("the life section from the database's totals", () => {
     for (const cause of ["water-ingress", "fatigue"]) {
       const own = rows.filter((r) => r.cause === cause && r.count > 0).map((r) => ({ time: r.time, count: r.count }));
       const key = (g: { time: number; failed: boolean; count: number }) => `${g.failed}|${g.time}|${g.count}`;
-      expect(countedFromTotals(own, byTime, fleet).map(key).sort()).toEqual(countedFor(cause, rows, fleet).filter((g) => g.count > 0).map(key).sort());
+      expect(countedFromTotals(own, byTime, fleet).map(key).sort()).toEqual(
+        countedFor(cause, rows, fleet)
+          .filter((g) => g.count > 0)
+          .map(key)
+          .sort(),
+      );
     }
   });
 });

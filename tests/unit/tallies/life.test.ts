@@ -80,7 +80,10 @@ describe("life analysis per root cause", () => {
     const susp = [46, 33, 60, 53, 12, 36];
     const units = [...fails.map((time) => ({ time, failed: true })), ...susp.map((time) => ({ time, failed: false }))];
     const quick = summariseCause("seal", units);
-    const full = analyseCause("seal", units.map((u) => ({ ...u, count: 1 })));
+    const full = analyseCause(
+      "seal",
+      units.map((u) => ({ ...u, count: 1 })),
+    );
     expect(full.likelihoodRatio!.beta[0]).toBeLessThan(1);
     expect(quick.fit!.betaBounds[0]).toBeGreaterThan(1);
     expect(quick.fit!.shapeReading).toBe("wear-out");

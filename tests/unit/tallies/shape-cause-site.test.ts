@@ -3,16 +3,28 @@ import { causeSiteTally, plainSummary, strengthWords } from "@/lib/tallies/shape
 import type { VerdictCell } from "@/lib/tallies/types";
 import { checkValues, expectRel } from "../stats/check-values";
 
-const c = (siteId: string, cause: string, count: number): VerdictCell => ({ siteId, trigger: "hand-roll", cause, outcome: "confirmed", count });
+const c = (siteId: string, cause: string, count: number): VerdictCell => ({
+  siteId,
+  trigger: "hand-roll",
+  cause,
+  outcome: "confirmed",
+  count,
+});
 const label = (id: string) => ({ east: "East shop", west: "West shop" })[id] ?? id;
 
 describe("cause x site test of independence", () => {
   it("builds the site x cause table and matches the reference 2x2 statistic (scipy chi2_contingency, fixture)", () => {
     const ref = checkValues.chi_square.table_2x2; // [[20, 15], [30, 35]]
-    const t = causeSiteTally([c("east", "seal", 20), c("east", "water-ingress", 15), c("west", "seal", 30), c("west", "water-ingress", 35)], label);
+    const t = causeSiteTally(
+      [c("east", "seal", 20), c("east", "water-ingress", 15), c("west", "seal", 30), c("west", "water-ingress", 35)],
+      label,
+    );
     // sites ordered by total (west 65, east 35), causes by total (seal 50, water 50: by code)
     expect(t.sites.map((s) => s.label)).toEqual(["West shop", "East shop"]);
-    expect(t.counts).toEqual([[30, 35], [20, 15]]);
+    expect(t.counts).toEqual([
+      [30, 35],
+      [20, 15],
+    ]);
     expectRel(t.statistic!, ref.pearson.statistic, ref.rel_tol);
     expectRel(t.pValue!, ref.pearson.p_value, ref.rel_tol);
     expect(t.df).toBe(1);
@@ -27,7 +39,10 @@ describe("cause x site test of independence", () => {
   });
 
   it("describes the cells that stand out in words", () => {
-    const t = causeSiteTally([c("east", "water-ingress", 40), c("east", "seal", 10), c("west", "water-ingress", 10), c("west", "seal", 40)], label);
+    const t = causeSiteTally(
+      [c("east", "water-ingress", 40), c("east", "seal", 10), c("west", "water-ingress", 10), c("west", "seal", 40)],
+      label,
+    );
     // expected 25 per cell; adjusted residual (40-25)/sqrt(25 x 0.5 x 0.5) = 6 (Haberman 1973 formula, arithmetic)
     const east = t.sites.findIndex((x) => x.label === "East shop");
     const water = t.causes.findIndex((x) => x.code === "water-ingress");

@@ -18,7 +18,11 @@ const cells: VerdictCell[] = [
 const names: Record<string, string> = { weak: "Weak shop", strong: "Strong shop", middle: "Middle shop" };
 
 describe("confirmation rate per shop", () => {
-  const t = confirmationTable(cells, (c) => c.siteId, (id) => names[id]);
+  const t = confirmationTable(
+    cells,
+    (c) => c.siteId,
+    (id) => names[id],
+  );
 
   it("puts the shop whose calls are least often confirmed first", () => {
     expect(t.rows.map((r) => r.id)).toEqual(["weak", "middle", "strong"]);

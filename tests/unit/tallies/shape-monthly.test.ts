@@ -4,7 +4,12 @@ import type { MonthCell } from "@/lib/tallies/types";
 import { expectRel } from "../stats/check-values";
 
 const cells: MonthCell[] = [
-  ...["2025-01", "2025-02", "2025-03", "2025-05", "2025-06", "2025-07", "2025-08", "2025-09"].map((month) => ({ month, signed: true, cause: "seal", count: 4 })),
+  ...["2025-01", "2025-02", "2025-03", "2025-05", "2025-06", "2025-07", "2025-08", "2025-09"].map((month) => ({
+    month,
+    signed: true,
+    cause: "seal",
+    count: 4,
+  })),
   { month: "2025-10", signed: true, cause: "seal", count: 16 },
   { month: "2025-03", signed: false, cause: null, count: 5 },
   { month: "2025-06", signed: true, cause: "water-ingress", count: 2 },
@@ -14,7 +19,18 @@ describe("monthly counts with c-chart limits", () => {
   const t = monthlyTally(cells);
 
   it("runs the axis over every month from the first removal to the last, zero where nothing happened", () => {
-    expect(t.months).toEqual(["2025-01", "2025-02", "2025-03", "2025-04", "2025-05", "2025-06", "2025-07", "2025-08", "2025-09", "2025-10"]);
+    expect(t.months).toEqual([
+      "2025-01",
+      "2025-02",
+      "2025-03",
+      "2025-04",
+      "2025-05",
+      "2025-06",
+      "2025-07",
+      "2025-08",
+      "2025-09",
+      "2025-10",
+    ]);
     const seal = t.series.find((s) => s.id === "seal")!;
     expect(seal.counts).toEqual([4, 4, 4, 0, 4, 4, 4, 4, 4, 16]);
   });

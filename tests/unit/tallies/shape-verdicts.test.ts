@@ -3,7 +3,13 @@ import { causePareto, triggerVerdictRows, verdictTotals } from "@/lib/tallies/sh
 import type { VerdictCell } from "@/lib/tallies/types";
 import { checkValues, expectAbs, expectRel } from "../stats/check-values";
 
-const cell = (siteId: string, trigger: string, cause: string | null, outcome: VerdictCell["outcome"], count: number): VerdictCell => ({ siteId, trigger, cause, outcome, count });
+const cell = (siteId: string, trigger: string, cause: string | null, outcome: VerdictCell["outcome"], count: number): VerdictCell => ({
+  siteId,
+  trigger,
+  cause,
+  outcome,
+  count,
+});
 
 // Newcombe (1998) Table I, 81 of 263: Wilson 0.2553 to 0.3662 (stored with its source in the fixture).
 const wilson81 = checkValues.wilson_95.cases[0];

@@ -3,7 +3,14 @@ import { fitLogistic, wilsonInterval } from "@/lib/stats";
 import { callRows, detectorRows, readingFit, shapeYield, splitAt } from "@/lib/tallies/shape-yield";
 import type { HotCell, YieldCounts } from "@/lib/tallies/yield-counts";
 
-const cell = (key: string, n: number, confirmed: number, costUsd = 0, uncosted = 0) => ({ key, n, confirmed, noDefect: n - confirmed, costUsd, uncosted });
+const cell = (key: string, n: number, confirmed: number, costUsd = 0, uncosted = 0) => ({
+  key,
+  n,
+  confirmed,
+  noDefect: n - confirmed,
+  costUsd,
+  uncosted,
+});
 
 // invented alarms: confirmation rises with the margin over the threshold
 const hot: HotCell[] = [
@@ -25,7 +32,10 @@ describe("removal yield shaping", () => {
   });
 
   it("splits at a reading and gives the shares above and below (arithmetic)", () => {
-    const s = splitAt(hot.map((c) => ({ x: c.margin, n: c.n, y: c.confirmed })), 15.2)!;
+    const s = splitAt(
+      hot.map((c) => ({ x: c.margin, n: c.n, y: c.confirmed })),
+      15.2,
+    )!;
     expect(s.at).toBe(15);
     expect(s.above).toMatchObject({ n: 20, p: 18 / 20 });
     expect(s.below).toMatchObject({ n: 30, p: 12 / 30 });
@@ -50,13 +60,29 @@ describe("removal yield shaping", () => {
     expect(d.rows[0].position).toBe("below-998");
     expect(d.rows.find((r) => r.label === "D-1")!.position).not.toMatch(/below/);
     expect(d.funnel.length).toBeGreaterThan(5);
-    const both = detectorRows([{ ...cell("D-9", 4, 2), trigger: "wayside-hot", location: null, alarms: 4 }, { ...cell("D-9", 2, 1), trigger: "wayside-acoustic", location: null, alarms: 2 }], (c) => c);
+    const both = detectorRows(
+      [
+        { ...cell("D-9", 4, 2), trigger: "wayside-hot", location: null, alarms: 4 },
+        { ...cell("D-9", 2, 1), trigger: "wayside-acoustic", location: null, alarms: 2 },
+      ],
+      (c) => c,
+    );
     expect(both.rows.map((r) => r.label).sort()).toEqual(["D-9 · acoustic", "D-9 · hot-bearing"]);
   });
 
   it("joins remove calls with keep calls per group", () => {
-    const rows = callRows([cell("s1", 12, 9)], [{ key: "s1", keeps: 5, missed: 2 }, { key: "s2", keeps: 3, missed: 0 }], (id) => id.toUpperCase());
-    expect(rows.map((r) => [r.label, r.n, r.keeps, r.missed])).toEqual([["S1", 12, 5, 2], ["S2", 0, 3, 0]]);
+    const rows = callRows(
+      [cell("s1", 12, 9)],
+      [
+        { key: "s1", keeps: 5, missed: 2 },
+        { key: "s2", keeps: 3, missed: 0 },
+      ],
+      (id) => id.toUpperCase(),
+    );
+    expect(rows.map((r) => [r.label, r.n, r.keeps, r.missed])).toEqual([
+      ["S1", 12, 5, 2],
+      ["S2", 0, 3, 0],
+    ]);
     expect(rows[0].rate).toEqual(wilsonInterval(9, 12));
   });
 

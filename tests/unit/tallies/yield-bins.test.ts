@@ -4,8 +4,20 @@ import { niceBandWidth, wilsonBins } from "@/lib/tallies/yield-bins";
 
 describe("Wilson bins", () => {
   it("sums the counts of each band and takes the Wilson interval of the sums (arithmetic)", () => {
-    const bins = wilsonBins([{ x: 3, n: 4, y: 1 }, { x: 9, n: 6, y: 3 }, { x: 10, n: 5, y: 5 }, { x: -2, n: 2, y: 0 }], 10);
-    expect(bins.map((b) => [b.from, b.to, b.n, b.confirmed])).toEqual([[-10, 0, 2, 0], [0, 10, 10, 4], [10, 20, 5, 5]]);
+    const bins = wilsonBins(
+      [
+        { x: 3, n: 4, y: 1 },
+        { x: 9, n: 6, y: 3 },
+        { x: 10, n: 5, y: 5 },
+        { x: -2, n: 2, y: 0 },
+      ],
+      10,
+    );
+    expect(bins.map((b) => [b.from, b.to, b.n, b.confirmed])).toEqual([
+      [-10, 0, 2, 0],
+      [0, 10, 10, 4],
+      [10, 20, 5, 5],
+    ]);
     expect(bins[1].rate).toEqual(wilsonInterval(4, 10));
   });
 

@@ -29,7 +29,10 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
 
   return (
     <>
-      <PageHeader title="Audit log" subtitle="Sign-ins, account changes, policy and code-list edits and exports, newest first. Entries are kept as written; nobody can change or remove them." />
+      <PageHeader
+        title="Audit log"
+        subtitle="Sign-ins, account changes, policy and code-list edits and exports, newest first. Entries are kept as written; nobody can change or remove them."
+      />
       <div className="flex flex-col gap-5">
         <Card title="Filter">
           <form method="get" className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[1fr_1.4fr_1fr_1fr_auto] lg:items-end">
@@ -37,7 +40,9 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
               <Select id="audit-kind" name="kind" defaultValue={q.kind ?? ""}>
                 <option value="">Every kind</option>
                 {Object.entries(AUDIT_KINDS).map(([k, label]) => (
-                  <option key={k} value={k}>{label}</option>
+                  <option key={k} value={k}>
+                    {label}
+                  </option>
                 ))}
               </Select>
             </Field>
@@ -61,12 +66,21 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
             <ul className="divide-y divide-line" data-testid="audit-entries">
               {rows.map((r) => (
                 <li key={r.id} className="grid gap-1 py-3 text-sm md:grid-cols-[11rem_10rem_1fr_1fr] md:gap-4">
-                  <time className="tabular text-muted" dateTime={r.at.toISOString()}>{formatMoment(r.at)}</time>
+                  <time className="tabular text-muted" dateTime={r.at.toISOString()}>
+                    {formatMoment(r.at)}
+                  </time>
                   <span>
                     <Badge tone={DANGER.includes(r.kind) ? "danger" : "neutral"}>{AUDIT_KINDS[r.kind as AuditKind] ?? r.kind}</Badge>
                   </span>
                   <span className="min-w-0 break-words text-ink">
-                    {r.actorEmail ? <>{r.actorEmail}{r.subject && r.subject !== r.actorEmail ? <span className="text-muted"> → {r.subject}</span> : null}</> : r.subject ?? "—"}
+                    {r.actorEmail ? (
+                      <>
+                        {r.actorEmail}
+                        {r.subject && r.subject !== r.actorEmail ? <span className="text-muted"> → {r.subject}</span> : null}
+                      </>
+                    ) : (
+                      (r.subject ?? "—")
+                    )}
                   </span>
                   <span className="min-w-0 break-words text-muted">
                     {r.address ? <span className="tabular">{r.address}</span> : null}

@@ -31,8 +31,15 @@ export default async function CodeListsPage({ searchParams }: { searchParams: Pr
   const list: CodeListName = (CODE_LIST_NAMES as readonly string[]).includes(raw ?? "") ? (raw as CodeListName) : "damage";
   const [rows, all] = await Promise.all([codesWithUsage(list), codeEntries(undefined, { includeRetired: true })]);
   const entries: CodeView[] = rows.map((r) => ({
-    list: r.list, code: r.code, label: r.label, description: r.description, family: r.family, isoMode: r.isoMode,
-    synonyms: r.synonyms, retired: r.retiredAt !== null, cases: r.cases,
+    list: r.list,
+    code: r.code,
+    label: r.label,
+    description: r.description,
+    family: r.family,
+    isoMode: r.isoMode,
+    synonyms: r.synonyms,
+    retired: r.retiredAt !== null,
+    cases: r.cases,
   }));
   const count = (l: CodeListName) => all.filter((r) => r.list === l && !r.retiredAt).length;
 
@@ -42,7 +49,10 @@ export default async function CodeListsPage({ searchParams }: { searchParams: Pr
         title="Code lists"
         subtitle="The words Tearline classifies with. Add codes as you need them; retire the ones you no longer want offered. A code that any case uses is never deleted."
       />
-      <nav aria-label="Lists" className="mb-5 flex gap-1 overflow-x-auto rounded-xl border border-line bg-surface p-1 text-sm [scrollbar-width:none] sm:inline-flex">
+      <nav
+        aria-label="Lists"
+        className="mb-5 flex gap-1 overflow-x-auto rounded-xl border border-line bg-surface p-1 text-sm [scrollbar-width:none] sm:inline-flex"
+      >
         {CODE_LIST_NAMES.map((l) => (
           <Link
             key={l}

@@ -47,7 +47,11 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
               );
             })}
           </nav>
-          {rows.length ? <OutboxTable rows={rows} now={now} /> : <EmptyState title={status ? `No mail is ${FILTER_LABELS[status].toLowerCase()}.` : "No mail has been sent yet."} />}
+          {rows.length ? (
+            <OutboxTable rows={rows} now={now} />
+          ) : (
+            <EmptyState title={status ? `No mail is ${FILTER_LABELS[status].toLowerCase()}.` : "No mail has been sent yet."} />
+          )}
           {rows.length === 100 ? <p className="mt-3 text-xs text-muted">Showing the newest 100.</p> : null}
         </Card>
         <JobQueuePanel states={jobs} now={now} />

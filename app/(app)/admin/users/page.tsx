@@ -28,7 +28,15 @@ export default async function PeoplePage() {
       <div className="flex flex-col gap-5">
         <Card title="Everyone with an account">
           <PeopleList
-            people={people.map((p) => ({ id: p.id, name: p.name, email: p.email, role: p.role, banned: p.banned, siteId: p.siteId, locked: p.locked }))}
+            people={people.map((p) => ({
+              id: p.id,
+              name: p.name,
+              email: p.email,
+              role: p.role,
+              banned: p.banned,
+              siteId: p.siteId,
+              locked: p.locked,
+            }))}
             sites={sites}
             meId={me.id}
           />
@@ -36,7 +44,9 @@ export default async function PeoplePage() {
         <div className="grid items-start gap-5 lg:grid-cols-2">
           <div id="invite" className="scroll-mt-24">
             <Card title="Invite someone">
-              <p className="-mt-1 mb-4 text-sm text-muted">They get an e-mail with a link to choose a password. Nobody can sign up without one.</p>
+              <p className="-mt-1 mb-4 text-sm text-muted">
+                They get an e-mail with a link to choose a password. Nobody can sign up without one.
+              </p>
               <InviteForm sites={sites} />
             </Card>
           </div>

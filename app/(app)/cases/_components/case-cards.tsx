@@ -18,10 +18,17 @@ export function CaseCards({ rows, busy }: { rows: CaseListRow[]; busy: boolean }
               <span className="font-medium">{formatCar(r) || "Car not recorded"}</span>
               {r.axle || r.side ? <span className="text-ink-2"> · {formatPosition(r.axle, r.side)}</span> : null}
             </p>
-            <p className="mt-0.5 truncate text-sm text-ink-2">{r.triggerLabel}{r.serial ? <span className="font-mono text-[13px] text-muted"> · {r.serial}</span> : null}</p>
+            <p className="mt-0.5 truncate text-sm text-ink-2">
+              {r.triggerLabel}
+              {r.serial ? <span className="font-mono text-[13px] text-muted"> · {r.serial}</span> : null}
+            </p>
             <div className="mt-2 flex flex-wrap items-center gap-x-2 gap-y-1.5 text-xs text-muted">
               {r.fieldCall ? <CallBadge call={r.fieldCall} /> : null}
-              {r.causeLabel ? <span className="rounded-md bg-surface-2 px-2 py-0.5 font-medium text-ink-2 ring-1 ring-inset ring-line">{r.causeLabel}</span> : null}
+              {r.causeLabel ? (
+                <span className="rounded-md bg-surface-2 px-2 py-0.5 font-medium text-ink-2 ring-1 ring-inset ring-line">
+                  {r.causeLabel}
+                </span>
+              ) : null}
               <span className="tabular">{[r.siteName, formatDay(r.removedOn)].filter(Boolean).join(" · ")}</span>
             </div>
           </Link>

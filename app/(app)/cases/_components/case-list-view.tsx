@@ -8,7 +8,13 @@ import type { CaseListOptions } from "@/lib/cases/types";
 import type { CaseColumnId } from "@/lib/cases/list-columns";
 import { EXPORT_CAP } from "@/lib/cases/list-csv";
 import {
-  activeFilterCount, DEFAULT_LIST_PARAMS, listParamsToQuery, toggleSort, withFilters, type CaseFilters, type CaseSort,
+  activeFilterCount,
+  DEFAULT_LIST_PARAMS,
+  listParamsToQuery,
+  toggleSort,
+  withFilters,
+  type CaseFilters,
+  type CaseSort,
 } from "@/lib/cases/list-query";
 import { CaseCards } from "./case-cards";
 import { caseColumns } from "./case-columns";
@@ -51,7 +57,10 @@ export function CaseListView({ options, canCreate, scopeNote }: Props) {
     onColumnVisibilityChange: setVisibility,
   });
 
-  const setFilters = useCallback((patch: Partial<CaseFilters>, opts?: { replace?: boolean }) => navigate(withFilters(params, patch), opts), [params, navigate]);
+  const setFilters = useCallback(
+    (patch: Partial<CaseFilters>, opts?: { replace?: boolean }) => navigate(withFilters(params, patch), opts),
+    [params, navigate],
+  );
   const clear = useCallback(() => navigate({ ...params, filters: {}, page: 1 }), [params, navigate]);
   const onSort = useCallback((field: CaseColumnId) => navigate(toggleSort(params, field)), [params, navigate]);
   const setSort = (sort: CaseSort) => navigate({ ...params, sort, page: 1 });
@@ -78,19 +87,34 @@ export function CaseListView({ options, canCreate, scopeNote }: Props) {
               download
               data-testid="export-csv"
               className={buttonClass({ variant: "secondary" })}
-              title={total > EXPORT_CAP ? `The file holds the first ${EXPORT_CAP.toLocaleString("en-US")} of ${total.toLocaleString("en-US")} cases.` : "Every case that matches the filters, as a spreadsheet file."}
+              title={
+                total > EXPORT_CAP
+                  ? `The file holds the first ${EXPORT_CAP.toLocaleString("en-US")} of ${total.toLocaleString("en-US")} cases.`
+                  : "Every case that matches the filters, as a spreadsheet file."
+              }
             >
               <Icon name="download" />
               Export CSV
             </a>
-            {canCreate ? <ButtonLink href="/cases/new"><Icon name="plus" />New removal</ButtonLink> : null}
+            {canCreate ? (
+              <ButtonLink href="/cases/new">
+                <Icon name="plus" />
+                New removal
+              </ButtonLink>
+            ) : null}
           </>
         }
       />
       {linkError ? (
         <p role="status" className="mb-4 rounded-lg border border-warn/40 bg-warn-soft px-4 py-2.5 text-sm text-ink-2">
           This link asks for something the list can&apos;t show ({linkError}) — showing all cases instead.{" "}
-          <button type="button" className="font-medium text-accent underline" onClick={() => navigate(DEFAULT_LIST_PARAMS, { replace: true })}>Tidy the link</button>
+          <button
+            type="button"
+            className="font-medium text-accent underline"
+            onClick={() => navigate(DEFAULT_LIST_PARAMS, { replace: true })}
+          >
+            Tidy the link
+          </button>
         </p>
       ) : null}
       <section className="relative overflow-hidden rounded-xl border border-line bg-surface shadow-[0_1px_2px_rgba(15,23,42,0.04)]">
@@ -100,12 +124,23 @@ export function CaseListView({ options, canCreate, scopeNote }: Props) {
         </div>
         <div className="flex items-center justify-between gap-3 px-4 py-2.5 sm:px-5">
           <p className="whitespace-nowrap text-sm text-muted tabular" data-testid="case-count" aria-live="polite">
-            {data ? <><strong className="font-semibold text-ink">{total.toLocaleString("en-US")}</strong> {total === 1 ? "case" : "cases"}{filtered ? " match" : ""}</> : "Loading…"}
-            {total > EXPORT_CAP ? <span className="ml-2 text-xs">(export holds the first {EXPORT_CAP.toLocaleString("en-US")})</span> : null}
+            {data ? (
+              <>
+                <strong className="font-semibold text-ink">{total.toLocaleString("en-US")}</strong> {total === 1 ? "case" : "cases"}
+                {filtered ? " match" : ""}
+              </>
+            ) : (
+              "Loading…"
+            )}
+            {total > EXPORT_CAP ? (
+              <span className="ml-2 text-xs">(export holds the first {EXPORT_CAP.toLocaleString("en-US")})</span>
+            ) : null}
           </p>
           <div className="flex items-center gap-2">
             <PhoneSort sort={params.sort} onChange={setSort} />
-            <div className="hidden md:block"><ColumnChooser table={table} onReset={reset} /></div>
+            <div className="hidden md:block">
+              <ColumnChooser table={table} onReset={reset} />
+            </div>
           </div>
         </div>
         {error && !data ? (
@@ -122,12 +157,22 @@ export function CaseListView({ options, canCreate, scopeNote }: Props) {
         ) : (
           <>
             {error ? <LoadFailed message={error.message} onRetry={() => mutate()} /> : null}
-            <div className="hidden border-t border-line md:block"><CaseTable table={table} sort={params.sort} onSort={onSort} busy={busy} /></div>
-            <div className="border-t border-line md:hidden"><CaseCards rows={data.rows} busy={busy} /></div>
+            <div className="hidden border-t border-line md:block">
+              <CaseTable table={table} sort={params.sort} onSort={onSort} busy={busy} />
+            </div>
+            <div className="border-t border-line md:hidden">
+              <CaseCards rows={data.rows} busy={busy} />
+            </div>
           </>
         )}
         {data && total > 0 ? (
-          <Pager page={params.page} pageSize={params.pageSize} total={total} onPage={setPage} onPageSize={(pageSize) => navigate({ ...params, pageSize, page: 1 })} />
+          <Pager
+            page={params.page}
+            pageSize={params.pageSize}
+            total={total}
+            onPage={setPage}
+            onPageSize={(pageSize) => navigate({ ...params, pageSize, page: 1 })}
+          />
         ) : null}
       </section>
     </>

@@ -59,7 +59,10 @@ export function CaseTable({ table, sort, onSort, busy }: Props) {
               className="cursor-pointer hover:bg-surface-2"
             >
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className={`whitespace-nowrap border-b border-line px-2 py-2.5 align-middle text-[13px] text-ink-2 first:pl-5 last:pr-5 ${NUMERIC.has(cell.column.id) ? "text-right" : ""}`}>
+                <td
+                  key={cell.id}
+                  className={`whitespace-nowrap border-b border-line px-2 py-2.5 align-middle text-[13px] text-ink-2 first:pl-5 last:pr-5 ${NUMERIC.has(cell.column.id) ? "text-right" : ""}`}
+                >
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}

@@ -9,7 +9,17 @@ export function ColumnChooser({ table, onReset }: { table: Table<CaseListRow>; o
   const hideable = table.getAllLeafColumns().filter((c) => c.getCanHide());
   const shown = hideable.filter((c) => c.getIsVisible()).length;
   return (
-    <Popover title="Choose columns" align="end" testId="column-chooser" label={<><Icon name="columns" className="h-4 w-4 text-muted" />Columns <span className="text-muted tabular">{shown + 1}</span></>}>
+    <Popover
+      title="Choose columns"
+      align="end"
+      testId="column-chooser"
+      label={
+        <>
+          <Icon name="columns" className="h-4 w-4 text-muted" />
+          Columns <span className="text-muted tabular">{shown + 1}</span>
+        </>
+      }
+    >
       {() => (
         <div>
           <p className="px-2.5 pb-1 pt-1.5 text-xs text-muted">Case number always shows.</p>
@@ -17,14 +27,21 @@ export function ColumnChooser({ table, onReset }: { table: Table<CaseListRow>; o
             {hideable.map((c) => (
               <li key={c.id}>
                 <label className="flex min-h-9 cursor-pointer items-center gap-2.5 rounded-lg px-2.5 text-sm text-ink hover:bg-surface-2">
-                  <input type="checkbox" checked={c.getIsVisible()} onChange={c.getToggleVisibilityHandler()} className="h-4 w-4 accent-[var(--accent)]" />
+                  <input
+                    type="checkbox"
+                    checked={c.getIsVisible()}
+                    onChange={c.getToggleVisibilityHandler()}
+                    className="h-4 w-4 accent-[var(--accent)]"
+                  />
                   {typeof c.columnDef.header === "string" ? c.columnDef.header : c.id}
                 </label>
               </li>
             ))}
           </ul>
           <div className="border-t border-line p-1">
-            <button type="button" onClick={onReset} className="h-9 w-full rounded-lg text-sm font-medium text-ink-2 hover:bg-surface-2">Back to the usual columns</button>
+            <button type="button" onClick={onReset} className="h-9 w-full rounded-lg text-sm font-medium text-ink-2 hover:bg-surface-2">
+              Back to the usual columns
+            </button>
           </div>
         </div>
       )}

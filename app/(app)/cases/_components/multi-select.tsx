@@ -56,7 +56,11 @@ export function MultiSelect({ label, options, selected, onChange, testId }: Prop
           </ul>
           {selected.length ? (
             <div className="border-t border-line p-1">
-              <button type="button" onClick={() => onChange([])} className="h-9 w-full rounded-lg text-sm font-medium text-ink-2 hover:bg-surface-2">
+              <button
+                type="button"
+                onClick={() => onChange([])}
+                className="h-9 w-full rounded-lg text-sm font-medium text-ink-2 hover:bg-surface-2"
+              >
                 Clear {label.toLowerCase()}
               </button>
             </div>

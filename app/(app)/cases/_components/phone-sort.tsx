@@ -8,7 +8,9 @@ export function PhoneSort({ sort, onChange }: { sort: CaseSort; onChange: (s: Ca
   const info = CASE_COLUMNS.find((c) => c.id === sort.field)!;
   return (
     <div className="flex items-center gap-1.5 md:hidden">
-      <label className="sr-only" htmlFor="phone-sort">Sort by</label>
+      <label className="sr-only" htmlFor="phone-sort">
+        Sort by
+      </label>
       <select
         id="phone-sort"
         value={sort.field}
@@ -18,7 +20,11 @@ export function PhoneSort({ sort, onChange }: { sort: CaseSort; onChange: (s: Ca
         }}
         className="h-11 max-w-[11rem] rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink"
       >
-        {CASE_COLUMNS.map((c) => <option key={c.id} value={c.id}>Sort: {c.label}</option>)}
+        {CASE_COLUMNS.map((c) => (
+          <option key={c.id} value={c.id}>
+            Sort: {c.label}
+          </option>
+        ))}
       </select>
       <button
         type="button"

@@ -42,7 +42,12 @@ export function SearchBox({ value, onChange }: { value: string; onChange: (q: st
         className="h-11 w-full rounded-lg border border-line-strong bg-surface pl-9 pr-9 text-[15px] text-ink placeholder:text-muted focus:border-transparent focus:outline-2 focus:outline-accent sm:h-9 sm:text-sm [&::-webkit-search-cancel-button]:hidden"
       />
       {text ? (
-        <button type="button" aria-label="Clear search" onClick={() => setText("")} className="absolute right-1.5 top-1/2 grid h-8 w-8 -translate-y-1/2 place-items-center rounded-md text-muted hover:bg-surface-2 hover:text-ink">
+        <button
+          type="button"
+          aria-label="Clear search"
+          onClick={() => setText("")}
+          className="absolute right-1.5 top-1/2 grid h-8 w-8 -translate-y-1/2 place-items-center rounded-md text-muted hover:bg-surface-2 hover:text-ink"
+        >
           <Icon name="x" className="h-3.5 w-3.5" />
         </button>
       ) : null}

@@ -8,7 +8,9 @@ export function TableSkeleton({ columns, rows = 8 }: { columns: number; rows?: n
       <div className="h-10 border-b border-line bg-surface-2" />
       {Array.from({ length: rows }, (_, r) => (
         <div key={r} className="flex items-center gap-6 border-b border-line px-5 py-3.5">
-          {Array.from({ length: columns }, (_, c) => <div key={c} className={`${bar} ${widths[(r + c) % widths.length]} shrink-0`} />)}
+          {Array.from({ length: columns }, (_, c) => (
+            <div key={c} className={`${bar} ${widths[(r + c) % widths.length]} shrink-0`} />
+          ))}
         </div>
       ))}
     </div>
@@ -20,7 +22,10 @@ export function CardSkeleton({ rows = 6 }: { rows?: number }) {
     <ul className="divide-y divide-line md:hidden" aria-hidden>
       {Array.from({ length: rows }, (_, r) => (
         <li key={r} className="space-y-2.5 px-4 py-4">
-          <div className="flex justify-between"><div className={`${bar} w-28`} /><div className={`${bar} w-20 rounded-full`} /></div>
+          <div className="flex justify-between">
+            <div className={`${bar} w-28`} />
+            <div className={`${bar} w-20 rounded-full`} />
+          </div>
           <div className={`${bar} w-44`} />
           <div className={`${bar} w-56`} />
         </li>

@@ -2,7 +2,12 @@
 // The four stages as toggles: none pressed means every stage.
 import { STAGES, STAGE_LABELS, type Stage } from "@/lib/cases/stages";
 
-const dot: Record<Stage, string> = { field: "bg-stage-field", bench: "bg-stage-bench", signoff: "bg-stage-signoff", signed: "bg-stage-signed" };
+const dot: Record<Stage, string> = {
+  field: "bg-stage-field",
+  bench: "bg-stage-bench",
+  signoff: "bg-stage-signoff",
+  signed: "bg-stage-signed",
+};
 
 export function StageToggles({ selected, onChange }: { selected: Stage[]; onChange: (s: Stage[]) => void }) {
   return (

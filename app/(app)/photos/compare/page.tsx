@@ -50,7 +50,10 @@ export default async function ComparePage({ searchParams }: { searchParams: Prom
   const picker = b ? null : (
     <SecondPhotoPicker
       aId={a.photo.id}
-      sameCase={{ number: a.caseNumber, photos: displayOrder((await photosOfCase({ id: a.photo.caseId })).map(toPhotoView)).filter((p) => p.id !== a.photo.id) }}
+      sameCase={{
+        number: a.caseNumber,
+        photos: displayOrder((await photosOfCase({ id: a.photo.caseId })).map(toPhotoView)).filter((p) => p.id !== a.photo.id),
+      }}
       other={await otherCase(q.case ?? "", user, a.photo.caseId)}
     />
   );

@@ -30,7 +30,14 @@ export function CodeFinder({ entries }: { entries: RefEntry[] }) {
       <div className="flex flex-col gap-3 rounded-xl border border-line bg-surface p-3 sm:flex-row sm:items-center sm:p-4">
         <label className="relative flex-1">
           <span className="sr-only">Search the codes</span>
-          <svg viewBox="0 0 24 24" className="pointer-events-none absolute left-3 top-1/2 h-5 w-5 -translate-y-1/2 text-muted" fill="none" stroke="currentColor" strokeWidth="1.8" aria-hidden>
+          <svg
+            viewBox="0 0 24 24"
+            className="pointer-events-none absolute left-3 top-1/2 h-5 w-5 -translate-y-1/2 text-muted"
+            fill="none"
+            stroke="currentColor"
+            strokeWidth="1.8"
+            aria-hidden
+          >
             <path d="M11 18a7 7 0 100-14 7 7 0 000 14zM20 20l-4-4" />
           </svg>
           <input
@@ -44,16 +51,25 @@ export function CodeFinder({ entries }: { entries: RefEntry[] }) {
         </label>
         {retiredCount ? (
           <label className="flex shrink-0 cursor-pointer items-center gap-2 text-sm text-ink-2">
-            <input type="checkbox" checked={showRetired} onChange={(e) => setShowRetired(e.target.checked)} className="h-5 w-5 accent-[var(--accent)]" />
+            <input
+              type="checkbox"
+              checked={showRetired}
+              onChange={(e) => setShowRetired(e.target.checked)}
+              className="h-5 w-5 accent-[var(--accent)]"
+            />
             Show retired ({retiredCount})
           </label>
         ) : null}
       </div>
-      <p id="finder-hint" className="-mt-4 text-xs text-muted">Shop words and small typos are fine: search looks at codes, names, descriptions and the words people use on the floor.</p>
+      <p id="finder-hint" className="-mt-4 text-xs text-muted">
+        Shop words and small typos are fine: search looks at codes, names, descriptions and the words people use on the floor.
+      </p>
 
       {hits ? (
         <section aria-label="Search results" aria-live="polite">
-          <p className="mb-3 text-sm text-muted">{hits.length ? `${hits.length} ${hits.length === 1 ? "match" : "matches"}, best first` : ""}</p>
+          <p className="mb-3 text-sm text-muted">
+            {hits.length ? `${hits.length} ${hits.length === 1 ? "match" : "matches"}, best first` : ""}
+          </p>
           {hits.length ? (
             <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
               {hits.map((h) => (
@@ -63,31 +79,52 @@ export function CodeFinder({ entries }: { entries: RefEntry[] }) {
               ))}
             </ul>
           ) : (
-            <EmptyState title={`Nothing matches “${query.trim()}”`}>Try a plainer word for what the part shows, or browse the families below after clearing the search.</EmptyState>
+            <EmptyState title={`Nothing matches “${query.trim()}”`}>
+              Try a plainer word for what the part shows, or browse the families below after clearing the search.
+            </EmptyState>
           )}
         </section>
       ) : (
         <>
           <section id="damage" aria-labelledby="damage-title" className="flex scroll-mt-28 flex-col gap-6">
             <div>
-              <h2 id="damage-title" className="text-lg font-semibold text-ink">Damage codes by family</h2>
+              <h2 id="damage-title" className="text-lg font-semibold text-ink">
+                Damage codes by family
+              </h2>
               <ul className="mt-2 flex flex-wrap gap-1.5 text-xs" aria-label="Families">
-                {families.filter((f) => f.entries.length).map((f) => (
-                  <li key={f.family.code}>
-                    <a href={`#family-${f.family.code}`} className="inline-flex items-center gap-1 rounded-md bg-surface px-2 py-1 font-medium text-ink-2 ring-1 ring-line hover:text-ink hover:ring-line-strong">
-                      {f.family.label}
-                      {f.family.isoClause ? <span className="text-muted tabular">{f.family.isoClause}</span> : null}
-                    </a>
-                  </li>
-                ))}
+                {families
+                  .filter((f) => f.entries.length)
+                  .map((f) => (
+                    <li key={f.family.code}>
+                      <a
+                        href={`#family-${f.family.code}`}
+                        className="inline-flex items-center gap-1 rounded-md bg-surface px-2 py-1 font-medium text-ink-2 ring-1 ring-line hover:text-ink hover:ring-line-strong"
+                      >
+                        {f.family.label}
+                        {f.family.isoClause ? <span className="text-muted tabular">{f.family.isoClause}</span> : null}
+                      </a>
+                    </li>
+                  ))}
               </ul>
             </div>
-            {families.filter((f) => f.entries.length).map((f) => (
-              <FamilySection key={f.family.code} family={f.family} entries={f.entries} />
-            ))}
+            {families
+              .filter((f) => f.entries.length)
+              .map((f) => (
+                <FamilySection key={f.family.code} family={f.family} entries={f.entries} />
+              ))}
           </section>
-          <SimpleList id="causes" title="Root causes" intro="Why a bearing came to need removal, chosen in the verdict. One primary cause, any number contributing." entries={visible.filter((e) => e.list === "cause")} />
-          <SimpleList id="triggers" title="Removal triggers" intro="What brought the bearing out of service, recorded on the field report." entries={visible.filter((e) => e.list === "trigger")} />
+          <SimpleList
+            id="causes"
+            title="Root causes"
+            intro="Why a bearing came to need removal, chosen in the verdict. One primary cause, any number contributing."
+            entries={visible.filter((e) => e.list === "cause")}
+          />
+          <SimpleList
+            id="triggers"
+            title="Removal triggers"
+            intro="What brought the bearing out of service, recorded on the field report."
+            entries={visible.filter((e) => e.list === "trigger")}
+          />
         </>
       )}
     </div>

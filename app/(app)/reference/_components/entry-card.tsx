@@ -32,7 +32,10 @@ export function EntryCard({ entry, matched, showList = false }: { entry: RefEntr
           <p className="sr-only">Shop words</p>
           <ul className="flex flex-wrap gap-1.5">
             {entry.synonyms.map((s) => (
-              <li key={s} className={`rounded-full px-2 py-0.5 text-xs ring-1 ${s === matched ? "bg-accent-soft text-accent ring-accent/40" : "bg-surface-2 text-ink-2 ring-line"}`}>
+              <li
+                key={s}
+                className={`rounded-full px-2 py-0.5 text-xs ring-1 ${s === matched ? "bg-accent-soft text-accent ring-accent/40" : "bg-surface-2 text-ink-2 ring-line"}`}
+              >
                 {s}
               </li>
             ))}

@@ -7,7 +7,9 @@ export function FamilySection({ family, entries }: { family: DamageFamilyInfo; e
   return (
     <section aria-labelledby={`family-${family.code}-title`} className="scroll-mt-28" id={`family-${family.code}`}>
       <header className="mb-3 flex flex-wrap items-baseline gap-x-3 gap-y-1">
-        <h3 id={`family-${family.code}-title`} className="text-base font-semibold text-ink">{family.label}</h3>
+        <h3 id={`family-${family.code}-title`} className="text-base font-semibold text-ink">
+          {family.label}
+        </h3>
         <p className="text-xs text-muted">
           {family.isoMode ? (
             <>

@@ -13,19 +13,37 @@ export function ActiveFilters({ params, facets }: { params: SearchParams; facets
       chips.push({ key: `${f}:${v}`, label, href: searchHref(toggleValue(params, f, v)) });
     }
   }
-  if (params.severity !== undefined) chips.push({ key: "severity", label: `Severity ${params.severity}+`, href: searchHref(withChange(params, { severity: undefined })) });
+  if (params.severity !== undefined)
+    chips.push({ key: "severity", label: `Severity ${params.severity}+`, href: searchHref(withChange(params, { severity: undefined })) });
   if (params.from) chips.push({ key: "from", label: `From ${params.from}`, href: searchHref(withChange(params, { from: undefined })) });
   if (params.to) chips.push({ key: "to", label: `To ${params.to}`, href: searchHref(withChange(params, { to: undefined })) });
   return (
     <div className="mb-3 flex flex-wrap items-center gap-1.5" data-testid="active-filters">
       {chips.map((c) => (
-        <Link key={c.key} href={c.href} scroll={false} aria-label={`Remove filter ${c.label}`}
-          className="inline-flex h-8 items-center gap-1 rounded-full border border-accent/40 bg-accent-soft pl-3 pr-2 text-xs font-medium text-ink hover:border-accent">
+        <Link
+          key={c.key}
+          href={c.href}
+          scroll={false}
+          aria-label={`Remove filter ${c.label}`}
+          className="inline-flex h-8 items-center gap-1 rounded-full border border-accent/40 bg-accent-soft pl-3 pr-2 text-xs font-medium text-ink hover:border-accent"
+        >
           {c.label}
-          <svg viewBox="0 0 24 24" className="h-3.5 w-3.5 text-muted" fill="none" stroke="currentColor" strokeWidth="2" strokeLinecap="round" aria-hidden><path d="M6 6l12 12M18 6L6 18" /></svg>
+          <svg
+            viewBox="0 0 24 24"
+            className="h-3.5 w-3.5 text-muted"
+            fill="none"
+            stroke="currentColor"
+            strokeWidth="2"
+            strokeLinecap="round"
+            aria-hidden
+          >
+            <path d="M6 6l12 12M18 6L6 18" />
+          </svg>
         </Link>
       ))}
-      <Link href={searchHref(clearFilters(params))} scroll={false} className="px-2 text-xs font-medium text-accent hover:underline">Clear all</Link>
+      <Link href={searchHref(clearFilters(params))} scroll={false} className="px-2 text-xs font-medium text-accent hover:underline">
+        Clear all
+      </Link>
     </div>
   );
 }

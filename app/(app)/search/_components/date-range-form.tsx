@@ -8,10 +8,13 @@ export function DateRangeForm({ params }: { params: SearchParams }) {
     ...(params.severity !== undefined ? [["severity", String(params.severity)] as [string, string]] : []),
     ...(params.sort !== "relevance" ? [["sort", params.sort] as [string, string]] : []),
   ];
-  const input = "h-10 w-full rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink focus:outline-2 focus:outline-accent lg:h-9";
+  const input =
+    "h-10 w-full rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink focus:outline-2 focus:outline-accent lg:h-9";
   return (
     <form action="/search" method="get" className="grid grid-cols-2 gap-2 px-2">
-      {hidden.map(([n, v]) => <input key={n} type="hidden" name={n} value={v} />)}
+      {hidden.map(([n, v]) => (
+        <input key={n} type="hidden" name={n} value={v} />
+      ))}
       <label className="text-xs text-muted">
         From
         <input type="date" name="from" defaultValue={params.from} className={input} />
@@ -20,7 +23,10 @@ export function DateRangeForm({ params }: { params: SearchParams }) {
         To
         <input type="date" name="to" defaultValue={params.to} className={input} />
       </label>
-      <button type="submit" className="col-span-2 h-9 rounded-lg border border-line-strong bg-surface text-sm font-medium text-ink-2 hover:bg-surface-2">
+      <button
+        type="submit"
+        className="col-span-2 h-9 rounded-lg border border-line-strong bg-surface text-sm font-medium text-ink-2 hover:bg-surface-2"
+      >
         Apply dates
       </button>
     </form>

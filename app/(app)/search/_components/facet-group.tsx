@@ -9,8 +9,15 @@ const SHOWN = 6;
 
 function Check({ on, round }: { on: boolean; round?: boolean }) {
   return (
-    <span aria-hidden className={`grid h-4 w-4 shrink-0 place-items-center border ${round ? "rounded-full" : "rounded"} ${on ? "border-accent bg-accent text-accent-ink" : "border-line-strong bg-surface"}`}>
-      {on ? <svg viewBox="0 0 24 24" className="h-3 w-3" fill="none" stroke="currentColor" strokeWidth="3"><path d="M5 12l5 5 9-10" /></svg> : null}
+    <span
+      aria-hidden
+      className={`grid h-4 w-4 shrink-0 place-items-center border ${round ? "rounded-full" : "rounded"} ${on ? "border-accent bg-accent text-accent-ink" : "border-line-strong bg-surface"}`}
+    >
+      {on ? (
+        <svg viewBox="0 0 24 24" className="h-3 w-3" fill="none" stroke="currentColor" strokeWidth="3">
+          <path d="M5 12l5 5 9-10" />
+        </svg>
+      ) : null}
     </span>
   );
 }
@@ -26,7 +33,9 @@ function ValueLink({ href, value, round }: { href: string; value: FacetValue; ro
         className={`flex min-h-10 items-center gap-2.5 rounded-md px-2 py-1.5 text-sm hover:bg-surface-2 lg:min-h-8 ${value.selected ? "font-medium text-ink" : "text-ink-2"}`}
       >
         <Check on={value.selected} round={round} />
-        <span className="min-w-0 flex-1 truncate" title={value.label}>{value.label}</span>
+        <span className="min-w-0 flex-1 truncate" title={value.label}>
+          {value.label}
+        </span>
         <span className="text-xs tabular text-muted">{value.count.toLocaleString("en-US")}</span>
       </Link>
     </li>
@@ -45,10 +54,21 @@ function Group({ title, children, count }: { title: string; children: React.Reac
   );
 }
 
-export function FacetGroup({ title, facet, values, params }: { title: string; facet: MultiFacet; values: FacetValue[]; params: SearchParams }) {
+export function FacetGroup({
+  title,
+  facet,
+  values,
+  params,
+}: {
+  title: string;
+  facet: MultiFacet;
+  values: FacetValue[];
+  params: SearchParams;
+}) {
   if (values.length === 0) return null;
   const link = (v: FacetValue) => <ValueLink key={v.value} value={v} href={searchHref(toggleValue(params, facet, v.value))} />;
-  const first = values.slice(0, SHOWN), rest = values.slice(SHOWN);
+  const first = values.slice(0, SHOWN),
+    rest = values.slice(SHOWN);
   const restSelected = rest.some((v) => v.selected);
   return (
     <Group title={title} count={params[facet].length}>
@@ -72,7 +92,12 @@ export function SeverityGroup({ values, params }: { values: FacetValue[]; params
     <Group title="Worst finding" count={params.severity !== undefined ? 1 : 0}>
       <ul>
         {values.map((v) => (
-          <ValueLink key={v.value} round value={v} href={searchHref(withChange(params, { severity: v.selected ? undefined : Number(v.value) }))} />
+          <ValueLink
+            key={v.value}
+            round
+            value={v}
+            href={searchHref(withChange(params, { severity: v.selected ? undefined : Number(v.value) }))}
+          />
         ))}
       </ul>
     </Group>

@@ -18,14 +18,32 @@ export function Pagination({ params, total, pageSize }: { params: SearchParams; 
   const to = (p: number) => searchHref({ ...params, page: p });
   return (
     <nav aria-label="Pages" className="mt-5 flex flex-wrap items-center justify-center gap-1.5">
-      {params.page > 1 ? <Link href={to(params.page - 1)} className={`${step} border-line-strong bg-surface text-ink-2 hover:bg-surface-2`} rel="prev">Previous</Link> : null}
+      {params.page > 1 ? (
+        <Link href={to(params.page - 1)} className={`${step} border-line-strong bg-surface text-ink-2 hover:bg-surface-2`} rel="prev">
+          Previous
+        </Link>
+      ) : null}
       {pagesAround(params.page, count).map((p, i) =>
-        p === "…" ? <span key={`gap-${i}`} className="px-1 text-muted">…</span> : (
-          <Link key={p} href={to(p)} aria-current={p === params.page ? "page" : undefined}
-            className={`${step} ${p === params.page ? "border-ink bg-ink text-surface" : "border-line-strong bg-surface text-ink-2 hover:bg-surface-2"}`}>{p}</Link>
+        p === "…" ? (
+          <span key={`gap-${i}`} className="px-1 text-muted">
+            …
+          </span>
+        ) : (
+          <Link
+            key={p}
+            href={to(p)}
+            aria-current={p === params.page ? "page" : undefined}
+            className={`${step} ${p === params.page ? "border-ink bg-ink text-surface" : "border-line-strong bg-surface text-ink-2 hover:bg-surface-2"}`}
+          >
+            {p}
+          </Link>
         ),
       )}
-      {params.page < count ? <Link href={to(params.page + 1)} className={`${step} border-line-strong bg-surface text-ink-2 hover:bg-surface-2`} rel="next">Next</Link> : null}
+      {params.page < count ? (
+        <Link href={to(params.page + 1)} className={`${step} border-line-strong bg-surface text-ink-2 hover:bg-surface-2`} rel="next">
+          Next
+        </Link>
+      ) : null}
     </nav>
   );
 }

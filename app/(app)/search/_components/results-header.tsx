@@ -18,17 +18,27 @@ export function ResultsHeader({ params, result }: { params: SearchParams; result
         <p className="text-sm text-ink-2 tabular" aria-live="polite" data-testid="result-count">
           {result.total ? (
             <>
-              <strong className="font-semibold text-ink">{first.toLocaleString("en-US")}–{last.toLocaleString("en-US")}</strong> of{" "}
-              <strong className="font-semibold text-ink">{result.total.toLocaleString("en-US")}</strong> {result.total === 1 ? "case" : "cases"}
+              <strong className="font-semibold text-ink">
+                {first.toLocaleString("en-US")}–{last.toLocaleString("en-US")}
+              </strong>{" "}
+              of <strong className="font-semibold text-ink">{result.total.toLocaleString("en-US")}</strong>{" "}
+              {result.total === 1 ? "case" : "cases"}
             </>
-          ) : "No cases"}
+          ) : (
+            "No cases"
+          )}
         </p>
         <nav aria-label="Sort" className="inline-flex rounded-lg border border-line-strong bg-surface p-0.5 text-sm">
           {SORTS.filter((s) => s !== "relevance" || params.q).map((s) => {
             const on = params.sort === s || (s === "newest" && !params.q && params.sort === "relevance");
             return (
-              <Link key={s} href={searchHref(withChange(params, { sort: s }))} scroll={false} aria-current={on ? "true" : undefined}
-                className={`inline-flex min-h-11 items-center rounded-md px-2.5 lg:min-h-0 lg:py-1 ${on ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}>
+              <Link
+                key={s}
+                href={searchHref(withChange(params, { sort: s }))}
+                scroll={false}
+                aria-current={on ? "true" : undefined}
+                className={`inline-flex min-h-11 items-center rounded-md px-2.5 lg:min-h-0 lg:py-1 ${on ? "bg-ink text-surface" : "text-ink-2 hover:bg-surface-2"}`}
+              >
                 {SORT_LABELS[s]}
               </Link>
             );
@@ -39,10 +49,14 @@ export function ResultsHeader({ params, result }: { params: SearchParams; result
       {corrections.length || shopWords.length ? (
         <p className="text-sm text-muted" data-testid="understood">
           {corrections.map((u) => (
-            <span key={u.text} className="mr-3">Also searched <em className="not-italic font-medium text-ink-2">{u.corrections.join(", ")}</em> for “{u.text}”.</span>
+            <span key={u.text} className="mr-3">
+              Also searched <em className="not-italic font-medium text-ink-2">{u.corrections.join(", ")}</em> for “{u.text}”.
+            </span>
           ))}
           {shopWords.map((u) => (
-            <span key={`c-${u.text}`} className="mr-3">“{u.text}” includes cases coded <span className="font-medium text-ink-2">{u.codes.map((c) => c.label).join(", ")}</span>.</span>
+            <span key={`c-${u.text}`} className="mr-3">
+              “{u.text}” includes cases coded <span className="font-medium text-ink-2">{u.codes.map((c) => c.label).join(", ")}</span>.
+            </span>
           ))}
         </p>
       ) : null}
@@ -61,11 +75,21 @@ function ReadAs({ params, result }: { params: SearchParams; result: SearchResult
       <span className="text-muted">Read as</span>
       {parts.map((u, i) => (
         <span key={`${u.text}-${i}`} className="inline-flex items-center gap-1">
-          {i > 0 ? <span aria-hidden className="text-muted">·</span> : null}
-          <span className={`inline-flex items-center gap-1 rounded-full py-0.5 pl-2.5 pr-1 ring-1 ${STRUCTURED.has(u.role) ? "bg-accent-soft text-ink ring-accent/30" : "bg-surface-2 text-ink-2 ring-line"}`}>
+          {i > 0 ? (
+            <span aria-hidden className="text-muted">
+              ·
+            </span>
+          ) : null}
+          <span
+            className={`inline-flex items-center gap-1 rounded-full py-0.5 pl-2.5 pr-1 ring-1 ${STRUCTURED.has(u.role) ? "bg-accent-soft text-ink ring-accent/30" : "bg-surface-2 text-ink-2 ring-line"}`}
+          >
             {u.reading}
-            <Link href={searchHref(withChange(params, { q: u.without }))} scroll={false} aria-label={`Search without “${u.reading}”`}
-              className="inline-flex h-11 w-11 items-center justify-center rounded-full text-muted lg:h-6 lg:w-6 hover:bg-surface hover:text-ink">
+            <Link
+              href={searchHref(withChange(params, { q: u.without }))}
+              scroll={false}
+              aria-label={`Search without “${u.reading}”`}
+              className="inline-flex h-11 w-11 items-center justify-center rounded-full text-muted lg:h-6 lg:w-6 hover:bg-surface hover:text-ink"
+            >
               <span aria-hidden>×</span>
             </Link>
           </span>

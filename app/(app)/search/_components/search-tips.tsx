@@ -8,7 +8,7 @@ const EXAMPLES = [
   { q: "rust", why: "shop words find water etch" },
   { q: "milky grease", why: "grease condition" },
   { q: "arc burn welding", why: "electrical damage" },
-  { q: "\"torn lip\"", why: "an exact phrase" },
+  { q: '"torn lip"', why: "an exact phrase" },
 ];
 
 export function ExampleSearches() {
@@ -16,7 +16,10 @@ export function ExampleSearches() {
     <ul className="flex flex-wrap gap-2">
       {EXAMPLES.map((e) => (
         <li key={e.q}>
-          <Link href={searchHref({ q: e.q })} className="inline-flex flex-col rounded-lg border border-line bg-surface px-3 py-2 text-sm hover:border-accent">
+          <Link
+            href={searchHref({ q: e.q })}
+            className="inline-flex flex-col rounded-lg border border-line bg-surface px-3 py-2 text-sm hover:border-accent"
+          >
             <span className="font-medium text-ink">{e.q}</span>
             <span className="text-xs text-muted">{e.why}</span>
           </Link>
@@ -34,7 +37,9 @@ export function SearchIntro() {
         Search the notes of every case you can see, by damage, shop words, serial, car or case number. Typos are forgiven, and shop words
         find the damage code they mean. Narrow with the filters; the address bar keeps the search, so you can share it.
       </p>
-      <div className="mt-3"><ExampleSearches /></div>
+      <div className="mt-3">
+        <ExampleSearches />
+      </div>
     </div>
   );
 }
@@ -43,14 +48,27 @@ export function NoResults({ params }: { params: SearchParams }) {
   const filters = activeFilterCount(params);
   return (
     <div className="rounded-xl border border-dashed border-line-strong bg-surface px-5 py-8 text-center" data-testid="no-results">
-      <p className="font-medium text-ink">No cases match{params.q ? <> “{params.q}”</> : null}{filters ? " with these filters" : ""}.</p>
+      <p className="font-medium text-ink">
+        No cases match{params.q ? <> “{params.q}”</> : null}
+        {filters ? " with these filters" : ""}.
+      </p>
       <ul className="mx-auto mt-3 max-w-md space-y-1 text-left text-sm text-muted">
-        {filters ? <li>• <Link className="font-medium text-accent hover:underline" href={searchHref(clearFilters(params))}>Search without the filters</Link> — they may be narrowing too far.</li> : null}
+        {filters ? (
+          <li>
+            •{" "}
+            <Link className="font-medium text-accent hover:underline" href={searchHref(clearFilters(params))}>
+              Search without the filters
+            </Link>{" "}
+            — they may be narrowing too far.
+          </li>
+        ) : null}
         {params.q.trim().split(/\s+/).length > 1 ? <li>• Use fewer words: every word has to match a case.</li> : null}
         <li>• Try the shop word or the damage name, e.g. “pitting” or “surface distress”.</li>
         <li>• Search a serial or car number in part, e.g. the last digits.</li>
       </ul>
-      <div className="mt-5 flex justify-center"><ExampleSearches /></div>
+      <div className="mt-5 flex justify-center">
+        <ExampleSearches />
+      </div>
     </div>
   );
 }

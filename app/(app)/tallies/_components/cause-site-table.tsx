@@ -21,20 +21,34 @@ export function CauseSiteTable({ tally }: { tally: CauseSiteTally }) {
           <caption className="sr-only">Signed verdicts by removal site and root cause</caption>
           <thead className="sticky top-0 bg-surface-2">
             <tr>
-              <th scope="col" className="border-b border-line px-3 py-2 text-left text-xs font-semibold text-muted">Site</th>
+              <th scope="col" className="border-b border-line px-3 py-2 text-left text-xs font-semibold text-muted">
+                Site
+              </th>
               {tally.causes.map((c) => (
-                <th key={c.code || "none"} scope="col" className="whitespace-nowrap border-b border-line px-3 py-2 text-right text-xs font-semibold text-muted">{c.label}</th>
+                <th
+                  key={c.code || "none"}
+                  scope="col"
+                  className="whitespace-nowrap border-b border-line px-3 py-2 text-right text-xs font-semibold text-muted"
+                >
+                  {c.label}
+                </th>
               ))}
             </tr>
           </thead>
           <tbody>
             {tally.sites.map((s, i) => (
               <tr key={s.id}>
-                <th scope="row" className="whitespace-nowrap border-b border-line px-3 py-1.5 text-left font-medium text-ink">{s.label}</th>
+                <th scope="row" className="whitespace-nowrap border-b border-line px-3 py-1.5 text-left font-medium text-ink">
+                  {s.label}
+                </th>
                 {tally.causes.map((c, j) => {
                   const r = tally.residuals[i][j];
                   return (
-                    <td key={c.code || "none"} className={`border-b border-line px-3 py-1.5 text-right tabular ${shade(r)}`} title={r === null ? undefined : `adjusted residual ${r.toFixed(2)}`}>
+                    <td
+                      key={c.code || "none"}
+                      className={`border-b border-line px-3 py-1.5 text-right tabular ${shade(r)}`}
+                      title={r === null ? undefined : `adjusted residual ${r.toFixed(2)}`}
+                    >
                       {tally.counts[i][j]}
                     </td>
                   );
@@ -45,9 +59,18 @@ export function CauseSiteTable({ tally }: { tally: CauseSiteTally }) {
         </table>
       </div>
       <p className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-xs text-muted">
-        <span><span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm bg-accent-soft align-middle ring-1 ring-line" />more than expected</span>
-        <span><span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm bg-danger-soft align-middle ring-1 ring-line" />far more</span>
-        <span><span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm bg-stage-field-soft align-middle ring-1 ring-line" />fewer than expected</span>
+        <span>
+          <span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm bg-accent-soft align-middle ring-1 ring-line" />
+          more than expected
+        </span>
+        <span>
+          <span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm bg-danger-soft align-middle ring-1 ring-line" />
+          far more
+        </span>
+        <span>
+          <span className="mr-1 inline-block h-2.5 w-2.5 rounded-sm bg-stage-field-soft align-middle ring-1 ring-line" />
+          fewer than expected
+        </span>
         <span>(adjusted residual beyond ±2, strong beyond ±3)</span>
       </p>
     </div>
@@ -70,18 +93,26 @@ export function CauseSiteFindings({ tally }: { tally: CauseSiteTally }) {
       ) : null}
       {notes.length ? (
         <>
-          {!significant ? <p className="text-xs text-muted">Taken alone these cells stand out, but with this many cells a few always do by chance:</p> : null}
+          {!significant ? (
+            <p className="text-xs text-muted">Taken alone these cells stand out, but with this many cells a few always do by chance:</p>
+          ) : null}
           <ul className="space-y-1">
             {notes.map((n) => (
               <li key={`${n.site}-${n.cause}`} className="flex gap-2">
-                <span aria-hidden className={n.residual > 0 ? "text-danger" : "text-stage-field"}>{n.residual > 0 ? "▲" : "▼"}</span>
+                <span aria-hidden className={n.residual > 0 ? "text-danger" : "text-stage-field"}>
+                  {n.residual > 0 ? "▲" : "▼"}
+                </span>
                 <span>{n.sentence}.</span>
               </li>
             ))}
           </ul>
         </>
       ) : null}
-      {tally.warnings.map((w) => <p key={w} className="text-xs text-warn">{w}</p>)}
+      {tally.warnings.map((w) => (
+        <p key={w} className="text-xs text-warn">
+          {w}
+        </p>
+      ))}
     </div>
   );
 }

@@ -9,8 +9,23 @@ export const chartPlaceholder = (height: number) =>
     return <div style={{ height }} className="w-full animate-pulse rounded-md bg-slate-100/70" aria-hidden="true" />;
   };
 
-export const ParetoChart = dynamic(() => import("./pareto-chart").then((m) => m.ParetoChart), { ssr: false, loading: chartPlaceholder(340) });
-export const TriggerVerdictChart = dynamic(() => import("./trigger-verdict-chart").then((m) => m.TriggerVerdictChart), { ssr: false, loading: chartPlaceholder(200) });
-export const ConfirmationChart = dynamic(() => import("./confirmation-chart").then((m) => m.ConfirmationChart), { ssr: false, loading: chartPlaceholder(200) });
-export const ControlChart = dynamic(() => import("./control-chart").then((m) => m.ControlChart), { ssr: false, loading: chartPlaceholder(300) });
-export const CauseSiteChart = dynamic(() => import("./cause-site-chart").then((m) => m.CauseSiteChart), { ssr: false, loading: chartPlaceholder(200) });
+export const ParetoChart = dynamic(() => import("./pareto-chart").then((m) => m.ParetoChart), {
+  ssr: false,
+  loading: chartPlaceholder(340),
+});
+export const TriggerVerdictChart = dynamic(() => import("./trigger-verdict-chart").then((m) => m.TriggerVerdictChart), {
+  ssr: false,
+  loading: chartPlaceholder(200),
+});
+export const ConfirmationChart = dynamic(() => import("./confirmation-chart").then((m) => m.ConfirmationChart), {
+  ssr: false,
+  loading: chartPlaceholder(200),
+});
+export const ControlChart = dynamic(() => import("./control-chart").then((m) => m.ControlChart), {
+  ssr: false,
+  loading: chartPlaceholder(300),
+});
+export const CauseSiteChart = dynamic(() => import("./cause-site-chart").then((m) => m.CauseSiteChart), {
+  ssr: false,
+  loading: chartPlaceholder(200),
+});

@@ -32,15 +32,32 @@ export function ClusterControls({ tally }: { tally: ClusterTally }) {
     <>
       <div role="group" aria-label="Group by" className="inline-flex rounded-lg bg-surface-2 p-0.5 ring-1 ring-line">
         {KINDS.map((k) => (
-          <button key={k.id} type="button" aria-pressed={tally.keyKind === k.id} onClick={() => set("cluster", k.id)} className={`h-11 rounded-md px-3 text-sm font-medium lg:h-8 ${tally.keyKind === k.id ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}>
+          <button
+            key={k.id}
+            type="button"
+            aria-pressed={tally.keyKind === k.id}
+            onClick={() => set("cluster", k.id)}
+            className={`h-11 rounded-md px-3 text-sm font-medium lg:h-8 ${tally.keyKind === k.id ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}
+          >
             {k.label}
           </button>
         ))}
       </div>
       <label className="flex items-center gap-2 text-sm text-ink-2">
         within
-        <select aria-label="Window in days" value={tally.windowDays} onChange={(e) => set("window", e.target.value)} className="h-11 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink lg:h-9">
-          {[...new Set([...WINDOWS, tally.windowDays])].sort((a, b) => a - b).map((w) => <option key={w} value={w}>{w} days</option>)}
+        <select
+          aria-label="Window in days"
+          value={tally.windowDays}
+          onChange={(e) => set("window", e.target.value)}
+          className="h-11 rounded-lg border border-line-strong bg-surface px-2 text-sm text-ink lg:h-9"
+        >
+          {[...new Set([...WINDOWS, tally.windowDays])]
+            .sort((a, b) => a - b)
+            .map((w) => (
+              <option key={w} value={w}>
+                {w} days
+              </option>
+            ))}
         </select>
       </label>
       <span className="text-xs text-muted">{pending ? "Updating…" : `at least ${tally.minSize} cases`}</span>
@@ -50,7 +67,12 @@ export function ClusterControls({ tally }: { tally: ClusterTally }) {
 
 export function ClustersList({ tally }: { tally: ClusterTally }) {
   if (tally.items.length === 0) {
-    return <p className="py-6 text-center text-sm text-muted">No cause came back {tally.keyKind === "site" ? "at one site" : tally.keyKind === "car" ? "on one car" : "in one lot"} {tally.minSize} or more times within {tally.windowDays} days.</p>;
+    return (
+      <p className="py-6 text-center text-sm text-muted">
+        No cause came back {tally.keyKind === "site" ? "at one site" : tally.keyKind === "car" ? "on one car" : "in one lot"}{" "}
+        {tally.minSize} or more times within {tally.windowDays} days.
+      </p>
+    );
   }
   return (
     <div>
@@ -68,7 +90,12 @@ export function ClustersList({ tally }: { tally: ClusterTally }) {
             <ul className="mt-1.5 flex flex-wrap gap-1.5">
               {c.caseNumbers.slice(0, 12).map((n) => (
                 <li key={n}>
-                  <Link href={`/cases/${n}`} className="inline-flex h-11 items-center rounded-md bg-surface-2 px-2.5 text-xs lg:h-7 lg:px-2 font-medium text-ink-2 ring-1 ring-line tabular hover:text-accent hover:ring-accent">{n}</Link>
+                  <Link
+                    href={`/cases/${n}`}
+                    className="inline-flex h-11 items-center rounded-md bg-surface-2 px-2.5 text-xs lg:h-7 lg:px-2 font-medium text-ink-2 ring-1 ring-line tabular hover:text-accent hover:ring-accent"
+                  >
+                    {n}
+                  </Link>
                 </li>
               ))}
               {c.size > 12 ? <li className="inline-flex h-11 items-center px-1 lg:h-7 text-xs text-muted">newest 12 of {c.size}</li> : null}
@@ -76,7 +103,11 @@ export function ClustersList({ tally }: { tally: ClusterTally }) {
           </li>
         ))}
       </ol>
-      {tally.total > tally.items.length ? <p className="mt-2 text-xs text-muted">Showing the {tally.items.length} most recent of {tally.total} clusters; narrow the filters to see others.</p> : null}
+      {tally.total > tally.items.length ? (
+        <p className="mt-2 text-xs text-muted">
+          Showing the {tally.items.length} most recent of {tally.total} clusters; narrow the filters to see others.
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -7,7 +7,6 @@ import { percent, percentRange } from "@/lib/tallies/labels";
 import { TONE } from "./chart-words";
 import type { ConfirmationRow, ConfirmationTable } from "@/lib/tallies/types";
 
-
 function IntervalShape(props: BarShapeProps) {
   const { x, y, width, height, payload } = props;
   const row = payload as ConfirmationRow & { range: [number, number] };
@@ -29,7 +28,13 @@ export function ConfirmationChart({ table, nameWidth = 150 }: { table: Confirmat
   const data = table.rows.map((r) => ({ ...r, range: [r.rate.lower * 100, r.rate.upper * 100] as [number, number] }));
   const height = Math.max(140, data.length * 32 + 48);
   return (
-    <ComposedChart responsive layout="vertical" style={{ width: "100%", height }} data={data} margin={{ top: 18, right: 16, bottom: 4, left: 4 }}>
+    <ComposedChart
+      responsive
+      layout="vertical"
+      style={{ width: "100%", height }}
+      data={data}
+      margin={{ top: 18, right: 16, bottom: 4, left: 4 }}
+    >
       <CartesianGrid horizontal={false} stroke={THEME.line} />
       <XAxis type="number" domain={[0, 100]} ticks={[0, 25, 50, 75, 100]} tick={AXIS_TICK} tickFormatter={(v: number) => `${v}%`} />
       <YAxis type="category" dataKey="label" tick={{ ...AXIS_TICK, fontSize: 11 }} width={nameWidth} interval={0} />
@@ -42,7 +47,12 @@ export function ConfirmationChart({ table, nameWidth = 150 }: { table: Confirmat
         }}
       />
       {table.overall.p !== null ? (
-        <ReferenceLine x={table.overall.p * 100} stroke={THEME.accent} strokeDasharray="5 4" label={{ value: `All: ${percent(table.overall.p)}`, position: "top", fill: THEME.accent, fontSize: 11 }} />
+        <ReferenceLine
+          x={table.overall.p * 100}
+          stroke={THEME.accent}
+          strokeDasharray="5 4"
+          label={{ value: `All: ${percent(table.overall.p)}`, position: "top", fill: THEME.accent, fontSize: 11 }}
+        />
       ) : null}
       <Bar dataKey="range" shape={IntervalShape} isAnimationActive={false} />
     </ComposedChart>

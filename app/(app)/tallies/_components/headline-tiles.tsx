@@ -27,9 +27,24 @@ export function HeadlineTiles({ data }: { data: TalliesData }) {
     <div className="mb-5 grid grid-cols-2 gap-3 lg:grid-cols-5" data-headline>
       <Tile label="Removals" value={n(t.removals)} note="every stage" />
       <Tile label="Signed verdicts" value={n(t.signed)} note={t.removals ? `${percent(t.signed / t.removals)} of removals` : undefined} />
-      <Tile label="Confirmed at teardown" value={percent(o.p)} note={o.p === null ? "no outcomes yet" : `95% interval ${percentRange(o.lower, o.upper)} · ${n(recorded)} teardowns`} tone="ok" />
-      <Tile label="No defect found" value={recorded ? percent(t.noDefect / recorded) : "–"} note={`${n(t.noDefect)} removals not confirmed`} tone={t.noDefect ? "danger" : "ink"} />
-      <Tile label="Above control limit" value={n(alarms.length)} note="months over a series' limit, counted once per series, latest 12 months" tone={alarms.length ? "danger" : "ink"} />
+      <Tile
+        label="Confirmed at teardown"
+        value={percent(o.p)}
+        note={o.p === null ? "no outcomes yet" : `95% interval ${percentRange(o.lower, o.upper)} · ${n(recorded)} teardowns`}
+        tone="ok"
+      />
+      <Tile
+        label="No defect found"
+        value={recorded ? percent(t.noDefect / recorded) : "–"}
+        note={`${n(t.noDefect)} removals not confirmed`}
+        tone={t.noDefect ? "danger" : "ink"}
+      />
+      <Tile
+        label="Above control limit"
+        value={n(alarms.length)}
+        note="months over a series' limit, counted once per series, latest 12 months"
+        tone={alarms.length ? "danger" : "ink"}
+      />
     </div>
   );
 }

@@ -13,7 +13,15 @@ export function ParetoChart({ rows }: { rows: ParetoBar[] }) {
   return (
     <ComposedChart responsive style={{ width: "100%", height: 340 }} data={data} margin={{ top: 8, right: 4, bottom: 8, left: 0 }}>
       <CartesianGrid vertical={false} stroke={THEME.line} />
-      <XAxis dataKey="label" tick={{ ...AXIS_TICK, fontSize: 11 }} tickFormatter={short} interval={0} angle={-60} textAnchor="end" height={118} />
+      <XAxis
+        dataKey="label"
+        tick={{ ...AXIS_TICK, fontSize: 11 }}
+        tickFormatter={short}
+        interval={0}
+        angle={-60}
+        textAnchor="end"
+        height={118}
+      />
       <YAxis yAxisId="n" tick={AXIS_TICK} allowDecimals={false} width={52} tickFormatter={compact} />
       <YAxis yAxisId="pct" orientation="right" domain={[0, 100]} tick={AXIS_TICK} tickFormatter={(v: number) => `${v}%`} width={44} />
       <Tooltip
@@ -22,9 +30,19 @@ export function ParetoChart({ rows }: { rows: ParetoBar[] }) {
         formatter={(value, name) => (name === "Running share" ? [`${Number(value).toFixed(1)}%`, name] : [value, name])}
       />
       <Bar yAxisId="n" dataKey="count" name="Verdicts" radius={[4, 4, 0, 0]} isAnimationActive={false}>
-        {data.map((r, i) => <Cell key={r.code || i} fill={causeColour(r.code, i)} />)}
+        {data.map((r, i) => (
+          <Cell key={r.code || i} fill={causeColour(r.code, i)} />
+        ))}
       </Bar>
-      <Line yAxisId="pct" dataKey="cumulativePct" name="Running share" stroke={THEME.ink2} strokeWidth={2} dot={{ r: 3, fill: THEME.ink2 }} isAnimationActive={false} />
+      <Line
+        yAxisId="pct"
+        dataKey="cumulativePct"
+        name="Running share"
+        stroke={THEME.ink2}
+        strokeWidth={2}
+        dot={{ r: 3, fill: THEME.ink2 }}
+        isAnimationActive={false}
+      />
     </ComposedChart>
   );
 }

@@ -27,12 +27,20 @@ export default async function LifePage({ searchParams }: Props) {
   const limit = viewerSiteLimit(user);
   const ownSite = limit.limited ? (sites.find((s) => s.id === limit.siteId)?.name ?? "No home site") : null;
   const where = ownSite ?? (filters.site ? (sites.find((s) => s.code === filters.site)?.name ?? filters.site) : "all sites");
-  const when = filters.from || filters.to ? `${filters.from ? monthLabel(filters.from) : "start"} – ${filters.to ? monthLabel(filters.to) : "now"}` : "all time";
+  const when =
+    filters.from || filters.to
+      ? `${filters.from ? monthLabel(filters.from) : "start"} – ${filters.to ? monthLabel(filters.to) : "now"}`
+      : "all time";
   return (
     <>
       <PageHeader title="Tallies" subtitle={`How early in life each cause takes bearings out · ${where} · ${when}`} />
       <TallyTabs active="life" query={filtersToQuery({ ...filters, cluster: "site", window: 30 })} />
-      <FilterBar filters={filters} {...filterOptions(sites)} siteLimit={ownSite ? `${ownSite} (your shop)` : null} currentMonth={currentMonth()} />
+      <FilterBar
+        filters={filters}
+        {...filterOptions(sites)}
+        siteLimit={ownSite ? `${ownSite} (your shop)` : null}
+        currentMonth={currentMonth()}
+      />
       <LifeBoard data={data} canUpload={can(user.role, "fleet:upload")} scopeWords={`${where} · ${when}`} />
     </>
   );

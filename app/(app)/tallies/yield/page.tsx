@@ -25,12 +25,23 @@ export default async function YieldPage({ searchParams }: Props) {
   const [data, sites] = await Promise.all([loadYield(filters, user, miss), tallySites()]);
   const siteName = filters.site ? (sites.find((s) => s.code === filters.site)?.name ?? filters.site) : null;
   const where = data.siteLimit ? data.siteLimit.name : (siteName ?? "all sites");
-  const when = filters.from || filters.to ? `${filters.from ? monthLabel(filters.from) : "start"} – ${filters.to ? monthLabel(filters.to) : "now"}` : "all time";
+  const when =
+    filters.from || filters.to
+      ? `${filters.from ? monthLabel(filters.from) : "start"} – ${filters.to ? monthLabel(filters.to) : "now"}`
+      : "all time";
   return (
     <>
-      <PageHeader title="Tallies" subtitle={`Were the removals right? Alarms, detectors and field calls against teardown · ${where} · ${when}`} />
+      <PageHeader
+        title="Tallies"
+        subtitle={`Were the removals right? Alarms, detectors and field calls against teardown · ${where} · ${when}`}
+      />
       <TallyTabs active="yield" query={filtersToQuery({ ...filters, cluster: "site", window: 30 })} />
-      <FilterBar filters={filters} {...filterOptions(sites)} siteLimit={data.siteLimit ? `${data.siteLimit.name} (your shop)` : null} currentMonth={currentMonth()} />
+      <FilterBar
+        filters={filters}
+        {...filterOptions(sites)}
+        siteLimit={data.siteLimit ? `${data.siteLimit.name} (your shop)` : null}
+        currentMonth={currentMonth()}
+      />
       <MissWindow value={miss} />
       <YieldBoard data={data} scopeWords={`${where} · ${when}`} />
     </>

@@ -13,7 +13,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
       <>
         <h1 className="text-2xl font-semibold tracking-tight">Invitation not valid</h1>
         <p role="alert" className="mt-4 rounded-lg bg-danger-soft px-3 py-3 text-sm text-danger">
-          This invitation has expired, was replaced by a newer one, or was already used. Ask your Tearline administrator to invite you again.
+          This invitation has expired, was replaced by a newer one, or was already used. Ask your Tearline administrator to invite you
+          again.
         </p>
       </>
     );
@@ -22,7 +23,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     <>
       <h1 className="text-2xl font-semibold tracking-tight">Welcome, {invitation.name}</h1>
       <p className="mt-1 text-sm text-muted">
-        You are joining as <strong className="text-ink-2">{isRole(invitation.role) ? ROLE_LABELS[invitation.role] : invitation.role}</strong> with{" "}
+        You are joining as{" "}
+        <strong className="text-ink-2">{isRole(invitation.role) ? ROLE_LABELS[invitation.role] : invitation.role}</strong> with{" "}
         {invitation.email}. Choose a password to finish.
       </p>
       <SetPasswordForm mode="invitation" token={token} />

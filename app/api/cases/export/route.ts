@@ -21,6 +21,10 @@ export const GET = withRole("case:read", async ({ req, user }) => {
     headers["x-export-capped"] = String(csv.cap);
     headers["x-export-note"] = cappedNote(csv.total, csv.cap);
   }
-  await audit("export", user, { subject: "case list CSV", headers: req.headers, detail: { format: "csv", rows: Math.min(csv.total, csv.cap) } });
+  await audit("export", user, {
+    subject: "case list CSV",
+    headers: req.headers,
+    detail: { format: "csv", rows: Math.min(csv.total, csv.cap) },
+  });
   return new Response(csv.stream, { status: 200, headers });
 });

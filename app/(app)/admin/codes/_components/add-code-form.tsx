@@ -64,7 +64,9 @@ export function AddCodeForm({ list, onDone }: { list: CodeListName; onDone: () =
           <Field label="Family" htmlFor={f("family")}>
             <Select id={f("family")} value={family} onChange={(e) => setFamily(e.target.value)}>
               {DAMAGE_FAMILIES.map((fam) => (
-                <option key={fam.code} value={fam.code}>{fam.label}</option>
+                <option key={fam.code} value={fam.code}>
+                  {fam.label}
+                </option>
               ))}
             </Select>
           </Field>
@@ -73,9 +75,22 @@ export function AddCodeForm({ list, onDone }: { list: CodeListName; onDone: () =
           label={damage ? "Code name" : "Code"}
           htmlFor={f("code")}
           error={errors.code}
-          hint={<>Stored as <code className="font-mono text-ink-2">{code || "…"}</code>; lowercase words joined by hyphens. A code never changes once added.</>}
+          hint={
+            <>
+              Stored as <code className="font-mono text-ink-2">{code || "…"}</code>; lowercase words joined by hyphens. A code never changes
+              once added.
+            </>
+          }
         >
-          <Input id={f("code")} value={name} onChange={(e) => setName(e.target.value)} aria-invalid={!!errors.code} className="font-mono" placeholder={damage ? "micro-pitting" : "axle-current"} autoComplete="off" />
+          <Input
+            id={f("code")}
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            aria-invalid={!!errors.code}
+            className="font-mono"
+            placeholder={damage ? "micro-pitting" : "axle-current"}
+            autoComplete="off"
+          />
         </Field>
       </div>
       <Field label="Label" htmlFor={f("label")} error={errors.label}>
@@ -84,17 +99,31 @@ export function AddCodeForm({ list, onDone }: { list: CodeListName; onDone: () =
       <Field label={damage ? "What it looks like" : "What it means"} htmlFor={f("description")} error={errors.description}>
         <Textarea id={f("description")} name="description" rows={2} className="min-h-16" aria-invalid={!!errors.description} />
       </Field>
-      <Field label="Shop words" htmlFor={f("synonyms")} error={errors.synonyms} hint="Other words people use for it, separated by commas. Search finds the code by these.">
+      <Field
+        label="Shop words"
+        htmlFor={f("synonyms")}
+        error={errors.synonyms}
+        hint="Other words people use for it, separated by commas. Search finds the code by these."
+      >
         <Input id={f("synonyms")} name="synonyms" placeholder="e.g. frosting, grey patches" />
       </Field>
       {damage ? (
-        <Field label="ISO 15243 mode (optional)" htmlFor={f("isoMode")} error={errors.isoMode} hint="Only where the code is one of the standard's failure modes.">
+        <Field
+          label="ISO 15243 mode (optional)"
+          htmlFor={f("isoMode")}
+          error={errors.isoMode}
+          hint="Only where the code is one of the standard's failure modes."
+        >
           <Input id={f("isoMode")} name="isoMode" />
         </Field>
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={busy}>{busy ? "Adding…" : `Add ${CODE_LIST_LABELS[list].one}`}</Button>
-        <Button variant="ghost" onClick={onDone}>Cancel</Button>
+        <Button type="submit" disabled={busy}>
+          {busy ? "Adding…" : `Add ${CODE_LIST_LABELS[list].one}`}
+        </Button>
+        <Button variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
         <StatusNote note={note} />
       </div>
     </form>

@@ -42,17 +42,29 @@ export function CodeListPanel({ list, groups }: { list: CodeListName; groups: Co
         </div>
       )}
       {shown.every((g) => !g.entries.length) ? (
-        <EmptyState title={needle ? `Nothing in ${labels.title.toLowerCase()} matches “${filter.trim()}”` : `No ${labels.title.toLowerCase()} yet`} />
+        <EmptyState
+          title={needle ? `Nothing in ${labels.title.toLowerCase()} matches “${filter.trim()}”` : `No ${labels.title.toLowerCase()} yet`}
+        />
       ) : null}
-      {shown.filter((g) => g.entries.length).map((g) => (
-        <Card key={g.key} title={<span>{g.title}{g.subtitle ? <span className="ml-2 text-xs font-normal text-muted">{g.subtitle}</span> : null}</span>}>
-          <ul className="-my-4 divide-y divide-line">
-            {g.entries.map((e) => (
-              <CodeRow key={e.code} entry={e} />
-            ))}
-          </ul>
-        </Card>
-      ))}
+      {shown
+        .filter((g) => g.entries.length)
+        .map((g) => (
+          <Card
+            key={g.key}
+            title={
+              <span>
+                {g.title}
+                {g.subtitle ? <span className="ml-2 text-xs font-normal text-muted">{g.subtitle}</span> : null}
+              </span>
+            }
+          >
+            <ul className="-my-4 divide-y divide-line">
+              {g.entries.map((e) => (
+                <CodeRow key={e.code} entry={e} />
+              ))}
+            </ul>
+          </Card>
+        ))}
     </div>
   );
 }

@@ -71,7 +71,9 @@ export function CodeRow({ entry }: { entry: CodeView }) {
           {entry.synonyms.length ? (
             <ul className="mt-2 flex flex-wrap gap-1.5" aria-label="Shop words">
               {entry.synonyms.map((s) => (
-                <li key={s} className="rounded-full bg-surface-2 px-2 py-0.5 text-xs text-ink-2 ring-1 ring-line">{s}</li>
+                <li key={s} className="rounded-full bg-surface-2 px-2 py-0.5 text-xs text-ink-2 ring-1 ring-line">
+                  {s}
+                </li>
               ))}
             </ul>
           ) : null}
@@ -80,25 +82,52 @@ export function CodeRow({ entry }: { entry: CodeView }) {
           <span className="mr-2 text-xs text-muted sm:mr-0 sm:mb-1">{casesText(entry.cases)}</span>
           {!editing ? (
             <div className="flex flex-wrap gap-1">
-              <Button size="sm" variant="secondary" onClick={() => setEditing(true)} disabled={busy}>Edit</Button>
+              <Button size="sm" variant="secondary" onClick={() => setEditing(true)} disabled={busy}>
+                Edit
+              </Button>
               {entry.retired ? (
-                <Button size="sm" variant="secondary" onClick={() => send("PATCH", { retired: false }, "Restored: offered in pickers again.")} disabled={busy}>Restore</Button>
+                <Button
+                  size="sm"
+                  variant="secondary"
+                  onClick={() => send("PATCH", { retired: false }, "Restored: offered in pickers again.")}
+                  disabled={busy}
+                >
+                  Restore
+                </Button>
               ) : (
-                <button type="button" className={quietDangerClass} onClick={() => send("PATCH", { retired: true }, "Retired: old cases keep it; pickers no longer offer it.")} disabled={busy}>Retire</button>
+                <button
+                  type="button"
+                  className={quietDangerClass}
+                  onClick={() => send("PATCH", { retired: true }, "Retired: old cases keep it; pickers no longer offer it.")}
+                  disabled={busy}
+                >
+                  Retire
+                </button>
               )}
               {entry.cases === 0 ? (
-                <button type="button" className={quietDangerClass} onClick={() => send("DELETE", undefined, "Deleted.")} disabled={busy}>Delete</button>
+                <button type="button" className={quietDangerClass} onClick={() => send("DELETE", undefined, "Deleted.")} disabled={busy}>
+                  Delete
+                </button>
               ) : null}
             </div>
           ) : null}
         </div>
       </div>
       {editing ? (
-        <form onSubmit={onSave} noValidate className="mt-4 flex flex-col gap-4 rounded-lg border border-line bg-surface-2 p-4" aria-label={`Edit ${entry.code}`}>
+        <form
+          onSubmit={onSave}
+          noValidate
+          className="mt-4 flex flex-col gap-4 rounded-lg border border-line bg-surface-2 p-4"
+          aria-label={`Edit ${entry.code}`}
+        >
           <Field label="Label" htmlFor={f("label")} error={errors.label}>
             <Input id={f("label")} name="label" defaultValue={entry.label} aria-invalid={!!errors.label} />
           </Field>
-          <Field label={entry.list === "damage" ? "What it looks like" : "What it means"} htmlFor={f("description")} error={errors.description}>
+          <Field
+            label={entry.list === "damage" ? "What it looks like" : "What it means"}
+            htmlFor={f("description")}
+            error={errors.description}
+          >
             <Textarea id={f("description")} name="description" rows={2} className="min-h-16" defaultValue={entry.description} />
           </Field>
           <Field label="Shop words" htmlFor={f("synonyms")} error={errors.synonyms} hint="Separated by commas.">
@@ -110,8 +139,19 @@ export function CodeRow({ entry }: { entry: CodeView }) {
             </Field>
           ) : null}
           <div className="flex gap-2">
-            <Button type="submit" size="sm" disabled={busy}>{busy ? "Saving…" : "Save"}</Button>
-            <Button size="sm" variant="ghost" onClick={() => { setEditing(false); setErrors({}); }}>Cancel</Button>
+            <Button type="submit" size="sm" disabled={busy}>
+              {busy ? "Saving…" : "Save"}
+            </Button>
+            <Button
+              size="sm"
+              variant="ghost"
+              onClick={() => {
+                setEditing(false);
+                setErrors({});
+              }}
+            >
+              Cancel
+            </Button>
           </div>
         </form>
       ) : null}

@@ -34,7 +34,9 @@ export function OutboxTable({ rows, now }: { rows: OutboxRow[]; now: number }) {
               {KIND_LABELS[r.kind] ?? r.kind} · {r.attempts} {r.attempts === 1 ? "attempt" : "attempts"} ·{" "}
               {r.status === "sent" ? `sent ${when(r.sentAt, now)}` : `next try ${nextTry(r, now)}`}
             </p>
-            {r.lastError && r.status !== "sent" ? <p className="mt-1 rounded-md bg-danger-soft px-2 py-1 text-xs text-danger">{r.lastError}</p> : null}
+            {r.lastError && r.status !== "sent" ? (
+              <p className="mt-1 rounded-md bg-danger-soft px-2 py-1 text-xs text-danger">{r.lastError}</p>
+            ) : null}
           </li>
         ))}
       </ul>
@@ -43,7 +45,9 @@ export function OutboxTable({ rows, now }: { rows: OutboxRow[]; now: number }) {
           <thead className="border-b border-line text-xs uppercase tracking-wide text-muted">
             <tr>
               {["Kind", "To", "Subject", "Status", "Attempts", "Last error", "Next attempt", "Sent"].map((h) => (
-                <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium first:pl-5 last:pr-5">{h}</th>
+                <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium first:pl-5 last:pr-5">
+                  {h}
+                </th>
               ))}
             </tr>
           </thead>
@@ -53,9 +57,11 @@ export function OutboxTable({ rows, now }: { rows: OutboxRow[]; now: number }) {
                 <td className="whitespace-nowrap py-2.5 pl-5 pr-3 text-ink-2">{KIND_LABELS[r.kind] ?? r.kind}</td>
                 <td className="max-w-56 break-words px-3 py-2.5">{r.to.join(", ")}</td>
                 <td className="max-w-72 px-3 py-2.5 font-medium">{r.subject}</td>
-                <td className="px-3 py-2.5"><StatusBadge row={r} /></td>
+                <td className="px-3 py-2.5">
+                  <StatusBadge row={r} />
+                </td>
                 <td className="px-3 py-2.5 text-center tabular">{r.attempts}</td>
-                <td className="max-w-64 px-3 py-2.5 text-xs text-danger">{r.status !== "sent" ? r.lastError ?? "" : ""}</td>
+                <td className="max-w-64 px-3 py-2.5 text-xs text-danger">{r.status !== "sent" ? (r.lastError ?? "") : ""}</td>
                 <td className="whitespace-nowrap px-3 py-2.5 text-ink-2 tabular">{nextTry(r, now)}</td>
                 <td className="whitespace-nowrap py-2.5 pl-3 pr-5 text-ink-2 tabular">{when(r.sentAt, now)}</td>
               </tr>

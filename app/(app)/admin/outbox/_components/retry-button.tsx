@@ -14,7 +14,9 @@ export function RetryButton({ unsent }: { unsent: number }) {
   async function retry() {
     setBusy(true);
     setNote(null);
-    const res = await callApi<{ sent?: number; failed?: number }>("POST", "/api/admin/outbox/retry", { fallback: "The retry was refused." });
+    const res = await callApi<{ sent?: number; failed?: number }>("POST", "/api/admin/outbox/retry", {
+      fallback: "The retry was refused.",
+    });
     if (!res.ok) setNote(res.message);
     else if (!res.data?.sent && !res.data?.failed) setNote("Nothing was waiting to be sent.");
     else setNote(`${res.data.sent ?? 0} sent, ${res.data.failed ?? 0} still failing.`);
@@ -27,7 +29,9 @@ export function RetryButton({ unsent }: { unsent: number }) {
       <Button onClick={retry} disabled={busy || pending} size="md" className="whitespace-nowrap">
         {busy ? "Sending…" : unsent > 0 ? `Retry now (${unsent})` : "Retry now"}
       </Button>
-      <p role="status" aria-live="polite" className="min-h-4 text-xs text-muted">{note ?? ""}</p>
+      <p role="status" aria-live="polite" className="min-h-4 text-xs text-muted">
+        {note ?? ""}
+      </p>
     </div>
   );
 }

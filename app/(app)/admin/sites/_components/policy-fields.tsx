@@ -29,7 +29,13 @@ export function policyTexts(values: Record<PolicyKey, number>, unit: PolicyUnit)
 }
 
 /** The four limits, typed in inches or millimetres, each shown in the other unit as you type. */
-export function PolicyFields({ texts, unit, errors, onChange, onUnit }: {
+export function PolicyFields({
+  texts,
+  unit,
+  errors,
+  onChange,
+  onUnit,
+}: {
   texts: PolicyTexts;
   unit: PolicyUnit;
   errors: Record<string, string>;
@@ -75,21 +81,27 @@ export function PolicyFields({ texts, unit, errors, onChange, onUnit }: {
                 />
                 <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-sm text-muted">{unit}</span>
               </div>
-              <span className="text-sm text-muted tabular" data-testid={`${f.key}-other-unit`}>{echo}</span>
+              <span className="text-sm text-muted tabular" data-testid={`${f.key}-other-unit`}>
+                {echo}
+              </span>
             </div>
           </Field>
         );
       })}
       <p className="text-xs text-muted">
-        Tearline&apos;s starting values: {formatIn(DEFAULT_END_PLAY_POLICY.maxIn)} in ({formatMmFromIn(DEFAULT_END_PLAY_POLICY.maxIn)} mm), trials within{" "}
-        {formatIn(DEFAULT_END_PLAY_POLICY.dialSpreadIn)} in on a dial and 1/64 in on a tape, readings believable up to {formatIn(DEFAULT_PLAUSIBLE_MAX_IN)} in.
+        Tearline&apos;s starting values: {formatIn(DEFAULT_END_PLAY_POLICY.maxIn)} in ({formatMmFromIn(DEFAULT_END_PLAY_POLICY.maxIn)} mm),
+        trials within {formatIn(DEFAULT_END_PLAY_POLICY.dialSpreadIn)} in on a dial and 1/64 in on a tape, readings believable up to{" "}
+        {formatIn(DEFAULT_PLAUSIBLE_MAX_IN)} in.
       </p>
     </fieldset>
   );
 }
 
 /** Reads the three texts as inches; field errors for anything that is not a length. */
-export function readPolicy(texts: PolicyTexts, unit: PolicyUnit): { values: Partial<Record<PolicyKey, number>>; errors: Record<string, string> } {
+export function readPolicy(
+  texts: PolicyTexts,
+  unit: PolicyUnit,
+): { values: Partial<Record<PolicyKey, number>>; errors: Record<string, string> } {
   const values: Partial<Record<PolicyKey, number>> = {};
   const errors: Record<string, string> = {};
   for (const key of Object.keys(texts) as PolicyKey[]) {

@@ -44,7 +44,10 @@ export function SiteCard({ site }: { site: SiteView }) {
   }
 
   return (
-    <li className={`rounded-xl border bg-surface ${site.active ? "border-line" : "border-dashed border-line-strong"}`} data-testid={`site-${site.code}`}>
+    <li
+      className={`rounded-xl border bg-surface ${site.active ? "border-line" : "border-dashed border-line-strong"}`}
+      data-testid={`site-${site.code}`}
+    >
       <div className="flex flex-col gap-4 p-4 sm:p-5">
         <div className="flex items-start justify-between gap-3">
           <div className="min-w-0">
@@ -59,13 +62,26 @@ export function SiteCard({ site }: { site: SiteView }) {
             </p>
           </div>
           {!editing ? (
-            <Button size="sm" variant="secondary" onClick={() => { setEditing(true); setNote(null); }}>
+            <Button
+              size="sm"
+              variant="secondary"
+              onClick={() => {
+                setEditing(true);
+                setNote(null);
+              }}
+            >
               Edit
             </Button>
           ) : null}
         </div>
         {editing ? (
-          <SiteForm site={site} onDone={(message) => { setEditing(false); if (message) setNote({ tone: "ok", text: message }); }} />
+          <SiteForm
+            site={site}
+            onDone={(message) => {
+              setEditing(false);
+              if (message) setNote({ tone: "ok", text: message });
+            }}
+          />
         ) : (
           <>
             <dl className="grid grid-cols-2 gap-3 rounded-lg bg-surface-2 px-3 py-3 text-sm sm:grid-cols-4">
@@ -76,8 +92,11 @@ export function SiteCard({ site }: { site: SiteView }) {
             </dl>
             <div className="flex flex-wrap items-center justify-between gap-2 text-xs text-muted">
               <span>
-                {ownLimit ? <Badge tone="warn">Own limit</Badge> : <span>Common limit</span>} · {plural(site.usage.cases, "case", "cases")} · {plural(site.usage.users, "person", "people")} ·{" "}
-                <span data-testid={`cost-${site.code}`}>{site.removalCostUsd === null ? "no cost per removal set" : `$${site.removalCostUsd.toLocaleString("en-US")} per removal`}</span>
+                {ownLimit ? <Badge tone="warn">Own limit</Badge> : <span>Common limit</span>} · {plural(site.usage.cases, "case", "cases")}{" "}
+                · {plural(site.usage.users, "person", "people")} ·{" "}
+                <span data-testid={`cost-${site.code}`}>
+                  {site.removalCostUsd === null ? "no cost per removal set" : `$${site.removalCostUsd.toLocaleString("en-US")} per removal`}
+                </span>
               </span>
               {inUse ? (
                 <span>In use: can be made inactive, not deleted.</span>

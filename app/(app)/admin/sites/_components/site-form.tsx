@@ -19,7 +19,12 @@ function readCost(text: string): number | null {
   return t === "" ? null : Number(t);
 }
 
-const DEFAULTS = { endPlayMaxIn: DEFAULT_END_PLAY_POLICY.maxIn, dialSpreadIn: DEFAULT_END_PLAY_POLICY.dialSpreadIn, tapeSpreadIn: DEFAULT_END_PLAY_POLICY.tapeSpreadIn, plausibleMaxIn: DEFAULT_PLAUSIBLE_MAX_IN };
+const DEFAULTS = {
+  endPlayMaxIn: DEFAULT_END_PLAY_POLICY.maxIn,
+  dialSpreadIn: DEFAULT_END_PLAY_POLICY.dialSpreadIn,
+  tapeSpreadIn: DEFAULT_END_PLAY_POLICY.tapeSpreadIn,
+  plausibleMaxIn: DEFAULT_PLAUSIBLE_MAX_IN,
+};
 
 /** Adds a site (no `site`) or edits one; the limits can be typed in either unit. */
 export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?: string) => void }) {
@@ -81,7 +86,14 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
       <ErrorSummary errors={errors} idPrefix={`${id}-`} />
       <div className="grid gap-4 sm:grid-cols-[8rem_1fr]">
         <Field label="Code" htmlFor={f("code")} error={errors.code}>
-          <Input id={f("code")} name="code" defaultValue={site?.code} aria-invalid={!!errors.code} className="uppercase" placeholder="e.g. RSC" />
+          <Input
+            id={f("code")}
+            name="code"
+            defaultValue={site?.code}
+            aria-invalid={!!errors.code}
+            className="uppercase"
+            placeholder="e.g. RSC"
+          />
         </Field>
         <Field label="Name" htmlFor={f("name")} error={errors.name}>
           <Input id={f("name")} name="name" defaultValue={site?.name} aria-invalid={!!errors.name} placeholder="e.g. Riverside car shop" />
@@ -91,7 +103,9 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
         <Field label="Kind" htmlFor={f("kind")} error={errors.kind}>
           <Select id={f("kind")} name="kind" defaultValue={site?.kind ?? "car-shop"}>
             {SITE_KINDS.map((k) => (
-              <option key={k} value={k}>{SITE_KIND_LABELS[k]}</option>
+              <option key={k} value={k}>
+                {SITE_KIND_LABELS[k]}
+              </option>
             ))}
           </Select>
         </Field>
@@ -99,13 +113,32 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
           <Input id={f("railway")} name="railway" defaultValue={site?.railway} aria-invalid={!!errors.railway} placeholder="Who runs it" />
         </Field>
         <Field label="Location" htmlFor={f("location")} error={errors.location}>
-          <Input id={f("location")} name="location" defaultValue={site?.location} aria-invalid={!!errors.location} placeholder="Town or yard" />
+          <Input
+            id={f("location")}
+            name="location"
+            defaultValue={site?.location}
+            aria-invalid={!!errors.location}
+            placeholder="Town or yard"
+          />
         </Field>
       </div>
-      <Field label="Cost of one removal (USD) — optional" htmlFor={f("cost")} error={errors.removalCostUsd} hint="Wheelset change, car out of service and lab time. Tallies use it to price removals that teardown did not confirm.">
+      <Field
+        label="Cost of one removal (USD) — optional"
+        htmlFor={f("cost")}
+        error={errors.removalCostUsd}
+        hint="Wheelset change, car out of service and lab time. Tallies use it to price removals that teardown did not confirm."
+      >
         <div className="relative w-44">
           <span className="pointer-events-none absolute inset-y-0 left-3 flex items-center text-sm text-muted">$</span>
-          <Input id={f("cost")} name="removalCostUsd" inputMode="decimal" defaultValue={site?.removalCostUsd ?? ""} aria-invalid={!!errors.removalCostUsd} className="pl-7 tabular" placeholder="not set" />
+          <Input
+            id={f("cost")}
+            name="removalCostUsd"
+            inputMode="decimal"
+            defaultValue={site?.removalCostUsd ?? ""}
+            aria-invalid={!!errors.removalCostUsd}
+            className="pl-7 tabular"
+            placeholder="not set"
+          />
         </div>
       </Field>
       <div className="rounded-lg border border-line bg-surface-2 p-4">
@@ -121,8 +154,12 @@ export function SiteForm({ site, onDone }: { site?: SiteView; onDone: (message?:
         </label>
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={busy}>{busy ? "Saving…" : site ? "Save changes" : "Add site"}</Button>
-        <Button variant="ghost" onClick={() => onDone()}>Cancel</Button>
+        <Button type="submit" disabled={busy}>
+          {busy ? "Saving…" : site ? "Save changes" : "Add site"}
+        </Button>
+        <Button variant="ghost" onClick={() => onDone()}>
+          Cancel
+        </Button>
         <StatusNote note={note} />
       </div>
     </form>

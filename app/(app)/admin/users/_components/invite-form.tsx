@@ -57,7 +57,15 @@ export function InviteForm({ sites }: { sites: SiteChoice[] }) {
         <Input id="invite-name" name="name" autoComplete="off" aria-invalid={!!errors.name} placeholder="Full name" />
       </Field>
       <Field label="E-mail" htmlFor="invite-email" error={errors.email}>
-        <Input id="invite-email" name="email" type="email" inputMode="email" autoComplete="off" aria-invalid={!!errors.email} placeholder="name@railway.example" />
+        <Input
+          id="invite-email"
+          name="email"
+          type="email"
+          inputMode="email"
+          autoComplete="off"
+          aria-invalid={!!errors.email}
+          placeholder="name@railway.example"
+        />
       </Field>
       <Field label="Role" htmlFor="invite-role" error={errors.role} hint={isRole(role) ? ROLE_SUMMARIES[role] : undefined}>
         <RoleSelect id="invite-role" name="role" value={role} onChange={(e) => setRole(e.target.value)} aria-invalid={!!errors.role} />

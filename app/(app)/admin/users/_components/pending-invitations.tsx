@@ -32,7 +32,13 @@ export function PendingInvitations({ invitations, sites, now }: { invitations: P
     setBusy(null);
     setNote(
       res.ok
-        ? { tone: "ok", text: action === "withdraw" ? `Invitation to ${inv.email} withdrawn; its link no longer works.` : `A new link went to ${inv.email}; the old one no longer works.` }
+        ? {
+            tone: "ok",
+            text:
+              action === "withdraw"
+                ? `Invitation to ${inv.email} withdrawn; its link no longer works.`
+                : `A new link went to ${inv.email}; the old one no longer works.`,
+          }
         : { tone: "danger", text: res.message },
     );
     if (res.ok) router.refresh();
@@ -44,7 +50,11 @@ export function PendingInvitations({ invitations, sites, now }: { invitations: P
     <>
       <ul className="-my-2 divide-y divide-line">
         {invitations.map((inv) => (
-          <li key={inv.id} className="flex flex-col gap-2 py-3 sm:flex-row sm:items-center sm:justify-between" data-testid={`invitation-${inv.email}`}>
+          <li
+            key={inv.id}
+            className="flex flex-col gap-2 py-3 sm:flex-row sm:items-center sm:justify-between"
+            data-testid={`invitation-${inv.email}`}
+          >
             <div className="min-w-0">
               <p className="font-medium text-ink">{inv.name}</p>
               <p className="truncate text-sm text-muted">{inv.email}</p>

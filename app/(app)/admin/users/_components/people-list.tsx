@@ -12,21 +12,34 @@ export function PeopleList({ people, sites, meId }: { people: Person[]; sites: S
   const [role, setRole] = useState("");
   const needle = text.trim().toLowerCase();
   const shown = people.filter(
-    (p) => (!role || p.role === role || (role === "suspended" && p.banned)) && (!needle || `${p.name} ${p.email}`.toLowerCase().includes(needle)),
+    (p) =>
+      (!role || p.role === role || (role === "suspended" && p.banned)) &&
+      (!needle || `${p.name} ${p.email}`.toLowerCase().includes(needle)),
   );
   return (
     <>
       <div className="mb-3 flex flex-col gap-2 sm:flex-row">
-        <Input type="search" value={text} onChange={(e) => setText(e.target.value)} placeholder="Find by name or e-mail" aria-label="Find a person" className="sm:max-w-xs" />
+        <Input
+          type="search"
+          value={text}
+          onChange={(e) => setText(e.target.value)}
+          placeholder="Find by name or e-mail"
+          aria-label="Find a person"
+          className="sm:max-w-xs"
+        />
         <Select value={role} onChange={(e) => setRole(e.target.value)} aria-label="Show role" className="sm:max-w-[14rem]">
           <option value="">Every role</option>
           {ROLES.map((r) => (
-            <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+            <option key={r} value={r}>
+              {ROLE_LABELS[r]}
+            </option>
           ))}
           <option value="suspended">Suspended accounts</option>
         </Select>
       </div>
-      <div className={`hidden gap-4 border-b border-line pb-2 text-xs font-medium uppercase tracking-wide text-muted md:grid ${PEOPLE_COLUMNS}`}>
+      <div
+        className={`hidden gap-4 border-b border-line pb-2 text-xs font-medium uppercase tracking-wide text-muted md:grid ${PEOPLE_COLUMNS}`}
+      >
         <span>Person</span>
         <span>Role</span>
         <span>Home site</span>
@@ -39,7 +52,9 @@ export function PeopleList({ people, sites, meId }: { people: Person[]; sites: S
           ))}
         </ul>
       ) : (
-        <div className="pt-3"><EmptyState title="Nobody matches">Clear the search or choose every role.</EmptyState></div>
+        <div className="pt-3">
+          <EmptyState title="Nobody matches">Clear the search or choose every role.</EmptyState>
+        </div>
       )}
     </>
   );

@@ -48,18 +48,29 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
     setConfirming(false);
     const res = await sendJson(next ? "POST" : "DELETE", `/api/admin/users/${person.id}/suspend`, next ? {} : undefined);
     setBusy(false);
-    setNote(res.ok ? { tone: "ok", text: next ? "Suspended and signed out everywhere." : "Restored; they can sign in again." } : { tone: "danger", text: res.message });
+    setNote(
+      res.ok
+        ? { tone: "ok", text: next ? "Suspended and signed out everywhere." : "Restored; they can sign in again." }
+        : { tone: "danger", text: res.message },
+    );
     if (res.ok) router.refresh();
   }
 
   return (
-    <li className={`grid grid-cols-2 items-center gap-x-3 gap-y-2 py-4 ${PEOPLE_COLUMNS} md:gap-4 ${suspended ? "opacity-75" : ""}`} data-testid={`person-${person.email}`}>
+    <li
+      className={`grid grid-cols-2 items-center gap-x-3 gap-y-2 py-4 ${PEOPLE_COLUMNS} md:gap-4 ${suspended ? "opacity-75" : ""}`}
+      data-testid={`person-${person.email}`}
+    >
       <div className="min-w-0 self-start">
         <p className="flex flex-wrap items-center gap-2 font-medium text-ink">
           {person.name}
           {isSelf ? <Badge tone="accent">You</Badge> : null}
           {suspended ? <Badge tone="danger">Suspended</Badge> : null}
-          {person.locked ? <span title="Locked after repeated failed sign-ins"><Badge tone="danger">Sign-in locked</Badge></span> : null}
+          {person.locked ? (
+            <span title="Locked after repeated failed sign-ins">
+              <Badge tone="danger">Sign-in locked</Badge>
+            </span>
+          ) : null}
         </p>
         <p className="truncate text-sm text-muted">{person.email}</p>
       </div>
@@ -74,7 +85,11 @@ export function PersonRow({ person, sites, isSelf }: { person: Person; sites: Si
           onChange={(e) => {
             const before = role;
             setRole(e.target.value);
-            void save({ role: e.target.value }, () => setRole(before), `Role is now ${isRole(e.target.value) ? ROLE_LABELS[e.target.value] : e.target.value}.`);
+            void save(
+              { role: e.target.value },
+              () => setRole(before),
+              `Role is now ${isRole(e.target.value) ? ROLE_LABELS[e.target.value] : e.target.value}.`,
+            );
           }}
         />
       </label>

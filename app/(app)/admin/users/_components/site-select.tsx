@@ -2,7 +2,11 @@ import { Select } from "@/components/ui/field";
 import { siteOptions, type SiteChoice } from "./types";
 
 /** A home-site picker; "no home site" means the person works across all sites. */
-export function SiteSelect({ sites, value, ...props }: { sites: SiteChoice[]; value: string | null } & Omit<React.ComponentProps<"select">, "value">) {
+export function SiteSelect({
+  sites,
+  value,
+  ...props
+}: { sites: SiteChoice[]; value: string | null } & Omit<React.ComponentProps<"select">, "value">) {
   return (
     <Select value={value ?? ""} {...props}>
       <option value="">No home site (all sites)</option>

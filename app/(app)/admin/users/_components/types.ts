@@ -1,9 +1,25 @@
 // Shapes the People page hands from the server to its client pieces.
 export type SiteChoice = { id: string; code: string; name: string; kind: string; active: boolean };
 
-export type Person = { id: string; name: string; email: string; role: string; banned: boolean | null; siteId: string | null; locked?: boolean };
+export type Person = {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+  banned: boolean | null;
+  siteId: string | null;
+  locked?: boolean;
+};
 
-export type PendingInvitation = { id: string; email: string; name: string; role: string; siteId: string | null; expiresAt: string; createdAt: string };
+export type PendingInvitation = {
+  id: string;
+  email: string;
+  name: string;
+  role: string;
+  siteId: string | null;
+  expiresAt: string;
+  createdAt: string;
+};
 
 /** Active sites, plus the one already chosen even if it has since been closed. */
 export function siteOptions(sites: SiteChoice[], current: string | null) {

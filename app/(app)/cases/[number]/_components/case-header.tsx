@@ -13,7 +13,10 @@ export function CaseHeader({ c }: { c: CaseDetail }) {
   return (
     <header className="mb-5 flex flex-col gap-3">
       <nav className="text-sm text-muted no-print">
-        <Link href="/cases" className="hover:text-ink">Cases</Link> <span aria-hidden>/</span> <span className="text-ink-2">{c.number}</span>
+        <Link href="/cases" className="hover:text-ink">
+          Cases
+        </Link>{" "}
+        <span aria-hidden>/</span> <span className="text-ink-2">{c.number}</span>
       </nav>
       <div className="flex flex-wrap items-center gap-3">
         <h1 className="text-2xl font-semibold tracking-tight tabular sm:text-3xl">{c.number}</h1>
@@ -21,15 +24,29 @@ export function CaseHeader({ c }: { c: CaseDetail }) {
         {c.fieldCall ? <Badge tone={callTone[c.fieldCall]}>Field call: {c.fieldCall}</Badge> : null}
         {flag.length ? <Badge tone="warn">Safety flag</Badge> : null}
         {/* the outcome is the engineer's to state: no badge until the verdict is signed */}
-        {c.status !== "signed" ? null : c.removalConfirmed === "no-defect" ? <Badge tone="warn">No defect found</Badge> : c.removalConfirmed === "confirmed" ? <Badge tone="ok">Removal confirmed</Badge> : null}
+        {c.status !== "signed" ? null : c.removalConfirmed === "no-defect" ? (
+          <Badge tone="warn">No defect found</Badge>
+        ) : c.removalConfirmed === "confirmed" ? (
+          <Badge tone="ok">Removal confirmed</Badge>
+        ) : null}
       </div>
       <p className="text-sm text-ink-2">
-        {[c.carMark && `${c.carMark} ${c.carNumber}`, c.axle && c.side ? `position ${c.axle}${c.side}` : null, triggerLabel(c.trigger), c.siteName, c.removedOn && `removed ${formatDay(c.removedOn)}`, c.serial && `serial ${c.serial}`].filter(Boolean).join(" · ")}
+        {[
+          c.carMark && `${c.carMark} ${c.carNumber}`,
+          c.axle && c.side ? `position ${c.axle}${c.side}` : null,
+          triggerLabel(c.trigger),
+          c.siteName,
+          c.removedOn && `removed ${formatDay(c.removedOn)}`,
+          c.serial && `serial ${c.serial}`,
+        ]
+          .filter(Boolean)
+          .join(" · ")}
       </p>
       <SafetyFlagNote flag={flag} />
       {c.status === "signed" ? (
         <p className="rounded-lg border border-ok/30 bg-ok-soft px-3 py-2 text-sm text-ok">
-          Signed by <strong>{c.signedByName ?? "an engineer"}</strong> on {c.signedAt ? formatDay(c.signedAt.toISOString()) : "—"}. This case is read-only; an engineer can reopen it with a reason.
+          Signed by <strong>{c.signedByName ?? "an engineer"}</strong> on {c.signedAt ? formatDay(c.signedAt.toISOString()) : "—"}. This
+          case is read-only; an engineer can reopen it with a reason.
         </p>
       ) : null}
       {c.status === "bench" && c.returnReason ? (

@@ -16,7 +16,9 @@ export function toDraft(c: CaseDetail): RemovalDraft {
     trigger: c.trigger,
     triggerDetail: c.triggerDetail as RemovalDraft["triggerDetail"],
     serial: c.serial,
-    bearingClass: (BEARING_CLASSES as readonly string[]).includes(c.bearingClass) ? (c.bearingClass as RemovalDraft["bearingClass"]) : undefined,
+    bearingClass: (BEARING_CLASSES as readonly string[]).includes(c.bearingClass)
+      ? (c.bearingClass as RemovalDraft["bearingClass"])
+      : undefined,
     bearingClassOther: c.bearingClassOther,
     makerCode: c.makerCode,
     manufacturedYm: c.manufacturedYm,
@@ -26,7 +28,11 @@ export function toDraft(c: CaseDetail): RemovalDraft {
     serviceMiles: c.serviceMiles,
     fieldNotes: c.fieldNotes,
     fieldChecks: checks.success
-      ? { ...checks.data, endPlay: checks.data.endPlay ?? { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] }, handRoll: checks.data.handRoll ?? { grid: {}, procedure: {} } }
+      ? {
+          ...checks.data,
+          endPlay: checks.data.endPlay ?? { method: "dial", unit: "in", trials: [{ zero: "0", reading: "" }] },
+          handRoll: checks.data.handRoll ?? { grid: {}, procedure: {} },
+        }
       : { visual: [], confirmations: {} },
   };
 }

@@ -26,13 +26,25 @@ export default async function CasePhotosPage({ params }: { params: Promise<{ num
   if (!c) notFound();
   const [rows, findings] = await Promise.all([photosOfCase(c), findingChoices(c)]);
   const photos = rows.map((p) => ({ ...toPhotoView(p), canDelete: mayDeletePhoto(user, p, c.status) }));
-  const where = [c.carMark && `${c.carMark} ${c.carNumber}`, c.axle && c.side ? `position ${c.axle}${c.side}` : null, c.serial && `serial ${c.serial}`].filter(Boolean).join(" · ");
+  const where = [
+    c.carMark && `${c.carMark} ${c.carNumber}`,
+    c.axle && c.side ? `position ${c.axle}${c.side}` : null,
+    c.serial && `serial ${c.serial}`,
+  ]
+    .filter(Boolean)
+    .join(" · ");
 
   return (
     <div className="mx-auto max-w-6xl">
       <nav className="no-print mb-3 text-sm text-muted">
-        <Link href="/cases" className="hover:text-ink">Cases</Link> <span aria-hidden>/</span>{" "}
-        <Link href={`/cases/${c.number}`} className="hover:text-ink">{c.number}</Link> <span aria-hidden>/</span> <span className="text-ink-2">Photos</span>
+        <Link href="/cases" className="hover:text-ink">
+          Cases
+        </Link>{" "}
+        <span aria-hidden>/</span>{" "}
+        <Link href={`/cases/${c.number}`} className="hover:text-ink">
+          {c.number}
+        </Link>{" "}
+        <span aria-hidden>/</span> <span className="text-ink-2">Photos</span>
       </nav>
       <div className="mb-5 flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
         <div>
@@ -44,7 +56,9 @@ export default async function CasePhotosPage({ params }: { params: Promise<{ num
           </div>
           {where ? <p className="mt-1 text-sm text-muted">{where}</p> : null}
         </div>
-        <ButtonLink href={`/cases/${c.number}#photos`} variant="secondary">Back to the case</ButtonLink>
+        <ButtonLink href={`/cases/${c.number}#photos`} variant="secondary">
+          Back to the case
+        </ButtonLink>
       </div>
       <Card>
         <CasePhotos

@@ -48,7 +48,11 @@ export default async function CaseReportPage({ params }: { params: Promise<{ num
             Download PDF
           </a>
           {can(user.role, "case:export") ? (
-            <a href={`/api/cases/${id}/evidence.zip`} className={buttonClass({ variant: "secondary" })} title="Report, original photos and their SHA-256 list">
+            <a
+              href={`/api/cases/${id}/evidence.zip`}
+              className={buttonClass({ variant: "secondary" })}
+              title="Report, original photos and their SHA-256 list"
+            >
               Evidence ZIP
             </a>
           ) : null}

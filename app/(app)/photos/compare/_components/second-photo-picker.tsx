@@ -17,10 +17,16 @@ function Thumbs({ aId, photos }: { aId: string; photos: PhotoView[] }) {
     <ul className="grid grid-cols-3 gap-1.5 sm:grid-cols-4">
       {photos.map((p) => (
         <li key={p.id}>
-          <Link href={`/photos/compare?a=${aId}&b=${p.id}`} className="group block overflow-hidden rounded-lg ring-1 ring-line hover:ring-2 hover:ring-accent" data-testid="pick-photo">
+          <Link
+            href={`/photos/compare?a=${aId}&b=${p.id}`}
+            className="group block overflow-hidden rounded-lg ring-1 ring-line hover:ring-2 hover:ring-accent"
+            data-testid="pick-photo"
+          >
             {/* eslint-disable-next-line @next/next/no-img-element */}
             <img src={p.urls.thumb} alt={photoAlt(p)} loading="lazy" className="aspect-square w-full object-cover" />
-            <span className="block truncate bg-surface-2 px-1.5 py-1 text-[11px] text-ink-2">{p.component ? componentLabel(p.component) : "Untagged"}</span>
+            <span className="block truncate bg-surface-2 px-1.5 py-1 text-[11px] text-ink-2">
+              {p.component ? componentLabel(p.component) : "Untagged"}
+            </span>
           </Link>
         </li>
       ))}
@@ -37,19 +43,39 @@ export function SecondPhotoPicker({ aId, sameCase, other }: Props) {
       </div>
       <form method="get" action="/photos/compare" className="flex gap-2">
         <input type="hidden" name="a" value={aId} />
-        <Input name="case" defaultValue={other.query} placeholder="Case number, e.g. TL-26-00042" aria-label="Case number" className="tabular" />
-        <button type="submit" className={buttonClass({ variant: "secondary" }, "shrink-0")}>Show photos</button>
+        <Input
+          name="case"
+          defaultValue={other.query}
+          placeholder="Case number, e.g. TL-26-00042"
+          aria-label="Case number"
+          className="tabular"
+        />
+        <button type="submit" className={buttonClass({ variant: "secondary" }, "shrink-0")}>
+          Show photos
+        </button>
       </form>
-      {other.problem ? <p className="text-sm text-danger" role="alert">{other.problem}</p> : null}
+      {other.problem ? (
+        <p className="text-sm text-danger" role="alert">
+          {other.problem}
+        </p>
+      ) : null}
       {other.number ? (
         <div>
           <h3 className="mb-2 text-sm font-medium text-ink-2">Photos of {other.number}</h3>
-          {other.photos.length ? <Thumbs aId={aId} photos={other.photos} /> : <p className="text-sm text-muted">That case has no photos yet.</p>}
+          {other.photos.length ? (
+            <Thumbs aId={aId} photos={other.photos} />
+          ) : (
+            <p className="text-sm text-muted">That case has no photos yet.</p>
+          )}
         </div>
       ) : null}
       <div>
         <h3 className="mb-2 text-sm font-medium text-ink-2">Other photos of {sameCase.number}</h3>
-        {sameCase.photos.length ? <Thumbs aId={aId} photos={sameCase.photos} /> : <p className="text-sm text-muted">This is the case&apos;s only photo.</p>}
+        {sameCase.photos.length ? (
+          <Thumbs aId={aId} photos={sameCase.photos} />
+        ) : (
+          <p className="text-sm text-muted">This is the case&apos;s only photo.</p>
+        )}
       </div>
     </section>
   );

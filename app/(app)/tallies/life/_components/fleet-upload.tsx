@@ -33,7 +33,10 @@ export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
       setOutcome({ tone: "danger", text, rows, more: errorCount && rows ? errorCount - rows.length : 0 });
       return;
     }
-    setOutcome({ tone: "ok", text: `${(res.data?.units ?? 0).toLocaleString("en-US")} units in service stored. Life analyses now use this list.` });
+    setOutcome({
+      tone: "ok",
+      text: `${(res.data?.units ?? 0).toLocaleString("en-US")} units in service stored. Life analyses now use this list.`,
+    });
     setFile(null);
     if (input.current) input.current.value = "";
     router.refresh();
@@ -43,30 +46,56 @@ export function FleetUpload({ batch }: { batch: FleetBatch | null }) {
     <div className="space-y-3" data-fleet-upload>
       <p className="text-sm text-ink-2">
         {batch ? (
-          <>In use: <span className="font-medium text-ink">{batch.units.toLocaleString("en-US")} units</span>, uploaded {formatDay(batch.uploadedAt)}{batch.uploadedBy ? ` by ${batch.uploadedBy}` : ""}.</>
+          <>
+            In use: <span className="font-medium text-ink">{batch.units.toLocaleString("en-US")} units</span>, uploaded{" "}
+            {formatDay(batch.uploadedAt)}
+            {batch.uploadedBy ? ` by ${batch.uploadedBy}` : ""}.
+          </>
         ) : (
           "No fleet list yet: analyses count only removed bearings."
         )}
       </p>
       <p className="text-xs text-muted">
-        CSV with a header row: {FLEET_COLUMNS.join(", ")}. Dates as YYYY-MM-DD; months are worked out from mounted_on and as_of when left empty. A new upload replaces the list in use; a file with any bad row stores nothing.
+        CSV with a header row: {FLEET_COLUMNS.join(", ")}. Dates as YYYY-MM-DD; months are worked out from mounted_on and as_of when left
+        empty. A new upload replaces the list in use; a file with any bad row stores nothing.
       </p>
       <div className="flex flex-wrap items-center gap-2">
         <label className="inline-flex h-11 cursor-pointer lg:h-10 items-center rounded-lg border border-dashed border-line-strong bg-surface-2 px-3 text-sm text-ink-2 hover:border-accent">
-          <input ref={input} type="file" accept=".csv,text/csv" className="sr-only" aria-label="Fleet list CSV" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
+          <input
+            ref={input}
+            type="file"
+            accept=".csv,text/csv"
+            className="sr-only"
+            aria-label="Fleet list CSV"
+            onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+          />
           {file ? file.name : "Choose a CSV file…"}
         </label>
-        <Button onClick={upload} disabled={!file || busy}>{busy ? "Checking…" : "Upload fleet list"}</Button>
-        <button type="button" className="h-11 px-2 text-sm lg:h-10 text-accent hover:underline" onClick={() => downloadBlob(new Blob([FLEET_TEMPLATE], { type: "text/csv" }), "tearline-fleet-template.csv")}>
+        <Button onClick={upload} disabled={!file || busy}>
+          {busy ? "Checking…" : "Upload fleet list"}
+        </Button>
+        <button
+          type="button"
+          className="h-11 px-2 text-sm lg:h-10 text-accent hover:underline"
+          onClick={() => downloadBlob(new Blob([FLEET_TEMPLATE], { type: "text/csv" }), "tearline-fleet-template.csv")}
+        >
           Template
         </button>
       </div>
       {outcome ? (
-        <div role={outcome.tone === "danger" ? "alert" : "status"} className={`rounded-lg px-3 py-2 text-sm ${outcome.tone === "ok" ? "bg-ok-soft text-ok" : "bg-danger-soft text-danger"}`}>
+        <div
+          role={outcome.tone === "danger" ? "alert" : "status"}
+          className={`rounded-lg px-3 py-2 text-sm ${outcome.tone === "ok" ? "bg-ok-soft text-ok" : "bg-danger-soft text-danger"}`}
+        >
           <p className="font-medium">{outcome.text}</p>
           {outcome.rows?.length ? (
             <ul className="mt-1.5 max-h-48 list-disc space-y-0.5 overflow-y-auto pl-5 text-ink">
-              {outcome.rows.map((r, i) => <li key={i}>Row {r.row}{r.column ? `, ${r.column}` : ""}: {r.message}</li>)}
+              {outcome.rows.map((r, i) => (
+                <li key={i}>
+                  Row {r.row}
+                  {r.column ? `, ${r.column}` : ""}: {r.message}
+                </li>
+              ))}
               {outcome.more ? <li className="text-muted">and {outcome.more} more</li> : null}
             </ul>
           ) : null}

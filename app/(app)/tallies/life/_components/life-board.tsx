@@ -35,15 +35,29 @@ export function LifeBoard({ data, canUpload, scopeWords }: { data: LifeData; can
       <div className="space-y-5">
         <ChartCard
           title={s ? `${s.label}: Weibull probability plot` : "Weibull probability plot"}
-          subtitle={s ? `${s.failures.toLocaleString("en-US")} failures, ${s.suspensions.toLocaleString("en-US")} suspensions · ${scopeWords} · signed verdicts only` : undefined}
+          subtitle={
+            s
+              ? `${s.failures.toLocaleString("en-US")} failures, ${s.suspensions.toLocaleString("en-US")} suspensions · ${scopeWords} · signed verdicts only`
+              : undefined
+          }
           imageSubtitle={s ? `${s.failures} failures, ${s.suspensions} suspensions · ${unit} in service` : undefined}
           table={probabilityPlotTable(data)}
           legend={WEIBULL_LEGEND}
-          empty={s?.fit && s.mle ? null : "No root cause has enough removals with a service life to fit (at least two failures at different lives)."}
+          empty={
+            s?.fit && s.mle
+              ? null
+              : "No root cause has enough removals with a service life to fit (at least two failures at different lives)."
+          }
           controls={
             <div role="group" aria-label="Life measured in" className="inline-flex rounded-lg bg-surface-2 p-0.5 ring-1 ring-line">
               {(["months", "miles"] as const).map((m) => (
-                <Link key={m} href={href({ measure: m === "months" ? null : m })} scroll={false} aria-current={unit === m ? "true" : undefined} className={`inline-flex h-11 items-center rounded-md px-3 lg:h-8 text-sm font-medium ${unit === m ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}>
+                <Link
+                  key={m}
+                  href={href({ measure: m === "months" ? null : m })}
+                  scroll={false}
+                  aria-current={unit === m ? "true" : undefined}
+                  className={`inline-flex h-11 items-center rounded-md px-3 lg:h-8 text-sm font-medium ${unit === m ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}
+                >
                   {m === "months" ? "Months" : "Miles"}
                 </Link>
               ))}
@@ -58,9 +72,21 @@ export function LifeBoard({ data, canUpload, scopeWords }: { data: LifeData; can
             ) : undefined
           }
         >
-          {s?.mle ? <WeibullPlot title={`${s.label}: life to removal`} points={s.plotPoints} line={s.fittedLine} beta={s.mle.beta} eta={s.mle.eta} b10={s.mle.b10} unit={unit} /> : null}
+          {s?.mle ? (
+            <WeibullPlot
+              title={`${s.label}: life to removal`}
+              points={s.plotPoints}
+              line={s.fittedLine}
+              beta={s.mle.beta}
+              eta={s.mle.eta}
+              b10={s.mle.b10}
+              unit={unit}
+            />
+          ) : null}
           <ChartLegend items={WEIBULL_LEGEND} />
-          {s?.thinnedFrom ? <p className="mt-2 text-xs text-muted">{`${s.plotPoints.length} of ${s.thinnedFrom.toLocaleString("en-US")} failures plotted, evenly spread by rank; the fit uses all of them.`}</p> : null}
+          {s?.thinnedFrom ? (
+            <p className="mt-2 text-xs text-muted">{`${s.plotPoints.length} of ${s.thinnedFrom.toLocaleString("en-US")} failures plotted, evenly spread by rank; the fit uses all of them.`}</p>
+          ) : null}
         </ChartCard>
 
         {s?.mle ? (
@@ -74,21 +100,40 @@ export function LifeBoard({ data, canUpload, scopeWords }: { data: LifeData; can
       </div>
 
       <div className="space-y-5">
-        <ChartCard title="Life by root cause" subtitle="Maximum likelihood, 95% Fisher bounds in the table view; removals for other causes count as suspensions" table={lifeTable(data)} chartLabel="Causes" noImage empty={data.causes.length ? null : "No signed removals with a service life match these filters."}>
+        <ChartCard
+          title="Life by root cause"
+          subtitle="Maximum likelihood, 95% Fisher bounds in the table view; removals for other causes count as suspensions"
+          table={lifeTable(data)}
+          chartLabel="Causes"
+          noImage
+          empty={data.causes.length ? null : "No signed removals with a service life match these filters."}
+        >
           <CauseTable causes={data.causes} selected={s?.cause ?? null} hrefFor={(cause) => href({ cause })} unit={unit} />
           <p className="mt-3 text-xs text-muted">
-            {data.withoutLife ? `${data.withoutLife.toLocaleString("en-US")} signed removals have no service life in ${unit} and are left out. ` : ""}
-            {suspensionsFromFleet ? `${suspensionsFromFleet.toLocaleString("en-US")} fleet units still in service are counted as suspensions.` : (data.fleet.why ?? "")}
+            {data.withoutLife
+              ? `${data.withoutLife.toLocaleString("en-US")} signed removals have no service life in ${unit} and are left out. `
+              : ""}
+            {suspensionsFromFleet
+              ? `${suspensionsFromFleet.toLocaleString("en-US")} fleet units still in service are counted as suspensions.`
+              : (data.fleet.why ?? "")}
           </p>
         </ChartCard>
 
         <Card title="Reading the shape">
           <ul className="space-y-2.5 text-sm text-ink-2">
             {SHAPE_GUIDE.map((g) => (
-              <li key={g.reading} className="flex items-start gap-3"><span className="w-20 shrink-0"><ShapeBadge reading={g.reading} /></span><span>{g.text}</span></li>
+              <li key={g.reading} className="flex items-start gap-3">
+                <span className="w-20 shrink-0">
+                  <ShapeBadge reading={g.reading} />
+                </span>
+                <span>{g.text}</span>
+              </li>
             ))}
           </ul>
-          <p className="mt-3 text-xs text-muted">The shape is read from its 95% Fisher bounds, in the table and the chart alike: when they include 1 the data cannot tell it from random, so it reads as random.</p>
+          <p className="mt-3 text-xs text-muted">
+            The shape is read from its 95% Fisher bounds, in the table and the chart alike: when they include 1 the data cannot tell it from
+            random, so it reads as random.
+          </p>
         </Card>
 
         {canUpload ? (

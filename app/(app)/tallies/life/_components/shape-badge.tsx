@@ -9,11 +9,23 @@ const LOOK: Record<ShapeReading, { label: string; className: string }> = {
 
 export function ShapeBadge({ reading }: { reading: ShapeReading }) {
   const look = LOOK[reading];
-  return <span className={`inline-flex shrink-0 items-center whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-semibold ${look.className}`}>{look.label}</span>;
+  return (
+    <span
+      className={`inline-flex shrink-0 items-center whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-semibold ${look.className}`}
+    >
+      {look.label}
+    </span>
+  );
 }
 
 export const SHAPE_GUIDE = [
-  { reading: "early-life" as const, text: "Shape below 1: failures come early and the rate falls with age — look at manufacture, reconditioning and mounting." },
-  { reading: "random" as const, text: "Shape near 1: failures arrive at a steady rate whatever the age — outside causes such as impact, water or welding." },
+  {
+    reading: "early-life" as const,
+    text: "Shape below 1: failures come early and the rate falls with age — look at manufacture, reconditioning and mounting.",
+  },
+  {
+    reading: "random" as const,
+    text: "Shape near 1: failures arrive at a steady rate whatever the age — outside causes such as impact, water or welding.",
+  },
   { reading: "wear-out" as const, text: "Shape above 1: the rate rises with age — fatigue and wear; a B10 life helps plan replacement." },
 ];

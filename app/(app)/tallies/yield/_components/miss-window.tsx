@@ -27,11 +27,26 @@ export function MissWindow({ value }: { value: number }) {
     <form onSubmit={apply} className="mb-4 flex flex-wrap items-center gap-2 text-sm text-ink-2" aria-label="Missed-call window">
       <label htmlFor="miss-window">A keep call counts as missed when the same car and position is removed within</label>
       <span className="inline-flex items-center gap-2">
-        <span className="w-20"><Input id="miss-window" inputMode="numeric" value={text} onChange={(e) => setText(e.target.value)} aria-invalid={!!error} className="tabular" /></span>
+        <span className="w-20">
+          <Input
+            id="miss-window"
+            inputMode="numeric"
+            value={text}
+            onChange={(e) => setText(e.target.value)}
+            aria-invalid={!!error}
+            className="tabular"
+          />
+        </span>
         <span>days</span>
       </span>
-      <button type="submit" className="h-9 rounded-lg border border-line-strong px-3 text-sm font-medium hover:bg-surface-2">Apply</button>
-      {error ? <span role="alert" className="text-danger">{error}</span> : null}
+      <button type="submit" className="h-9 rounded-lg border border-line-strong px-3 text-sm font-medium hover:bg-surface-2">
+        Apply
+      </button>
+      {error ? (
+        <span role="alert" className="text-danger">
+          {error}
+        </span>
+      ) : null}
     </form>
   );
 }

@@ -5,7 +5,6 @@ import { AXIS_TICK, THEME } from "@/components/charts/palette";
 import type { YieldData } from "@/lib/tallies/yield-data";
 import { SHOP_COLOURS } from "./yield-legends";
 
-
 export function QuarterChart({ calls }: { calls: YieldData["calls"] }) {
   const data = calls.quarterList.map((q) => {
     const row: Record<string, string | number | null> = { quarter: q };
@@ -30,9 +29,18 @@ export function QuarterChart({ calls }: { calls: YieldData["calls"] }) {
         }}
       />
       {calls.quarters.map((s, i) => (
-        <Line key={s.id} type="linear" dataKey={s.id} name={s.label} stroke={SHOP_COLOURS[i % SHOP_COLOURS.length]} strokeWidth={2} dot={{ r: 3 }} connectNulls isAnimationActive={false} />
+        <Line
+          key={s.id}
+          type="linear"
+          dataKey={s.id}
+          name={s.label}
+          stroke={SHOP_COLOURS[i % SHOP_COLOURS.length]}
+          strokeWidth={2}
+          dot={{ r: 3 }}
+          connectNulls
+          isAnimationActive={false}
+        />
       ))}
     </LineChart>
   );
 }
-

@@ -19,7 +19,16 @@ const SIGNED = "Signed verdicts only";
 function asConfirmation(rows: RateRow[], overall: ConfirmationTable["overall"]): ConfirmationTable {
   return {
     overall,
-    rows: rows.filter((r) => r.n > 0).map((r) => ({ id: r.id, label: r.small ? `${r.label} *` : r.label, confirmed: r.confirmed, n: r.n, rate: r.rate, standsOut: overall.p === null ? null : r.rate.upper < overall.p ? "below" : r.rate.lower > overall.p ? "above" : null })),
+    rows: rows
+      .filter((r) => r.n > 0)
+      .map((r) => ({
+        id: r.id,
+        label: r.small ? `${r.label} *` : r.label,
+        confirmed: r.confirmed,
+        n: r.n,
+        rate: r.rate,
+        standsOut: overall.p === null ? null : r.rate.upper < overall.p ? "below" : r.rate.lower > overall.p ? "above" : null,
+      })),
   };
 }
 
@@ -38,7 +47,11 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
   const fit = data.hot[basis];
   const callsOverall = { ...data.calls.overall, confirmed: Math.round((data.calls.overall.p ?? 0) * data.calls.overall.n) };
   const money = data.cost.totalUsd > 0;
-  const personWord = data.ownCallsOnly ? "Your calls" : data.namesShown ? "Per inspector" : "Per inspector (numbered; names go to managers)";
+  const personWord = data.ownCallsOnly
+    ? "Your calls"
+    : data.namesShown
+      ? "Per inspector"
+      : "Per inspector (numbered; names go to managers)";
 
   return (
     <>
@@ -46,7 +59,9 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
         <h2 className="text-[15px] font-semibold text-ink">In short</h2>
         {data.summary.length ? (
           <ul className="mt-2 flex list-disc flex-col gap-1.5 pl-5 text-sm leading-relaxed text-ink-2">
-            {data.summary.map((s) => <li key={s}>{s}</li>)}
+            {data.summary.map((s) => (
+              <li key={s}>{s}</li>
+            ))}
           </ul>
         ) : (
           <p className="mt-2 text-sm text-muted">No signed removals with a teardown outcome match these filters yet.</p>
@@ -54,12 +69,17 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
         {data.cautions.length ? (
           <div role="note" className="mt-3 rounded-lg border border-warn/40 bg-warn-soft px-3.5 py-2.5 text-sm text-ink-2">
             <p className="font-semibold text-ink">Small counts</p>
-            <ul className="mt-1 list-disc pl-5">{data.cautions.map((c) => <li key={c}>{c}</li>)}</ul>
+            <ul className="mt-1 list-disc pl-5">
+              {data.cautions.map((c) => (
+                <li key={c}>{c}</li>
+              ))}
+            </ul>
           </div>
         ) : null}
         <p className="mt-3 text-xs text-muted">
-          Tearline applies no alarm threshold of its own: these figures report what the owner&apos;s thresholds and detectors produced. Decisions on thresholds,
-          detectors and set-outs stay with the owner&apos;s rules and procedures, the applicable interchange rules and local codes.
+          Tearline applies no alarm threshold of its own: these figures report what the owner&apos;s thresholds and detectors produced.
+          Decisions on thresholds, detectors and set-outs stay with the owner&apos;s rules and procedures, the applicable interchange rules
+          and local codes.
           {data.ownCallsOnly ? " You see your own shop's alarms and your own field calls." : ""}
         </p>
       </section>
@@ -76,7 +96,14 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
             controls={
               <div role="radiogroup" aria-label="Reading" className="inline-flex rounded-lg bg-surface-2 p-0.5 ring-1 ring-line">
                 {(["margin", "reading"] as const).map((b) => (
-                  <button key={b} type="button" role="radio" aria-checked={basis === b} onClick={() => setBasis(b)} className={`h-8 rounded-md px-3 text-sm font-medium ${basis === b ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}>
+                  <button
+                    key={b}
+                    type="button"
+                    role="radio"
+                    aria-checked={basis === b}
+                    onClick={() => setBasis(b)}
+                    className={`h-8 rounded-md px-3 text-sm font-medium ${basis === b ? "bg-surface text-ink shadow-sm" : "text-muted hover:text-ink"}`}
+                  >
                     {b === "margin" ? "Over threshold" : "Reading"}
                   </button>
                 ))}
@@ -85,14 +112,32 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
             footer={
               fit.fit ? (
                 <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-2">
-                  <div><dt className="inline font-medium text-ink">Half confirmed at </dt><dd className="inline tabular">{fit.fit.at50 ? `${fit.fit.at50.x} °F${fit.fit.at50.lower !== null ? ` (95%: ${fit.fit.at50.lower} to ${fit.fit.at50.upper})` : " (interval open)"}` : "–"}</dd></div>
-                  <div><dt className="inline font-medium text-ink">80% confirmed at </dt><dd className="inline tabular">{fit.fit.at80 ? `${fit.fit.at80.x} °F${fit.fit.at80.lower !== null ? ` (95%: ${fit.fit.at80.lower} to ${fit.fit.at80.upper})` : " (interval open)"}` : "–"}</dd></div>
+                  <div>
+                    <dt className="inline font-medium text-ink">Half confirmed at </dt>
+                    <dd className="inline tabular">
+                      {fit.fit.at50
+                        ? `${fit.fit.at50.x} °F${fit.fit.at50.lower !== null ? ` (95%: ${fit.fit.at50.lower} to ${fit.fit.at50.upper})` : " (interval open)"}`
+                        : "–"}
+                    </dd>
+                  </div>
+                  <div>
+                    <dt className="inline font-medium text-ink">80% confirmed at </dt>
+                    <dd className="inline tabular">
+                      {fit.fit.at80
+                        ? `${fit.fit.at80.x} °F${fit.fit.at80.lower !== null ? ` (95%: ${fit.fit.at80.lower} to ${fit.fit.at80.upper})` : " (interval open)"}`
+                        : "–"}
+                    </dd>
+                  </div>
                   <div className="text-xs text-muted sm:col-span-2">
-                    Slope {f1(fit.fit.slope)} per °F on the log-odds scale (95% profile {f1(fit.fit.slopeProfile[0])} to {f1(fit.fit.slopeProfile[1])}; Wald {f1(fit.fit.slopeWald[0])} to {f1(fit.fit.slopeWald[1])}) ·
-                    likelihood-ratio {fit.fit.pValue < 0.001 ? "p < 0.001" : `p = ${fit.fit.pValue.toFixed(3)}`} · {fit.n} alarms · intervals for the 50% and 80% points by Fieller&apos;s method
+                    Slope {f1(fit.fit.slope)} per °F on the log-odds scale (95% profile {f1(fit.fit.slopeProfile[0])} to{" "}
+                    {f1(fit.fit.slopeProfile[1])}; Wald {f1(fit.fit.slopeWald[0])} to {f1(fit.fit.slopeWald[1])}) · likelihood-ratio{" "}
+                    {fit.fit.pValue < 0.001 ? "p < 0.001" : `p = ${fit.fit.pValue.toFixed(3)}`} · {fit.n} alarms · intervals for the 50% and
+                    80% points by Fieller&apos;s method
                   </div>
                 </dl>
-              ) : fit.noFit ? <p className="text-muted">{fit.noFit}</p> : undefined
+              ) : fit.noFit ? (
+                <p className="text-muted">{fit.noFit}</p>
+              ) : undefined
             }
           >
             <ReadingCurveChart fit={fit} />
@@ -107,7 +152,11 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
           table={rateTable(data.acoustic, "Alarm level")}
           legend={CONFIRMATION_LEGEND}
           empty={data.acoustic.length ? null : "No acoustic alarms with a teardown outcome match these filters."}
-          footer={data.acoustic.some((r) => r.small) ? <p className="text-xs text-muted">* fewer than 10 torn down: read the interval, not the dot.</p> : undefined}
+          footer={
+            data.acoustic.some((r) => r.small) ? (
+              <p className="text-xs text-muted">* fewer than 10 torn down: read the interval, not the dot.</p>
+            ) : undefined
+          }
         >
           <ConfirmationChart table={asConfirmation(data.acoustic, overallOf(data.acoustic, null))} nameWidth={110} />
           <ChartLegend items={CONFIRMATION_LEGEND} />
@@ -122,8 +171,17 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
           empty={data.detectors.fleet.n ? null : "No wayside alarms naming a detector have a teardown outcome yet."}
           footer={
             data.detectors.rows.some((r) => r.position === "below-998" || r.position === "below-95") ? (
-              <p><span className="font-semibold text-danger">Worth checking:</span> {data.detectors.rows.filter((r) => r.position === "below-998" || r.position === "below-95").map((r) => `${r.label}${r.location ? ` (${r.location})` : ""}, ${percent(r.rate.p)} of ${r.n}`).join("; ")}.</p>
-            ) : <p className="text-muted">No detector&apos;s confirmed share lies outside what chance explains at its number of alarms.</p>
+              <p>
+                <span className="font-semibold text-danger">Worth checking:</span>{" "}
+                {data.detectors.rows
+                  .filter((r) => r.position === "below-998" || r.position === "below-95")
+                  .map((r) => `${r.label}${r.location ? ` (${r.location})` : ""}, ${percent(r.rate.p)} of ${r.n}`)
+                  .join("; ")}
+                .
+              </p>
+            ) : (
+              <p className="text-muted">No detector&apos;s confirmed share lies outside what chance explains at its number of alarms.</p>
+            )
           }
         >
           <FunnelChart detectors={data.detectors} />
@@ -173,7 +231,11 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
           table={callTable(data.calls.shops, "Shop", data.missWindow)}
           legend={missedLegend(data.missWindow)}
           empty={data.calls.shops.some((r) => r.keeps) ? null : "No keep calls with a car and position match these filters."}
-          footer={<p className="text-xs text-muted">Change the window above the figures. A later removal can have other causes; open the cases before drawing a lesson.</p>}
+          footer={
+            <p className="text-xs text-muted">
+              Change the window above the figures. A later removal can have other causes; open the cases before drawing a lesson.
+            </p>
+          }
         >
           <MissedChart rows={data.calls.shops} window={data.missWindow} />
           <ChartLegend items={missedLegend(data.missWindow)} />
@@ -181,18 +243,38 @@ export function YieldBoard({ data, scopeWords }: { data: YieldData; scopeWords: 
 
         <ChartCard
           title="What no-defect removals cost, by trigger"
-          subtitle={money ? `At each removal site's cost per removal (set by an admin under Sites) · ${SIGNED}` : `No site has a cost per removal set yet: counts of no-defect removals shown · ${SIGNED}`}
+          subtitle={
+            money
+              ? `At each removal site's cost per removal (set by an admin under Sites) · ${SIGNED}`
+              : `No site has a cost per removal set yet: counts of no-defect removals shown · ${SIGNED}`
+          }
           imageSubtitle={money ? "USD at each site's cost per removal" : "No-defect removals"}
           table={costTable(data.cost.byTrigger, "Trigger")}
           empty={data.cost.noDefect ? null : "No signed removals found no defect under these filters."}
-          footer={<p>{money ? <><span className="font-semibold text-ink">{usd(data.cost.totalUsd)}</span> on {data.cost.noDefect} removals teardown did not confirm</> : `${data.cost.noDefect} removals teardown did not confirm`}{data.cost.uncosted ? `; ${data.cost.uncosted} at sites with no cost set are not priced` : ""}.</p>}
+          footer={
+            <p>
+              {money ? (
+                <>
+                  <span className="font-semibold text-ink">{usd(data.cost.totalUsd)}</span> on {data.cost.noDefect} removals teardown did
+                  not confirm
+                </>
+              ) : (
+                `${data.cost.noDefect} removals teardown did not confirm`
+              )}
+              {data.cost.uncosted ? `; ${data.cost.uncosted} at sites with no cost set are not priced` : ""}.
+            </p>
+          }
         >
           <CostChart rows={data.cost.byTrigger.filter((r) => r.noDefect > 0)} money={money} />
         </ChartCard>
 
         <ChartCard
           title="What no-defect removals cost, by detector"
-          subtitle={money ? `Wayside alarms that teardown did not confirm, priced at the removal site's cost · ${SIGNED}` : `Counts of no-defect removals per detector · ${SIGNED}`}
+          subtitle={
+            money
+              ? `Wayside alarms that teardown did not confirm, priced at the removal site's cost · ${SIGNED}`
+              : `Counts of no-defect removals per detector · ${SIGNED}`
+          }
           imageSubtitle={money ? "USD at each site's cost per removal" : "No-defect removals"}
           table={costTable(data.cost.byDetector, "Detector")}
           empty={data.cost.byDetector.length ? null : "No wayside alarm naming a detector found no defect under these filters."}

@@ -4,8 +4,17 @@
 import dynamic from "next/dynamic";
 import { chartPlaceholder } from "../../_components/charts";
 
-export const ReadingCurveChart = dynamic(() => import("./reading-curve-chart").then((m) => m.ReadingCurveChart), { ssr: false, loading: chartPlaceholder(300) });
-export const FunnelChart = dynamic(() => import("./funnel-chart").then((m) => m.FunnelChart), { ssr: false, loading: chartPlaceholder(300) });
-export const QuarterChart = dynamic(() => import("./quarter-chart").then((m) => m.QuarterChart), { ssr: false, loading: chartPlaceholder(260) });
+export const ReadingCurveChart = dynamic(() => import("./reading-curve-chart").then((m) => m.ReadingCurveChart), {
+  ssr: false,
+  loading: chartPlaceholder(300),
+});
+export const FunnelChart = dynamic(() => import("./funnel-chart").then((m) => m.FunnelChart), {
+  ssr: false,
+  loading: chartPlaceholder(300),
+});
+export const QuarterChart = dynamic(() => import("./quarter-chart").then((m) => m.QuarterChart), {
+  ssr: false,
+  loading: chartPlaceholder(260),
+});
 export const MissedChart = dynamic(() => import("./bar-charts").then((m) => m.MissedChart), { ssr: false, loading: chartPlaceholder(240) });
 export const CostChart = dynamic(() => import("./bar-charts").then((m) => m.CostChart), { ssr: false, loading: chartPlaceholder(240) });

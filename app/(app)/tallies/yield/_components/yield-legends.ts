@@ -20,7 +20,8 @@ export const FUNNEL_LEGEND = [
   { label: "Fleet rate (dashed)", colour: "#b45309" },
 ];
 
-export const quarterLegend = (calls: YieldData["calls"]) => calls.quarters.map((s, i) => ({ label: s.label, colour: SHOP_COLOURS[i % SHOP_COLOURS.length] }));
+export const quarterLegend = (calls: YieldData["calls"]) =>
+  calls.quarters.map((s, i) => ({ label: s.label, colour: SHOP_COLOURS[i % SHOP_COLOURS.length] }));
 
 export const READING_LEGEND = [
   { label: "Confirmed share per band, 95% Wilson interval", colour: READING_TONE.bins },

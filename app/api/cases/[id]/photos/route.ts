@@ -41,7 +41,10 @@ export const POST = withCase("photo:upload", async ({ req, case: c, user }) => {
     const message = duplicate
       ? `This photo is already in ${c.number}${photo.fileName ? ` as “${photo.fileName}”` : ""}; it was not stored twice.`
       : `Photo added to ${c.number}.`;
-    return NextResponse.json({ photo: { ...toPhotoView(photo), canDelete: mayDeletePhoto(user, photo, c.status) }, duplicate, message }, { status: duplicate ? 200 : 201 });
+    return NextResponse.json(
+      { photo: { ...toPhotoView(photo), canDelete: mayDeletePhoto(user, photo, c.status) }, duplicate, message },
+      { status: duplicate ? 200 : 201 },
+    );
   } catch (err) {
     if (err instanceof PhotoRefusal) throw new HttpError(err.status, err.code, err.message);
     throw err;

@@ -9,10 +9,18 @@ import { withCase } from "@/lib/http/with-case";
 
 export const GET = withCase("case:read", async ({ case: c }) => {
   const content = await contentOf(c);
-  return NextResponse.json({ meaning: SIGNATURE_MEANING, contentHash: contentHash(content), content, version: c.version, signature: await checkSignature(c) });
+  return NextResponse.json({
+    meaning: SIGNATURE_MEANING,
+    contentHash: contentHash(content),
+    content,
+    version: c.version,
+    signature: await checkSignature(c),
+  });
 });
 
 export const POST = withCase("case:sign", async ({ req, case: c, user }) => {
   const row = await signCase(c, await parseJson(req, z.unknown()), user);
-  return NextResponse.json({ case: { id: row.id, number: row.number, status: row.status, version: row.version, signedContentHash: row.signedContentHash } });
+  return NextResponse.json({
+    case: { id: row.id, number: row.number, status: row.status, version: row.version, signedContentHash: row.signedContentHash },
+  });
 });
