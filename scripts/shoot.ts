@@ -1,26 +1,15 @@
 // Screenshots of pages at phone and desktop sizes, signed in as a demo role, for design review.
 // Usage: tsx scripts/shoot.ts <role|anon> <path> [path…]   (BASE_URL defaults to the demo app)
-import { chromium } from "playwright-core";
 import { mkdirSync } from "node:fs";
 import { DEMO_PASSWORD, DEMO_USERS } from "./seed/demo-people";
+import { launchChromium } from "./chromium";
 
 const [role, ...paths] = process.argv.slice(2);
 const base = process.env.BASE_URL ?? "http://127.0.0.1:3000";
 const out = process.env.SHOT_DIR ?? "/tmp/shots";
 mkdirSync(out, { recursive: true });
 
-const browser = await chromium.launch({
-  executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-  args: [
-    "--no-sandbox",
-    "--disable-gpu",
-    "--disable-quic",
-    "--no-first-run",
-    "--disable-background-networking",
-    "--disable-component-update",
-    "--disable-sync",
-  ],
-});
+const browser = await launchChromium();
 for (const [label, viewport] of [
   ["phone", { width: 390, height: 844 }],
   ["desk", { width: 1366, height: 900 }],

@@ -1,6 +1,7 @@
 // Debian's Chromium driven by playwright-core (no browser download), for page tests. Test files
 // use it through tests/support/browser-fixture.ts (browserPerFile) and the page objects in tests/support/pages/.
-import { chromium, type Browser, type BrowserContext } from "playwright-core";
+import type { Browser, BrowserContext } from "playwright-core";
+import { launchChromium } from "../../scripts/chromium";
 import { afterEach } from "vitest";
 import { CHROMIUM_PATH } from "./env";
 
@@ -27,7 +28,7 @@ async function watchPolicy(ctx: BrowserContext) {
 }
 
 export async function launch(): Promise<Browser> {
-  const browser = await launchChromium();
+  const browser = await launchChromium(CHROMIUM_PATH);
   const newContext = browser.newContext.bind(browser);
   browser.newContext = async (options) => {
     const ctx = await newContext(options);
@@ -41,22 +42,6 @@ export async function launch(): Promise<Browser> {
 /** Violations seen so far in this test (a test that expects one can read and clear them). */
 export function takeCspViolations(): string[] {
   return cspViolations.splice(0);
-}
-
-function launchChromium(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: CHROMIUM_PATH,
-    args: [
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-      "--disable-dev-shm-usage",
-    ],
-  });
 }
 
 export const PHONE = { width: 390, height: 844 };

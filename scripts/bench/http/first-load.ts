@@ -2,7 +2,7 @@
 // asks for, loaded in headless Chromium from the running production server, signed in as a manager.
 // Scripts fetched later (charts behind next/dynamic) are shown beside it, not counted in first load.
 // A page over its target fails the run (exit code 1) and is named at the end.
-import { chromium } from "playwright-core";
+import { launchChromium } from "../../chromium";
 import { Client } from "pg";
 import { record } from "../support/figures";
 import { APP_URL, signedInCookie } from "./session";
@@ -42,10 +42,7 @@ const pages: { path: string; target: number; signedIn: boolean; role?: Role }[] 
 ];
 
 const over: string[] = [];
-const browser = await chromium.launch({
-  executablePath: process.env.CHROMIUM_PATH,
-  args: ["--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run"],
-});
+const browser = await launchChromium();
 try {
   const cookies = new Map<Role, string>();
   const cookieFor = async (role: Role) => cookies.get(role) ?? cookies.set(role, await signedInCookie(role)).get(role)!;
