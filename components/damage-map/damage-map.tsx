@@ -104,32 +104,28 @@ function Disc({ cx, row }: { cx: number; row: string }) {
 /** Ring names drawn over the damage, with a halo so they stay legible. */
 function RingNames({ cx }: { cx: number }) {
   const halo = { stroke: "var(--surface, #ffffff)", strokeWidth: 2.5, paintOrder: "stroke" as const, strokeLinejoin: "round" as const };
+  // Each name sits on its own band: the cup's outer ring, the cone's inner one.
+  const at = [
+    ["cup", 0.85],
+    ["cone", 0.53],
+  ] as const;
   return (
     <g>
-      <text
-        x={cx}
-        y={CY + R * 0.85 + 3}
-        textAnchor="middle"
-        fontSize={8}
-        fontWeight={700}
-        letterSpacing={0.6}
-        fill="var(--muted, #64748b)"
-        {...halo}
-      >
-        {RING_NAMES.cup}
-      </text>
-      <text
-        x={cx}
-        y={CY + R * 0.53 + 3}
-        textAnchor="middle"
-        fontSize={8}
-        fontWeight={700}
-        letterSpacing={0.6}
-        fill="var(--muted, #64748b)"
-        {...halo}
-      >
-        {RING_NAMES.cone}
-      </text>
+      {at.map(([ring, radius]) => (
+        <text
+          key={ring}
+          x={cx}
+          y={CY + R * radius + 3}
+          textAnchor="middle"
+          fontSize={8}
+          fontWeight={700}
+          letterSpacing={0.6}
+          fill="var(--muted, #64748b)"
+          {...halo}
+        >
+          {RING_NAMES[ring]}
+        </text>
+      ))}
     </g>
   );
 }
