@@ -8,6 +8,7 @@ import { tallyCounts } from "@/db/queries/tallies/counts";
 import { db, pool, t } from "../../support/db";
 import { createCase, userId } from "../../support/factories";
 import { makeSites, rng, tag } from "./casebook";
+import { reopenAndResign } from "../../support/reopen-resign";
 
 const CLASS = tag();
 const OTHER_CLASS = tag();
@@ -128,14 +129,7 @@ describe("tallies roll-ups", () => {
       .where(and(eq(t.cases.bearingClass, CLASS), eq(t.cases.status, "signed")));
     const chosen = signed.slice(0, 6).map((c) => c.id);
     expect(chosen.length).toBeGreaterThan(2);
-    await db.update(t.cases).set({ status: "bench", signedAt: null, signedBy: null }).where(inArray(t.cases.id, chosen));
-    await expectExact();
-    for (const [i, id] of chosen.entries()) {
-      await db
-        .update(t.cases)
-        .set({ status: "signed", signedAt: new Date(), removalConfirmed: i % 2 ? "confirmed" : "no-defect" })
-        .where(eq(t.cases.id, id));
-    }
+    await reopenAndResign(chosen, expectExact);
     await expectExact();
   });
 

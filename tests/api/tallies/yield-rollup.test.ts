@@ -6,6 +6,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { db, pool, t } from "../../support/db";
 import { createCase, userId } from "../../support/factories";
 import { makeSites, rng, tag } from "./casebook";
+import { reopenAndResign } from "../../support/reopen-resign";
 
 const CLASS = tag();
 
@@ -132,15 +133,7 @@ describe("removal-yield roll-ups", () => {
       .where(and(eq(t.cases.bearingClass, CLASS), eq(t.cases.status, "signed"), isNotNull(t.cases.removalConfirmed)));
     const chosen = signed.slice(0, 8).map((c) => c.id);
     expect(chosen.length).toBeGreaterThan(3);
-    // Reopening moves a signed case back to the bench and keeps its verdict (lib/cases/service.ts).
-    await db.update(t.cases).set({ status: "bench", signedAt: null, signedBy: null }).where(inArray(t.cases.id, chosen));
-    await expectExact();
-    for (const [i, id] of chosen.entries()) {
-      await db
-        .update(t.cases)
-        .set({ status: "signed", signedAt: new Date(), removalConfirmed: i % 2 ? "confirmed" : "no-defect" })
-        .where(eq(t.cases.id, id));
-    }
+    await reopenAndResign(chosen, expectExact);
     await expectExact();
   });
 
